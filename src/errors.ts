@@ -1,0 +1,26 @@
+/** Stable error codes of linkweave. Every thrown error of the tool is an `EngineError`. */
+export type ErrorCode =
+  | 'E_CONFIG_INVALID'
+  | 'E_USAGE'
+  | 'E_IO'
+  | 'E_NO_ROOT'
+  | 'E_RANK_NO_CONVERGE'
+  | 'E_REPORT_INVALID'
+  | 'E_APPLY_REFUSED'
+  | 'E_INTERNAL';
+
+/** An error with a stable `code`; the message says what failed and how to fix it. */
+export class EngineError extends Error {
+  readonly code: ErrorCode;
+
+  constructor(code: ErrorCode, message: string, options?: { cause?: unknown }) {
+    super(message, options);
+    this.name = 'EngineError';
+    this.code = code;
+  }
+}
+
+/** True when `error` is an EngineError (also across module copies). */
+export function isEngineError(error: unknown): error is EngineError {
+  return error instanceof Error && (error as { name?: string }).name === 'EngineError' && 'code' in error;
+}
