@@ -164,6 +164,8 @@ export interface Csr {
 /** A page in the graph. Node id = index in `SiteGraph.pages`. Pages are sorted by route. */
 export interface PageNode {
   readonly id: number;
+  /** Index of this page's facts in the array given to `buildGraph`. */
+  readonly factsIndex: number;
   readonly route: string;
   readonly file: string;
   readonly title: string;
@@ -182,6 +184,8 @@ export interface SiteGraph {
   readonly entries: readonly number[];
   /** Entry routes from the config that match no page. */
   readonly missingEntries: readonly string[];
+  /** Files whose route another file already has (the first by path is kept). */
+  readonly duplicates: readonly { readonly file: string; readonly route: string; readonly keptFile: string }[];
 }
 
 /** Result of the ranking stage. Arrays are indexed by page id. */
