@@ -1,0 +1,162 @@
+/**
+ * The Node API entry point: `analyze(config) -> Promise<Report>`.
+ *
+ * This file only wires the stages together (DESIGN section 2); each stage is a pure function of
+ * its inputs except `collect` (reads the sources) and the cache.
+ */
+import { resolve } from 'node:path';
+import { collectSources, readAuxFile } from './collect/index.js';
+import type { CollectResult } from './collect/index.js';
+import { parseSource, parseNavigation, parseRedirects } from './parse/index.js';
+import type { Redirect } from './parse/index.js';
+import { buildGraph } from './graph/index.js';
+import { rankGraph } from './rank/index.js';
+import { buildTermIndex, relatedPages, contentCentrality } from './text/index.js';
+import { suggestLinks, parseTraffic } from './suggest/index.js';
+import { runRules, validateRuleConfig } from './rules/index.js';
+import type { AuxProblem } from './rules/index.js';
+import { buildReport } from './report/index.js';
+import { resolveOptions } from './options.js';
+import type { Config, ResolvedOptions } from './options.js';
+import type { PageFacts, RawLink, Report, Suggestion } from './types.js';
+import { VERSION } from './version.js';
+
+/** The stages `analyze` runs, in order, as reported to hooks. */
+export type StageName = 'collect' | 'parse' | 'graph' | 'rank' | 'text' | 'suggest' | 'rules' | 'report';
+
+/** Callbacks for progress displays and benchmarks. Never called with anything but plain values. */
+export interface AnalyzeHooks {
+  /** A stage starts or ends. */
+  onStage?(stage: StageName, phase: 'start' | 'end'): void;
+  /** Progress inside a stage (files parsed so far). */
+  onProgress?(stage: StageName, done: number, total: number): void;
+}
+
+/** What `analyze` takes: a configuration plus the content root and what to compute. */
+export type AnalyzeInput = Config & {
+  /** Content root (absolute, or relative to the working folder). */
+  readonly root: string;
+  /** `check` runs the rules; `suggest` adds link suggestions. @default 'check' */
+  readonly command?: 'check' | 'suggest';
+  /** Where the configuration came from, named in error messages. @default 'configuration' */
+  readonly configOrigin?: string;
+};
+
+/**
+ * Analyse a site: collect its sources, build the link graph, rank it, run the rules (and, for
+ * `command: 'suggest'`, propose links) and return the report.
+ * @throws EngineError with code `E_CONFIG_INVALID` (bad configuration) or `E_IO` (unreadable root
+ *   or auxiliary file). A bad source file is a finding, never a throw.
+ */
+export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Promise<Report> {
+  const { root, command = 'check', configOrigin = 'configuration', ...config } = input;
+  const options = resolveOptions(config, resolve(root), configOrigin);
+  validateRuleConfig(options, configOrigin);
+  const stage = stageTimer(hooks);
+
+  const collected = await stage('collect', () => collectInputs(options));
+  const facts = await stage('parse', () => parseAll(collected.sources, options, hooks));
+  return finishAnalysis({ options, command, facts, collected, hooks });
+}
+
+/** Everything read from disk before parsing. */
+export interface CollectedInputs {
+  readonly sources: CollectResult;
+  readonly navigation: { readonly file: string; readonly links: readonly RawLink[] } | null;
+  readonly redirects: readonly Redirect[];
+  readonly traffic: ReadonlyMap<string, number> | null;
+  readonly auxProblems: readonly AuxProblem[];
+}
+
+async function collectInputs(options: ResolvedOptions): Promise<CollectedInputs> {
+  const aux = [options.navigation, options.redirects, options.traffic].filter((p): p is string => p !== null);
+  const [sources, navText, redirectsText, trafficText] = await Promise.all([
+    collectSources(options, aux),
+    options.navigation === null ? null : readAuxFile(options, 'navigation', options.navigation),
+    options.redirects === null ? null : readAuxFile(options, 'redirects', options.redirects),
+    options.traffic === null ? null : readAuxFile(options, 'traffic', options.traffic),
+  ]);
+  const auxProblems: AuxProblem[] = [];
+  const navigation = navText === null ? null : { file: navText.file, links: parseNavigation(navText.file, navText.text) };
+  let redirects: Redirect[] = [];
+  if (redirectsText !== null) {
+    const parsed = parseRedirects(redirectsText.file, redirectsText.text);
+    redirects = parsed.redirects;
+    for (const p of parsed.problems) auxProblems.push({ file: redirectsText.file, line: p.line, message: p.message });
+  }
+  let traffic: Map<string, number> | null = null;
+  if (trafficText !== null) {
+    const parsed = parseTraffic(trafficText.file, trafficText.text);
+    traffic = parsed.views;
+    for (const p of parsed.problems) auxProblems.push({ file: trafficText.file, line: p.line, message: p.message });
+  }
+  return { sources, navigation, redirects, traffic, auxProblems };
+}
+
+async function parseAll(sources: CollectResult, options: ResolvedOptions, hooks: AnalyzeHooks): Promise<PageFacts[]> {
+  const total = sources.files.length;
+  const facts: PageFacts[] = [];
+  for (const file of sources.files) {
+    facts.push(parseSource(file, options));
+    if (facts.length % 256 === 0 || facts.length === total) hooks.onProgress?.('parse', facts.length, total);
+  }
+  return facts;
+}
+
+/** The stages after parsing; shared by `analyze` and the unified plugin's collector. */
+export async function finishAnalysis(input: {
+  readonly options: ResolvedOptions;
+  readonly command: 'check' | 'suggest';
+  readonly facts: readonly PageFacts[];
+  readonly collected: CollectedInputs;
+  readonly hooks: AnalyzeHooks;
+}): Promise<Report> {
+  const { options, command, facts, collected, hooks } = input;
+  const stage = stageTimer(hooks);
+  const graph = await stage('graph', () =>
+    buildGraph(
+      { pages: facts, assets: collected.sources.assets, navigation: collected.navigation, redirects: collected.redirects },
+      options,
+    ),
+  );
+  const ranking = await stage('rank', () => rankGraph(graph, options));
+  let suggestions: Suggestion[] = [];
+  let importance: readonly ('high' | 'normal' | 'low')[] | undefined;
+  if (command === 'suggest') {
+    const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
+    const text = await stage('text', () => {
+      const index = buildTermIndex(ordered.map((f) => f.text));
+      const related = relatedPages(index, options.suggest.relatedK);
+      return { index, related, centrality: contentCentrality(related, graph.pages.length) };
+    });
+    const result = await stage('suggest', () =>
+      suggestLinks({ graph, facts: ordered, ranking, ...text, traffic: collected.traffic }, options),
+    );
+    suggestions = result.suggestions;
+    importance = result.importance;
+  }
+  const findings = await stage('rules', () =>
+    runRules({ graph, facts, ranking, options, warnings: collected.sources.warnings, auxProblems: collected.auxProblems }),
+  );
+  return stage('report', () =>
+    buildReport({
+      options,
+      graph,
+      ranking,
+      findings,
+      suggestions,
+      files: collected.sources.files.length,
+      version: VERSION,
+      ...(importance === undefined ? {} : { importance }),
+    }),
+  );
+}
+
+function stageTimer(hooks: AnalyzeHooks) {
+  return async <T>(name: StageName, fn: () => T | Promise<T>): Promise<T> => {
+    hooks.onStage?.(name, 'start');
+    const value = await fn();
+    hooks.onStage?.(name, 'end');
+    return value;
+  };
+}
