@@ -327,4 +327,9 @@ export interface Report {
   readonly findings: readonly Finding[];
   readonly suggestions: readonly Suggestion[];
   readonly gate: { readonly passed: boolean; readonly failOn: 'error' | 'warning'; readonly failures: readonly GateFailure[] };
+  /** The configured limits the report's numbers are read against (the HTML report marks them). */
+  readonly options: {
+    /** Deepest click depth allowed (`ResolvedOptions.maxDepth`). */
+    readonly maxDepth: number;
+  };
 }
