@@ -148,6 +148,11 @@ export interface ResolvedLink {
   readonly fragment: string;
   readonly kind: LinkKind;
   readonly status: LinkStatus;
+  /**
+   * Context after template detection: `raw.context`, or `template` when the same link (same
+   * target and text) repeats on at least `templateShare` of the pages, or for navigation links.
+   */
+  readonly context: LinkContext;
   readonly raw: RawLink;
 }
 
