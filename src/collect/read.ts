@@ -1,0 +1,144 @@
+/** Reading one source file: real-path check, size limit, hash, decoding. */
+import { createHash } from 'node:crypto';
+import fs from 'node:fs';
+import type { FileKind, SourceFile } from '../types.js';
+import { decodeSource } from './decode.js';
+import { isInside } from './list.js';
+import type { CollectWarning } from './types.js';
+
+/** Kind of a source file from its extension, or null when it is not a source extension. */
+export function kindOfPath(path: string): FileKind | null {
+  const dot = path.lastIndexOf('.');
+  if (dot < 0 || dot < path.lastIndexOf('/')) return null;
+  switch (path.slice(dot + 1).toLowerCase()) {
+    case 'md':
+    case 'markdown':
+    case 'mdx':
+      return 'markdown';
+    case 'html':
+    case 'htm':
+      return 'html';
+    default:
+      return null;
+  }
+}
+
+/** What reading one file needs to know. */
+export interface ReadContext {
+  /** Real path of the content root. */
+  readonly realRoot: string;
+  readonly maxFileBytes: number;
+}
+
+/** A file read, or the warning that kept it out. */
+export type ReadOutcome = { readonly file: SourceFile } | { readonly warning: CollectWarning };
+
+const HASH_CHUNK = 1 << 20;
+
+/**
+ * Read one source file. Never throws: a file that vanished or cannot be read gives a warning;
+ * a file too large, binary or not valid UTF-8 gives a `SourceFile` with a problem.
+ * @param absPath absolute path as listed (may go through symlinks inside the root)
+ * @param relPath the same path relative to the root, `/` separators
+ */
+export async function readSource(absPath: string, relPath: string, kind: FileKind, ctx: ReadContext): Promise<ReadOutcome> {
+  let real: string;
+  try {
+    real = await fs.promises.realpath(absPath);
+  } catch (error) {
+    return { warning: ioWarning(relPath, error) };
+  }
+  if (!isInside(ctx.realRoot, real)) {
+    return {
+      warning: { file: relPath, code: 'symlink-outside', message: `"${relPath}" resolves outside the content root; skipped` },
+    };
+  }
+  let handle: fs.promises.FileHandle | undefined;
+  try {
+    handle = await fs.promises.open(real, 'r');
+    const stat = await handle.stat();
+    if (!stat.isFile()) {
+      return { warning: { file: relPath, code: 'unreadable', message: `"${relPath}" is not a regular file; skipped` } };
+    }
+    if (stat.size > ctx.maxFileBytes) {
+      const hash = await hashHandle(handle);
+      return {
+        file: {
+          path: relPath,
+          kind,
+          bytes: stat.size,
+          hash,
+          text: '',
+          problems: [
+            {
+              code: 'too-large',
+              message: `file is ${stat.size} bytes, over maxFileBytes (${ctx.maxFileBytes}); not analysed`,
+            },
+          ],
+        },
+      };
+    }
+    const bytes = await handle.readFile();
+    const decoded = decodeSource(bytes);
+    return {
+      file: {
+        path: relPath,
+        kind,
+        bytes: bytes.length,
+        hash: createHash('sha256').update(bytes).digest('hex'),
+        text: decoded.text,
+        problems: decoded.problems,
+      },
+    };
+  } catch (error) {
+    return { warning: ioWarning(relPath, error) };
+  } finally {
+    await handle?.close().catch(() => undefined);
+  }
+}
+
+/** sha256 of a file read in chunks, so a huge file never sits in memory whole. */
+async function hashHandle(handle: fs.promises.FileHandle): Promise<string> {
+  const hash = createHash('sha256');
+  const buffer = Buffer.allocUnsafe(HASH_CHUNK);
+  let position = 0;
+  for (;;) {
+    const { bytesRead } = await handle.read(buffer, 0, HASH_CHUNK, position);
+    if (bytesRead === 0) break;
+    hash.update(buffer.subarray(0, bytesRead));
+    position += bytesRead;
+  }
+  return hash.digest('hex');
+}
+
+function ioWarning(file: string, error: unknown): CollectWarning {
+  const code = (error as NodeJS.ErrnoException).code;
+  if (code === 'ENOENT' || code === 'ENOTDIR') {
+    return { file, code: 'vanished', message: `"${file}" disappeared while the site was being read; skipped` };
+  }
+  return {
+    file,
+    code: 'unreadable',
+    message: `cannot read "${file}": ${describeIoError(error)}; skipped`,
+  };
+}
+
+/** A short reason for an I/O error, without the absolute path Node puts in its messages. */
+export function describeIoError(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException).code;
+  switch (code) {
+    case 'ENOENT':
+      return 'no such file (ENOENT)';
+    case 'EACCES':
+    case 'EPERM':
+      return `permission denied (${code})`;
+    case 'EISDIR':
+      return 'is a folder (EISDIR)';
+    case 'ENOTDIR':
+      return 'a parent is not a folder (ENOTDIR)';
+    case undefined:
+      return (error as Error).message;
+    default:
+      return code;
+  }
+}

@@ -1,0 +1,79 @@
+import { createHash } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { kindOfPath, readSource } from '../../src/collect/index.js';
+import { tempDir, writeTree } from './tree.js';
+
+const cleanups: (() => void)[] = [];
+afterEach(() => {
+  while (cleanups.length > 0) cleanups.pop()!();
+});
+
+function root(): string {
+  const t = tempDir();
+  cleanups.push(t.cleanup);
+  return t.dir;
+}
+
+describe('readSource', () => {
+  it('reads a file: size, sha256 (node:crypto), decoded text', async () => {
+    const dir = root();
+    writeTree(dir, { 'a.md': 'héllo\n' });
+    const outcome = await readSource(path.join(dir, 'a.md'), 'a.md', 'markdown', { realRoot: dir, maxFileBytes: 100 });
+    expect(outcome).toEqual({
+      file: {
+        path: 'a.md',
+        kind: 'markdown',
+        bytes: 7,
+        hash: createHash('sha256').update('héllo\n').digest('hex'),
+        text: 'héllo\n',
+        problems: [],
+      },
+    });
+  });
+
+  it('a file deleted between listing and reading gives a "vanished" warning, not a throw', async () => {
+    const dir = root();
+    writeTree(dir, { 'gone.md': 'soon gone' });
+    const abs = path.join(dir, 'gone.md');
+    fs.rmSync(abs);
+    const outcome = await readSource(abs, 'gone.md', 'markdown', { realRoot: dir, maxFileBytes: 100 });
+    expect(outcome).toEqual({
+      warning: { file: 'gone.md', code: 'vanished', message: '"gone.md" disappeared while the site was being read; skipped' },
+    });
+  });
+
+  it('a path that turned into a folder gives an "unreadable" warning', async () => {
+    const dir = root();
+    fs.mkdirSync(path.join(dir, 'odd.md'));
+    const outcome = await readSource(path.join(dir, 'odd.md'), 'odd.md', 'markdown', { realRoot: dir, maxFileBytes: 100 });
+    expect(outcome).toMatchObject({ warning: { file: 'odd.md', code: 'unreadable' } });
+  });
+
+  it('a file swapped for a symlink to outside the root after listing is not read', async () => {
+    const dir = root();
+    const outside = tempDir('linkweave-outside-');
+    cleanups.push(outside.cleanup);
+    writeTree(outside.dir, { 'secret.md': 'CANARY-51ab' });
+    writeTree(dir, { 'page.md': { symlink: path.join(outside.dir, 'secret.md') } });
+    const outcome = await readSource(path.join(dir, 'page.md'), 'page.md', 'markdown', { realRoot: dir, maxFileBytes: 100 });
+    expect(outcome).toMatchObject({ warning: { file: 'page.md', code: 'symlink-outside' } });
+    expect(JSON.stringify(outcome)).not.toContain('CANARY-51ab');
+  });
+});
+
+describe('kindOfPath', () => {
+  it.each([
+    ['a.md', 'markdown'],
+    ['a/b.markdown', 'markdown'],
+    ['c.MDX', 'markdown'],
+    ['d.html', 'html'],
+    ['e.htm', 'html'],
+    ['f.txt', null],
+    ['md', null],
+    ['dir.md/file', null],
+  ] as const)('%s -> %s', (p, kind) => {
+    expect(kindOfPath(p)).toBe(kind);
+  });
+});
