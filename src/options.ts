@@ -57,6 +57,10 @@ const schema = z.strictObject({
   teleport: z.enum(['uniform', 'entry']).default('uniform'),
   /** PageRank damping factor. @default 0.85 */
   damping: z.number().gt(0).lt(1).default(0.85),
+  /** PageRank stops after this many power iterations (and reports it did not converge). @default 200 */
+  pagerankIterations: z.number().int().min(1).default(200),
+  /** PageRank stops when the L1 change of one iteration falls below this. @default 1e-10 */
+  pagerankTolerance: z.number().gt(0).default(1e-10),
   /** Deepest click depth allowed. @default 3 */
   maxDepth: z.number().int().min(0).default(3),
   /** Files larger than this are skipped with a finding. @default 10485760 (10 MiB) */
