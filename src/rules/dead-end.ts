@@ -1,0 +1,46 @@
+import { z } from 'zod';
+import type { Rule, RuleFinding } from './types.js';
+import { pageFinding } from './place.js';
+import { isDeadEnd } from './structure.js';
+
+/** Options of `dead-end`. */
+export interface DeadEndOptions {
+  /**
+   * Count template links (navigation, header, footer) as outlinks. `false`: a page whose only
+   * links are the sidebar's is a dead end too.
+   * @default true
+   */
+  readonly countTemplateLinks: boolean;
+}
+
+/**
+ * `dead-end`: every page links on to at least one other page, so a reader never has to go back.
+ *
+ * Links to external sites, files and the page itself do not count. A one-page site has no
+ * dead ends. Reported at line 1, column 1 of the page's file.
+ *
+ * Options: `countTemplateLinks` (default `true`). Default severity: `warning`.
+ *
+ * @example ok: `/guide/install/` ends with "Next: [configure](configure.md)".
+ * @example not ok: `/guide/faq/` links only to an external site:
+ * `guide/faq.md:1:1  warning  Unexpected dead end /guide/faq/ with no links to other pages,
+ * expected at least one link onward  dead-end`
+ */
+export const deadEnd: Rule<DeadEndOptions> = {
+  id: 'dead-end',
+  description: 'Every page links on to at least one other page.',
+  defaultSeverity: 'warning',
+  defaultOptions: { countTemplateLinks: true },
+  optionsSchema: z.strictObject({ countTemplateLinks: z.boolean() }),
+  check(ctx, options) {
+    const findings: RuleFinding[] = [];
+    const which = options.countTemplateLinks ? 'links' : 'content links';
+    for (const page of ctx.graph.pages) {
+      if (!isDeadEnd(ctx.graph, ctx.ranking, page.id, options.countTemplateLinks)) continue;
+      findings.push(
+        pageFinding(page, `Unexpected dead end ${page.route} with no ${which} to other pages, expected at least one link onward`),
+      );
+    }
+    return findings;
+  },
+};

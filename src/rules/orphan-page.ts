@@ -1,0 +1,46 @@
+import { z } from 'zod';
+import type { Rule, RuleFinding } from './types.js';
+import { pageFinding } from './place.js';
+import { entrySet, isOrphan } from './structure.js';
+
+/** Options of `orphan-page`. */
+export interface OrphanPageOptions {
+  /**
+   * Count template links (navigation, header, footer, repeated links) as inlinks.
+   * `false`: a page only the sidebar links to is an orphan too.
+   * @default true
+   */
+  readonly countTemplateLinks: boolean;
+}
+
+/**
+ * `orphan-page`: every page has at least one inlink from another page.
+ *
+ * Entry pages are exempt. Reported at line 1, column 1 of the page's file.
+ *
+ * Options: `countTemplateLinks` (default `true`). Default severity: `warning`.
+ *
+ * @example ok: `index.md` links to `about.md`, so `/about/` is no orphan.
+ * @example not ok: nothing links to `old/notes.md`:
+ * `old/notes.md:1:1  warning  Unexpected orphan page /old/notes/, expected a link to it from
+ * at least one other page  orphan-page`
+ */
+export const orphanPage: Rule<OrphanPageOptions> = {
+  id: 'orphan-page',
+  description: 'Every page is linked from at least one other page.',
+  defaultSeverity: 'warning',
+  defaultOptions: { countTemplateLinks: true },
+  optionsSchema: z.strictObject({ countTemplateLinks: z.boolean() }),
+  check(ctx, options) {
+    const entries = entrySet(ctx.graph);
+    const findings: RuleFinding[] = [];
+    for (const page of ctx.graph.pages) {
+      if (!isOrphan(ctx.graph, ctx.ranking, entries, page.id, options.countTemplateLinks)) continue;
+      const which = options.countTemplateLinks ? 'a link' : 'a content link';
+      findings.push(
+        pageFinding(page, `Unexpected orphan page ${page.route}, expected ${which} to it from at least one other page`),
+      );
+    }
+    return findings;
+  },
+};

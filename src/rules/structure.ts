@@ -1,0 +1,67 @@
+/**
+ * Structural facts about pages shared by the rules and the report's counts, so that a finding
+ * and the statistic a gate limit reads can never disagree on what an orphan or a dead end is.
+ */
+import type { ResolvedOptions } from '../options.js';
+import type { Csr, Ranking, SiteGraph } from '../types.js';
+
+/** Path of the navigation file as the report names it (relative posix path, no leading `./`). */
+export function navigationFile(options: Pick<ResolvedOptions, 'navigation'>): string {
+  if (options.navigation === null) return '';
+  return options.navigation.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
+}
+
+/** Ids of the entry pages, as a set. */
+export function entrySet(graph: SiteGraph): ReadonlySet<number> {
+  return new Set(graph.entries);
+}
+
+/** Pages that take part in findings: not excluded by `linkweave.exclude`. */
+export function isChecked(graph: SiteGraph, page: number): boolean {
+  return !graph.pages[page]!.meta.exclude;
+}
+
+/** Number of distinct pages `page` links to with at least one content link. */
+export function contentOutlinks(forward: Csr, page: number): number {
+  let count = 0;
+  for (let e = forward.offsets[page]!; e < forward.offsets[page + 1]!; e++) {
+    if ((forward.flags[e]! & 1) !== 0) count++;
+  }
+  return count;
+}
+
+/**
+ * Orphan page: no inlinks from any other page (template links count unless
+ * `countTemplateLinks` is false). Entry pages are never orphans.
+ */
+export function isOrphan(
+  graph: SiteGraph,
+  ranking: Ranking,
+  entries: ReadonlySet<number>,
+  page: number,
+  countTemplateLinks = true,
+): boolean {
+  if (entries.has(page)) return false;
+  const inlinks = countTemplateLinks ? ranking.inlinks[page]! : ranking.contentInlinks[page]!;
+  return inlinks === 0;
+}
+
+/**
+ * Dead end: no outlinks to other pages (template links count unless `countTemplateLinks` is
+ * false). A site of one page has no dead ends: there is nowhere to link to.
+ */
+export function isDeadEnd(graph: SiteGraph, ranking: Ranking, page: number, countTemplateLinks = true): boolean {
+  if (graph.pages.length < 2) return false;
+  const outlinks = countTemplateLinks ? ranking.outlinks[page]! : contentOutlinks(graph.forward, page);
+  return outlinks === 0;
+}
+
+/** Unreachable: no path of links from any entry page. */
+export function isUnreachable(ranking: Ranking, page: number): boolean {
+  return ranking.depth[page]! < 0;
+}
+
+/** Code-unit order, the same on every machine (unlike `localeCompare`). */
+export function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}

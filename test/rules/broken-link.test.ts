@@ -1,0 +1,95 @@
+import { brokenLink } from '../../src/rules/index.js';
+import { ruleTable } from './table.js';
+
+ruleTable(brokenLink, {
+  valid: [
+    { name: 'link to an existing page', site: { pages: [{ route: '/', links: ['/guide/'] }, { route: '/guide/' }] } },
+    { name: 'external links are never broken links', site: { pages: [{ route: '/', links: ['https://example.org/missing/'] }] } },
+    { name: 'a link to the page itself', site: { pages: [{ route: '/', links: ['/'] }] } },
+    {
+      name: 'a link whose fragment is missing is left to broken-fragment',
+      site: { pages: [{ route: '/', links: ['/guide/#nowhere'] }, { route: '/guide/' }] },
+    },
+  ],
+  invalid: [
+    {
+      name: 'the doc example: a typo in a file link, with the nearest route offered',
+      site: {
+        pages: [
+          { route: '/guide/', file: 'guide/index.md', links: [{ to: '/guide/instal/', href: 'instal.md', line: 1, column: 6 }] },
+          { route: '/guide/install/', file: 'guide/install.md' },
+        ],
+      },
+      findings: [
+        {
+          file: 'guide/index.md',
+          line: 1,
+          column: 6,
+          route: '/guide/',
+          target: '/guide/instal/',
+          message:
+            'Unexpected link to missing page /guide/instal/ (written "instal.md"), expected an existing page (did you mean /guide/install/?)',
+        },
+      ],
+    },
+    {
+      name: 'no hint when no route is close; the written form is left out when it equals the target',
+      site: { pages: [{ route: '/', links: [{ to: '/reference/cli/', line: 7, column: 3 }] }, { route: '/guide/' }] },
+      findings: [
+        { file: 'index.md', line: 7, column: 3, message: 'Unexpected link to missing page /reference/cli/, expected an existing page' },
+      ],
+    },
+    {
+      name: 'a missing file (an image, a PDF) is named as a page or file',
+      site: { pages: [{ route: '/', links: [{ to: '/files/manual.pdf', line: 2, column: 1 }] }] },
+      findings: [
+        {
+          file: 'index.md',
+          line: 2,
+          column: 1,
+          message: 'Unexpected link to missing page or file /files/manual.pdf, expected an existing page or file',
+        },
+      ],
+    },
+    {
+      name: 'each broken link at its own position, sorted by file, line and column',
+      site: {
+        pages: [
+          { route: '/b/', links: [{ to: '/nope/', line: 3, column: 9 }, { to: '/nope/', line: 3, column: 2 }] },
+          { route: '/a/', links: [{ to: '/gone/', line: 10, column: 1 }] },
+        ],
+      },
+      findings: [
+        { file: 'a.md', line: 10, column: 1, message: 'Unexpected link to missing page /gone/, expected an existing page' },
+        { file: 'b.md', line: 3, column: 2, message: 'Unexpected link to missing page /nope/, expected an existing page' },
+        { file: 'b.md', line: 3, column: 9, message: 'Unexpected link to missing page /nope/, expected an existing page' },
+      ],
+    },
+    {
+      name: 'a broken navigation link belongs to the navigation file, with no route',
+      site: {
+        pages: [{ route: '/' }, { route: '/setup/' }],
+        navigation: [{ to: '/set-up/', href: 'set-up.md', line: 4, column: 3 }],
+      },
+      findings: [
+        {
+          file: '_nav.md',
+          line: 4,
+          column: 3,
+          route: '',
+          message: 'Unexpected link to missing page /set-up/ (written "set-up.md"), expected an existing page (did you mean /setup/?)',
+        },
+      ],
+    },
+    {
+      name: 'links on excluded pages are not reported; links from other pages are',
+      site: {
+        pages: [
+          { route: '/', links: [{ to: '/gone/', line: 5, column: 1 }] },
+          { route: '/draft-notes/', exclude: true, links: [{ to: '/gone/', line: 2, column: 1 }] },
+        ],
+      },
+      findings: [{ file: 'index.md', line: 5, column: 1, message: 'Unexpected link to missing page /gone/, expected an existing page' }],
+    },
+  ],
+});

@@ -1,0 +1,39 @@
+import { deadEnd } from '../../src/rules/index.js';
+import { ruleTable } from './table.js';
+
+const message = (route: string, which = 'links'): string =>
+  `Unexpected dead end ${route} with no ${which} to other pages, expected at least one link onward`;
+
+ruleTable(deadEnd, {
+  valid: [
+    { name: 'pages that link onward', site: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] } },
+    { name: 'a one-page site has nowhere to link to', site: { pages: [{ route: '/' }] } },
+    {
+      name: 'navigation links count as outlinks by default',
+      site: { pages: [{ route: '/' }, { route: '/a/' }], navigation: ['/', '/a/'] },
+    },
+  ],
+  invalid: [
+    {
+      name: 'the doc example: a page with only an external link',
+      site: {
+        pages: [{ route: '/', links: ['/guide/faq/'] }, { route: '/guide/faq/', links: ['https://example.org/'] }],
+      },
+      findings: [{ file: 'guide/faq.md', line: 1, column: 1, route: '/guide/faq/', message: message('/guide/faq/') }],
+    },
+    {
+      name: 'self-links and broken links do not count',
+      site: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/a/', '/gone/'] }] },
+      findings: [{ file: 'a.md', line: 1, column: 1, message: message('/a/') }],
+    },
+    {
+      name: 'countTemplateLinks false: only the sidebar links onward',
+      site: {
+        pages: [{ route: '/', links: ['/a/'] }, { route: '/a/' }],
+        navigation: ['/', '/a/'],
+        options: { rules: { 'dead-end': ['warning', { countTemplateLinks: false }] } },
+      },
+      findings: [{ file: 'a.md', line: 1, column: 1, message: message('/a/', 'content links') }],
+    },
+  ],
+});

@@ -1,0 +1,25 @@
+import { duplicateRoute } from '../../src/rules/index.js';
+import { ruleTable } from './table.js';
+
+ruleTable(duplicateRoute, {
+  valid: [{ name: 'one file per route', site: { pages: [{ route: '/' }, { route: '/guide/' }] } }],
+  invalid: [
+    {
+      name: 'the doc example: guide.md and guide/index.md',
+      site: {
+        pages: [{ route: '/' }, { route: '/guide/', file: 'guide.md' }],
+        duplicates: [{ file: 'guide/index.md', route: '/guide/', keptFile: 'guide.md' }],
+      },
+      findings: [
+        {
+          file: 'guide/index.md',
+          line: 1,
+          column: 1,
+          route: '/guide/',
+          target: 'guide/index.md',
+          message: 'Unexpected second file for route /guide/, expected one file per route (guide.md has it)',
+        },
+      ],
+    },
+  ],
+});

@@ -1,0 +1,30 @@
+import { missingEntry } from '../../src/rules/index.js';
+import { ruleTable } from './table.js';
+
+ruleTable(missingEntry, {
+  valid: [
+    { name: 'the doc example: the default entry / exists', site: { pages: [{ route: '/' }] } },
+    { name: 'several entries that all exist', site: { pages: [{ route: '/' }, { route: '/api/' }], options: { entry: ['/', '/api/'] } } },
+  ],
+  invalid: [
+    {
+      name: 'the doc example: /start/ on a site with /stars/',
+      site: { pages: [{ route: '/' }, { route: '/stars/' }], options: { entry: ['/', '/start/'] } },
+      findings: [
+        {
+          file: '',
+          line: 1,
+          column: 1,
+          route: '/start/',
+          target: '/start/',
+          message: 'Unexpected entry route /start/ that matches no page, expected the route of an existing page in "entry" (did you mean /stars/?)',
+        },
+      ],
+    },
+    {
+      name: 'no close route: no hint',
+      site: { pages: [{ route: '/getting-started/' }] },
+      findings: [{ file: '', line: 1, column: 1, message: 'Unexpected entry route / that matches no page, expected the route of an existing page in "entry"' }],
+    },
+  ],
+});
