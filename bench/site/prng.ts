@@ -1,0 +1,70 @@
+/**
+ * Seeded pseudo-random numbers for the synthetic site generator. Every draw the generator makes
+ * comes from one of these streams, so the same seed gives the same bytes on every machine.
+ */
+
+/** A stream of numbers in [0, 1). */
+export type Random = () => number;
+
+/**
+ * mulberry32: a small 32-bit generator, good enough for synthetic text and graphs.
+ * @param seed any 32-bit integer
+ */
+export function mulberry32(seed: number): Random {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) | 0;
+    let t = Math.imul(a ^ (a >>> 15), 1 | a);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * Mix two integers into a seed (for an independent stream per page, so pages can be rendered in
+ * any order and still come out the same).
+ */
+export function mixSeed(seed: number, index: number): number {
+  let h = (seed ^ Math.imul(index + 1, 0x9e3779b1)) >>> 0;
+  h = Math.imul(h ^ (h >>> 16), 0x85ebca6b) >>> 0;
+  h = Math.imul(h ^ (h >>> 13), 0xc2b2ae35) >>> 0;
+  return (h ^ (h >>> 16)) >>> 0;
+}
+
+/** Integer in [lo, hi] (both included). */
+export function intBetween(rnd: Random, lo: number, hi: number): number {
+  return lo + Math.floor(rnd() * (hi - lo + 1));
+}
+
+/** One element of a non-empty array. */
+export function pick<T>(rnd: Random, items: readonly T[]): T {
+  return items[Math.floor(rnd() * items.length)]!;
+}
+
+/**
+ * Index in [0, n) with a heavy head: index = floor(n * u^power). power 1 is uniform; larger
+ * powers concentrate draws on the first indices (a Zipf-like popularity).
+ */
+export function skewedIndex(rnd: Random, n: number, power: number): number {
+  return Math.min(n - 1, Math.floor(n * Math.pow(rnd(), power)));
+}
+
+/**
+ * Discrete Pareto draw: floor(min / u^(1/alpha)), capped. alpha near 1.5 gives most values
+ * near `min` and a long tail of a few large ones (the out-degree of web pages looks like this).
+ */
+export function pareto(rnd: Random, min: number, alpha: number, cap: number): number {
+  const u = 1 - rnd(); // (0, 1]
+  return Math.min(cap, Math.floor(min / Math.pow(u, 1 / alpha)));
+}
+
+/** Fisher-Yates shuffle in place. */
+export function shuffle<T>(rnd: Random, items: T[]): T[] {
+  for (let i = items.length - 1; i > 0; i--) {
+    const j = Math.floor(rnd() * (i + 1));
+    const t = items[i]!;
+    items[i] = items[j]!;
+    items[j] = t;
+  }
+  return items;
+}
