@@ -1,0 +1,157 @@
+/**
+ * Compressed sparse rows for the link graph (DESIGN sections 2 and 5): one edge per
+ * (from, to) pair, weight = sum of the pair's link weights, flags = OR of the links' contexts
+ * (1 content, 2 template); self-edges and edges to non-pages dropped; rows sorted by target.
+ *
+ * Built with two stable counting sorts (by target, then by source), so construction is O(E + n)
+ * with a handful of typed arrays and no object per edge.
+ */
+import type { Csr } from '../types.js';
+import type { EdgeList } from './types.js';
+
+/** Flag bit of an edge with at least one content link. */
+export const EDGE_CONTENT = 1;
+/** Flag bit of an edge with at least one template link. */
+export const EDGE_TEMPLATE = 2;
+
+/** An empty edge list with room for `capacity` edges (it grows as needed). */
+export function createEdgeList(capacity = 1024): EdgeList {
+  const c = Math.max(16, capacity);
+  return { from: new Int32Array(c), to: new Int32Array(c), weight: new Float32Array(c), flags: new Uint8Array(c), length: 0 };
+}
+
+/** Append one link-level edge (duplicates are summed later by `buildCsr`). */
+export function pushEdge(list: EdgeList, from: number, to: number, weight: number, flags: number): void {
+  if (list.length === list.from.length) grow(list);
+  const i = list.length++;
+  list.from[i] = from;
+  list.to[i] = to;
+  list.weight[i] = weight;
+  list.flags[i] = flags;
+}
+
+function grow(list: EdgeList): void {
+  const c = list.from.length * 2;
+  const from = new Int32Array(c);
+  from.set(list.from);
+  const to = new Int32Array(c);
+  to.set(list.to);
+  const weight = new Float32Array(c);
+  weight.set(list.weight);
+  const flags = new Uint8Array(c);
+  flags.set(list.flags);
+  list.from = from;
+  list.to = to;
+  list.weight = weight;
+  list.flags = flags;
+}
+
+/**
+ * Forward and reverse CSR of `n` nodes from an edge list. Edges whose ends are not in
+ * [0, n) and self-edges are dropped; parallel edges are merged (weights summed in double
+ * precision, then stored as float32; flags OR-ed).
+ */
+export function buildCsr(edges: EdgeList, n: number): { forward: Csr; reverse: Csr } {
+  const m = edges.length;
+  const { from, to } = edges;
+  // Pass 1: stable counting sort of the kept edge indices by target.
+  const count = new Int32Array(n + 1);
+  let kept = 0;
+  for (let e = 0; e < m; e++) {
+    const f = from[e];
+    const t = to[e];
+    if (f === t || f < 0 || t < 0 || f >= n || t >= n) continue;
+    count[t + 1]++;
+    kept++;
+  }
+  for (let i = 0; i < n; i++) count[i + 1] += count[i];
+  const byTarget = new Int32Array(kept);
+  for (let e = 0; e < m; e++) {
+    const f = from[e];
+    const t = to[e];
+    if (f === t || f < 0 || t < 0 || f >= n || t >= n) continue;
+    byTarget[count[t]++] = e;
+  }
+  // Pass 2: stable counting sort by source: (source, target) order.
+  count.fill(0);
+  for (let k = 0; k < kept; k++) count[from[byTarget[k]] + 1]++;
+  for (let i = 0; i < n; i++) count[i + 1] += count[i];
+  const ordered = new Int32Array(kept);
+  for (let k = 0; k < kept; k++) {
+    const e = byTarget[k];
+    ordered[count[from[e]]++] = e;
+  }
+  // Pass 3: merge runs of the same pair.
+  let unique = 0;
+  for (let k = 0; k < kept; k++) {
+    const e = ordered[k];
+    if (k === 0 || from[e] !== from[ordered[k - 1]] || to[e] !== to[ordered[k - 1]]) unique++;
+  }
+  const offsets = new Int32Array(n + 1);
+  const targets = new Int32Array(unique);
+  const weights = new Float32Array(unique);
+  const flags = new Uint8Array(unique);
+  let out = -1;
+  let sum = 0;
+  let lastFrom = -1;
+  let lastTo = -1;
+  for (let k = 0; k < kept; k++) {
+    const e = ordered[k];
+    const f = from[e];
+    const t = to[e];
+    if (f !== lastFrom || t !== lastTo) {
+      if (out >= 0) weights[out] = sum;
+      out++;
+      targets[out] = t;
+      flags[out] = 0;
+      sum = 0;
+      offsets[f + 1]++;
+      lastFrom = f;
+      lastTo = t;
+    }
+    sum += edges.weight[e];
+    flags[out] |= edges.flags[e];
+  }
+  if (out >= 0) weights[out] = sum;
+  for (let i = 0; i < n; i++) offsets[i + 1] += offsets[i];
+  const forward: Csr = { offsets, targets, weights, flags };
+  return { forward, reverse: transpose(forward, n) };
+}
+
+/**
+ * The transpose of a CSR: row `v` lists the sources of the edges into `v`, sorted by source
+ * (a stable counting sort of the forward rows, which are visited in source order).
+ */
+export function transpose(csr: Csr, n: number): Csr {
+  const m = csr.targets.length;
+  const offsets = new Int32Array(n + 1);
+  for (let e = 0; e < m; e++) offsets[csr.targets[e] + 1]++;
+  for (let i = 0; i < n; i++) offsets[i + 1] += offsets[i];
+  const cursor = offsets.slice(0, n);
+  const targets = new Int32Array(m);
+  const weights = new Float32Array(m);
+  const flags = new Uint8Array(m);
+  for (let u = 0; u < n; u++) {
+    const end = csr.offsets[u + 1];
+    for (let e = csr.offsets[u]; e < end; e++) {
+      const v = csr.targets[e];
+      const p = cursor[v]++;
+      targets[p] = u;
+      weights[p] = csr.weights[e];
+      flags[p] = csr.flags[e];
+    }
+  }
+  return { offsets, targets, weights, flags };
+}
+
+/** Sum of the out-edge weights of every node (double precision), for PageRank. */
+export function outWeightSums(forward: Csr, n: number): Float64Array {
+  const sums = new Float64Array(n);
+  for (let u = 0; u < n; u++) {
+    let s = 0;
+    const end = forward.offsets[u + 1];
+    for (let e = forward.offsets[u]; e < end; e++) s += forward.weights[e];
+    sums[u] = s;
+  }
+  return sums;
+}

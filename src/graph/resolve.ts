@@ -1,0 +1,282 @@
+/**
+ * Link resolution (DESIGN section 4). Pure: nothing here touches the file system; file and
+ * asset "existence" is a lookup in the indexes the caller built from collect's lists.
+ *
+ * - WHATWG `URL` against a synthetic origin (`https://linkweave.invalid`), so dot segments,
+ *   `//host`, schemes and `<base href>` behave as in a browser.
+ * - A relative link whose path ends in `.md`/`.markdown`/`.mdx` (or `.html`/`.htm` naming a
+ *   source file) resolves against the source file's own location and maps to that file's
+ *   route. Every other relative link resolves against the page's route URL, or against the
+ *   page's `<base href>` (itself resolved against the route) when the HTML page has one; with a
+ *   base, every link resolves as the browser would, source extensions included.
+ * - Site-absolute links (`/a/b/`) are taken against `basePath`.
+ * - The query is dropped, the fragment kept and checked against the target's ids.
+ */
+import type { FileKind, LinkKind, LinkStatus, RawLink, ResolvedLink } from '../types.js';
+import type { RedirectEnd } from './types.js';
+import {
+  canonicalPath,
+  decodePathSegments,
+  encodeRouteSegment,
+  extensionOf,
+  isMarkdownExtension,
+  isSourceExtension,
+  lookupKey,
+  routeKeyOf,
+  withBasePath,
+} from './normalize.js';
+import type { RouteOptions } from './normalize.js';
+
+/** The synthetic origin routes are resolved against. `.invalid` is reserved (RFC 2606). */
+export const SITE_ORIGIN = 'https://linkweave.invalid';
+
+const HOSTED_SCHEMES = new Set(['http:', 'https:', 'ftp:', 'ws:', 'wss:']);
+const SCHEME = /^[a-zA-Z][a-zA-Z0-9+.-]*:/;
+const PROTOCOL_RELATIVE = /^[\\/]{2}/;
+const SITE_ABSOLUTE = /^[\\/](?![\\/])/;
+/** Characters WHATWG `URL` strips from both ends of an href. */
+const URL_TRIM = /^[\u0000-\u0020]+|[\u0000-\u0020]+$/g;
+
+/** The indexes resolution looks things up in. Built once per graph by `createResolveContext`. */
+export interface ResolveContext {
+  readonly routes: RouteOptions;
+  /** `routes.basePath` with a trailing slash. */
+  readonly basePath: string;
+  /** Route key -> page id (pages, aliases, redirects that reach a page). */
+  readonly routeIndex: ReadonlyMap<string, number>;
+  /** Route key -> end of a redirect chain that reaches no page. */
+  readonly redirectEnds: ReadonlyMap<string, RedirectEnd>;
+  /** File path (case-folded when routes are case-insensitive) -> page id. */
+  readonly fileIndex: ReadonlyMap<string, number>;
+  /** Asset paths (case-folded when routes are case-insensitive). */
+  readonly assets: ReadonlySet<string>;
+  /** Route of each page id. */
+  readonly pageRoutes: readonly string[];
+  /** True when page `page` has the fragment target `id`. */
+  hasId(page: number, id: string): boolean;
+}
+
+/** Where a link is written: a page, or the navigation file (`page` -1). */
+export interface LinkSource {
+  readonly page: number;
+  readonly kind: FileKind;
+  /** URL of the source file's own location (`SITE_ORIGIN` + `/` + file path). */
+  readonly fileUrl: string;
+  /** URL relative links resolve against: the `<base href>` when there is one, else the route URL. */
+  readonly baseUrl: string;
+  /** True when `baseUrl` comes from a `<base href>`. */
+  readonly hasBase: boolean;
+}
+
+/** The URL of a file path under the synthetic origin (`a/b c.md` -> `https://linkweave.invalid/a/b%20c.md`). */
+export function fileUrlOf(file: string): string {
+  return SITE_ORIGIN + '/' + file.split('/').map(encodeRouteSegment).join('/');
+}
+
+/**
+ * The resolution source of a page: its file location, its route URL and its `<base href>`
+ * (first base with an href, resolved against the route URL; ignored when it does not parse,
+ * as the HTML standard says).
+ */
+export function pageSource(page: number, kind: FileKind, file: string, route: string, baseHref?: string): LinkSource {
+  const routeUrl = SITE_ORIGIN + (route.startsWith('/') ? route : '/' + route);
+  const fileUrl = fileUrlOf(file);
+  if (baseHref !== undefined && !baseHref.includes('\0')) {
+    try {
+      return { page, kind, fileUrl, baseUrl: new URL(baseHref, routeUrl).href, hasBase: true };
+    } catch {
+      // An unparsable base URL is ignored (HTML standard: fall back to the document URL).
+    }
+  }
+  return { page, kind, fileUrl, baseUrl: routeUrl, hasBase: false };
+}
+
+/**
+ * The resolution source of the navigation file: links resolve against the file's own
+ * location, under `basePath` for route-style links.
+ */
+export function navigationSource(file: string, basePath: string, kind: FileKind = 'markdown'): LinkSource {
+  const encoded = file.split('/').map(encodeRouteSegment).join('/');
+  return { page: -1, kind, fileUrl: fileUrlOf(file), baseUrl: SITE_ORIGIN + basePath + encoded, hasBase: false };
+}
+
+/**
+ * Resolve one link. Never throws: hrefs that hold a NUL, do not parse or do not decode give a
+ * `broken` link whose target is the href as written.
+ */
+export function resolveLink(raw: RawLink, src: LinkSource, ctx: ResolveContext): ResolvedLink {
+  if (raw.href.includes('\0')) return broken(raw, src, raw.href, 'internal');
+  let href = raw.href.replace(URL_TRIM, '');
+  const hasScheme = SCHEME.test(href);
+  const protocolRelative = !hasScheme && PROTOCOL_RELATIVE.test(href);
+  if (raw.origin === 'pattern' && raw.fileRelative !== true && !hasScheme && !protocolRelative && !SITE_ABSOLUTE.test(href)) {
+    // A pattern route that is no file link is site-absolute (DESIGN section 9, linkPatterns).
+    href = '/' + href;
+  }
+  if (!hasScheme && !protocolRelative) {
+    const ext = extensionOf(pathPart(href));
+    if (raw.fileRelative === true || (!src.hasBase && isSourceExtension(ext))) {
+      const viaFile = resolveFileLink(raw, href, src, ctx, raw.fileRelative === true || isMarkdownExtension(ext));
+      if (viaFile !== null) return viaFile;
+    }
+  }
+  let url: URL;
+  try {
+    url = new URL(href, src.baseUrl);
+  } catch {
+    return broken(raw, src, raw.href, 'internal');
+  }
+  if (url.origin !== SITE_ORIGIN || url.protocol !== 'https:') return classifyForeign(raw, src, url);
+  const fragment = decodeFragment(url.hash);
+  if (fragment === null) return broken(raw, src, raw.href, 'internal');
+  let path = url.pathname;
+  if (!hasScheme && !protocolRelative && SITE_ABSOLUTE.test(href)) path = withBasePath(path, ctx.basePath);
+  const canonical = canonicalPath(path);
+  if (canonical === null) return broken(raw, src, raw.href, 'internal');
+  const key = routeKeyOf(canonical, ctx.routes);
+  const page = lookupKey(ctx.routeIndex, key, ctx.routes);
+  if (page !== undefined) return toPage(raw, src, ctx, page, fragment, url.hash);
+  const end = lookupKey(ctx.redirectEnds, key, ctx.routes);
+  if (end !== undefined) {
+    if (end.kind === 'external') return make(raw, src, -1, end.url, fragment, 'external', 'external');
+    return broken(raw, src, end.route, 'internal', fragment);
+  }
+  return resolveAsset(raw, src, ctx, href, canonical, fragment);
+}
+
+/** A link that resolved to a page: check its fragment. */
+function toPage(raw: RawLink, src: LinkSource, ctx: ResolveContext, page: number, fragment: string, rawHash: string): ResolvedLink {
+  const target = ctx.pageRoutes[page]!;
+  const status: LinkStatus = fragmentExists(ctx, page, fragment, rawHash) ? (page === src.page ? 'self' : 'ok') : 'broken-fragment';
+  return make(raw, src, page, target, fragment, 'internal', status);
+}
+
+/**
+ * The empty fragment and `top` always exist: browsers scroll to the top of the document for
+ * them (the HTML standard's "indicated part of the document"; common practice, no source for
+ * linking to them). Otherwise the decoded fragment, or the fragment as written, must be an id.
+ */
+function fragmentExists(ctx: ResolveContext, page: number, fragment: string, rawHash: string): boolean {
+  if (fragment === '' || fragment.toLowerCase() === 'top') return true;
+  return ctx.hasId(page, fragment) || (rawHash.length > 1 && ctx.hasId(page, rawHash.slice(1)));
+}
+
+/**
+ * A link to a source file, resolved against the file's own location (site-absolute: against
+ * the content root). Null when an `.html`/`.htm` link names no source file: the caller then
+ * resolves it as a route.
+ */
+function resolveFileLink(raw: RawLink, href: string, src: LinkSource, ctx: ResolveContext, markdownLink: boolean): ResolvedLink | null {
+  const candidates: URL[] = [];
+  try {
+    if (SITE_ABSOLUTE.test(href)) {
+      const url = new URL(href, SITE_ORIGIN + '/');
+      candidates.push(url);
+      if (ctx.basePath !== '/' && url.pathname.startsWith(ctx.basePath)) {
+        candidates.push(new URL(url.pathname.slice(ctx.basePath.length - 1) + url.hash, SITE_ORIGIN));
+      }
+    } else {
+      candidates.push(new URL(href, src.fileUrl));
+      // Link patterns (`{{ref "a/b.md"}}`) name files relative to the page or, failing that,
+      // to the content root, as site generators' ref shortcodes do (common practice, no source).
+      if (raw.origin === 'pattern' && !href.startsWith('.')) candidates.push(new URL(href, SITE_ORIGIN + '/'));
+    }
+  } catch {
+    return broken(raw, src, raw.href, 'internal');
+  }
+  let firstPath: string | null = null;
+  for (const url of candidates) {
+    const file = filePathOf(url.pathname);
+    if (file === null) return broken(raw, src, raw.href, 'internal');
+    firstPath ??= file;
+    const lookup = ctx.routes.caseInsensitive ? file.toLowerCase() : file;
+    const page = ctx.fileIndex.get(lookup);
+    if (page !== undefined) {
+      const fragment = decodeFragment(url.hash);
+      if (fragment === null) return broken(raw, src, raw.href, 'internal');
+      return toPage(raw, src, ctx, page, fragment, url.hash);
+    }
+    if (ctx.assets.has(lookup)) return make(raw, src, -1, assetTarget(file, ctx), decodeFragment(url.hash) ?? '', 'asset', 'asset');
+  }
+  if (!markdownLink) return null;
+  return broken(raw, src, firstPath ?? raw.href, 'internal', decodeFragment(candidates[0]?.hash ?? '') ?? '');
+}
+
+/** An internal path that is no page: an asset, or a broken link. */
+function resolveAsset(raw: RawLink, src: LinkSource, ctx: ResolveContext, href: string, canonical: string, fragment: string): ResolvedLink {
+  const ext = extensionOf(canonical);
+  const kind: LinkKind = ext !== '' && !isSourceExtension(ext) ? 'asset' : 'internal';
+  const paths: string[] = [];
+  if (canonical.startsWith(ctx.basePath)) paths.push(canonical.slice(ctx.basePath.length - 1));
+  // Markdown authors write asset links relative to the file (the way repository viewers and
+  // most generators read them), so a Markdown page's asset link may also name a file beside it.
+  if (src.kind === 'markdown' && !SITE_ABSOLUTE.test(href) && !src.hasBase) {
+    try {
+      paths.push(new URL(href, src.fileUrl).pathname);
+    } catch {
+      // Already parsed once against the route URL; a failure here only skips this candidate.
+    }
+  }
+  for (const p of paths) {
+    const file = filePathOf(p);
+    if (file === null) continue;
+    const lookup = ctx.routes.caseInsensitive ? file.toLowerCase() : file;
+    if (ctx.assets.has(lookup)) return make(raw, src, -1, assetTarget(file, ctx), fragment, 'asset', 'asset');
+  }
+  return broken(raw, src, canonical, kind, fragment);
+}
+
+/** A link to another origin or scheme. */
+function classifyForeign(raw: RawLink, src: LinkSource, url: URL): ResolvedLink {
+  if (url.protocol === 'mailto:') return make(raw, src, -1, raw.href.replace(URL_TRIM, ''), '', 'mailto', 'other');
+  if (HOSTED_SCHEMES.has(url.protocol)) {
+    const hash = url.hash;
+    const target = hash === '' ? url.href : url.href.slice(0, -hash.length);
+    return make(raw, src, -1, target, decodeFragment(hash) ?? hash.slice(1), 'external', 'external');
+  }
+  // tel:, javascript:, data:, file: and the rest: recorded, never read, never resolved to disk.
+  return make(raw, src, -1, raw.href.replace(URL_TRIM, ''), '', 'other', 'other');
+}
+
+/** Decoded file path (relative to the content root) of a URL path; null when it does not decode. */
+function filePathOf(pathname: string): string | null {
+  const segments = decodePathSegments(pathname);
+  if (segments === null) return null;
+  for (const s of segments) if (s.includes('/')) return null;
+  return segments.join('/');
+}
+
+function assetTarget(file: string, ctx: ResolveContext): string {
+  return ctx.basePath + file.split('/').map(encodeRouteSegment).join('/');
+}
+
+/** Decoded fragment without `#`; null when it does not decode or holds a NUL. */
+function decodeFragment(hash: string): string | null {
+  if (hash.length <= 1) return '';
+  const raw = hash.slice(1);
+  if (raw.indexOf('%') < 0) return raw;
+  try {
+    const d = decodeURIComponent(raw);
+    return d.indexOf('\0') < 0 ? d : null;
+  } catch {
+    return null;
+  }
+}
+
+/** The path part of an href: before the first `?` or `#`. */
+function pathPart(href: string): string {
+  let end = href.length;
+  const q = href.indexOf('?');
+  if (q >= 0) end = q;
+  const h = href.indexOf('#');
+  if (h >= 0 && h < end) end = h;
+  return end === href.length ? href : href.slice(0, end);
+}
+
+function broken(raw: RawLink, src: LinkSource, target: string, kind: LinkKind, fragment = ''): ResolvedLink {
+  return make(raw, src, -1, target, fragment, kind, 'broken');
+}
+
+function make(raw: RawLink, src: LinkSource, to: number, target: string, fragment: string, kind: LinkKind, status: LinkStatus): ResolvedLink {
+  return { from: src.page, to, target, fragment, kind, status, context: raw.context, raw };
+}
