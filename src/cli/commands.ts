@@ -1,0 +1,84 @@
+/**
+ * The command table. Adding a command is one entry here: its name, a help line, its own
+ * flags and the function that runs it.
+ */
+import { resolve } from 'node:path';
+import { analyze } from '../analyze.js';
+import type { Config } from '../options.js';
+import { formatReport } from '../report/index.js';
+import { writeFileAtomic } from '../report/write.js';
+import type { CommandInfo, FlagValues, FormatName } from './args.js';
+import { colorEnabled } from './io.js';
+import type { CliIo } from './io.js';
+import { checkOutputPath, formatFromOutput } from './output.js';
+import { progressHooks } from './progress.js';
+
+/** The flags every command shares, typed. */
+export interface CommonFlags {
+  readonly format: FormatName | null;
+  readonly output: string | null;
+  readonly quiet: boolean;
+  readonly progress: boolean;
+}
+
+/** Everything a command gets: the process, the content root, the configuration and the flags. */
+export interface CommandContext {
+  readonly io: CliIo;
+  /** Absolute content root. */
+  readonly root: string;
+  /** The configuration file's object with the flags merged over it (validated before). */
+  readonly config: Config;
+  /** Where the configuration came from, for messages. */
+  readonly configOrigin: string;
+  readonly flags: CommonFlags;
+  /** All flag values by name, including the command's own flags. */
+  readonly values: FlagValues;
+}
+
+/** A command: what the parser and help know, plus how it runs. Returns the exit code. */
+export interface Command extends CommandInfo {
+  run(ctx: CommandContext): Promise<number>;
+}
+
+/** The commands, in help order. */
+export const COMMANDS: readonly Command[] = [
+  {
+    name: 'check',
+    summary: 'build the link graph, run the rules, print the findings, apply the gate',
+    run: (ctx) => reportCommand(ctx, 'check'),
+  },
+  {
+    name: 'suggest',
+    summary: 'check, plus proposed new links (file, line, column, anchor, target, predicted impact)',
+    run: (ctx) => reportCommand(ctx, 'suggest'),
+  },
+];
+
+/** analyze -> format -> stdout or --output; exit 0 when the gate passed, 1 when it failed. */
+async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'): Promise<number> {
+  const { io, flags } = ctx;
+  const output = flags.output === null ? null : resolve(io.cwd, flags.output);
+  if (output !== null) checkOutputPath(output, ctx.root, flags.output!);
+  const format = flags.format ?? (output === null ? 'text' : formatFromOutput(output));
+  const color = colorEnabled(io);
+
+  const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
+  let report;
+  try {
+    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin }, progress?.hooks ?? {});
+  } finally {
+    progress?.done();
+  }
+
+  if (output === null) {
+    io.stdout.write(formatReport(report, format, { color }));
+  } else {
+    const text = formatReport(report, format, { color: false });
+    await writeFileAtomic(output, text, io.tempFiles === undefined ? {} : { tracker: io.tempFiles });
+    if (!flags.quiet) {
+      if (format !== 'text') io.stdout.write(formatReport(report, 'text', { color }));
+      io.stderr.write(`linkweave: report written to ${flags.output}\n`);
+    }
+  }
+  return report.gate.passed ? 0 : 1;
+}
