@@ -1,11 +1,15 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import Graph from 'graphology';
-import graphologyPagerank from 'graphology-metrics/centrality/pagerank.js';
+import { DirectedGraph } from 'graphology';
+import pagerankModule from 'graphology-metrics/centrality/pagerank.js';
 import { pagerank } from '../../src/rank/index.js';
 import { outWeightSums } from '../../src/graph/csr.js';
 import { csrOf, randomGraph } from './graphs.js';
 import type { Edge } from './graphs.js';
+
+// A CommonJS module: under NodeNext its default import is `module.exports`, the function itself,
+// while its .d.ts describes an ES default export.
+const graphologyPagerank = pagerankModule as unknown as typeof pagerankModule.default;
 
 const STRICT = { damping: 0.85, maxIterations: 1000, tolerance: 1e-10 };
 
@@ -107,7 +111,7 @@ describe('PageRank properties', () => {
     // the L1 change < N * tolerance, so tolerance 1e-10 / N is our L1 change < 1e-10.
     for (const [n, seed] of [[2000, 1], [2500, 2], [3000, 3]] as const) {
       const edges = randomGraph(n, seed);
-      const graph = new Graph({ type: 'directed' });
+      const graph = new DirectedGraph();
       for (let i = 0; i < n; i++) graph.addNode(String(i));
       for (const [u, v, w] of edges) {
         if (u === v) continue; // neither side keeps self-links
