@@ -8,8 +8,8 @@ import { compare, isInside, listFiles, toRelative, WarningLog } from './list.js'
 import { describeIoError, kindOfPath, readSource } from './read.js';
 import type { CollectResult } from './types.js';
 
-/** Files read at the same time: enough to keep the disk busy, few enough for file-handle limits. */
-export const READ_CONCURRENCY = 32;
+/** Files read between two turns of the event loop (reads are synchronous; see read.ts). */
+export const READ_BATCH = 64;
 
 /**
  * Find the source files under `options.root` (include/exclude globs; node_modules, dot-folders
@@ -46,21 +46,18 @@ export async function collectSources(options: ResolvedOptions, extraExclude: rea
   const assets = all.filter((rel) => !sourceSet.has(rel));
 
   const ctx = { realRoot, maxFileBytes: options.maxFileBytes };
-  const files: (SourceFile | null)[] = new Array(sources.length).fill(null);
-  let next = 0;
-  const worker = async (): Promise<void> => {
-    while (next < sources.length) {
-      const i = next++;
-      const { rel, kind } = sources[i]!;
-      const outcome = await readSource(join(realRoot, rel), rel, kind, ctx);
-      if ('file' in outcome) files[i] = outcome.file;
-      else warnings.add(outcome.warning);
-    }
-  };
-  await Promise.all(Array.from({ length: Math.min(READ_CONCURRENCY, sources.length) }, worker));
+  const files: SourceFile[] = [];
+  for (let i = 0; i < sources.length; i++) {
+    const { rel, kind } = sources[i]!;
+    const outcome = readSource(join(realRoot, rel), rel, kind, ctx);
+    if ('file' in outcome) files.push(outcome.file);
+    else warnings.add(outcome.warning);
+    // Let signals, timers and progress displays run.
+    if (i % READ_BATCH === READ_BATCH - 1) await new Promise<void>((r) => setImmediate(r));
+  }
 
   return {
-    files: files.filter((f): f is SourceFile => f !== null).sort((a, b) => compare(a.path, b.path)),
+    files: files.sort((a, b) => compare(a.path, b.path)),
     assets: assets.sort(compare),
     warnings: warnings.sorted(),
   };

@@ -1,5 +1,5 @@
 /** The `collect` stage: find and read the sources under the content root. */
-export { collectSources, READ_CONCURRENCY } from './collect.js';
+export { collectSources, READ_BATCH } from './collect.js';
 export { readAuxFile } from './aux.js';
 export type { AuxKey } from './aux.js';
 export { readSource, kindOfPath } from './read.js';

@@ -216,7 +216,7 @@ describe('collectSources', () => {
     expect(two.assets).toEqual(one.assets);
   });
 
-  it('reads many files with bounded concurrency and keeps every one', async () => {
+  it('reads many files in batches and keeps every one, in order', async () => {
     const tree: Tree = {};
     for (let i = 0; i < 150; i++) tree[`p/${String(i).padStart(3, '0')}.md`] = `page ${i}`;
     const result = await collect(site(tree));
