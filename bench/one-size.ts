@@ -1,0 +1,167 @@
+/**
+ * One size of the benchmark, in a process of its own (so sizes do not pollute each other's
+ * heap, JIT state or peak RSS). Prints one line `RESULT {json}` on stdout.
+ *
+ *   node dist-bench/bench/one-size.js --size N [--dir SITE] [--runs R] [--mode measure|rss|related]
+ *
+ * - `rss`: one cold run of the pipeline in this fresh process; reports its time and the
+ *   process's peak RSS (`process.resourceUsage().maxRSS`).
+ * - `measure`: the references (bare parse, PageRank against graphology, sequential-read rate)
+ *   and the pipeline cold, warm with no change, and warm with one file changed; medians of R.
+ * - `related`: the inverted-index top-10 against brute force on the site's term index.
+ * Without `--dir`, the site is generated into a temporary folder and removed afterwards.
+ */
+import { appendFileSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { parseArgs } from 'node:util';
+import { bruteForceRelated, compareRelated } from './brute-force.js';
+import { runFront } from './front.js';
+import { generateSite } from './generate.js';
+import { loadBuilt } from './lib.js';
+import type { Built } from './lib.js';
+import type { RunTiming } from './pipeline.js';
+import { folderBytes, median, runPipeline } from './pipeline.js';
+import type { PagerankComparison } from './references.js';
+import { bareParseMs, comparePagerank, edgesOf, measureBandwidth, timeMs } from './references.js';
+
+/** What `--mode rss` reports. */
+export interface RssResult {
+  readonly mode: 'rss';
+  readonly size: number;
+  readonly maxRssBytes: number;
+  readonly coldMs: number;
+  readonly pages: number;
+}
+
+/** What `--mode measure` reports. */
+export interface MeasureResult {
+  readonly mode: 'measure';
+  readonly size: number;
+  readonly runs: number;
+  readonly files: number;
+  readonly sourceBytes: number;
+  readonly cold: RunTiming[];
+  /** Empty when the cache wrote nothing (not built yet). */
+  readonly warm: RunTiming[];
+  readonly warmChanged: RunTiming[];
+  readonly cacheBytes: number;
+  readonly bareParseMs: number[];
+  readonly pagerank: PagerankComparison[];
+  readonly bandwidth: { float64: number; int32: number };
+}
+
+/** What `--mode related` reports. */
+export interface RelatedResult {
+  readonly mode: 'related';
+  readonly size: number;
+  readonly terms: number;
+  readonly invertedMs: number[];
+  readonly bruteMs: number;
+  readonly differing: number;
+  readonly differingBeyondTies: number;
+}
+
+const gc = (): void => (globalThis as { gc?: () => void }).gc?.();
+
+async function rss(lib: Built, root: string, work: string): Promise<RssResult> {
+  const t = await runPipeline(lib, root, { cacheDir: join(work, 'cache-rss'), outFile: join(work, 'report-rss.json') });
+  return { mode: 'rss', size: t.pages, maxRssBytes: process.resourceUsage().maxRSS * 1024, coldMs: t.totalMs, pages: t.pages };
+}
+
+async function measure(lib: Built, root: string, work: string, size: number, runs: number): Promise<MeasureResult> {
+  // The front half once: the file list and the link graph for the references (also warms the JIT
+  // for every run below, bare parse included, so they compare like with like).
+  const front = await runFront(lib, root);
+  const paths = front.files.map((f) => join(root, f.path));
+  const sourceBytes = front.files.reduce((s, f) => s + f.bytes, 0);
+  const edges = edgesOf(front.graph);
+  const { damping, pagerankIterations, pagerankTolerance } = front.options;
+  const changed = paths[Math.floor(paths.length / 2)]!;
+  gc();
+
+  const pagerank: PagerankComparison[] = [];
+  for (let r = 0; r < runs; r++) {
+    pagerank.push(comparePagerank(lib, edges, damping, pagerankTolerance, pagerankIterations));
+    gc();
+  }
+  const bandwidth = measureBandwidth();
+  gc();
+
+  const cold: RunTiming[] = [];
+  const warm: RunTiming[] = [];
+  const warmChanged: RunTiming[] = [];
+  const bare: number[] = [];
+  let cacheBytes = 0;
+  const original = readFileSync(changed, 'utf8');
+  for (let r = 0; r < runs; r++) {
+    let texts: string[] | null = paths.map((p) => readFileSync(p, 'utf8'));
+    bare.push(bareParseMs(texts));
+    texts = null;
+    gc();
+    const cacheDir = join(work, `cache-${r}`);
+    const outFile = join(work, 'report.json');
+    cold.push(await runPipeline(lib, root, { cacheDir, outFile }));
+    cacheBytes = folderBytes(cacheDir);
+    gc();
+    if (cacheBytes > 0) {
+      warm.push(await runPipeline(lib, root, { cacheDir, outFile }));
+      gc();
+      appendFileSync(changed, `\nThis paragraph was added by the benchmark run ${r + 1} to change one file; see [the section index](index.md).\n`);
+      try {
+        warmChanged.push(await runPipeline(lib, root, { cacheDir, outFile }));
+      } finally {
+        writeFileSync(changed, original);
+      }
+      gc();
+    }
+    rmSync(cacheDir, { recursive: true, force: true });
+  }
+  return {
+    mode: 'measure', size, runs, files: paths.length, sourceBytes, cold, warm, warmChanged, cacheBytes,
+    bareParseMs: bare, pagerank, bandwidth,
+  };
+}
+
+async function related(lib: Built, root: string, size: number, runs: number): Promise<RelatedResult> {
+  const front = await runFront(lib, root);
+  const index = lib.text.buildTermIndex(front.ordered.map((f) => f.text));
+  const k = 10;
+  const invertedMs: number[] = [];
+  let fast = lib.text.relatedPages(index, k);
+  for (let r = 0; r < runs; r++) invertedMs.push(timeMs(() => (fast = lib.text.relatedPages(index, k))));
+  let slow = bruteForceRelated(index, k);
+  const bruteMs = timeMs(() => (slow = bruteForceRelated(index, k)));
+  const agreement = compareRelated(fast, slow);
+  return { mode: 'related', size, terms: index.terms.length, invertedMs, bruteMs, ...agreement };
+}
+
+async function main(): Promise<void> {
+  const { values } = parseArgs({
+    options: {
+      size: { type: 'string' },
+      dir: { type: 'string' },
+      runs: { type: 'string' },
+      mode: { type: 'string', default: 'rss' },
+      seed: { type: 'string', default: '1' },
+    },
+  });
+  const size = Number(values.size);
+  if (!Number.isInteger(size) || size < 1) throw new Error(`one-size: --size must be a positive integer, got "${values.size ?? ''}"`);
+  const mode = values.mode;
+  if (mode !== 'rss' && mode !== 'measure' && mode !== 'related') throw new Error(`one-size: --mode must be rss, measure or related, got "${mode}"`);
+  const runs = values.runs === undefined ? (size >= 50_000 ? 1 : 3) : Number(values.runs);
+  if (!Number.isInteger(runs) || runs < 1) throw new Error(`one-size: --runs must be a positive integer, got "${values.runs}"`);
+  const work = mkdtempSync(join(tmpdir(), 'lw-bench-work-'));
+  const root = values.dir ?? join(work, 'site');
+  try {
+    if (values.dir === undefined) generateSite(root, { pages: size, seed: Number(values.seed) });
+    const lib = await loadBuilt();
+    const result = mode === 'rss' ? await rss(lib, root, work) : mode === 'measure' ? await measure(lib, root, work, size, runs) : await related(lib, root, size, runs);
+    process.stdout.write(`RESULT ${JSON.stringify(result)}\n`);
+  } finally {
+    rmSync(work, { recursive: true, force: true });
+  }
+}
+
+await main();

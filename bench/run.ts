@@ -1,0 +1,137 @@
+/**
+ * `npm run bench`: generate synthetic sites, run the real pipeline and the references on each
+ * in fresh child processes, print one table.
+ *
+ *   node --expose-gc dist-bench/bench/run.js [--sizes 1000,10000] [--full] [--runs N] [--record] [--seed S]
+ *
+ * Default sizes 1,000 / 10,000 / 50,000; `--full` adds 100,000. Medians of `--runs` runs
+ * (default 3 below 50,000 pages, 1 from 50,000). `--record` puts the table on top of
+ * bench/RESULTS.md (older tables are kept below). Sites are generated into os.tmpdir() and
+ * removed afterwards.
+ */
+import { spawn } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { cpus, tmpdir, totalmem } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { parseArgs } from 'node:util';
+import { generateSite } from './generate.js';
+import type { MeasureResult, RelatedResult, RssResult } from './one-size.js';
+import type { MachineInfo, SizeResult } from './table.js';
+import { renderTable } from './table.js';
+
+/** Pages of the site the relatedness reference runs on (the brute force is quadratic). */
+const RELATED_PAGES = 2000;
+
+function log(message: string): void {
+  process.stderr.write(`[bench] ${message}\n`);
+}
+
+/** Run one-size.js in a fresh process and return its RESULT, or the error it died with. */
+function child<T>(args: readonly string[], nodeFlags: readonly string[]): Promise<T | { error: string }> {
+  const script = fileURLToPath(new URL('./one-size.js', import.meta.url));
+  return new Promise((resolve) => {
+    const proc = spawn(process.execPath, [...nodeFlags, script, ...args], { stdio: ['ignore', 'pipe', 'pipe'] });
+    let out = '';
+    let err = '';
+    proc.stdout.setEncoding('utf8').on('data', (d: string) => (out += d));
+    proc.stderr.setEncoding('utf8').on('data', (d: string) => {
+      err += d;
+      process.stderr.write(d);
+    });
+    proc.on('close', (code, signal) => {
+      const line = out.split('\n').find((l) => l.startsWith('RESULT '));
+      if (code === 0 && line !== undefined) resolve(JSON.parse(line.slice('RESULT '.length)) as T);
+      else {
+        const last = err.trim().split('\n').filter((l) => l.trim() !== '').at(-1) ?? '';
+        resolve({ error: `exit ${code ?? signal}: ${last}` });
+      }
+    });
+  });
+}
+
+function machineInfo(): MachineInfo {
+  const cpu = cpus();
+  return {
+    date: new Date().toISOString().slice(0, 16).replace('T', ' ') + ' UTC',
+    cpu: cpu[0]?.model.trim() ?? 'unknown CPU',
+    cores: cpu.length,
+    memoryBytes: totalmem(),
+    node: process.version,
+    platform: `${process.platform}-${process.arch}`,
+  };
+}
+
+function parseSizes(text: string | undefined, full: boolean): number[] {
+  const base = text === undefined ? [1000, 10_000, 50_000] : text.split(',').map((s) => Number(s.trim().replace(/_/g, '')));
+  for (const s of base) if (!Number.isInteger(s) || s < 1) throw new Error(`bench: --sizes takes positive integers separated by commas, got "${text}"`);
+  const all = full ? [...base, 100_000] : base;
+  return [...new Set(all)].sort((a, b) => a - b);
+}
+
+/** Put `table` on top of bench/RESULTS.md, below its heading; older tables stay below. */
+function record(table: string, command: string): string {
+  const file = fileURLToPath(new URL('../../bench/RESULTS.md', import.meta.url));
+  const heading =
+    '# Benchmark results\n\n' +
+    'Tables written by `npm run bench -- --record`, newest first. Each was measured in one run on the machine named in ' +
+    'its heading; the targets are those of the speed-and-scale issue.\n';
+  const old = existsSync(file) ? readFileSync(file, 'utf8') : '';
+  const at = old.indexOf('\n## ');
+  const older = at === -1 ? '' : old.slice(at + 1);
+  const [title, , ...rest] = table.split('\n');
+  writeFileSync(file, `${heading}\n## ${title}\n\n\`${command}\`\n\n${rest.join('\n').trimEnd()}\n${older === '' ? '' : `\n${older}`}`);
+  return file;
+}
+
+async function main(): Promise<void> {
+  const { values } = parseArgs({
+    options: {
+      sizes: { type: 'string' },
+      full: { type: 'boolean', default: false },
+      runs: { type: 'string' },
+      record: { type: 'boolean', default: false },
+      seed: { type: 'string', default: '1' },
+    },
+  });
+  const sizes = parseSizes(values.sizes, values.full);
+  const seed = Number(values.seed);
+  if (values.runs !== undefined && !(Number.isInteger(Number(values.runs)) && Number(values.runs) >= 1)) {
+    throw new Error(`bench: --runs takes a positive integer, got "${values.runs}"`);
+  }
+  const machine = machineInfo();
+  log(`${machine.date} · ${machine.cpu} × ${machine.cores} · Node ${machine.node}; sizes ${sizes.join(', ')}`);
+  const base = mkdtempSync(join(tmpdir(), 'lw-bench-'));
+  const results: SizeResult[] = [];
+  let related: RelatedResult | { error: string } | null = null;
+  try {
+    for (const size of sizes) {
+      const dir = join(base, `site-${size}`);
+      const t = performance.now();
+      const site = generateSite(dir, { pages: size, seed });
+      const generateMs = performance.now() - t;
+      log(`${size} pages: generated ${(site.bytes / 1e6).toFixed(1)} MB in ${(generateMs / 1000).toFixed(1)} s; peak RSS run...`);
+      const rss = await child<RssResult>(['--mode', 'rss', '--size', String(size), '--dir', dir], []);
+      log(`${size} pages: measuring...`);
+      const runs = values.runs ?? String(size >= 50_000 ? 1 : 3);
+      const heap = `--max-old-space-size=${size >= 50_000 ? 12_288 : 4096}`;
+      const measure = await child<MeasureResult>(['--mode', 'measure', '--size', String(size), '--dir', dir, '--runs', runs], ['--expose-gc', heap]);
+      results.push({ size, generateMs, rss, measure });
+      rmSync(dir, { recursive: true, force: true });
+    }
+    const dir = join(base, `site-${RELATED_PAGES}`);
+    generateSite(dir, { pages: RELATED_PAGES, seed });
+    log(`related pages: inverted index against brute force on ${RELATED_PAGES} pages...`);
+    related = await child<RelatedResult>(['--mode', 'related', '--size', String(RELATED_PAGES), '--dir', dir, '--runs', '3'], ['--expose-gc']);
+  } finally {
+    rmSync(base, { recursive: true, force: true });
+  }
+  const table = renderTable(results, related, machine);
+  process.stdout.write(`\n${table}`);
+  if (values.record) {
+    const command = `npm run bench -- ${process.argv.slice(2).join(' ')}`.trim();
+    log(`recorded in ${record(table, command)}`);
+  }
+}
+
+await main();

@@ -1,0 +1,168 @@
+/**
+ * The bench's one table: a row per measurement, a column per site size, and the target with a
+ * pass/miss mark beside each measured ratio that has one.
+ */
+import type { MeasureResult, RelatedResult, RssResult } from './one-size.js';
+import type { BenchStage } from './pipeline.js';
+import { median } from './pipeline.js';
+
+/** Everything measured for one size (a child that failed leaves its error). */
+export interface SizeResult {
+  readonly size: number;
+  readonly generateMs: number;
+  readonly rss: RssResult | { readonly error: string };
+  readonly measure: MeasureResult | { readonly error: string };
+}
+
+/** The machine the bench ran on. */
+export interface MachineInfo {
+  readonly date: string;
+  readonly cpu: string;
+  readonly cores: number;
+  readonly memoryBytes: number;
+  readonly node: string;
+  readonly platform: string;
+}
+
+/** Targets of issue 9 (the ratios the bench marks pass or miss). */
+export const TARGETS = {
+  coldOverBareAt10k: 1.15,
+  warmOverCold: 0.05,
+  warmChangedOverCold: 0.08,
+  pagerankSpeedup: 20,
+  iterationOverBound: 4,
+  relatedSpeedup: 40,
+  textGrowth10kTo50k: 6,
+  peakRssAt100kBytes: 2.5 * 1024 ** 3,
+} as const;
+
+const int = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+
+/** Milliseconds (or any positive number) with a sensible number of digits. */
+export function num(v: number): string {
+  if (!Number.isFinite(v)) return 'n/a';
+  if (Math.abs(v) >= 100) return int.format(v);
+  if (Math.abs(v) >= 10) return v.toFixed(1);
+  if (Math.abs(v) >= 0.1) return v.toFixed(2);
+  return v.toPrecision(2);
+}
+
+function mark(ok: boolean): string {
+  return ok ? 'pass' : 'MISS';
+}
+
+type Measured = MeasureResult;
+const isMeasured = (m: SizeResult['measure']): m is Measured => 'mode' in m;
+const isRss = (r: SizeResult['rss']): r is RssResult => 'mode' in r;
+
+function stageMedian(m: Measured, stage: BenchStage): number {
+  return median(m.cold.map((r) => r.stages[stage]));
+}
+
+/** Render the table (Markdown, readable as plain text too). */
+export function renderTable(results: readonly SizeResult[], related: RelatedResult | { error: string } | null, machine: MachineInfo): string {
+  const sizes = results.map((r) => r.size);
+  const header = ['measurement', ...sizes.map((s) => `${int.format(s)} pages`), 'target'];
+  const rows: string[][] = [];
+  const row = (label: string, cell: (r: SizeResult, i: number) => string, target = ''): void => {
+    rows.push([label, ...results.map((r, i) => cell(r, i)), target]);
+  };
+  const m = (cell: (x: Measured, i: number) => string) => (r: SizeResult, i: number): string =>
+    isMeasured(r.measure) ? cell(r.measure, i) : `error: ${r.measure.error.slice(0, 60)}`;
+
+  row('site: files / MB of sources', m((x) => `${int.format(x.files)} / ${(x.sourceBytes / 1e6).toFixed(1)}`));
+  row('site: pages / links in the report', m((x) => `${int.format(x.cold[0]!.pages)} / ${int.format(x.cold[0]!.links)}`));
+  row('runs (medians of)', m((x) => String(x.runs)));
+  row('generate site ms (bench set-up, not timed in totals)', (r) => num(r.generateMs));
+  for (const stage of ['collect', 'parse', 'graph', 'rank', 'text', 'suggest'] as const) {
+    row(`${stage} ms`, m((x) => num(stageMedian(x, stage))));
+  }
+  row('rules + report ms', m((x) => num(stageMedian(x, 'rules') + stageMedian(x, 'report'))));
+  row('write ms (JSON format + atomic write)', m((x) => num(stageMedian(x, 'write'))));
+  row('total ms, cold', m((x) => num(median(x.cold.map((c) => c.totalMs)))));
+  row('total ms, cold, fresh process', (r) => (isRss(r.rss) ? num(r.rss.coldMs) : `error: ${r.rss.error.slice(0, 60)}`));
+  row(
+    'peak RSS, fresh process',
+    (r) => {
+      if (!isRss(r.rss)) return 'error';
+      const v = `${int.format(r.rss.maxRssBytes / 1024 ** 2)} MB`;
+      return r.size === 100_000 ? `${v} ${mark(r.rss.maxRssBytes <= TARGETS.peakRssAt100kBytes)}` : v;
+    },
+    '<= 2.5 GB at 100,000',
+  );
+  row('bare parse ms (remark-parse alone)', m((x) => num(median(x.bareParseMs))));
+  row(
+    'cold total / bare parse',
+    m((x) => {
+      const v = median(x.cold.map((c) => c.totalMs)) / median(x.bareParseMs);
+      return x.size === 10_000 ? `${v.toFixed(2)} ${mark(v <= TARGETS.coldOverBareAt10k)}` : v.toFixed(2);
+    }),
+    '<= 1.15 at 10,000',
+  );
+  const warmRatio = (pick: (x: Measured) => readonly { totalMs: number }[], limit: number) => m((x) => {
+    const w = pick(x);
+    if (w.length === 0) return 'n/a (cache not built)';
+    const v = median(w.map((c) => c.totalMs)) / median(x.cold.map((c) => c.totalMs));
+    return `${v.toFixed(3)} ${mark(v <= limit)}`;
+  });
+  row('warm, no change / cold', warmRatio((x) => x.warm, TARGETS.warmOverCold), '<= 0.05');
+  row('warm, one file changed / cold', warmRatio((x) => x.warmChanged, TARGETS.warmChangedOverCold), '<= 0.08');
+  row('PageRank graph: nodes / edges', m((x) => `${int.format(x.pagerank[0]!.nodes)} / ${int.format(x.pagerank[0]!.edges)}`));
+  row('PageRank ms, ours (CSR build + iterate)', m((x) => num(median(x.pagerank.map((p) => p.oursMs)))));
+  row('PageRank ms, graphology (graph build + pagerank)', m((x) => {
+    const err = x.pagerank.find((p) => p.graphologyError !== null)?.graphologyError ?? null;
+    return err === null ? num(median(x.pagerank.map((p) => p.graphologyMs))) : `threw: ${err.slice(0, 40)}`;
+  }));
+  row(
+    'PageRank speed-up vs graphology',
+    m((x) => {
+      const v = median(x.pagerank.map((p) => p.graphologyMs)) / median(x.pagerank.map((p) => p.oursMs));
+      return `${v.toFixed(1)}x ${mark(v >= TARGETS.pagerankSpeedup)}`;
+    }),
+    '>= 20x',
+  );
+  row('PageRank iterations / max |ours - graphology|', m((x) => `${x.pagerank[0]!.oursIterations} / ${x.pagerank[0]!.maxAbsDiff.toExponential(1)}`));
+  const perIteration = (x: Measured): number => median(x.pagerank.map((p) => p.oursIterateMs / p.oursIterations));
+  const bound = (x: Measured): number => (x.pagerank[0]!.bytesPerIteration / Math.max(x.bandwidth.float64, x.bandwidth.int32)) * 1000;
+  row('PageRank ms / iteration', m((x) => num(perIteration(x))));
+  row('bandwidth bound ms / iteration (bytes read / read rate)', m((x) => `${num(bound(x))} (${(x.pagerank[0]!.bytesPerIteration / 1e6).toFixed(1)} MB at ${(Math.max(x.bandwidth.float64, x.bandwidth.int32) / 1e9).toFixed(1)} GB/s)`));
+  row(
+    'ms / iteration vs bound',
+    m((x) => {
+      const v = perIteration(x) / bound(x);
+      return `${v.toFixed(1)}x ${mark(v <= TARGETS.iterationOverBound)}`;
+    }),
+    'within 4x',
+  );
+  const growth = (stage: BenchStage, limit: number | null) => (r: SizeResult, i: number): string => {
+    if (i === 0) return '-';
+    const prev = results[i - 1]!;
+    if (!isMeasured(r.measure) || !isMeasured(prev.measure)) return 'n/a';
+    const v = stageMedian(r.measure, stage) / stageMedian(prev.measure, stage);
+    const ratio = `${v.toFixed(1)}x for ${(r.size / prev.size).toFixed(0)}x pages`;
+    return limit !== null && prev.size === 10_000 && r.size === 50_000 ? `${ratio} ${mark(v <= limit)}` : ratio;
+  };
+  row('text: time / previous size', growth('text', TARGETS.textGrowth10kTo50k), '<= 6x from 10,000 to 50,000');
+  row('suggest: time / previous size', growth('suggest', null), '~ pages ratio');
+
+  const relatedCells = (text: string): ((r: SizeResult, i: number) => string) => (_r, i) => (i === 0 ? text : '');
+  if (related !== null && 'mode' in related) {
+    const inv = median(related.invertedMs);
+    const speed = related.bruteMs / inv;
+    row(`related top-10 on ${int.format(related.size)} pages: inverted / brute ms`, relatedCells(`${num(inv)} / ${num(related.bruteMs)}`));
+    row('related top-10 speed-up vs brute force', relatedCells(`${speed.toFixed(0)}x ${mark(speed >= TARGETS.relatedSpeedup)}`), '>= 40x');
+    const same = related.differing === 0 ? 'identical' : `${related.differing} pages differ (${related.differingBeyondTies} beyond k-th place ties)`;
+    row('related top-10 sets vs brute force', relatedCells(same), 'identical');
+  } else if (related !== null) {
+    row('related top-10 on 2,000 pages', relatedCells(`error: ${related.error.slice(0, 60)}`), '>= 40x');
+  }
+
+  const lines = [
+    `${machine.date} · ${machine.cpu} × ${machine.cores} · ${(machine.memoryBytes / 1024 ** 3).toFixed(0)} GiB · Node ${machine.node} · ${machine.platform}`,
+    '',
+    `| ${header.join(' | ')} |`,
+    `| ${header.map((_, i) => (i === 0 ? '---' : '---:')).join(' | ')} |`,
+    ...rows.map((r) => `| ${r.join(' | ')} |`),
+  ];
+  return `${lines.join('\n')}\n`;
+}
