@@ -4,6 +4,8 @@
  * gets one line naming the flag and the accepted values.
  */
 import { EngineError } from '../errors.js';
+import { FORMAT_IDS } from '../report/format.js';
+import type { FormatId } from '../report/types.js';
 
 /** One flag of the command line. */
 export interface FlagSpec {
@@ -20,11 +22,11 @@ export interface FlagSpec {
   readonly description: string;
 }
 
-/** The output formats, as the `--format` flag names them. */
-export const FORMAT_NAMES = ['text', 'json', 'markdown', 'sarif', 'html'] as const;
+/** The output formats `--format` accepts: the report stage's formatter ids. */
+export const FORMAT_NAMES: readonly FormatId[] = FORMAT_IDS;
 
 /** A format as the `--format` flag names it. */
-export type FormatName = (typeof FORMAT_NAMES)[number];
+export type FormatName = FormatId;
 
 /** Flags every command accepts. */
 export const COMMON_FLAGS: readonly FlagSpec[] = [

@@ -30,6 +30,7 @@ run(process.argv.slice(2), {
   cwd: process.cwd(),
   env: process.env,
   isTTY: process.stdout.isTTY === true,
+  ...(process.stdout.columns === undefined ? {} : { columns: process.stdout.columns }),
   stderrIsTTY: process.stderr.isTTY === true,
   tempFiles,
 }).then(

@@ -70,13 +70,15 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
     progress?.done();
   }
 
+  // The text report shows paths relative to the working folder, wrapped to the terminal.
+  const terminal = { color, cwd: io.cwd, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
   if (output === null) {
-    io.stdout.write(formatReport(report, format, { color }));
+    io.stdout.write(formatReport(report, format, terminal));
   } else {
-    const text = formatReport(report, format, { color: false });
+    const text = formatReport(report, format, { color: false, cwd: io.cwd });
     await writeFileAtomic(output, text, io.tempFiles === undefined ? {} : { tracker: io.tempFiles });
     if (!flags.quiet) {
-      if (format !== 'text') io.stdout.write(formatReport(report, 'text', { color }));
+      if (format !== 'text') io.stdout.write(formatReport(report, 'text', terminal));
       io.stderr.write(`linkweave: report written to ${flags.output}\n`);
     }
   }

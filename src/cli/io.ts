@@ -15,6 +15,8 @@ export interface CliIo {
   readonly env: Readonly<Record<string, string | undefined>>;
   /** stdout is a terminal (colour is used only then, and never with NO_COLOR). */
   readonly isTTY: boolean;
+  /** Width of the stdout terminal, for wrapping the text report. @default the formatter's */
+  readonly columns?: number;
   /** stderr is a terminal (the progress display is shown only then). @default false */
   readonly stderrIsTTY?: boolean;
   /** Records temp files of atomic writes so a signal handler can remove them. @default none */

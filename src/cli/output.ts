@@ -3,15 +3,24 @@ import fs from 'node:fs';
 import { basename, dirname, join } from 'node:path';
 import { kindOfPath } from '../collect/index.js';
 import { EngineError } from '../errors.js';
+import { formatters } from '../report/format.js';
 import type { FormatName } from './args.js';
 
-/** The format a report file's extension implies (`.json`, `.md`, `.sarif`, `.html`), else text. */
+/** Extensions that imply a format beyond each formatter's own `fileExtension`. */
+const EXTRA_EXTENSIONS: readonly (readonly [string, FormatName])[] = [
+  ['.sarif.json', 'sarif'],
+  ['.markdown', 'markdown'],
+  ['.htm', 'html'],
+];
+
+/**
+ * The format a report file's name implies: a formatter's `fileExtension` (`.json`, `.md`,
+ * `.sarif`, `.html`, `.txt`) or `.sarif.json`, `.markdown`, `.htm`; else text.
+ */
 export function formatFromOutput(path: string): FormatName {
   const name = basename(path).toLowerCase();
-  if (name.endsWith('.sarif') || name.endsWith('.sarif.json')) return 'sarif';
-  if (name.endsWith('.json')) return 'json';
-  if (name.endsWith('.md') || name.endsWith('.markdown')) return 'markdown';
-  if (name.endsWith('.html') || name.endsWith('.htm')) return 'html';
+  for (const [ext, id] of EXTRA_EXTENSIONS) if (name.endsWith(ext)) return id;
+  for (const f of Object.values(formatters)) if (name.endsWith(f.fileExtension)) return f.id;
   return 'text';
 }
 
