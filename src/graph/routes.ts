@@ -3,7 +3,7 @@
  * all keyed by `normalizeRoute` keys (DESIGN section 3: old routes that still resolve).
  */
 import type { GraphRedirect, RedirectEnd } from './types.js';
-import { canonicalPath, lookupKey, routeKeyOf, withBasePath } from './normalize.js';
+import { canonicalPath, extensionOf, lookupKey, routeKeyOf, withBasePath } from './normalize.js';
 import type { RouteOptions } from './normalize.js';
 import { SITE_ORIGIN } from './resolve.js';
 
@@ -48,8 +48,8 @@ export interface RouteIndexes {
 
 /**
  * Build the route index. Pages come first (their ids are their positions in `pages`); an alias
- * or redirect never takes a route a page has; between aliases the first page in route order
- * wins, between redirects the first line.
+ * or redirect never takes a route that already reaches a page (trailing-slash lookup included);
+ * between aliases the first page in route order wins, between redirects the first line.
  */
 export function buildRouteIndex(
   pages: readonly IndexedPage[],
@@ -67,7 +67,8 @@ export function buildRouteIndex(
       const value = resolveRouteValue(alias, basePath, pages[id]!.route);
       if (value === null || value.kind !== 'path') continue;
       const key = routeKeyOf(value.path, routes);
-      if (!routeIndex.has(key)) routeIndex.set(key, id);
+      if (lookupKey(routeIndex, key, routes) !== undefined) continue;
+      for (const form of keyForms(key)) if (!routeIndex.has(form)) routeIndex.set(form, id);
     }
   }
 
@@ -77,10 +78,15 @@ export function buildRouteIndex(
   for (const r of redirects) {
     const from = resolveRouteValue(r.from, basePath);
     if (from === null || from.kind !== 'path') continue;
+    const to = resolveRouteValue(r.to, basePath);
     const key = routeKeyOf(from.path, routes);
-    if (routeIndex.has(key) || edges.has(key)) continue;
-    edges.set(key, resolveRouteValue(r.to, basePath));
-    order.push(key);
+    // A source that already reaches a page (as a link would look it up) is shadowed by it.
+    if (lookupKey(routeIndex, key, routes) !== undefined) continue;
+    for (const form of keyForms(key)) {
+      if (routeIndex.has(form) || edges.has(form)) continue;
+      edges.set(form, to);
+      order.push(form);
+    }
   }
   const redirectEnds = new Map<string, RedirectEnd>();
   for (const key of order) {
@@ -89,6 +95,16 @@ export function buildRouteIndex(
     else redirectEnds.set(key, end);
   }
   return { routeIndex, redirectEnds };
+}
+
+/**
+ * The keys an alias or redirect source answers to: written with or without its trailing slash
+ * (`/old` and `/old/`), as hosts match redirects either way (common practice, no source).
+ * A source with an extension (`/old.html`) answers only as written.
+ */
+function keyForms(key: string): string[] {
+  if (key.endsWith('/')) return key === '/' ? [key] : [key, key.slice(0, -1)];
+  return extensionOf(key) === '' ? [key, key + '/'] : [key];
 }
 
 function followRedirect(
@@ -108,7 +124,7 @@ function followRedirect(
     shown = to.path;
     const page = lookupKey(routeIndex, next, routes);
     if (page !== undefined) return page;
-    const nextKey = edges.has(next) ? next : edges.has(next + '/') && !next.endsWith('/') ? next + '/' : null;
+    const nextKey = edges.has(next) ? next : null;
     if (nextKey === null || seen.has(nextKey)) return { kind: 'dead', route: shown };
     seen.add(nextKey);
     key = nextKey;
