@@ -1,0 +1,117 @@
+/**
+ * `buildReport`: the stages' outputs -> the one `Report` object (DESIGN section 8).
+ *
+ * Deterministic: every array is sorted, numbers are rounded to a fixed precision
+ * (`round.ts`), nothing depends on the clock. Field choices:
+ * - `pages`: by route; `rank` = pagerank x number of pages (1.0 = an average page), from the
+ *   unrounded PageRank; `depth` null when unreachable.
+ * - `links`: every resolved link, sorted by `from`, file, line, column, `to`, text. `from` is
+ *   the route of the page the link is on; navigation links (written once in the navigation
+ *   file, the sidebar of every page) have `from: ""` (no page) and `file` = the navigation
+ *   file. `to` is the resolved route (with `#fragment` when there is one), the absolute URL,
+ *   or the destination as written when it could not be resolved. `context` is the effective
+ *   context after template detection.
+ * - `findings`: by file, line, column, rule, message.
+ * - `suggestions`: by file, line, column, target, id.
+ */
+import type { Finding, Report, ReportLink, ReportPage, ResolvedLink, Suggestion } from '../types.js';
+import { compareFindings } from '../rules/engine.js';
+import { compareText, navigationFile } from '../rules/structure.js';
+import { evaluateGate } from './gate.js';
+import { PAGERANK_DECIMALS, RATIO_DECIMALS, roundTo } from './round.js';
+import { computeStats } from './stats.js';
+import type { Importance, ReportInput } from './types.js';
+
+/** Build the report. Pure; the inputs are not changed. */
+export function buildReport(input: ReportInput): Report {
+  const { options, graph, ranking } = input;
+  const n = graph.pages.length;
+  const importance: Importance[] = graph.pages.map((p) => input.importance?.[p.id] ?? p.meta.importance ?? 'normal');
+  const pages: ReportPage[] = graph.pages
+    .map((p) => {
+      const depth = ranking.depth[p.id]!;
+      return {
+        route: p.route,
+        file: p.file,
+        title: p.title,
+        pagerank: roundTo(ranking.pagerank[p.id]!, PAGERANK_DECIMALS),
+        rank: roundTo(ranking.pagerank[p.id]! * n, RATIO_DECIMALS),
+        depth: depth < 0 ? null : depth,
+        inlinks: ranking.inlinks[p.id]!,
+        contentInlinks: ranking.contentInlinks[p.id]!,
+        outlinks: ranking.outlinks[p.id]!,
+        importance: importance[p.id]!,
+      };
+    })
+    .sort((a, b) => compareText(a.route, b.route) || compareText(a.file, b.file));
+
+  const navFile = navigationFile(options);
+  const links = graph.links
+    .map((l) => reportLink(l, l.from < 0 ? { route: '', file: navFile } : graph.pages[l.from]!))
+    .sort(compareLinks);
+
+  const findings: Finding[] = [...input.findings].sort(compareFindings);
+  const suggestions = input.suggestions.map(roundSuggestion).sort(compareSuggestions);
+  const { stats, gate } = computeStats({ graph, ranking, findings, files: input.files, importance });
+
+  return {
+    schema: 'linkweave/report@1',
+    tool: { name: 'linkweave', version: input.version },
+    root: options.root,
+    stats,
+    pages,
+    links,
+    findings,
+    suggestions,
+    gate: evaluateGate(findings, gate, options),
+    options: { maxDepth: options.maxDepth },
+  };
+}
+
+function reportLink(link: ResolvedLink, from: { route: string; file: string }): ReportLink {
+  const fragment = link.fragment.startsWith('#') ? link.fragment.slice(1) : link.fragment;
+  const to = link.kind === 'internal' && fragment !== '' && !link.target.includes('#') ? `${link.target}#${fragment}` : link.target;
+  return {
+    from: from.route,
+    to: to === '' ? link.raw.href : to,
+    file: from.file,
+    line: link.raw.line,
+    column: link.raw.column,
+    text: link.raw.text,
+    context: link.context,
+    kind: link.kind,
+    status: link.status,
+    nofollow: link.raw.nofollow,
+  };
+}
+
+function compareLinks(a: ReportLink, b: ReportLink): number {
+  return (
+    compareText(a.from, b.from) ||
+    compareText(a.file, b.file) ||
+    a.line - b.line ||
+    a.column - b.column ||
+    compareText(a.to, b.to) ||
+    compareText(a.text, b.text)
+  );
+}
+
+function roundSuggestion(s: Suggestion): Suggestion {
+  return {
+    ...s,
+    similarity: roundTo(s.similarity, RATIO_DECIMALS),
+    score: roundTo(s.score, RATIO_DECIMALS),
+    targetRankBefore: roundTo(s.targetRankBefore, RATIO_DECIMALS),
+    targetRankAfter: roundTo(s.targetRankAfter, RATIO_DECIMALS),
+  };
+}
+
+function compareSuggestions(a: Suggestion, b: Suggestion): number {
+  return (
+    compareText(a.file, b.file) ||
+    a.line - b.line ||
+    a.column - b.column ||
+    compareText(a.target, b.target) ||
+    compareText(a.id, b.id)
+  );
+}

@@ -1,0 +1,154 @@
+/**
+ * The SARIF writer: SARIF 2.1.0 (OASIS), one run. Every rule is a rule descriptor (from the
+ * rule metadata) plus `link-suggestion` for the suggested links; findings are results at their
+ * file, line and column relative to `SRCROOT` (the content root); suggestions are results of
+ * level `note` whose `fixes` entry replaces the anchor phrase with the link markup.
+ */
+import { pathToFileURL } from 'node:url';
+import type { ArtifactLocation, Fix, Log, ReportingDescriptor, Result } from 'sarif';
+import { rules } from '../../rules/registry.js';
+import type { Finding, Report, Suggestion } from '../../types.js';
+import type { Formatter } from '../types.js';
+import { formatSimilarity, impactOf } from './common.js';
+
+/** Rule id of suggestion results. */
+export const SUGGESTION_RULE = 'link-suggestion';
+
+const SCHEMA = 'https://json.schemastore.org/sarif-2.1.0.json';
+
+function descriptors(): ReportingDescriptor[] {
+  return [
+    ...rules.map((r) => ({
+      id: r.id,
+      shortDescription: { text: r.description },
+      defaultConfiguration: { level: r.defaultSeverity },
+    })),
+    {
+      id: SUGGESTION_RULE,
+      shortDescription: { text: 'A new link from a related page would help readers reach this page.' },
+      defaultConfiguration: { level: 'note' as const },
+    },
+  ];
+}
+
+/** A relative posix path as a URI reference (each segment percent-encoded). */
+function uriOf(file: string): string {
+  return file.split('/').map(encodeURIComponent).join('/');
+}
+
+function artifact(file: string): ArtifactLocation {
+  return { uri: uriOf(file), uriBaseId: 'SRCROOT' };
+}
+
+/** `ruleIndex` is absent for a rule the descriptors do not know (a plugin's own). */
+function findingResult(f: Finding, ruleIndex: number | undefined): Result {
+  return {
+    ruleId: f.rule,
+    ...(ruleIndex === undefined ? {} : { ruleIndex }),
+    level: f.severity,
+    message: { text: f.message },
+    ...(f.file === ''
+      ? {}
+      : { locations: [{ physicalLocation: { artifactLocation: artifact(f.file), region: { startLine: f.line, startColumn: f.column } } }] }),
+    partialFingerprints: { 'linkweaveFinding/v1': `${f.rule}|${f.route}|${f.target ?? ''}` },
+    ...(f.route === '' ? {} : { properties: { route: f.route } }),
+  };
+}
+
+/** Lines and the column after the last character of `text` starting at line:column. */
+function endOf(line: number, column: number, text: string): { endLine: number; endColumn: number } {
+  const parts = text.split(/\r\n|\r|\n/);
+  if (parts.length === 1) return { endLine: line, endColumn: column + text.length };
+  return { endLine: line + parts.length - 1, endColumn: parts[parts.length - 1]!.length + 1 };
+}
+
+/** Relative path from the folder of `from` to `to` (both relative to the root). */
+function relativePath(from: string, to: string): string {
+  const a = from.split('/').slice(0, -1);
+  const b = to.split('/');
+  let i = 0;
+  while (i < a.length && i < b.length - 1 && a[i] === b[i]) i++;
+  return [...a.slice(i).map(() => '..'), ...b.slice(i)].join('/');
+}
+
+/**
+ * The link the fix inserts around the anchor: in Markdown a link to the target's source file
+ * relative to the source (how authors link Markdown files), else to the target route; in HTML
+ * an `<a href>` to the route.
+ */
+export function linkMarkup(report: Report, s: Suggestion & { anchor: string }): string {
+  if (/\.html?$/i.test(s.file)) return `<a href="${s.target}">${s.anchor}</a>`;
+  const target = report.pages.find((p) => p.route === s.target);
+  const href = target !== undefined && /\.(md|markdown|mdx)$/i.test(target.file) ? relativePath(s.file, target.file) : s.target;
+  return `[${s.anchor}](${encodeURI(href)})`;
+}
+
+function suggestionResult(report: Report, s: Suggestion, ruleIndex: number): Result {
+  const region = { startLine: s.line, startColumn: s.column };
+  const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
+  const text =
+    s.anchor === null
+      ? `Add a link to ${s.target} near here (no anchor phrase found; ${impact}). ${s.reason}`.trim()
+      : `Add a link to ${s.target} on "${s.anchor}" (${impact}). ${s.reason}`.trim();
+  const fixes: Fix[] =
+    s.anchor === null
+      ? []
+      : [
+          {
+            description: { text: `Link "${s.anchor}" to ${s.target}` },
+            artifactChanges: [
+              {
+                artifactLocation: artifact(s.file),
+                replacements: [
+                  {
+                    deletedRegion: { ...region, ...endOf(s.line, s.column, s.anchor) },
+                    insertedContent: { text: linkMarkup(report, { ...s, anchor: s.anchor }) },
+                  },
+                ],
+              },
+            ],
+          },
+        ];
+  return {
+    ruleId: SUGGESTION_RULE,
+    ruleIndex,
+    level: 'note',
+    message: { text },
+    locations: [{ physicalLocation: { artifactLocation: artifact(s.file), region } }],
+    partialFingerprints: { 'linkweaveSuggestion/v1': s.id },
+    properties: { suggestionId: s.id, source: s.source, target: s.target, sourceHash: s.sourceHash },
+    ...(fixes.length === 0 ? {} : { fixes }),
+  };
+}
+
+/** The SARIF log of a report, as an object (the formatter stringifies it). */
+export function toSarif(report: Report): Log {
+  const driverRules = descriptors();
+  const index = new Map(driverRules.map((r, i) => [r.id, i]));
+  const results: Result[] = [
+    ...report.findings.map((f) => findingResult(f, index.get(f.rule))),
+    ...report.suggestions.map((s) => suggestionResult(report, s, index.get(SUGGESTION_RULE)!)),
+  ];
+  const root = pathToFileURL(report.root).href;
+  return {
+    $schema: SCHEMA,
+    version: '2.1.0',
+    runs: [
+      {
+        tool: { driver: { name: 'linkweave', version: report.tool.version, rules: driverRules } },
+        originalUriBaseIds: { SRCROOT: { uri: root.endsWith('/') ? root : `${root}/` } },
+        columnKind: 'utf16CodeUnits',
+        results,
+      },
+    ],
+  };
+}
+
+/** The SARIF formatter. */
+export const sarifFormatter: Formatter = {
+  id: 'sarif',
+  fileExtension: '.sarif',
+  format(report) {
+    return `${JSON.stringify(toSarif(report), null, 2)}\n`;
+  },
+};

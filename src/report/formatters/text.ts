@@ -1,0 +1,155 @@
+/**
+ * The terminal writer: findings grouped by file (`file:line:column  severity  message
+ * rule-id`, columns aligned, long messages wrapped under themselves), suggested links grouped
+ * by source file, then the counts and the gate result last, where a CI log ends.
+ * Colour through picocolors, only when `ctx.color`.
+ */
+import pc from 'picocolors';
+import type { Finding, Report, Suggestion } from '../../types.js';
+import type { FormatContext, Formatter } from '../types.js';
+import { describeFailure, displayPath, formatSimilarity, impactOf, problemsLine, summaryParts } from './common.js';
+
+type Paint = (s: string) => string;
+
+/** A word of a wrapped line: its text, the separator before it, and its colour. */
+interface Word {
+  readonly text: string;
+  readonly sep: string;
+  readonly paint: Paint;
+}
+
+/** Continuation lines indent under the message up to this column, else by `SHORT_INDENT`. */
+const MAX_INDENT = 36;
+const SHORT_INDENT = 6;
+
+/** Indent of continuation lines after a prefix of `prefixWidth` columns. */
+function hanging(prefixWidth: number): number {
+  return prefixWidth <= MAX_INDENT ? prefixWidth : SHORT_INDENT;
+}
+
+/**
+ * Lay `words` out after `prefix` (already painted; `prefixWidth` visible columns): lines of at
+ * most `width` columns, continuation lines indented by `indent`. `width` 0: one line.
+ */
+function wrap(prefix: string, prefixWidth: number, words: readonly Word[], width: number, indent = hanging(prefixWidth)): string[] {
+  const lines: string[] = [];
+  let line = prefix;
+  let used = prefixWidth;
+  let empty = true;
+  for (const word of words) {
+    const sep = empty ? '' : word.sep;
+    if (width > 0 && !empty && used + sep.length + word.text.length > width) {
+      lines.push(line);
+      line = ' '.repeat(indent);
+      used = indent;
+      empty = true;
+    }
+    const s = empty ? '' : word.sep;
+    line += s + word.paint(word.text);
+    used += s.length + word.text.length;
+    empty = false;
+  }
+  lines.push(line);
+  return lines;
+}
+
+function words(text: string, paint: Paint, firstSep = ' '): Word[] {
+  return text
+    .split(/\s+/)
+    .filter((t) => t !== '')
+    .map((t, i) => ({ text: t, sep: i === 0 ? firstSep : ' ', paint }));
+}
+
+/** Phrases kept whole when wrapping, each but the last followed by `punct`. */
+function phrases(list: readonly string[], punct: string): Word[] {
+  return list.map((p, i) => ({ text: i < list.length - 1 ? `${p}${punct}` : p, sep: ' ', paint: (s: string) => s }));
+}
+
+/** Consecutive items with the same file, in order. */
+function groupByFile<T extends { readonly file: string }>(items: readonly T[]): T[][] {
+  const groups: T[][] = [];
+  for (const item of items) {
+    const last = groups[groups.length - 1];
+    if (last !== undefined && last[0]!.file === item.file) last.push(item);
+    else groups.push([item]);
+  }
+  return groups;
+}
+
+function findingLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+  const loc = (f: Finding): string => `${displayPath(f.file, report.root, ctx.cwd) || '(site)'}:${f.line}:${f.column}`;
+  const out: string[] = [];
+  for (const group of groupByFile(report.findings)) {
+    if (out.length > 0) out.push('');
+    const locWidth = Math.max(...group.map((f) => loc(f).length));
+    for (const f of group) {
+      const location = loc(f);
+      const sevText = f.severity.padEnd(7);
+      const paintSev = f.severity === 'error' ? c.red : c.yellow;
+      const pad = ' '.repeat(Math.max(0, locWidth - location.length));
+      const cut = location.lastIndexOf(':', location.lastIndexOf(':') - 1);
+      const prefix = `${location.slice(0, cut)}${c.dim(location.slice(cut))}${pad}  ${paintSev(sevText)}  `;
+      const prefixWidth = locWidth + 2 + sevText.length + 2;
+      out.push(...wrap(prefix, prefixWidth, [...words(f.message, (s) => s), { text: f.rule, sep: '  ', paint: c.dim }], width));
+    }
+  }
+  return out;
+}
+
+function suggestionWords(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
+  const plain = (x: string): string => x;
+  const head: Word[] = [
+    ...words(s.anchor === null ? 'add a link' : 'add link', c.green),
+    ...(s.anchor === null ? [] : words(`"${s.anchor}"`, plain)),
+    { text: '->', sep: ' ', paint: plain },
+    { text: s.target, sep: ' ', paint: c.cyan },
+  ];
+  const noAnchor = s.anchor === null ? 'no anchor phrase found, ' : '';
+  const impact = `(${noAnchor}similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')})`;
+  return [...head, ...words(impact, c.dim, '  '), { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` }];
+}
+
+function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+  const loc = (s: Suggestion): string => `${displayPath(s.file, report.root, ctx.cwd)}:${s.line}:${s.column}`;
+  const out = [c.bold(`Suggested links (${report.suggestions.length})`)];
+  for (const group of groupByFile(report.suggestions)) {
+    out.push('');
+    const locWidth = Math.max(...group.map((s) => loc(s).length));
+    for (const s of group) {
+      const prefix = `${loc(s).padEnd(locWidth)}  `;
+      out.push(...wrap(prefix, locWidth + 2, suggestionWords(s, c), width));
+    }
+  }
+  const ids = report.suggestions.slice(0, 2).map((s) => s.id).join(',');
+  out.push('', c.dim(`Apply chosen links with: linkweave apply --ids ${ids}${report.suggestions.length > 2 ? ',...' : ''}`));
+  return out;
+}
+
+/** The terminal formatter. */
+export const textFormatter: Formatter = {
+  id: 'text',
+  fileExtension: '.txt',
+  format(report, ctx) {
+    const c = pc.createColors(ctx.color);
+    const width = ctx.width ?? 80;
+    const out: string[] = [];
+    if (report.findings.length > 0) out.push(...findingLines(report, ctx, c, width), '');
+    if (report.suggestions.length > 0) out.push(...suggestionLines(report, ctx, c, width), '');
+
+    const { error, warning } = report.stats.findings;
+    const problems = problemsLine(report);
+    out.push(error > 0 ? c.red(c.bold(problems)) : warning > 0 ? c.yellow(c.bold(problems)) : c.green(problems));
+    const parts = summaryParts(report);
+    out.push(...wrap('', 0, phrases(parts, ','), width));
+
+    const { gate } = report;
+    if (gate.passed) {
+      out.push(c.green(`Gate passed (fail on ${gate.failOn})`));
+    } else {
+      const failures = gate.failures.map((f) => describeFailure(f, gate.failOn));
+      const head = `Gate failed (fail on ${gate.failOn}):`;
+      out.push(...wrap(`${c.red(c.bold(head))} `, head.length + 1, phrases(failures, ','), width, 2));
+    }
+    return `${out.join('\n')}\n`;
+  },
+};

@@ -1,0 +1,61 @@
+/** Types of the report stage: what `buildReport` takes and what formatters share. */
+import type { ResolvedOptions } from '../options.js';
+import type { Finding, Ranking, Report, SiteGraph, Suggestion } from '../types.js';
+
+/** Importance of a page, as the suggest stage decides it. */
+export type Importance = 'high' | 'normal' | 'low';
+
+/** Everything `buildReport` needs; `analyze` passes the stages' outputs unchanged. */
+export interface ReportInput {
+  readonly options: ResolvedOptions;
+  readonly graph: SiteGraph;
+  readonly ranking: Ranking;
+  /** From `runRules` (any order: the report sorts). */
+  readonly findings: readonly Finding[];
+  /** From `suggestLinks` (any order: the report sorts); `[]` for `check`. */
+  readonly suggestions: readonly Suggestion[];
+  /** Number of source files collected (pages, drafts, files that failed to parse). */
+  readonly files: number;
+  /**
+   * Importance per page id, from `suggestLinks`. Absent: frontmatter `linkweave.importance`,
+   * else `normal`.
+   */
+  readonly importance?: readonly Importance[];
+  /** The tool's version (`VERSION`). */
+  readonly version: string;
+}
+
+/** The counts the gate's limits read (from the report's stats, plus one the stats do not carry). */
+export interface GateStats {
+  readonly maxDepth: number | null;
+  readonly orphans: number;
+  readonly brokenLinks: number;
+  readonly brokenFragments: number;
+  readonly unreachable: number;
+  /** Fewest content inlinks of any page of high importance; `null` when no page is. */
+  readonly fewestImportantInlinks: number | null;
+}
+
+/** Output formats. `html` is the stand-alone HTML report. */
+export type FormatId = 'text' | 'json' | 'markdown' | 'sarif' | 'html';
+
+/** What a formatter may know beyond the report. */
+export interface FormatContext {
+  /** Use terminal colours (text format only). @default false */
+  readonly color: boolean;
+  /**
+   * The working folder: the text format shows file paths relative to it (so terminals and
+   * editors can open them). Absent: paths relative to the content root, as in the report.
+   */
+  readonly cwd?: string;
+  /** Terminal width for wrapping the text format; 0 = never wrap. @default 80 */
+  readonly width?: number;
+}
+
+/** A report writer: pure, one file each under `report/formatters/`. */
+export interface Formatter {
+  readonly id: FormatId;
+  /** File extension of its output, with the dot (`.json`). */
+  readonly fileExtension: string;
+  format(report: Report, ctx: FormatContext): string;
+}

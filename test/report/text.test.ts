@@ -1,0 +1,58 @@
+import { describe, expect, it } from 'vitest';
+import { formatReport } from '../../src/report/index.js';
+import { fixtureReport } from './fixture.js';
+
+// eslint-disable-next-line no-control-regex
+const ANSI = /\u001b\[[0-9;]*m/;
+
+describe('text formatter', () => {
+  const report = fixtureReport();
+
+  it('matches the reviewed snapshot (findings by file, suggestions by source file, summary and gate last)', async () => {
+    await expect(formatReport(report, 'text')).toMatchFileSnapshot('__snapshots__/fixture.txt');
+  });
+
+  it('fits an 80-column terminal and has no colour codes without colour', () => {
+    const text = formatReport(report, 'text');
+    expect(text).not.toMatch(ANSI);
+    for (const line of text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+  });
+
+  it('colours severities only when asked', () => {
+    const text = formatReport(report, 'text', { color: true });
+    expect(text).toMatch(ANSI);
+    expect(text.replace(new RegExp(ANSI.source, 'g'), '')).toBe(formatReport(report, 'text'));
+  });
+
+  it('width 0: one line per finding, `file:line:column  severity  message  rule-id`', () => {
+    const lines = formatReport(report, 'text', { width: 0 }).split('\n');
+    expect(lines).toContain(
+      'index.md:9:3  error    Unexpected link to missing page /guide/instal/ (written "guide/instal.md"), expected an existing page (did you mean /guide/install/?)  broken-link',
+    );
+    expect(lines).toContain(
+      'reference/index.md:5:12  add link "tuning options" -> /guide/configure/advanced/tuning/  (similarity 0.42, target rank 0.56 -> 1.32, depth 5 -> 2)  id b7e1c2d4',
+    );
+  });
+
+  it('shows paths relative to the working folder when given one', () => {
+    const text = formatReport(report, 'text', { cwd: '/work', width: 0 });
+    expect(text).toContain('docs/index.md:9:3  error');
+    expect(text).toContain('docs/reference/index.md:5:12  add link');
+  });
+
+  it('a clean site: no problems, gate passed', () => {
+    const clean = fixtureReport({
+      spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }], pagerank: [0.5, 0.5] },
+      suggestions: [],
+    });
+    expect(formatReport(clean, 'text')).toBe(
+      [
+        'No problems found',
+        '2 pages, 2 links, 0 broken links, 0 broken fragments, 0 orphans, 0 unreachable,',
+        '0 dead ends, deepest page 1 click (limit 3), PageRank 12 iterations',
+        'Gate passed (fail on error)',
+        '',
+      ].join('\n'),
+    );
+  });
+});
