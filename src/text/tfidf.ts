@@ -1,0 +1,209 @@
+/**
+ * The TF-IDF term index (DESIGN section 6): one sparse, L2-normalised vector per page, stored
+ * as CSR typed arrays over term ids.
+ *
+ * - Count of a term in a page: `3 x (occurrences in the title) + 2 x (occurrences in the
+ *   headings) + 1 x (occurrences in the body)` (the field boosts).
+ * - tf = 1 + ln(count) (sublinear tf); idf = ln((1 + N) / (1 + df)) + 1 (smoothed; N pages,
+ *   df pages containing the term in any field).
+ * - weight = tf x idf, then each page's vector is divided by its L2 norm (a page without terms
+ *   keeps an empty row).
+ * - Term ids: stems sorted by UTF-16 code units (plain `<`), so the index does not depend on
+ *   page order; each page's row is sorted by term id.
+ */
+import type { PageText, TermIndex } from '../types.js';
+import { createStemCache, forEachWord, stemToken } from './tokenize.js';
+import type { StemCache } from './tokenize.js';
+
+/** Field boosts applied to occurrence counts. */
+export const FIELD_BOOSTS = { title: 3, headings: 2, body: 1 } as const;
+
+/** Sublinear term frequency of a (boosted) count: 1 + ln(count); 0 for a count of 0. */
+export function termFrequency(count: number): number {
+  return count > 0 ? 1 + Math.log(count) : 0;
+}
+
+/** Smoothed inverse document frequency: ln((1 + n) / (1 + df)) + 1. */
+export function inverseDocumentFrequency(n: number, df: number): number {
+  return Math.log((1 + n) / (1 + df)) + 1;
+}
+
+/** Growable typed buffers for the (doc, term, count) triples met while reading the pages. */
+class EntryBuffer {
+  terms = new Int32Array(1 << 16);
+  counts = new Float64Array(1 << 16);
+  length = 0;
+
+  push(term: number, count: number): void {
+    if (this.length === this.terms.length) {
+      const terms = new Int32Array(this.terms.length * 2);
+      terms.set(this.terms);
+      this.terms = terms;
+      const counts = new Float64Array(this.counts.length * 2);
+      counts.set(this.counts);
+      this.counts = counts;
+    }
+    this.terms[this.length] = term;
+    this.counts[this.length] = count;
+    this.length += 1;
+  }
+}
+
+/**
+ * Build the TF-IDF index of the pages' texts (`texts[i]` is page i).
+ * @param texts title/headings/body text per page, in page-id order
+ * @param cache per-run stem cache (a fresh one by default); pass one to reuse stems later in the
+ *   same run, e.g. for anchor matching
+ */
+export function buildTermIndex(texts: readonly PageText[], cache: StemCache = createStemCache()): TermIndex {
+  const n = texts.length;
+  // Raw token -> provisional term id (-1: dropped). Saves the stem lookup and the stem -> id lookup.
+  const tokenIds = new Map<string, number>();
+  const stemIds = new Map<string, number>();
+  const stems: string[] = [];
+  let counts = new Float64Array(1024);
+  const touched: number[] = [];
+  const entries = new EntryBuffer();
+  const rowEnds = new Int32Array(n);
+
+  const add = (raw: string, boost: number): void => {
+    let id = tokenIds.get(raw);
+    if (id === undefined) {
+      const stem = stemToken(raw, cache);
+      if (stem === '') id = -1;
+      else {
+        id = stemIds.get(stem);
+        if (id === undefined) {
+          id = stems.length;
+          stems.push(stem);
+          stemIds.set(stem, id);
+          if (id === counts.length) {
+            const grown = new Float64Array(counts.length * 2);
+            grown.set(counts);
+            counts = grown;
+          }
+        }
+      }
+      tokenIds.set(raw, id);
+    }
+    if (id < 0) return;
+    if (counts[id] === 0) touched.push(id);
+    counts[id] += boost;
+  };
+  const addTitle = (raw: string): void => add(raw, FIELD_BOOSTS.title);
+  const addHeading = (raw: string): void => add(raw, FIELD_BOOSTS.headings);
+  const addBody = (raw: string): void => add(raw, FIELD_BOOSTS.body);
+
+  for (let d = 0; d < n; d++) {
+    const text = texts[d]!;
+    forEachWord(text.title, addTitle);
+    forEachWord(text.headings, addHeading);
+    forEachWord(text.body, addBody);
+    for (const id of touched) {
+      entries.push(id, counts[id]!);
+      counts[id] = 0;
+    }
+    touched.length = 0;
+    rowEnds[d] = entries.length;
+  }
+
+  // Final term ids: stems in code-unit order.
+  const t = stems.length;
+  const byStem = Array.from({ length: t }, (_, i) => i).sort((a, b) => (stems[a]! < stems[b]! ? -1 : stems[a]! > stems[b]! ? 1 : 0));
+  const finalId = new Int32Array(t);
+  const terms: string[] = new Array(t);
+  for (let i = 0; i < t; i++) {
+    finalId[byStem[i]!] = i;
+    terms[i] = stems[byStem[i]!]!;
+  }
+
+  const nnz = entries.length;
+  const df = new Int32Array(t);
+  for (let e = 0; e < nnz; e++) df[finalId[entries.terms[e]!]!]! += 1;
+  const idf = new Float64Array(t);
+  for (let i = 0; i < t; i++) idf[i] = inverseDocumentFrequency(n, df[i]!);
+
+  // Normalised weights in reading order.
+  const weights = new Float64Array(nnz);
+  let start = 0;
+  for (let d = 0; d < n; d++) {
+    const end = rowEnds[d]!;
+    let norm = 0;
+    for (let e = start; e < end; e++) {
+      const w = termFrequency(entries.counts[e]!) * idf[finalId[entries.terms[e]!]!]!;
+      weights[e] = w;
+      norm += w * w;
+    }
+    const scale = norm > 0 ? 1 / Math.sqrt(norm) : 0;
+    for (let e = start; e < end; e++) weights[e] = weights[e]! * scale;
+    start = end;
+  }
+
+  // Two counting-sort passes (doc-major -> term-major -> doc-major) sort every row by term id in O(nnz).
+  const termStart = new Int32Array(t + 1);
+  for (let i = 0; i < t; i++) termStart[i + 1] = termStart[i]! + df[i]!;
+  const cursor = termStart.slice(0, t);
+  const byTermDoc = new Int32Array(nnz);
+  const byTermWeight = new Float64Array(nnz);
+  start = 0;
+  for (let d = 0; d < n; d++) {
+    const end = rowEnds[d]!;
+    for (let e = start; e < end; e++) {
+      const term = finalId[entries.terms[e]!]!;
+      const at = cursor[term]!;
+      cursor[term] = at + 1;
+      byTermDoc[at] = d;
+      byTermWeight[at] = weights[e]!;
+    }
+    start = end;
+  }
+  const docOffsets = new Int32Array(n + 1);
+  for (let d = 0; d < n; d++) docOffsets[d + 1] = rowEnds[d]!;
+  const rowCursor = docOffsets.slice(0, n);
+  const docTerms = new Int32Array(nnz);
+  const docWeights = new Float32Array(nnz);
+  for (let term = 0; term < t; term++) {
+    for (let at = termStart[term]!; at < termStart[term + 1]!; at++) {
+      const d = byTermDoc[at]!;
+      const slot = rowCursor[d]!;
+      rowCursor[d] = slot + 1;
+      docTerms[slot] = term;
+      docWeights[slot] = byTermWeight[at]!;
+    }
+  }
+  return { terms, df, docOffsets, docTerms, docWeights };
+}
+
+/**
+ * Cosine similarity of two pages over all their terms (vectors are L2-normalised, so this is
+ * the dot product). Used for checks and explanations; relatedness uses {@link relatedPages}.
+ */
+export function cosine(index: TermIndex, a: number, b: number): number {
+  let i = index.docOffsets[a]!;
+  const iEnd = index.docOffsets[a + 1]!;
+  let j = index.docOffsets[b]!;
+  const jEnd = index.docOffsets[b + 1]!;
+  let sum = 0;
+  while (i < iEnd && j < jEnd) {
+    const ti = index.docTerms[i]!;
+    const tj = index.docTerms[j]!;
+    if (ti === tj) {
+      sum += index.docWeights[i]! * index.docWeights[j]!;
+      i++;
+      j++;
+    } else if (ti < tj) i++;
+    else j++;
+  }
+  return sum;
+}
+
+/**
+ * The `count` highest-weighted terms of a page (its key terms), heaviest first, ties by term id.
+ * @returns term ids
+ */
+export function topTerms(index: TermIndex, page: number, count: number): number[] {
+  const ids: number[] = [];
+  for (let e = index.docOffsets[page]!; e < index.docOffsets[page + 1]!; e++) ids.push(e);
+  ids.sort((x, y) => index.docWeights[y]! - index.docWeights[x]! || index.docTerms[x]! - index.docTerms[y]!);
+  return ids.slice(0, count).map((e) => index.docTerms[e]!);
+}
