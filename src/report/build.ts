@@ -8,9 +8,10 @@
  * - `links`: every resolved link, sorted by `from`, file, line, column, `to`, text. `from` is
  *   the route of the page the link is on; navigation links (written once in the navigation
  *   file, the sidebar of every page) have `from: ""` (no page) and `file` = the navigation
- *   file. `to` is the resolved route (with `#fragment` when there is one), the absolute URL,
- *   or the destination as written when it could not be resolved. `context` is the effective
- *   context after template detection.
+ *   file. `to` is the graph's resolved target: a route (with `#fragment` when there is one),
+ *   an absolute URL, the path from the root of a missing source file, or the destination as
+ *   written when it could not be resolved. `context` is the effective context after template
+ *   detection.
  * - `findings`: by file, line, column, rule, message.
  * - `suggestions`: by file, line, column, target, id.
  */

@@ -65,7 +65,7 @@ describe('buildReport on the fixture site (values worked out by hand from the si
     expect(fromIndex.map((l) => [l.line, l.to, l.status, l.kind])).toEqual([
       [3, '/guide/', 'ok', 'internal'],
       [4, '/reference/', 'ok', 'internal'],
-      [9, '/guide/instal/', 'broken', 'internal'],
+      [9, 'guide/instal.md', 'broken', 'internal'],
       [11, 'https://example.org/lantern', 'external', 'external'],
     ]);
     expect(report.links.find((l) => l.status === 'broken-fragment')).toEqual({

@@ -19,7 +19,7 @@ export const SITE: SiteSpec = {
       links: [
         { to: '/guide/', line: 3, column: 1, text: 'Guide' },
         { to: '/reference/', line: 4, column: 1, text: 'Reference' },
-        { to: '/guide/instal/', href: 'guide/instal.md', line: 9, column: 3, text: 'install' },
+        { to: 'guide/instal.md', line: 9, column: 3, text: 'install' },
         { to: 'https://example.org/lantern', line: 11, column: 5, text: 'project site' },
       ],
     },

@@ -27,7 +27,7 @@ describe('text formatter', () => {
   it('width 0: one line per finding, `file:line:column  severity  message  rule-id`', () => {
     const lines = formatReport(report, 'text', { width: 0 }).split('\n');
     expect(lines).toContain(
-      'index.md:9:3  error    Unexpected link to missing page /guide/instal/ (written "guide/instal.md"), expected an existing page (did you mean /guide/install/?)  broken-link',
+      'index.md:9:3  error    Unexpected link to missing file guide/instal.md, expected an existing source file (did you mean guide/install.md?)  broken-link',
     );
     expect(lines).toContain(
       'reference/index.md:5:12  add link "tuning options" -> /guide/configure/advanced/tuning/  (similarity 0.42, target rank 0.56 -> 1.32, depth 5 -> 2)  id b7e1c2d4',

@@ -13,10 +13,17 @@ ruleTable(brokenLink, {
   ],
   invalid: [
     {
-      name: 'the doc example: a typo in a file link, with the nearest route offered',
+      name: 'the doc example: a typo in a file link and in a route link, with the nearest file or route offered',
       site: {
         pages: [
-          { route: '/guide/', file: 'guide/index.md', links: [{ to: '/guide/instal/', href: 'instal.md', line: 1, column: 6 }] },
+          {
+            route: '/guide/',
+            file: 'guide/index.md',
+            links: [
+              { to: 'guide/instal.md', href: 'instal.md', line: 1, column: 6 },
+              { to: '/guide/instal/', line: 1, column: 42 },
+            ],
+          },
           { route: '/guide/install/', file: 'guide/install.md' },
         ],
       },
@@ -26,9 +33,17 @@ ruleTable(brokenLink, {
           line: 1,
           column: 6,
           route: '/guide/',
-          target: '/guide/instal/',
+          target: 'guide/instal.md',
           message:
-            'Unexpected link to missing page /guide/instal/ (written "instal.md"), expected an existing page (did you mean /guide/install/?)',
+            'Unexpected link to missing file guide/instal.md (written "instal.md"), expected an existing source file (did you mean guide/install.md?)',
+        },
+        {
+          file: 'guide/index.md',
+          line: 1,
+          column: 42,
+          route: '/guide/',
+          target: '/guide/instal/',
+          message: 'Unexpected link to missing page /guide/instal/, expected an existing page (did you mean /guide/install/?)',
         },
       ],
     },
@@ -40,14 +55,14 @@ ruleTable(brokenLink, {
       ],
     },
     {
-      name: 'a missing file (an image, a PDF) is named as a page or file',
+      name: 'a missing file (an image, a PDF) is named as a file, with no guess',
       site: { pages: [{ route: '/', links: [{ to: '/files/manual.pdf', line: 2, column: 1 }] }] },
       findings: [
         {
           file: 'index.md',
           line: 2,
           column: 1,
-          message: 'Unexpected link to missing page or file /files/manual.pdf, expected an existing page or file',
+          message: 'Unexpected link to missing file /files/manual.pdf, expected an existing file',
         },
       ],
     },
@@ -69,7 +84,7 @@ ruleTable(brokenLink, {
       name: 'a broken navigation link belongs to the navigation file, with no route',
       site: {
         pages: [{ route: '/' }, { route: '/setup/' }],
-        navigation: [{ to: '/set-up/', href: 'set-up.md', line: 4, column: 3 }],
+        navigation: [{ to: 'set-up.md', line: 4, column: 3 }],
       },
       findings: [
         {
@@ -77,7 +92,7 @@ ruleTable(brokenLink, {
           line: 4,
           column: 3,
           route: '',
-          message: 'Unexpected link to missing page /set-up/ (written "set-up.md"), expected an existing page (did you mean /setup/?)',
+          message: 'Unexpected link to missing file set-up.md, expected an existing source file (did you mean setup.md?)',
         },
       ],
     },

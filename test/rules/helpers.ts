@@ -22,7 +22,11 @@ import type {
 } from '../../src/types.js';
 import type { RuleContext, SourceWarning } from '../../src/rules/index.js';
 
-/** A link in a test site: `to` is a route (`/a/`, `/a/#frag`) or an absolute URL. */
+/**
+ * A link in a test site: `to` is a route (`/a/`, `/a/#frag`), an absolute URL, or, for a
+ * broken link to a source file, the file's path from the root (`guide/x.md`), as the graph
+ * gives it. A missing path with a file extension other than a source one is a missing asset.
+ */
 export interface LinkSpec {
   readonly to: string;
   readonly href?: string;
@@ -157,7 +161,8 @@ export function buildSite(spec: SiteSpec): RuleContext {
     let status: LinkStatus = external ? 'external' : to < 0 ? 'broken' : 'ok';
     if (to >= 0 && from === to && fragment === '') status = 'self';
     if (to >= 0 && fragment !== '' && !facts[pages[to]!.factsIndex]!.ids.includes(fragment)) status = 'broken-fragment';
-    const kind: LinkKind = external ? 'external' : 'internal';
+    const asset = /\.[A-Za-z0-9]+$/.test(path!) && !/\.(md|markdown|mdx|html?)$/i.test(path!);
+    const kind: LinkKind = external ? 'external' : asset ? 'asset' : 'internal';
     const context = l.context ?? defaultContext;
     return {
       from,
