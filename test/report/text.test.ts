@@ -56,3 +56,17 @@ describe('text formatter', () => {
     );
   });
 });
+
+describe('text formatter safety', () => {
+  it('shows control characters from the sources as U+FFFD, never as terminal escapes', () => {
+    const report = fixtureReport();
+    const hostile = {
+      ...report,
+      findings: [{ ...report.findings[0]!, file: 'a\u001b[2Jb.md', message: 'Unexpected \u001b]0;title\u0007 text' }],
+      suggestions: [],
+    };
+    const text = formatReport(hostile, 'text', { width: 0 });
+    expect(text).not.toMatch(/[\u0000-\u0008\u000b-\u001f]/);
+    expect(text).toContain('a\uFFFD[2Jb.md:1:1  warning  Unexpected \uFFFD]0;title\uFFFD text');
+  });
+});

@@ -37,24 +37,32 @@ function wrap(prefix: string, prefixWidth: number, words: readonly Word[], width
   let used = prefixWidth;
   let empty = true;
   for (const word of words) {
-    const sep = empty ? '' : word.sep;
+    let sep = empty ? '' : word.sep;
     if (width > 0 && !empty && used + sep.length + word.text.length > width) {
       lines.push(line);
       line = ' '.repeat(indent);
       used = indent;
-      empty = true;
+      sep = '';
     }
-    const s = empty ? '' : word.sep;
-    line += s + word.paint(word.text);
-    used += s.length + word.text.length;
+    line += sep + word.paint(word.text);
+    used += sep.length + word.text.length;
     empty = false;
   }
   lines.push(line);
   return lines;
 }
 
+/**
+ * Control characters (a file name or anchor could carry terminal escapes) shown as U+FFFD, so
+ * report text can never drive the terminal.
+ */
+function clean(text: string): string {
+  // eslint-disable-next-line no-control-regex
+  return text.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g, '\uFFFD');
+}
+
 function words(text: string, paint: Paint, firstSep = ' '): Word[] {
-  return text
+  return clean(text)
     .split(/\s+/)
     .filter((t) => t !== '')
     .map((t, i) => ({ text: t, sep: i === 0 ? firstSep : ' ', paint }));
@@ -77,7 +85,7 @@ function groupByFile<T extends { readonly file: string }>(items: readonly T[]): 
 }
 
 function findingLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
-  const loc = (f: Finding): string => `${displayPath(f.file, report.root, ctx.cwd) || '(site)'}:${f.line}:${f.column}`;
+  const loc = (f: Finding): string => `${clean(displayPath(f.file, report.root, ctx.cwd)) || '(site)'}:${f.line}:${f.column}`;
   const out: string[] = [];
   for (const group of groupByFile(report.findings)) {
     if (out.length > 0) out.push('');
@@ -102,7 +110,7 @@ function suggestionWords(s: Suggestion, c: ReturnType<typeof pc.createColors>): 
     ...words(s.anchor === null ? 'add a link' : 'add link', c.green),
     ...(s.anchor === null ? [] : words(`"${s.anchor}"`, plain)),
     { text: '->', sep: ' ', paint: plain },
-    { text: s.target, sep: ' ', paint: c.cyan },
+    { text: clean(s.target), sep: ' ', paint: c.cyan },
   ];
   const noAnchor = s.anchor === null ? 'no anchor phrase found, ' : '';
   const impact = `(${noAnchor}similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')})`;
@@ -110,7 +118,7 @@ function suggestionWords(s: Suggestion, c: ReturnType<typeof pc.createColors>): 
 }
 
 function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
-  const loc = (s: Suggestion): string => `${displayPath(s.file, report.root, ctx.cwd)}:${s.line}:${s.column}`;
+  const loc = (s: Suggestion): string => `${clean(displayPath(s.file, report.root, ctx.cwd))}:${s.line}:${s.column}`;
   const out = [c.bold(`Suggested links (${report.suggestions.length})`)];
   for (const group of groupByFile(report.suggestions)) {
     out.push('');
