@@ -1,0 +1,305 @@
+/**
+ * The HTML report in a real browser: Debian's chromium driven by playwright-core (no browser
+ * download), the report opened from file://. Screenshots go to /tmp for a person to look at.
+ */
+import { describe, it, expect, beforeAll, afterAll } from 'vitest';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { chromium } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
+import { htmlFormatter } from '../../src/report/formatters/html.js';
+import type { Report } from '../../src/types.js';
+import { buildFixtureReport } from './report-fixture.js';
+
+// What the callbacks of page.evaluate see runs in the browser; the project's tsconfig has no
+// DOM library, so the few browser names used there are declared here, for this file only.
+/* eslint-disable @typescript-eslint/no-explicit-any */
+type HTMLElement = any;
+type HTMLCanvasElement = any;
+declare const document: any;
+declare const window: any;
+declare function getComputedStyle(element: unknown): any;
+
+const CHROMIUM = '/usr/bin/chromium';
+const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
+
+let browser: Browser;
+let dir: string;
+
+beforeAll(async () => {
+  browser = await chromium.launch({ executablePath: CHROMIUM, args: ARGS });
+  dir = await mkdtemp(join(tmpdir(), 'lw-html-'));
+});
+
+afterAll(async () => {
+  await browser?.close();
+  if (dir) await rm(dir, { recursive: true, force: true });
+});
+
+interface Opened {
+  page: Page;
+  requests: string[];
+  errors: string[];
+  dialogs: string[];
+  close(): Promise<void>;
+}
+
+/** Write the report's HTML to a file and open it from file://, recording every request. */
+async function open(report: Report, name: string, viewport = { width: 1280, height: 900 }): Promise<Opened> {
+  const file = join(dir, `${name}.html`);
+  await writeFile(file, htmlFormatter.format(report, { color: false }));
+  const context = await browser.newContext({ viewport });
+  const page = await context.newPage();
+  const requests: string[] = [];
+  const errors: string[] = [];
+  const dialogs: string[] = [];
+  page.on('request', (r) => requests.push(r.url()));
+  page.on('pageerror', (e) => errors.push(String(e)));
+  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+  page.on('dialog', (d) => { dialogs.push(d.message()); void d.dismiss(); });
+  await page.goto(pathToFileURL(file).href);
+  await page.waitForSelector('html[data-ready="true"]');
+  return { page, requests, errors, dialogs, close: () => context.close() };
+}
+
+async function rowTexts(page: Page, table: string, column: number): Promise<string[]> {
+  return page.$$eval(`#lw-${table}-table tbody tr`, (rows, c) => rows.map((r) => (r.children[c] as HTMLElement | undefined)?.innerText ?? ''), column);
+}
+
+describe('HTML report in chromium', () => {
+  const report = buildFixtureReport();
+
+  it('draws histogram bars with heights proportional to the depth counts, the limit marked', async () => {
+    const o = await open(report, 'example');
+    try {
+      const bars = await o.page.$$eval('#lw-depth-chart rect.lw-bar', (rects) =>
+        rects.map((r) => ({ depth: r.getAttribute('data-depth')!, count: Number(r.getAttribute('data-count')), height: r.getBoundingClientRect().height, label: r.parentElement!.querySelector('.lw-count')!.textContent })),
+      );
+      const counts = new Map<string, number>();
+      for (const p of report.pages) counts.set(p.depth === null ? 'unreachable' : String(p.depth), (counts.get(p.depth === null ? 'unreachable' : String(p.depth)) ?? 0) + 1);
+      const deepest = report.stats.maxDepth!;
+      expect(bars.map((b) => b.depth)).toEqual([...Array.from({ length: Math.max(deepest, report.options.maxDepth) + 1 }, (_, d) => String(d)), 'unreachable']);
+      for (const b of bars) {
+        expect(b.count).toBe(counts.get(b.depth) ?? 0);
+        expect(b.label).toBe(String(b.count));
+      }
+      const tallest = bars.reduce((a, b) => (b.count > a.count ? b : a));
+      expect(tallest.height).toBeGreaterThan(50);
+      for (const b of bars) expect(b.height).toBeCloseTo((tallest.height * b.count) / tallest.count, 0);
+      // The limit line sits between the bar of depth maxDepth and the next one.
+      const limit = await o.page.$eval('#lw-depth-limit', (l) => l.getBoundingClientRect().x);
+      const xs = await o.page.$$eval('#lw-depth-chart rect.lw-bar', (rects) => rects.map((r) => r.getBoundingClientRect()));
+      const m = report.options.maxDepth;
+      expect(limit).toBeGreaterThan(xs[m]!.x + xs[m]!.width);
+      expect(limit).toBeLessThan(xs[m + 1]!.x);
+      await o.page.screenshot({ path: '/tmp/lw-report-example.png', fullPage: true });
+      expect(o.errors).toEqual([]);
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('loads nothing but the file itself', async () => {
+    const o = await open(report, 'requests');
+    try {
+      await o.page.fill('#lw-search', 'tide');
+      await o.page.press('#lw-search', 'Enter');
+      await o.page.click('#lw-findings-table thead button[data-key="rule"]');
+      expect(o.requests.length).toBeGreaterThan(0);
+      for (const url of o.requests) expect(url.startsWith('file://') || url.startsWith('data:')).toBe(true);
+      expect(o.requests.filter((u) => u.startsWith('file://'))).toEqual([pathToFileURL(join(dir, 'requests.html')).href]);
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('searching a page shows the pages linking to it and the pages it links to', async () => {
+    const o = await open(report, 'search');
+    try {
+      // A page with links both ways: the first section overview.
+      const target = report.pages.find((p) => p.route === '/guides/')!;
+      // Links that reach a page (a broken fragment still reaches it); navigation links (from '') apart.
+      const reaching = report.links.filter((l) => l.kind === 'internal' && (l.status === 'ok' || l.status === 'broken-fragment'));
+      const page = (to: string): string => to.split('#')[0]!;
+      const inFrom = [...new Set(reaching.filter((l) => page(l.to) === target.route && l.from !== '' && l.from !== target.route).map((l) => l.from))].sort();
+      const outTo = [...new Set(reaching.filter((l) => l.from === target.route && page(l.to) !== target.route).map((l) => page(l.to)))].sort();
+      expect(inFrom.length).toBeGreaterThan(0);
+      expect(outTo.length).toBeGreaterThan(0);
+      await o.page.fill('#lw-search', target.route);
+      await expect.poll(() => o.page.$$eval('#lw-matches button', (b) => b.length)).toBeGreaterThan(0);
+      await o.page.press('#lw-search', 'Enter');
+      await o.page.waitForSelector('#lw-focus-title');
+      expect(await o.page.textContent('#lw-focus-title')).toBe(target.title);
+      const listed = async (id: string): Promise<string[]> => (await o.page.$$eval(`#${id} button`, (b) => b.map((x) => x.getAttribute('data-route')!))).sort();
+      expect(await listed('lw-in-list')).toEqual(inFrom);
+      expect(await listed('lw-out-list')).toEqual(outTo);
+      // The navigation's links stand on every page: said in words, not listed on each page.
+      expect(await o.page.textContent('#lw-nav-in')).toContain('every page');
+      const navCount = report.links.filter((l) => l.from === '').length;
+      expect(await o.page.textContent('#lw-nav-out')).toContain(`${navCount} pages of the navigation`);
+      // The canvas's text alternative names the same neighbours.
+      const drawn = await o.page.$$eval('#lw-drawn li', (li) => li.map((x) => x.textContent!));
+      const firstIn = report.pages.find((p) => p.route === inFrom[0])!;
+      expect(drawn.some((t) => t.includes(firstIn.route))).toBe(true);
+      await o.page.locator('#lw-graph').screenshot({ path: '/tmp/lw-report-focus.png' });
+      // Picking a neighbour from the list moves the focus to it.
+      await o.page.click(`#lw-in-list button[data-route="${inFrom[0]}"]`);
+      expect(await o.page.textContent('#lw-focus-title')).toBe(firstIn.title);
+      // A search with no match says so and keeps the view.
+      await o.page.fill('#lw-search', 'zzz-no-such-page');
+      await o.page.press('#lw-search', 'Enter');
+      expect(await o.page.textContent('#lw-matches')).toContain('No page matches');
+      expect(o.errors).toEqual([]);
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('sorts and filters the findings table', async () => {
+    const o = await open(report, 'tables');
+    try {
+      const total = report.findings.length;
+      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(total);
+      // Sort by rule: ascending, then descending on a second click.
+      await o.page.click('#lw-findings-table thead button[data-key="rule"]');
+      const rules = report.findings.map((f) => f.rule);
+      expect(await rowTexts(o.page, 'findings', 1)).toEqual([...rules].sort((a, b) => a.localeCompare(b, 'en')));
+      expect(await o.page.getAttribute('#lw-findings-table th[data-key="rule"]', 'aria-sort')).toBe('ascending');
+      await o.page.click('#lw-findings-table thead button[data-key="rule"]');
+      expect(await rowTexts(o.page, 'findings', 1)).toEqual([...rules].sort((a, b) => b.localeCompare(a, 'en')));
+      // Filter by rule, then by folder as well.
+      await o.page.selectOption('#lw-findings-filter-rule', 'max-click-depth');
+      const deep = report.findings.filter((f) => f.rule === 'max-click-depth');
+      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(deep.length);
+      const folder = deep[0]!.file.split('/')[0]!;
+      await o.page.selectOption('#lw-findings-filter-folder', folder);
+      const both = deep.filter((f) => f.file.startsWith(`${folder}/`));
+      expect(await rowTexts(o.page, 'findings', 2)).toEqual(both.map((f) => `${f.file}:${f.line}:${f.column}`));
+      expect(await o.page.textContent('#lw-findings-shown')).toContain(`${both.length} of ${both.length} matching (${total} in all)`);
+      // Severity filter.
+      await o.page.selectOption('#lw-findings-filter-rule', '');
+      await o.page.selectOption('#lw-findings-filter-folder', '');
+      await o.page.selectOption('#lw-findings-filter-severity', 'error');
+      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(report.stats.findings.error);
+      expect(new Set(await rowTexts(o.page, 'findings', 0))).toEqual(new Set(['\u2716 error']));
+      expect(o.errors).toEqual([]);
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('sorts and filters the suggestions table, naming file:line, anchor, target and impact', async () => {
+    const o = await open(report, 'suggestions');
+    try {
+      const s = report.suggestions;
+      expect(s.length).toBeGreaterThan(5);
+      expect(await o.page.$$eval('#lw-suggestions-table tbody tr', (r) => r.length)).toBe(s.length);
+      const first = await o.page.$eval('#lw-suggestions-table tbody tr', (r) => (r as HTMLElement).innerText);
+      expect(first).toContain(`${s[0]!.file}:${s[0]!.line}:${s[0]!.column}`);
+      expect(first).toContain(s[0]!.target);
+      expect(first).toContain('\u2192');
+      // Similarity: the first click sorts highest first.
+      await o.page.click('#lw-suggestions-table thead button[data-key="similarity"]');
+      const sims = (await rowTexts(o.page, 'suggestions', 3)).map(Number);
+      expect(sims).toEqual([...sims].sort((a, b) => b - a));
+      expect(sims[0]).toBeCloseTo(Math.max(...s.map((x) => x.similarity)), 2);
+      // Folder filter.
+      const folder = s[0]!.file.split('/')[0]!;
+      await o.page.selectOption('#lw-suggestions-filter-folder', folder);
+      expect(await o.page.$$eval('#lw-suggestions-table tbody tr', (r) => r.length)).toBe(s.filter((x) => x.file.split('/')[0] === folder).length);
+      // Text filter.
+      await o.page.selectOption('#lw-suggestions-filter-folder', '');
+      await o.page.fill('#lw-suggestions-filter-text', 'orphan page');
+      expect(await o.page.$$eval('#lw-suggestions-table tbody tr', (r) => r.length)).toBe(s.filter((x) => x.reason.includes('orphan page')).length);
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('is keyboard usable: Tab reaches the search box, Enter on a header sorts', async () => {
+    const o = await open(report, 'keyboard');
+    try {
+      let reached = false;
+      for (let k = 0; k < 15 && !reached; k++) {
+        await o.page.keyboard.press('Tab');
+        reached = await o.page.evaluate(() => document.activeElement?.id === 'lw-search');
+      }
+      expect(reached).toBe(true);
+      await o.page.keyboard.type('/guides/');
+      await o.page.keyboard.press('Enter');
+      await o.page.waitForSelector('#lw-focus-title');
+      await o.page.focus('#lw-findings-table thead button[data-key="message"]');
+      const outline = await o.page.$eval('#lw-findings-table thead button[data-key="message"]', (b) => getComputedStyle(b).outlineStyle);
+      expect(outline).not.toBe('none');
+      await o.page.keyboard.press('Enter');
+      const messages = report.findings.map((f) => f.message).sort((a, b) => a.localeCompare(b, 'en'));
+      expect(await rowTexts(o.page, 'findings', 4)).toEqual(messages);
+      await o.page.keyboard.press('Space');
+      expect(await rowTexts(o.page, 'findings', 4)).toEqual([...messages].reverse());
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('a hostile page title shows as text and runs nothing', async () => {
+    const hostile = '<img src=x onerror=alert(1)><script>alert(2)</script>';
+    const o = await open(buildFixtureReport({ hostileTitle: hostile }), 'hostile');
+    try {
+      expect(await o.page.$$eval('img', (i) => i.length)).toBe(0);
+      await o.page.fill('#lw-search', 'alert');
+      await o.page.press('#lw-search', 'Enter');
+      expect(await o.page.textContent('#lw-focus-title')).toBe(hostile);
+      expect(await o.page.$$eval('img', (i) => i.length)).toBe(0);
+      expect(await o.page.$$eval('script', (s) => s.length)).toBe(2);
+      expect(o.dialogs).toEqual([]);
+      expect(o.errors).toEqual([]);
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('prints without controls and with every row', async () => {
+    const big = buildFixtureReport({ pages: 1200, seed: 5 });
+    expect(big.findings.length).toBeGreaterThan(200);
+    const o = await open(big, 'print');
+    try {
+      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(200);
+      await o.page.click('#lw-findings-more');
+      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(big.findings.length);
+      await o.page.emulateMedia({ media: 'print' });
+      expect(await o.page.$eval('#lw-findings-controls', (c) => getComputedStyle(c).display)).toBe('none');
+      expect(await o.page.$eval('#lw-search', (c) => (c.closest('.lw-controls') as HTMLElement).offsetParent)).toBeNull();
+    } finally {
+      await o.close();
+    }
+  });
+
+  it('opens a 5,000-page report and draws the folder overview and a focused page', async () => {
+    const big = buildFixtureReport({ pages: 5000, seed: 11 });
+    const o = await open(big, 'big');
+    try {
+      expect(await o.page.$$eval('#lw-folder-list button', (b) => b.length)).toBeGreaterThan(10);
+      // The canvas has been drawn on: some pixels are not blank.
+      const inked = await o.page.$eval('#lw-canvas', (c) => {
+        const cv = c as HTMLCanvasElement;
+        const data = cv.getContext('2d')!.getImageData(0, 0, cv.width, cv.height).data;
+        let n = 0;
+        for (let i = 3; i < data.length; i += 4 * 16) if (data[i]! > 0) n++;
+        return n;
+      });
+      expect(inked).toBeGreaterThan(100);
+      await o.page.screenshot({ path: '/tmp/lw-report-5000.png' });
+      const hub = big.pages.reduce((a, b) => (b.inlinks > a.inlinks ? b : a));
+      await o.page.fill('#lw-search', hub.route);
+      await o.page.press('#lw-search', 'Enter');
+      expect(await o.page.textContent('#lw-focus-title')).toBe(hub.title);
+      expect(await o.page.$$eval('#lw-in-list li', (li) => li.length)).toBeGreaterThan(20);
+      await o.page.screenshot({ path: '/tmp/lw-report-5000-focus.png' });
+      expect(o.errors).toEqual([]);
+    } finally {
+      await o.close();
+    }
+  });
+});
