@@ -77,6 +77,13 @@ function fmt(v) {
   return String(Number(v.toPrecision(3)));
 }
 
+/** A rank (PageRank x pages) as the text report writes it: 2 decimals below 1, 1 below 10. */
+function fmtRank(v) {
+  if (v >= 10) return v.toFixed(0);
+  if (v >= 1) return v.toFixed(1);
+  return v.toFixed(2);
+}
+
 function plural(n, one, many) { return n + ' ' + (n === 1 ? one : many); }
 
 function depthText(d) {

@@ -273,7 +273,7 @@ function drawFocus(id, layout) {
   const room = Math.max(8, Math.floor((210 - 16 * unit) / unit / 6.4));
   function column(items, x, side) {
     for (const it of items) {
-      const r = nodeRadius(PAGES[it.id].rank) * unit;
+      const r = Math.max(5, nodeRadius(PAGES[it.id].rank)) * unit;
       const template = !(it.flags & 1);
       ctx2d.setLineDash(template ? [4 * unit, 4 * unit] : []);
       ctx2d.lineWidth = 1.2 * unit;

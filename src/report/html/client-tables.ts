@@ -87,7 +87,7 @@ function makeTable(spec) {
       const r = list[k];
       const tr = el('tr', { 'data-index': r.index });
       for (const col of spec.columns) {
-        const td = el('td', { cls: col.numeric ? 'lw-num' : null });
+        const td = el('td', { cls: col.numeric ? 'lw-num' : col.cls || null });
         const v = col.render(r.row);
         td.appendChild(typeof v === 'string' ? document.createTextNode(v) : v);
         tr.appendChild(td);
@@ -116,15 +116,25 @@ function code(text) { return el('code', { text: text }); }
 
 function placeOf(row) { return row.file + ':' + row.line + ':' + row.column; }
 
-function change(before, after, better) {
-  const span = el('span', null, [(before === null ? 'unreachable' : fmt(before)) + ' \u2192 ' + (after === null ? 'unreachable' : fmt(after))]);
-  if (before !== null && after !== null && before !== after) {
-    const up = better(before, after);
-    span.appendChild(el('span', { cls: up ? 'lw-up' : 'lw-down', text: up ? ' (better)' : ' (worse)' }));
-  } else if (before === null && after !== null) {
-    span.appendChild(el('span', { cls: 'lw-up', text: ' (now reachable)' }));
-  }
+/** "4 -> 2" with the change in words beside it; colour only repeats what the words say. */
+function change(before, after, show, delta) {
+  const span = el('span', null, [(before === null ? 'unreachable' : show(before)) + ' \u2192 ' + (after === null ? 'unreachable' : show(after))]);
+  const note = before === null && after !== null ? { up: true, text: 'now reachable' } : before !== null && after !== null && before !== after ? delta(before, after) : null;
+  if (note) span.appendChild(el('span', { cls: 'lw-delta ' + (note.up ? 'lw-up' : 'lw-down'), text: note.text }));
   return span;
+}
+
+function rankChange(r) {
+  return change(r.targetRankBefore, r.targetRankAfter, fmtRank, function (a, b) {
+    const pct = a > 0 ? Math.round((100 * (b - a)) / a) : 0;
+    return { up: b > a, text: (pct >= 0 ? '+' : '\u2212') + Math.abs(pct) + '%' };
+  });
+}
+
+function depthChange(r) {
+  return change(r.depthBefore, r.depthAfter, String, function (a, b) {
+    return { up: b < a, text: b < a ? plural(a - b, 'click', 'clicks') + ' fewer' : plural(b - a, 'click', 'clicks') + ' more' };
+  });
 }
 
 makeTable({
@@ -139,7 +149,7 @@ makeTable({
   columns: [
     { key: 'severity', label: 'Severity', sort: function (r) { return r.severity === 'error' ? 0 : 1; },
       render: function (r) { return el('span', { cls: 'lw-sev lw-sev-' + r.severity, text: (r.severity === 'error' ? '\u2716 ' : '\u25B2 ') + r.severity }); } },
-    { key: 'rule', label: 'Rule', sort: function (r) { return r.rule; }, render: function (r) { return code(r.rule); } },
+    { key: 'rule', label: 'Rule', cls: 'lw-nowrap', sort: function (r) { return r.rule; }, render: function (r) { return code(r.rule); } },
     { key: 'location', label: 'File:line', sort: function (r) { return r.file + '\u0000' + String(r.line).padStart(8, '0') + ':' + String(r.column).padStart(6, '0'); },
       render: function (r) { return code(placeOf(r)); } },
     { key: 'route', label: 'Page', sort: function (r) { return r.route; }, render: function (r) { return r.route; } },
@@ -160,12 +170,12 @@ makeTable({
       render: function (r) { return r.anchor === null ? el('em', { text: 'no anchor phrase' }) : '\u201C' + r.anchor + '\u201D'; } },
     { key: 'target', label: 'Link to', sort: function (r) { return r.target; },
       render: function (r) { return el('span', null, [r.targetTitle, el('span', { cls: 'lw-route', text: r.target })]); } },
-    { key: 'similarity', label: 'Similarity', numeric: true, firstDir: 'desc', sort: function (r) { return r.similarity; }, render: function (r) { return fmt(r.similarity); } },
+    { key: 'similarity', label: 'Similarity', numeric: true, firstDir: 'desc', sort: function (r) { return r.similarity; }, render: function (r) { return r.similarity.toFixed(2); } },
     { key: 'rank', label: 'Target rank', firstDir: 'desc', sort: function (r) { return r.targetRankAfter - r.targetRankBefore; },
-      render: function (r) { return change(r.targetRankBefore, r.targetRankAfter, function (a, b) { return b > a; }); } },
+      render: rankChange },
     { key: 'depth', label: 'Target depth', firstDir: 'desc',
       sort: function (r) { return r.depthAfter === null ? null : (r.depthBefore === null ? 1000 : r.depthBefore) - r.depthAfter; },
-      render: function (r) { return change(r.depthBefore, r.depthAfter, function (a, b) { return b < a; }); } },
+      render: depthChange },
     { key: 'reason', label: 'Why', sort: function (r) { return r.reason; }, render: function (r) { return r.reason; } },
   ],
 });

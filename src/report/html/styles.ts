@@ -128,6 +128,9 @@ button:hover { background: #eef2f8; }
 .lw-sev-error { color: var(--lw-fail); } .lw-sev-warning { color: #8a5a00; }
 .lw-shown { color: var(--lw-muted); margin: 4px 0; }
 .lw-up { color: var(--lw-pass); } .lw-down { color: var(--lw-fail); }
+.lw-delta { display: block; font-size: 12px; }
+.lw-table .lw-nowrap { white-space: nowrap; overflow-wrap: normal; }
+.lw-table .lw-route { display: block; color: var(--lw-muted); font-size: 12px; }
 .lw-footer { color: var(--lw-muted); font-size: 12px; margin-top: 20px; }
 @media (max-width: 900px) {
   .lw-row, .lw-graph-wrap { grid-template-columns: 1fr; }
