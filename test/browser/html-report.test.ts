@@ -1,72 +1,31 @@
 /**
- * The HTML report in a real browser: Debian's chromium driven by playwright-core (no browser
- * download), the report opened from file://. Screenshots go to /tmp for a person to look at.
+ * The HTML report in a real browser (see open-report.ts): charts, no requests, search and
+ * neighbourhood, keyboard, hostile text, an empty site and a 5,000-page site. Screenshots go
+ * to /tmp for a person to look at.
  */
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { chromium } from 'playwright-core';
-import type { Browser, Page } from 'playwright-core';
-import { htmlFormatter } from '../../src/report/formatters/html.js';
 import type { Report } from '../../src/types.js';
+import { launchReportBrowser, rowTexts } from './open-report.js';
+import type { ReportBrowser } from './open-report.js';
 import { buildFixtureReport } from './report-fixture.js';
 
-// What the callbacks of page.evaluate see runs in the browser; the project's tsconfig has no
-// DOM library, so the few browser names used there are declared here, for this file only.
-/* eslint-disable @typescript-eslint/no-explicit-any */
-type HTMLElement = any;
+// The callbacks of page.evaluate run in the browser; the project's tsconfig has no DOM
+// library, so the few browser names used there are declared here, for this file only.
 type HTMLCanvasElement = any;
 declare const document: any;
 declare const window: any;
 declare function getComputedStyle(element: unknown): any;
 
-const CHROMIUM = '/usr/bin/chromium';
-const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
-
-let browser: Browser;
-let dir: string;
+let browser: ReportBrowser;
+const open = (report: Report, name: string): ReturnType<ReportBrowser['open']> => browser.open(report, name);
 
 beforeAll(async () => {
-  browser = await chromium.launch({ executablePath: CHROMIUM, args: ARGS });
-  dir = await mkdtemp(join(tmpdir(), 'lw-html-'));
+  browser = await launchReportBrowser();
 });
 
 afterAll(async () => {
   await browser?.close();
-  if (dir) await rm(dir, { recursive: true, force: true });
 });
-
-interface Opened {
-  page: Page;
-  requests: string[];
-  errors: string[];
-  dialogs: string[];
-  close(): Promise<void>;
-}
-
-/** Write the report's HTML to a file and open it from file://, recording every request. */
-async function open(report: Report, name: string, viewport = { width: 1280, height: 900 }): Promise<Opened> {
-  const file = join(dir, `${name}.html`);
-  await writeFile(file, htmlFormatter.format(report, { color: false }));
-  const context = await browser.newContext({ viewport });
-  const page = await context.newPage();
-  const requests: string[] = [];
-  const errors: string[] = [];
-  const dialogs: string[] = [];
-  page.on('request', (r) => requests.push(r.url()));
-  page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
-  page.on('dialog', (d) => { dialogs.push(d.message()); void d.dismiss(); });
-  await page.goto(pathToFileURL(file).href);
-  await page.waitForSelector('html[data-ready="true"]');
-  return { page, requests, errors, dialogs, close: () => context.close() };
-}
-
-async function rowTexts(page: Page, table: string, column: number): Promise<string[]> {
-  return page.$$eval(`#lw-${table}-table tbody tr`, (rows, c) => rows.map((r) => (r.children[c] as HTMLElement | undefined)?.innerText ?? ''), column);
-}
 
 describe('HTML report in chromium', () => {
   const report = buildFixtureReport();
@@ -109,7 +68,7 @@ describe('HTML report in chromium', () => {
       await o.page.click('#lw-findings-table thead button[data-key="rule"]');
       expect(o.requests.length).toBeGreaterThan(0);
       for (const url of o.requests) expect(url.startsWith('file://') || url.startsWith('data:')).toBe(true);
-      expect(o.requests.filter((u) => u.startsWith('file://'))).toEqual([pathToFileURL(join(dir, 'requests.html')).href]);
+      expect(o.requests.filter((u) => u.startsWith('file://'))).toEqual([o.url]);
     } finally {
       await o.close();
     }
@@ -157,67 +116,6 @@ describe('HTML report in chromium', () => {
     }
   });
 
-  it('sorts and filters the findings table', async () => {
-    const o = await open(report, 'tables');
-    try {
-      const total = report.findings.length;
-      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(total);
-      // Sort by rule: ascending, then descending on a second click.
-      await o.page.click('#lw-findings-table thead button[data-key="rule"]');
-      const rules = report.findings.map((f) => f.rule);
-      expect(await rowTexts(o.page, 'findings', 1)).toEqual([...rules].sort((a, b) => a.localeCompare(b, 'en')));
-      expect(await o.page.getAttribute('#lw-findings-table th[data-key="rule"]', 'aria-sort')).toBe('ascending');
-      await o.page.click('#lw-findings-table thead button[data-key="rule"]');
-      expect(await rowTexts(o.page, 'findings', 1)).toEqual([...rules].sort((a, b) => b.localeCompare(a, 'en')));
-      // Filter by rule, then by folder as well.
-      await o.page.selectOption('#lw-findings-filter-rule', 'max-click-depth');
-      const deep = report.findings.filter((f) => f.rule === 'max-click-depth');
-      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(deep.length);
-      const folder = deep[0]!.file.split('/')[0]!;
-      await o.page.selectOption('#lw-findings-filter-folder', folder);
-      const both = deep.filter((f) => f.file.startsWith(`${folder}/`));
-      expect(await rowTexts(o.page, 'findings', 2)).toEqual(both.map((f) => `${f.file}:${f.line}:${f.column}`));
-      expect(await o.page.textContent('#lw-findings-shown')).toContain(`${both.length} of ${both.length} matching (${total} in all)`);
-      // Severity filter.
-      await o.page.selectOption('#lw-findings-filter-rule', '');
-      await o.page.selectOption('#lw-findings-filter-folder', '');
-      await o.page.selectOption('#lw-findings-filter-severity', 'error');
-      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(report.stats.findings.error);
-      expect(new Set(await rowTexts(o.page, 'findings', 0))).toEqual(new Set(['\u2716 error']));
-      expect(o.errors).toEqual([]);
-    } finally {
-      await o.close();
-    }
-  });
-
-  it('sorts and filters the suggestions table, naming file:line, anchor, target and impact', async () => {
-    const o = await open(report, 'suggestions');
-    try {
-      const s = report.suggestions;
-      expect(s.length).toBeGreaterThan(5);
-      expect(await o.page.$$eval('#lw-suggestions-table tbody tr', (r) => r.length)).toBe(s.length);
-      const first = await o.page.$eval('#lw-suggestions-table tbody tr', (r) => (r as HTMLElement).innerText);
-      expect(first).toContain(`${s[0]!.file}:${s[0]!.line}:${s[0]!.column}`);
-      expect(first).toContain(s[0]!.target);
-      expect(first).toContain('\u2192');
-      // Similarity: the first click sorts highest first.
-      await o.page.click('#lw-suggestions-table thead button[data-key="similarity"]');
-      const sims = (await rowTexts(o.page, 'suggestions', 3)).map(Number);
-      expect(sims).toEqual([...sims].sort((a, b) => b - a));
-      expect(sims[0]).toBeCloseTo(Math.max(...s.map((x) => x.similarity)), 2);
-      // Folder filter.
-      const folder = s[0]!.file.split('/')[0]!;
-      await o.page.selectOption('#lw-suggestions-filter-folder', folder);
-      expect(await o.page.$$eval('#lw-suggestions-table tbody tr', (r) => r.length)).toBe(s.filter((x) => x.file.split('/')[0] === folder).length);
-      // Text filter.
-      await o.page.selectOption('#lw-suggestions-filter-folder', '');
-      await o.page.fill('#lw-suggestions-filter-text', 'orphan page');
-      expect(await o.page.$$eval('#lw-suggestions-table tbody tr', (r) => r.length)).toBe(s.filter((x) => x.reason.includes('orphan page')).length);
-    } finally {
-      await o.close();
-    }
-  });
-
   it('is keyboard usable: Tab reaches the search box, Enter on a header sorts', async () => {
     const o = await open(report, 'keyboard');
     try {
@@ -231,7 +129,7 @@ describe('HTML report in chromium', () => {
       await o.page.keyboard.press('Enter');
       await o.page.waitForSelector('#lw-focus-title');
       await o.page.focus('#lw-findings-table thead button[data-key="message"]');
-      const outline = await o.page.$eval('#lw-findings-table thead button[data-key="message"]', (b) => getComputedStyle(b).outlineStyle);
+      const outline = await o.page.$eval('#lw-findings-table thead button[data-key="message"]', (b) => getComputedStyle(b).outlineStyle as string);
       expect(outline).not.toBe('none');
       await o.page.keyboard.press('Enter');
       const messages = report.findings.map((f) => f.message).sort((a, b) => a.localeCompare(b, 'en'));
@@ -260,17 +158,18 @@ describe('HTML report in chromium', () => {
     }
   });
 
-  it('prints without controls and with every row', async () => {
-    const big = buildFixtureReport({ pages: 1200, seed: 5 });
-    expect(big.findings.length).toBeGreaterThan(200);
-    const o = await open(big, 'print');
+  it('opens a report of an empty site without errors', async () => {
+    const empty: Report = {
+      ...report,
+      stats: { ...report.stats, files: 0, pages: 0, links: 0, internalLinks: 0, brokenLinks: 0, brokenFragments: 0, orphans: 0, unreachable: 0, deadEnds: 0, maxDepth: null, findings: { error: 0, warning: 0 } },
+      pages: [], links: [], findings: [], suggestions: [],
+      gate: { passed: true, failOn: 'error', failures: [] },
+    };
+    const o = await open(empty, 'empty');
     try {
-      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(200);
-      await o.page.click('#lw-findings-more');
-      expect(await o.page.$$eval('#lw-findings-table tbody tr', (r) => r.length)).toBe(big.findings.length);
-      await o.page.emulateMedia({ media: 'print' });
-      expect(await o.page.$eval('#lw-findings-controls', (c) => getComputedStyle(c).display)).toBe('none');
-      expect(await o.page.$eval('#lw-search', (c) => (c.closest('.lw-controls') as HTMLElement).offsetParent)).toBeNull();
+      expect(await o.page.textContent('#lw-gate')).toContain('Gate passed');
+      expect(await o.page.textContent('#lw-findings-table tbody')).toContain('No findings');
+      expect(o.errors).toEqual([]);
     } finally {
       await o.close();
     }

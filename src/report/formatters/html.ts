@@ -19,6 +19,7 @@ import type { Report } from '../../types.js';
 import type { FormatContext, Formatter } from '../types.js';
 import { CLIENT_CORE } from '../html/client-core.js';
 import { CLIENT_DRAW } from '../html/client-draw.js';
+import { CLIENT_FOCUS } from '../html/client-focus.js';
 import { CLIENT_GRAPH } from '../html/client-graph.js';
 import { CLIENT_TABLES } from '../html/client-tables.js';
 import { buildHtmlData } from '../html/data.js';
@@ -28,7 +29,7 @@ import { STYLES } from '../html/styles.js';
 import { renderPage } from '../html/template.js';
 
 /** The page's script: the parts in one function scope, run once the document is parsed. */
-export const CLIENT_SCRIPT = `(function () {${CLIENT_CORE}${CLIENT_DRAW}${CLIENT_TABLES}${CLIENT_GRAPH}})();`;
+export const CLIENT_SCRIPT = `(function () {${CLIENT_CORE}${CLIENT_DRAW}${CLIENT_FOCUS}${CLIENT_TABLES}${CLIENT_GRAPH}})();`;
 
 function cspHash(text: string): string {
   return `sha256-${createHash('sha256').update(text, 'utf8').digest('base64')}`;

@@ -143,6 +143,9 @@ button:hover { background: #eef2f8; }
   .lw-panel { border: 0; padding: 0; break-inside: avoid-page; }
   .lw-table-section { break-inside: auto; }
   .lw-details { max-height: none !important; overflow: visible; }
+  .lw-row { grid-template-columns: 1fr 1fr; }
+  .lw-graph-wrap { grid-template-columns: 1fr; }
+  .lw-top, .lw-deep { columns: 1; }
   .lw-table th button::after { content: none !important; }
   * { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 }
