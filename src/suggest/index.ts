@@ -1,0 +1,24 @@
+/** The suggest stage (DESIGN section 7): importance, under-linked pages, link suggestions, impact, repair plan. */
+export { suggestLinks, compareSuggestions, KEY_TERMS } from './suggest.js';
+export type { SuggestInput, SuggestResult, UnderlinkedPage, RepairPlan, ImportanceLevel } from './types.js';
+export { parseTraffic } from './traffic.js';
+export type { TrafficResult } from './traffic.js';
+export { computeImportance, viewsPerPage, HIGH_PERCENTILE, LOW_PERCENTILE } from './importance.js';
+export type { Importance, ImportanceSource } from './importance.js';
+export { findUnderlinked, pagerankPercentiles } from './underlinked.js';
+export { percentiles } from './percentile.js';
+export { findCandidates, hasContentLink } from './candidates.js';
+export type { CandidatePair } from './candidates.js';
+export { baseScore, withAnchor, NO_ANCHOR, REACH_TOO_DEEP, REACH_UNREACHABLE } from './score.js';
+export type { ScoreInput } from './score.js';
+export { findAnchors, prepareSource, targetNames, routeWords, positionInSpan, ANCHOR_OPTIONS } from './anchor.js';
+export type { AnchorMatch, AnchorKind, TargetNames, SourceTokens } from './anchor.js';
+export { chooseSuggestions } from './select.js';
+export type { ScoredPair, Chosen } from './select.js';
+export { rankModel, pagerankWithLinks, DepthState, depthState } from './impact.js';
+export type { RankModel } from './impact.js';
+export { repairPlan } from './repair.js';
+export type { PlanCandidate } from './repair.js';
+export { suggestionId } from './id.js';
+export { reasonText } from './reason.js';
+export type { ReasonFacts } from './reason.js';

@@ -1,0 +1,141 @@
+/**
+ * `suggestLinks`: the suggest stage (DESIGN section 7) from under-linked pages to positioned,
+ * impact-annotated link suggestions and a depth-repair plan.
+ *
+ * Steps: importance -> under-linked pages -> targets (under-linked, or all pages with
+ * `suggest.targets: 'all'`) -> candidate sources -> anchors (each source tokenised once) ->
+ * scores -> greedy choice under the per-source and per-target caps -> predicted PageRank and
+ * depth per suggestion -> repair plan. Output sorted by file, line, column, target.
+ */
+import type { ResolvedOptions } from '../options.js';
+import type { PageFacts, Suggestion } from '../types.js';
+import { createStemCache } from '../text/tokenize.js';
+import { topTerms } from '../text/tfidf.js';
+import { findAnchors, prepareSource, targetNames } from './anchor.js';
+import type { TargetNames } from './anchor.js';
+import { findCandidates } from './candidates.js';
+import { suggestionId } from './id.js';
+import { depthState, pagerankWithLinks, rankModel } from './impact.js';
+import { computeImportance } from './importance.js';
+import { reasonText } from './reason.js';
+import { repairPlan } from './repair.js';
+import { baseScore } from './score.js';
+import { chooseSuggestions } from './select.js';
+import type { ScoredPair } from './select.js';
+import type { SuggestInput, SuggestResult } from './types.js';
+import { findUnderlinked, pagerankPercentiles } from './underlinked.js';
+
+/** Key terms of a target that an anchor may match: its heaviest TF-IDF terms. */
+export const KEY_TERMS = 8;
+
+/** Propose links for the site. Pure: same input, same output. */
+export function suggestLinks(input: SuggestInput, options: ResolvedOptions): SuggestResult {
+  const { graph, ranking, index, related, centrality, traffic } = input;
+  const n = graph.pages.length;
+  const ordered = input.facts.length === n && input.facts.every((f, i) => f.file === graph.pages[i]!.file);
+  const factsOf = (i: number): PageFacts | undefined => (ordered ? input.facts[i] : input.facts[graph.pages[i]!.factsIndex]);
+  const { maxDepth } = options;
+  const settings = options.suggest;
+
+  const importance = computeImportance(graph, options, traffic, centrality);
+  const rankPct = pagerankPercentiles(graph, ranking);
+  const underlinked = findUnderlinked(graph, ranking, importance, rankPct, options);
+  const reasonsOf = new Map(underlinked.map((u) => [u.page, u.reasons]));
+  const targets =
+    settings.targets === 'all'
+      ? graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id)
+      : underlinked.map((u) => u.page);
+  const pairs = findCandidates(graph, related, targets, settings.minSimilarity);
+
+  // Anchors: each source's spans tokenised once, for all its targets.
+  const cache = createStemCache();
+  const names = new Map<number, TargetNames>();
+  const namesOf = (t: number): TargetNames => {
+    let v = names.get(t);
+    if (v === undefined) {
+      const page = graph.pages[t]!;
+      const keys = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS).map((id) => index.terms[id]!) : [];
+      v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache);
+      names.set(t, v);
+    }
+    return v;
+  };
+  const bySource = [...pairs].sort((a, b) => a.source - b.source || a.target - b.target);
+  const scored: ScoredPair[] = [];
+  for (let i = 0; i < bySource.length; ) {
+    const source = bySource[i]!.source;
+    const tokens = prepareSource(factsOf(source)?.spans ?? [], cache);
+    for (; i < bySource.length && bySource[i]!.source === source; i++) {
+      const pair = bySource[i]!;
+      const targetDepth = ranking.depth[pair.target]!;
+      const base = baseScore({
+        similarity: pair.similarity,
+        sourceRankPercentile: rankPct[source]!,
+        sourceDepth: ranking.depth[source]!,
+        targetNeedsDepth: targetDepth < 0 || targetDepth > maxDepth,
+        maxDepth,
+      });
+      scored.push({ ...pair, base, anchors: findAnchors(tokens, namesOf(pair.target)) });
+    }
+  }
+
+  const chosen = chooseSuggestions(scored, settings.maxNewLinksPerPage, settings.perTarget);
+  const model = rankModel(graph, ranking, options);
+  const depths = depthState(graph, ranking, options);
+  const made = chosen.map(({ pair, anchor, score }): { suggestion: Suggestion; source: number; target: number } => {
+    const { source, target } = pair;
+    const sourcePage = graph.pages[source]!;
+    const targetPage = graph.pages[target]!;
+    const after = pagerankWithLinks(model, [{ from: source, to: target }]);
+    const depthBefore = ranking.depth[target]!;
+    const depthAfter = depths.depthWith(source, target);
+    const anchorText = anchor === null ? null : anchor.text;
+    const suggestion: Suggestion = {
+      id: suggestionId(sourcePage.route, targetPage.route, anchorText),
+      source: sourcePage.route,
+      target: targetPage.route,
+      file: sourcePage.file,
+      line: anchor === null ? 1 : anchor.line,
+      column: anchor === null ? 1 : anchor.column,
+      offset: anchor === null ? -1 : anchor.offset,
+      endOffset: anchor === null ? -1 : anchor.endOffset,
+      anchor: anchorText,
+      similarity: pair.similarity,
+      score,
+      targetRankBefore: ranking.pagerank[target]! * n,
+      targetRankAfter: after[target]! * n,
+      depthBefore: depthBefore < 0 ? null : depthBefore,
+      depthAfter: depthAfter < 0 ? null : depthAfter,
+      reason: reasonText({
+        reasons: reasonsOf.get(target) ?? [],
+        depth: depthBefore,
+        maxDepth,
+        contentInlinks: ranking.contentInlinks[target]!,
+        minInlinks: settings.minInlinks,
+        rankPercentile: rankPct[target]!,
+        importancePercentile: importance.score[target]!,
+        anchor: anchor === null ? null : anchor.kind,
+      }),
+      sourceHash: factsOf(source)?.hash ?? '',
+    };
+    return { suggestion, source, target };
+  });
+  made.sort((a, b) => compareSuggestions(a.suggestion, b.suggestion));
+
+  const plan = repairPlan(
+    graph,
+    ranking,
+    options,
+    made.map((m) => ({ id: m.suggestion.id, source: m.source, target: m.target, score: m.suggestion.score })),
+  );
+  return { suggestions: made.map((m) => m.suggestion), underlinked, plan, importance: importance.level };
+}
+
+/** Output order: file, line, column, then target route (code-unit order). */
+export function compareSuggestions(a: Suggestion, b: Suggestion): number {
+  return cmp(a.file, b.file) || a.line - b.line || a.column - b.column || cmp(a.target, b.target) || cmp(a.id, b.id);
+}
+
+function cmp(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}

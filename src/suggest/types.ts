@@ -1,0 +1,48 @@
+/** Types of the suggest stage (contracts.md). */
+import type { PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
+
+/** What `suggestLinks` works from. Arrays are indexed by page id (the graph's order). */
+export interface SuggestInput {
+  readonly graph: SiteGraph;
+  /**
+   * Facts per page: `facts[i]` belongs to page i (as `analyze` passes them), or the array given
+   * to `buildGraph` (then `graph.pages[i].factsIndex` is used).
+   */
+  readonly facts: readonly PageFacts[];
+  readonly ranking: Ranking;
+  /** The term index of the pages' texts, row i = page i. */
+  readonly index: TermIndex;
+  readonly related: readonly RelatedList[];
+  readonly centrality: Float64Array;
+  /** Views per route from the traffic CSV (see `parseTraffic`), or null. */
+  readonly traffic: ReadonlyMap<string, number> | null;
+}
+
+/** Importance level of a page. */
+export type ImportanceLevel = 'high' | 'normal' | 'low';
+
+/** A page that wants more links, and why (reasons in a fixed order). */
+export interface UnderlinkedPage {
+  readonly page: number;
+  readonly reasons: UnderlinkedReason[];
+}
+
+/** The greedy depth-repair plan: a small set of suggestions that fixes the most depth findings. */
+export interface RepairPlan {
+  readonly maxDepth: number;
+  /** Pages (not excluded) deeper than `maxDepth` or unreachable, before. */
+  readonly tooDeepBefore: number;
+  /** The same count with every suggestion of the plan added. */
+  readonly tooDeepAfter: number;
+  /** Ids of the chosen suggestions, in the order the greedy pass chose them. */
+  readonly suggestionIds: string[];
+}
+
+/** Result of `suggestLinks`. */
+export interface SuggestResult {
+  readonly suggestions: Suggestion[];
+  readonly underlinked: UnderlinkedPage[];
+  readonly plan: RepairPlan;
+  /** Importance level per page id. */
+  readonly importance: ImportanceLevel[];
+}
