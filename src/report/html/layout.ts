@@ -206,7 +206,7 @@ function frame(depth: readonly (number | null)[], maxDepth: number, withBox: boo
   const perRing = new Array<number>(count + 1).fill(0);
   for (const d of depth) if (d !== null) perRing[d]!++;
   const radius = OVERVIEW_HEIGHT / 2 - 40;
-  const gaps = perRing.map((c, d) => (d === 0 ? 0 : 1 + Math.sqrt(c)));
+  const gaps = perRing.map((c, d) => (d === 0 ? 0 : (d === 1 ? 2.5 : 1.5) + Math.sqrt(c)));
   const total = gaps.reduce((a, b) => a + b, 0);
   const radii: number[] = [];
   let sum = 0;

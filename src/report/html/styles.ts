@@ -44,7 +44,7 @@ code, .lw-mono { font-family: ui-monospace, SFMono-Regular, Menlo, Consolas, mon
 .lw-stat .lw-sub { display: block; font-size: 12px; font-weight: 400; color: var(--lw-muted); overflow-wrap: anywhere; }
 .lw-stat-bad { border-left-color: var(--lw-fail); }
 .lw-badge { display: none; }
-.lw-stat-bad .lw-badge { display: block; position: absolute; top: 8px; right: 8px; font-size: 11px; font-weight: 650;
+.lw-stat-bad .lw-badge { display: inline-block; margin-top: 4px; font-size: 11px; font-weight: 650;
   color: var(--lw-fail); border: 1px solid currentColor; border-radius: 10px; padding: 0 7px; }
 .lw-stat-ok { border-left-color: var(--lw-line); }
 .lw-row { display: grid; grid-template-columns: 1fr 1fr; gap: 14px; }

@@ -106,7 +106,7 @@ function stats(data: HtmlData): string {
   const deepest = data.deepestPage >= 0 ? data.pages[data.deepestPage]! : null;
   const deepCount = deepest === null ? 0 : data.histogram.counts[deepest.depth!]!;
   const card = (id: string, label: string, value: string, sub: string, bad: boolean): string =>
-    `<div class="lw-stat ${bad ? 'lw-stat-bad' : 'lw-stat-ok'}" id="lw-stat-${id}"><dt>${label}</dt><dd>${value}<span class="lw-badge">needs work</span><span class="lw-sub">${sub}</span></dd></div>`;
+    `<div class="lw-stat ${bad ? 'lw-stat-bad' : 'lw-stat-ok'}" id="lw-stat-${id}"><dt>${label}</dt><dd>${value}<span class="lw-sub">${sub}</span><span class="lw-badge">needs work</span></dd></div>`;
   const deepSub = deepest === null
     ? 'no page is reachable'
     : `${escapeHtml(shorten(deepest.title || deepest.route, 60))}${deepCount > 1 ? ` and ${deepCount - 1} more` : ''}; limit ${data.maxDepth}`;
@@ -151,7 +151,7 @@ function deepestList(data: HtmlData): string {
 function rankSection(data: HtmlData): string {
   const items = data.topPages.map((id) => {
     const p = data.pages[id]!;
-    return `<li><strong>${escapeHtml(shorten(p.title || p.route, 60))}</strong> <span class="lw-route"><span class="lw-mono">${escapeHtml(p.route)}</span> \u00b7 ${formatNumber(p.rank)} \u00d7 average</span></li>`;
+    return `<li><strong>${escapeHtml(shorten(p.title || p.route, 60))}</strong> <span class="lw-route"><span class="lw-mono">${escapeHtml(p.route)}</span> \u00b7 ${formatNumber(p.rank)}</span></li>`;
   });
   return [
     '<section class="lw-panel" id="lw-rank" aria-labelledby="lw-rank-h">',
