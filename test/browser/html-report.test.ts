@@ -116,6 +116,31 @@ describe('HTML report in chromium', () => {
     }
   });
 
+  it('clicking a node on the canvas focuses its page; hovering names it', async () => {
+    const o = await open(report, 'click');
+    try {
+      const target = report.pages.findIndex((p) => p.depth === null);
+      await o.page.locator('#lw-canvas').scrollIntoViewIfNeeded();
+      const at = await o.page.evaluate((id) => {
+        const raw = JSON.parse(document.getElementById('lw-data').textContent);
+        const box = document.getElementById('lw-canvas').getBoundingClientRect();
+        const pos = raw.overview.positions;
+        return { x: box.x + (pos[2 * id] * box.width) / 1000, y: box.y + (pos[2 * id + 1] * box.height) / 640 };
+      }, target);
+      await o.page.mouse.move(at.x, at.y);
+      expect(await o.page.isVisible('#lw-tip')).toBe(true);
+      expect(await o.page.textContent('#lw-tip')).toContain(report.pages[target]!.route);
+      await o.page.mouse.click(at.x, at.y);
+      expect(await o.page.textContent('#lw-focus-title')).toBe(report.pages[target]!.title);
+      expect(await o.page.textContent('#lw-focus-flags')).toMatch(/orphan|unreachable/);
+      // Whole site goes back to the overview.
+      await o.page.click('#lw-overview-btn');
+      expect(await o.page.$$eval('#lw-lost-list button', (b) => b.length)).toBe(report.stats.unreachable);
+    } finally {
+      await o.close();
+    }
+  });
+
   it('is keyboard usable: Tab reaches the search box, Enter on a header sorts', async () => {
     const o = await open(report, 'keyboard');
     try {

@@ -134,7 +134,7 @@ button:hover { background: #eef2f8; }
 .lw-footer { color: var(--lw-muted); font-size: 12px; margin-top: 20px; }
 @media (max-width: 900px) {
   .lw-row, .lw-graph-wrap { grid-template-columns: 1fr; }
-  .lw-top { columns: 1; }
+  .lw-top, .lw-deep { columns: 1; }
 }
 @media print {
   body { background: #fff; }
