@@ -1,6 +1,7 @@
 /** `formatReport`: the built-in formatters by id. */
 import { EngineError } from '../errors.js';
 import type { Report } from '../types.js';
+import { htmlFormatter } from './formatters/html.js';
 import { jsonFormatter } from './formatters/json.js';
 import { markdownFormatter } from './formatters/markdown.js';
 import { sarifFormatter } from './formatters/sarif.js';
@@ -8,11 +9,12 @@ import { textFormatter } from './formatters/text.js';
 import type { FormatContext, FormatId, Formatter } from './types.js';
 
 /** The built-in formatters, by id. */
-export const formatters: Readonly<Partial<Record<FormatId, Formatter>>> = {
+export const formatters: Readonly<Record<FormatId, Formatter>> = {
   text: textFormatter,
   json: jsonFormatter,
   markdown: markdownFormatter,
   sarif: sarifFormatter,
+  html: htmlFormatter,
 };
 
 /** The formatter ids, for messages and flag validation. */
