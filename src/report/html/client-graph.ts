@@ -243,7 +243,8 @@ let resizeTimer = 0;
 window.addEventListener('resize', function () { clearTimeout(resizeTimer); resizeTimer = setTimeout(draw, 80); });
 window.addEventListener('beforeprint', draw);
 
-const startRoute = location.hash.indexOf('#page=') === 0 ? decodeURIComponent(location.hash.slice(6)) : null;
+let startRoute = null;
+try { if (location.hash.indexOf('#page=') === 0) startRoute = decodeURIComponent(location.hash.slice(6)); } catch (e) { startRoute = null; }
 if (startRoute !== null && BY_ROUTE.has(startRoute)) focusPage(BY_ROUTE.get(startRoute));
 else showOverview();
 document.documentElement.setAttribute('data-ready', 'true');
