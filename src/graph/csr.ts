@@ -50,71 +50,83 @@ function grow(list: EdgeList): void {
  * Forward and reverse CSR of `n` nodes from an edge list. Edges whose ends are not in
  * [0, n) and self-edges are dropped; parallel edges are merged (weights summed in double
  * precision, then stored as float32; flags OR-ed).
+ *
+ * An LSD radix sort on (source, target) that moves the edge data itself, not edge indices:
+ * each pass reads its input in order and scatters into buckets, so the only random accesses
+ * are the bucket writes (indirect reads through an index array cost a cache miss per edge).
  */
 export function buildCsr(edges: EdgeList, n: number): { forward: Csr; reverse: Csr } {
   const m = edges.length;
-  const { from, to } = edges;
-  // Pass 1: stable counting sort of the kept edge indices by target.
-  const count = new Int32Array(n + 1);
-  let kept = 0;
+  const { from, to, weight, flags } = edges;
+  // Pass 1: bucket the kept edges by target (stable); the target is implied by the bucket.
+  const cursor = new Int32Array(n + 1);
+  for (let e = 0; e < m; e++) {
+    const f = from[e];
+    const t = to[e];
+    if (f !== t && f >= 0 && t >= 0 && f < n && t < n) cursor[t + 1]++;
+  }
+  for (let i = 0; i < n; i++) cursor[i + 1] += cursor[i];
+  const kept = cursor[n];
+  const byTarget = cursor.slice(); // byTarget[t] = start of bucket t, kept for pass 2
+  const srcA = new Int32Array(kept);
+  const wA = new Float32Array(kept);
+  const flA = new Uint8Array(kept);
   for (let e = 0; e < m; e++) {
     const f = from[e];
     const t = to[e];
     if (f === t || f < 0 || t < 0 || f >= n || t >= n) continue;
-    count[t + 1]++;
-    kept++;
+    const p = cursor[t]++;
+    srcA[p] = f;
+    wA[p] = weight[e];
+    flA[p] = flags[e];
   }
-  for (let i = 0; i < n; i++) count[i + 1] += count[i];
-  const byTarget = new Int32Array(kept);
-  for (let e = 0; e < m; e++) {
-    const f = from[e];
-    const t = to[e];
-    if (f === t || f < 0 || t < 0 || f >= n || t >= n) continue;
-    byTarget[count[t]++] = e;
-  }
-  // Pass 2: stable counting sort by source: (source, target) order.
-  count.fill(0);
-  for (let k = 0; k < kept; k++) count[from[byTarget[k]] + 1]++;
-  for (let i = 0; i < n; i++) count[i + 1] += count[i];
-  const ordered = new Int32Array(kept);
-  for (let k = 0; k < kept; k++) {
-    const e = byTarget[k];
-    ordered[count[from[e]]++] = e;
-  }
-  // Pass 3: merge runs of the same pair.
-  let unique = 0;
-  for (let k = 0; k < kept; k++) {
-    const e = ordered[k];
-    if (k === 0 || from[e] !== from[ordered[k - 1]] || to[e] !== to[ordered[k - 1]]) unique++;
-  }
-  const offsets = new Int32Array(n + 1);
-  const targets = new Int32Array(unique);
-  const weights = new Float32Array(unique);
-  const flags = new Uint8Array(unique);
-  let out = -1;
-  let sum = 0;
-  let lastFrom = -1;
-  let lastTo = -1;
-  for (let k = 0; k < kept; k++) {
-    const e = ordered[k];
-    const f = from[e];
-    const t = to[e];
-    if (f !== lastFrom || t !== lastTo) {
-      if (out >= 0) weights[out] = sum;
-      out++;
-      targets[out] = t;
-      flags[out] = 0;
-      sum = 0;
-      offsets[f + 1]++;
-      lastFrom = f;
-      lastTo = t;
+  // Pass 2: bucket by source (stable), visiting targets in order: rows come out sorted by target.
+  cursor.fill(0);
+  for (let k = 0; k < kept; k++) cursor[srcA[k] + 1]++;
+  for (let i = 0; i < n; i++) cursor[i + 1] += cursor[i];
+  const rowStart = cursor.slice();
+  const tB = new Int32Array(kept);
+  const wB = new Float32Array(kept);
+  const flB = new Uint8Array(kept);
+  for (let t = 0; t < n; t++) {
+    const end = byTarget[t + 1];
+    for (let k = byTarget[t]; k < end; k++) {
+      const p = cursor[srcA[k]]++;
+      tB[p] = t;
+      wB[p] = wA[k];
+      flB[p] = flA[k];
     }
-    sum += edges.weight[e];
-    flags[out] |= edges.flags[e];
   }
-  if (out >= 0) weights[out] = sum;
-  for (let i = 0; i < n; i++) offsets[i + 1] += offsets[i];
-  const forward: Csr = { offsets, targets, weights, flags };
+  // Pass 3: merge runs of one target within each row, in place (the write index never passes
+  // the read index), summing weights in double precision.
+  const offsets = new Int32Array(n + 1);
+  let out = 0;
+  for (let u = 0; u < n; u++) {
+    const end = rowStart[u + 1];
+    let k = rowStart[u];
+    while (k < end) {
+      const t = tB[k];
+      let sum = wB[k];
+      let fl = flB[k];
+      k++;
+      while (k < end && tB[k] === t) {
+        sum += wB[k];
+        fl |= flB[k];
+        k++;
+      }
+      tB[out] = t;
+      wB[out] = sum;
+      flB[out] = fl;
+      out++;
+    }
+    offsets[u + 1] = out;
+  }
+  const forward: Csr = {
+    offsets,
+    targets: out === kept ? tB : tB.slice(0, out),
+    weights: out === kept ? wB : wB.slice(0, out),
+    flags: out === kept ? flB : flB.slice(0, out),
+  };
   return { forward, reverse: transpose(forward, n) };
 }
 

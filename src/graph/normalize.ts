@@ -24,6 +24,9 @@ import type { ResolvedOptions } from '../options.js';
 /** The route options the normalisation reads. */
 export type RouteOptions = ResolvedOptions['routes'];
 
+/** A `%` to decode, or a character `encodeRouteSegment` encodes. */
+const NEEDS_CODING = /[%\\?#\u0000-\u001f\u007f]/;
+
 const SOURCE_EXTENSIONS = new Set(['.md', '.markdown', '.mdx', '.html', '.htm']);
 const MARKDOWN_EXTENSIONS = new Set(['.md', '.markdown', '.mdx']);
 
@@ -80,6 +83,13 @@ export function decodePathSegments(path: string): string[] | null {
  * leading `/` gets one. Null when the path does not decode.
  */
 export function canonicalPath(path: string): string | null {
+  if (!NEEDS_CODING.test(path)) {
+    // Nothing to decode or encode (the common case): only the leading slash and index files.
+    const p = path.charCodeAt(0) === 0x2f ? path : '/' + path;
+    if (p.endsWith('/index.html')) return p.slice(0, -10);
+    if (p.endsWith('/index.htm')) return p.slice(0, -9);
+    return p;
+  }
   const segments = decodePathSegments(path);
   if (segments === null) return null;
   const last = segments.length - 1;

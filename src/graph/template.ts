@@ -19,28 +19,42 @@ export function markTemplateLinks(links: readonly ResolvedLink[], pageCount: num
   if (pageCount < TEMPLATE_MIN_PAGES) return links.slice();
   // A link on a single page does not repeat, whatever the share.
   const threshold = Math.max(2, Math.ceil(share * pageCount - 1e-9));
-  const seen = new Map<string, { pages: number; last: number }>();
-  const keys: string[] = new Array(links.length);
-  for (let i = 0; i < links.length; i++) {
-    const link = links[i]!;
+  // Pass 1: distinct pages per target, texts aside (typed arrays for page targets). Only the
+  // targets that reach the threshold can carry a template link, so pass 2 keys few links.
+  const perPage = new Int32Array(pageCount);
+  const lastFrom = new Int32Array(pageCount).fill(-1);
+  const perOther = new Map<string, Counter>();
+  for (const link of links) {
     if (link.from < 0) continue;
-    const key = templateKey(link);
-    keys[i] = key;
-    const entry = seen.get(key);
-    if (entry === undefined) seen.set(key, { pages: 1, last: link.from });
-    else if (entry.last !== link.from) {
-      entry.pages++;
-      entry.last = link.from;
-    }
+    if (link.to >= 0) {
+      if (lastFrom[link.to] !== link.from) {
+        lastFrom[link.to] = link.from;
+        perPage[link.to]++;
+      }
+    } else count(perOther, link.target, link.from);
   }
-  const out: ResolvedLink[] = new Array(links.length);
-  for (let i = 0; i < links.length; i++) {
-    const link = links[i]!;
-    const key = keys[i];
-    const repeated = key !== undefined && link.context !== 'template' && seen.get(key)!.pages >= threshold;
-    out[i] = repeated ? { ...link, context: 'template' } : link;
+  const candidate = (link: ResolvedLink) =>
+    link.from >= 0 && link.context !== 'template' && (link.to >= 0 ? perPage[link.to] >= threshold : perOther.get(link.target)!.pages >= threshold);
+  // Pass 2: distinct pages per (target, text) among the candidates.
+  const perKey = new Map<string, Counter>();
+  for (const link of links) if (candidate(link)) count(perKey, templateKey(link), link.from);
+  if (perKey.size === 0) return links.slice();
+  return links.map((link) => (candidate(link) && perKey.get(templateKey(link))!.pages >= threshold ? { ...link, context: 'template' } : link));
+}
+
+interface Counter {
+  pages: number;
+  last: number;
+}
+
+/** Count page `from` once per key (links come grouped by page). */
+function count(map: Map<string, Counter>, key: string, from: number): void {
+  const c = map.get(key);
+  if (c === undefined) map.set(key, { pages: 1, last: from });
+  else if (c.last !== from) {
+    c.pages++;
+    c.last = from;
   }
-  return out;
 }
 
 /** Same target (kind and resolved target, fragment aside) and same text, whitespace collapsed. */
