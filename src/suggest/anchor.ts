@@ -9,9 +9,18 @@
  * no punctuation), so a phrase never crosses a sentence, a line or markup. It starts and ends
  * on a kept word, so it is never made of stop words only.
  *
+ * What counts as a match:
+ * - the whole title or a whole alias;
+ * - part of one (two words or more, or one key term) that contains the name's rarest word (the
+ *   stem with the smallest document frequency): "tile cache" alone does not stand for
+ *   "Warming the tile cache", "warming the tile cache" does;
+ * - a run of key terms written next to each other (no stop word between them): two or more
+ *   words, or one of the target's two heaviest terms.
+ * A phrase made only of words of the source's own title is the source speaking of itself, never
+ * an anchor for another page.
+ *
  * Quality = number of matched words, plus 2 for the whole title (0.5 for part of it), 1 for a
- * whole alias (0.3 for part of it); ties go to the earlier phrase. A one-word match counts only
- * when that word is a key term of the target (or the whole title).
+ * whole alias (0.3 for part of it); ties go to the earlier phrase.
  */
 import type { TextSpan } from '../types.js';
 import { forEachWord, isStopWord, stemToken, tokenize } from '../text/tokenize.js';
@@ -35,14 +44,22 @@ export interface AnchorMatch {
   readonly quality: number;
 }
 
+/** A name of the target (its title or an alias) as stems, with the stems a partial match must include. */
+export interface TargetName {
+  readonly stems: readonly string[];
+  /** The rarest stems of the name (smallest document frequency). */
+  readonly rarest: ReadonlySet<string>;
+}
+
 /** The words of a target page an anchor may match. */
 export interface TargetNames {
-  /** Stems of the title, in order. */
-  readonly title: readonly string[];
-  /** Stems of each alias (route segment words), in order; none equal to the title. */
-  readonly aliases: readonly (readonly string[])[];
+  readonly title: TargetName;
+  /** Each alias (route segment words); none equal to the title. */
+  readonly aliases: readonly TargetName[];
   /** Stems of the target's key terms. */
   readonly keyTerms: ReadonlySet<string>;
+  /** The heaviest key terms, which may stand alone as an anchor. */
+  readonly topKeyTerms: ReadonlySet<string>;
 }
 
 /** A source page's prose, tokenised once for all targets. */
@@ -55,6 +72,10 @@ export interface SourceTokens {
   readonly span: number[];
   /** joinNext[i]: word i and word i + 1 may be in one phrase. */
   readonly joinNext: boolean[];
+  /** joinDirect[i]: only spaces or hyphens (no stop word) between word i and word i + 1. */
+  readonly joinDirect: boolean[];
+  /** Stems of the source page's own title. */
+  readonly ownTitle: ReadonlySet<string>;
   /** stem -> indices of the kept words with that stem, ascending. */
   readonly positions: Map<string, number[]>;
 }
@@ -64,9 +85,22 @@ const MAX_GAP_STOP_WORDS = 2;
 /** Options kept per (source, target) pair, so a later target can take another phrase. */
 export const ANCHOR_OPTIONS = 3;
 
+/** Keys terms that may be an anchor on their own. */
+const TOP_KEY_TERMS = 2;
+
 /** Tokenise a source page's spans for anchor matching. */
-export function prepareSource(spans: readonly TextSpan[], cache: StemCache): SourceTokens {
-  const out: SourceTokens = { spans, stem: [], start: [], end: [], span: [], joinNext: [], positions: new Map() };
+export function prepareSource(spans: readonly TextSpan[], cache: StemCache, title = ''): SourceTokens {
+  const out: SourceTokens = {
+    spans,
+    stem: [],
+    start: [],
+    end: [],
+    span: [],
+    joinNext: [],
+    joinDirect: [],
+    ownTitle: new Set(tokenize(title, cache)),
+    positions: new Map(),
+  };
   spans.forEach((span, si) => {
     let last = -1;
     let stopWords = 0;
@@ -82,12 +116,16 @@ export function prepareSource(spans: readonly TextSpan[], cache: StemCache): Sou
         return;
       }
       const i = out.stem.length;
-      if (last >= 0) out.joinNext[last] = !bad && stopWords <= MAX_GAP_STOP_WORDS;
+      if (last >= 0) {
+        out.joinNext[last] = !bad && stopWords <= MAX_GAP_STOP_WORDS;
+        out.joinDirect[last] = !bad && stopWords === 0;
+      }
       out.stem.push(stem);
       out.start.push(start);
       out.end.push(end);
       out.span.push(si);
       out.joinNext.push(false);
+      out.joinDirect.push(false);
       const list = out.positions.get(stem);
       if (list === undefined) out.positions.set(stem, [i]);
       else list.push(i);
@@ -113,19 +151,34 @@ export function routeWords(route: string, cache: StemCache): string[] {
   return tokenize(decoded.replace(/\.(?:html?|md|markdown|mdx)$/i, '').replace(/[-_.+~]+/g, ' '), cache);
 }
 
-/** The names of a target page. */
-export function targetNames(title: string, routes: readonly string[], keyTerms: readonly string[], cache: StemCache): TargetNames {
+/**
+ * The names of a target page.
+ * @param keyTerms the target's key terms, heaviest first
+ * @param df document frequency of a stem (0 when the index does not know it)
+ */
+export function targetNames(
+  title: string,
+  routes: readonly string[],
+  keyTerms: readonly string[],
+  cache: StemCache,
+  df: (stem: string) => number = () => 0,
+): TargetNames {
+  const name = (stems: string[]): TargetName => {
+    let min = Infinity;
+    for (const s of stems) min = Math.min(min, df(s));
+    return { stems, rarest: new Set(stems.filter((s) => df(s) === min)) };
+  };
   const titleStems = tokenize(title, cache);
   const seen = new Set([titleStems.join(' ')]);
-  const aliases: string[][] = [];
+  const aliases: TargetName[] = [];
   for (const route of routes) {
     const words = routeWords(route, cache);
     const key = words.join(' ');
     if (words.length === 0 || seen.has(key)) continue;
     seen.add(key);
-    aliases.push(words);
+    aliases.push(name(words));
   }
-  return { title: titleStems, aliases, keyTerms: new Set(keyTerms) };
+  return { title: name(titleStems), aliases, keyTerms: new Set(keyTerms), topKeyTerms: new Set(keyTerms.slice(0, TOP_KEY_TERMS)) };
 }
 
 interface Candidate {
@@ -142,7 +195,13 @@ interface Candidate {
  */
 export function findAnchors(source: SourceTokens, names: TargetNames, avoid: readonly (readonly [number, number])[] = []): AnchorMatch[] {
   const found: Candidate[] = [];
-  const sequence = (pattern: readonly string[], kind: 'title' | 'alias'): void => {
+  const own = (first: number, words: number): boolean => {
+    if (source.ownTitle.size === 0) return false;
+    for (let k = first; k < first + words; k++) if (!source.ownTitle.has(source.stem[k]!)) return false;
+    return true;
+  };
+  const sequence = (name: TargetName, kind: 'title' | 'alias'): void => {
+    const pattern = name.stems;
     for (let j = 0; j < pattern.length; j++) {
       for (const i of source.positions.get(pattern[j]!) ?? []) {
         // Start only where the match cannot be extended to the left.
@@ -150,7 +209,13 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
         let len = 1;
         while (j + len < pattern.length && source.joinNext[i + len - 1] && source.stem[i + len] === pattern[j + len]) len++;
         const whole = j === 0 && len === pattern.length;
-        if (len === 1 && !whole && !names.keyTerms.has(pattern[j]!)) continue;
+        if (!whole) {
+          if (len === 1 && !names.keyTerms.has(pattern[j]!)) continue;
+          let rare = false;
+          for (let k = 0; k < len && !rare; k++) rare = name.rarest.has(pattern[j + k]!);
+          if (!rare) continue;
+        }
+        if (own(i, len)) continue;
         const bonus = kind === 'title' ? (whole ? 2 : 0.5) : whole ? 1 : 0.3;
         found.push({ first: i, words: len, kind, quality: len + bonus });
       }
@@ -160,9 +225,11 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
   for (const alias of names.aliases) sequence(alias, 'alias');
   for (const key of names.keyTerms) {
     for (const i of source.positions.get(key) ?? []) {
-      if (i > 0 && source.joinNext[i - 1] && names.keyTerms.has(source.stem[i - 1]!)) continue;
+      if (i > 0 && source.joinDirect[i - 1] && names.keyTerms.has(source.stem[i - 1]!)) continue;
       let len = 1;
-      while (source.joinNext[i + len - 1] && names.keyTerms.has(source.stem[i + len]!)) len++;
+      while (source.joinDirect[i + len - 1] && names.keyTerms.has(source.stem[i + len]!)) len++;
+      if (len === 1 && !names.topKeyTerms.has(key)) continue;
+      if (own(i, len)) continue;
       found.push({ first: i, words: len, kind: 'key-terms', quality: len });
     }
   }

@@ -13,6 +13,9 @@
  *   `maxDepth` (depth + 1 > maxDepth); {@link REACH_UNREACHABLE} for an unreachable source, which
  *   cannot help depth and passes on only the rank it has.
  * - anchor = 1 with an anchor phrase, {@link NO_ANCHOR} without ("no anchor phrase").
+ *
+ * A suggestion without an anchor asks the writer to compose a sentence, which is worth it only
+ * for closely related pages: it needs {@link NO_ANCHOR_SIMILARITY} x `suggest.minSimilarity`.
  */
 
 /** Factor of a reachable source that is too deep to fix the target's depth. */
@@ -21,6 +24,8 @@ export const REACH_TOO_DEEP = 0.6;
 export const REACH_UNREACHABLE = 0.3;
 /** Factor of a suggestion without an anchor phrase. */
 export const NO_ANCHOR = 0.5;
+/** Multiple of `suggest.minSimilarity` that a suggestion without an anchor phrase needs. */
+export const NO_ANCHOR_SIMILARITY = 2;
 
 /** The parts of a candidate's score. */
 export interface ScoreInput {

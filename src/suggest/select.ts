@@ -3,7 +3,7 @@
  * `suggest.maxNewLinksPerPage` new links per source and `suggest.perTarget` per target, and no
  * two targets anchored on overlapping text of the same source. When a pair's phrase is taken,
  * its next phrase is used; when none is left it falls back to no anchor (lower score) and
- * waits for its turn again.
+ * waits for its turn again, if its similarity allows a suggestion without an anchor.
  */
 import type { AnchorMatch } from './anchor.js';
 import type { CandidatePair } from './candidates.js';
@@ -31,9 +31,15 @@ interface Entry {
 
 /**
  * Choose suggestions greedily.
+ * @param minSimilarityWithoutAnchor a pair whose phrases are all taken stays only with this similarity
  * @returns chosen pairs in the order they were chosen
  */
-export function chooseSuggestions(pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): Chosen[] {
+export function chooseSuggestions(
+  pairs: readonly ScoredPair[],
+  maxPerSource: number,
+  maxPerTarget: number,
+  minSimilarityWithoutAnchor = 0,
+): Chosen[] {
   const before = (a: Entry, b: Entry): boolean => {
     if (a.score !== b.score) return a.score > b.score;
     const pa = pairs[a.pair]!;
@@ -56,7 +62,7 @@ export function chooseSuggestions(pairs: readonly ScoredPair[], maxPerSource: nu
       let k = e.option;
       while (k < pair.anchors.length && !free(pair.anchors[k]!)) k++;
       if (k === pair.anchors.length) {
-        heap.push({ pair: e.pair, score: withAnchor(pair.base, false), option: -1 });
+        if (pair.similarity >= minSimilarityWithoutAnchor) heap.push({ pair: e.pair, score: withAnchor(pair.base, false), option: -1 });
         continue;
       }
       anchor = pair.anchors[k]!;

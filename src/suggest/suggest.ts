@@ -19,14 +19,14 @@ import { depthState, pagerankWithLinks, rankModel } from './impact.js';
 import { computeImportance } from './importance.js';
 import { reasonText } from './reason.js';
 import { repairPlan } from './repair.js';
-import { baseScore } from './score.js';
+import { baseScore, NO_ANCHOR_SIMILARITY } from './score.js';
 import { chooseSuggestions } from './select.js';
 import type { ScoredPair } from './select.js';
 import type { SuggestInput, SuggestResult } from './types.js';
 import { findUnderlinked, pagerankPercentiles } from './underlinked.js';
 
 /** Key terms of a target that an anchor may match: its heaviest TF-IDF terms. */
-export const KEY_TERMS = 8;
+export const KEY_TERMS = 5;
 
 /** Propose links for the site. Pure: same input, same output. */
 export function suggestLinks(input: SuggestInput, options: ResolvedOptions): SuggestResult {
@@ -50,21 +50,35 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
   // Anchors: each source's spans tokenised once, for all its targets.
   const cache = createStemCache();
   const names = new Map<number, TargetNames>();
+  const df = (stem: string): number => {
+    // index.terms is sorted by code unit: binary search
+    let lo = 0;
+    let hi = index.terms.length - 1;
+    while (lo <= hi) {
+      const mid = (lo + hi) >> 1;
+      const t = index.terms[mid]!;
+      if (t === stem) return index.df[mid]!;
+      if (t < stem) lo = mid + 1;
+      else hi = mid - 1;
+    }
+    return 0;
+  };
   const namesOf = (t: number): TargetNames => {
     let v = names.get(t);
     if (v === undefined) {
       const page = graph.pages[t]!;
       const keys = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS).map((id) => index.terms[id]!) : [];
-      v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache);
+      v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache, df);
       names.set(t, v);
     }
     return v;
   };
   const bySource = [...pairs].sort((a, b) => a.source - b.source || a.target - b.target);
   const scored: ScoredPair[] = [];
+  const minSimilarityWithoutAnchor = NO_ANCHOR_SIMILARITY * settings.minSimilarity;
   for (let i = 0; i < bySource.length; ) {
     const source = bySource[i]!.source;
-    const tokens = prepareSource(factsOf(source)?.spans ?? [], cache);
+    const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source]!.title);
     for (; i < bySource.length && bySource[i]!.source === source; i++) {
       const pair = bySource[i]!;
       const targetDepth = ranking.depth[pair.target]!;
@@ -75,11 +89,13 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
         targetNeedsDepth: targetDepth < 0 || targetDepth > maxDepth,
         maxDepth,
       });
-      scored.push({ ...pair, base, anchors: findAnchors(tokens, namesOf(pair.target)) });
+      const anchors = findAnchors(tokens, namesOf(pair.target));
+      if (anchors.length === 0 && pair.similarity < minSimilarityWithoutAnchor) continue;
+      scored.push({ ...pair, base, anchors });
     }
   }
 
-  const chosen = chooseSuggestions(scored, settings.maxNewLinksPerPage, settings.perTarget);
+  const chosen = chooseSuggestions(scored, settings.maxNewLinksPerPage, settings.perTarget, minSimilarityWithoutAnchor);
   const model = rankModel(graph, ranking, options);
   const depths = depthState(graph, ranking, options);
   const made = chosen.map(({ pair, anchor, score }): { suggestion: Suggestion; source: number; target: number } => {

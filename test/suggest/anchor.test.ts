@@ -48,6 +48,28 @@ describe('findAnchors', () => {
     expect(keyed.map((a) => a.text)).toEqual(['logs']);
   });
 
+  it('takes part of a name only with its rarest word', () => {
+    const df = (stem: string): number => ({ warm: 2, tile: 9, cach: 9 })[stem] ?? 0;
+    const names = targetNames('Warming the tile cache', [], [], cache, df);
+    expect(findAnchors(prepareSource([span('Every tile cache node keeps tiles.')], cache), names)).toEqual([]);
+    expect(findAnchors(prepareSource([span('Start warming the tile store first.')], cache), names).map((a) => a.text)).toEqual(['warming the tile']);
+  });
+
+  it('never anchors on the source page speaking of its own subject', () => {
+    const names = targetNames('Tile cache sizing', [], ['tile', 'cach'], cache);
+    const text = 'The tile cache holds rendered tiles.';
+    expect(findAnchors(prepareSource([span(text)], cache, 'Tile cache overview'), names)).toEqual([]);
+    expect(findAnchors(prepareSource([span(text)], cache, 'Renderers'), names)[0]?.text).toBe('tile cache');
+  });
+
+  it('joins key terms only when they are written next to each other', () => {
+    const names = targetNames('Warming', [], ['warm', 'node', 'cach'], cache);
+    expect(findAnchors(prepareSource([span('a cache node restarts')], cache), names).map((a) => a.text)).toEqual(['cache node']);
+    // "cache" alone is not one of the two heaviest key terms; with a stop word between, no run
+    expect(findAnchors(prepareSource([span('the cache of a disk')], cache), names)).toEqual([]);
+    expect(findAnchors(prepareSource([span('the node of the cache')], cache), names).map((a) => a.text)).toEqual(['node']);
+  });
+
   it('never gives a phrase made of stop words only', () => {
     const source = prepareSource([span('It is what it is, and then some.')], cache);
     expect(findAnchors(source, targetNames('What it is', ['/what-it-is/'], [], cache))).toEqual([]);
