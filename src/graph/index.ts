@@ -1,7 +1,10 @@
 /** The graph stage: parsed facts -> the site's internal link graph. */
 export { buildGraph } from './build.js';
-export { resolveLink, pageSource, navigationSource, fileUrlOf, SITE_ORIGIN } from './resolve.js';
-export type { ResolveContext, LinkSource } from './resolve.js';
+export { resolveLink } from './resolve.js';
+export { pageSource, navigationSource, fileUrlOf, SITE_ORIGIN } from './source.js';
+export { removeDotSegments, joinPath } from './paths.js';
+export type { ResolveContext } from './resolve.js';
+export type { LinkSource } from './source.js';
 export { buildRouteIndex, resolveRouteValue } from './routes.js';
 export type { RouteValue, IndexedPage, RouteIndexes } from './routes.js';
 export { markTemplateLinks, TEMPLATE_MIN_PAGES } from './template.js';

@@ -12,11 +12,10 @@
  * - Site-absolute links (`/a/b/`) are taken against `basePath`.
  * - The query is dropped, the fragment kept and checked against the target's ids.
  */
-import type { FileKind, LinkKind, LinkStatus, RawLink, ResolvedLink } from '../types.js';
+import type { LinkKind, LinkStatus, RawLink, ResolvedLink } from '../types.js';
 import type { RedirectEnd } from './types.js';
 import {
   canonicalPath,
-  decodePathSegments,
   encodeRouteSegment,
   extensionOf,
   isMarkdownExtension,
@@ -26,9 +25,10 @@ import {
   withBasePath,
 } from './normalize.js';
 import type { RouteOptions } from './normalize.js';
+import { decodeFragment, filePathOf, joinPath, pathPart, removeDotSegments, stripIndexFile } from './paths.js';
+import { SITE_ORIGIN } from './source.js';
+import type { LinkSource } from './source.js';
 
-/** The synthetic origin routes are resolved against. `.invalid` is reserved (RFC 2606). */
-export const SITE_ORIGIN = 'https://linkweave.invalid';
 
 const HOSTED_SCHEMES = new Set(['http:', 'https:', 'ftp:', 'ws:', 'wss:']);
 const SCHEME = /^[a-zA-Z][a-zA-Z0-9+.-]*:/;
@@ -40,12 +40,10 @@ const SITE_ABSOLUTE = /^[\\/](?![\\/])/;
  * resolution on large sites (`npm run bench`). Both paths give the same result (tested).
  */
 const PLAIN_HREF = /^[A-Za-z0-9\-._~/]+(?:#[A-Za-z0-9\-._~]*)?$/;
-/** A `.` or `..` segment. */
-const DOT_SEGMENT = /\/\.\.?(?:\/|$)/;
 /** Characters WHATWG `URL` strips from both ends of an href. */
 const URL_TRIM = /^[\u0000-\u0020]+|[\u0000-\u0020]+$/g;
 
-/** The indexes resolution looks things up in. Built once per graph by `createResolveContext`. */
+/** The indexes resolution looks things up in. Built once per graph by `buildGraph`. */
 export interface ResolveContext {
   readonly routes: RouteOptions;
   /** `routes.basePath` with a trailing slash. */
@@ -62,63 +60,6 @@ export interface ResolveContext {
   readonly pageRoutes: readonly string[];
   /** True when page `page` has the fragment target `id`. */
   hasId(page: number, id: string): boolean;
-}
-
-/** Where a link is written: a page, or the navigation file (`page` -1). */
-export interface LinkSource {
-  readonly page: number;
-  readonly kind: FileKind;
-  /** URL of the source file's own location (`SITE_ORIGIN` + `/` + file path). */
-  readonly fileUrl: string;
-  /** URL relative links resolve against: the `<base href>` when there is one, else the route URL. */
-  readonly baseUrl: string;
-  /** True when `baseUrl` comes from a `<base href>`. */
-  readonly hasBase: boolean;
-  /** Decoded folder of the source file (`guide/` for `guide/a.md`, '' at the root). */
-  readonly fileDir: string;
-  /**
-   * Canonical folder of the route URL (`/guide/a/` for `/guide/a/`, `/b/c/` for `/b/c/d;p`),
-   * or null when plain hrefs cannot be joined to it without `URL` (a `<base href>`, dot segments).
-   */
-  readonly routeDir: string | null;
-}
-
-/** The URL of a file path under the synthetic origin (`a/b c.md` -> `https://linkweave.invalid/a/b%20c.md`). */
-export function fileUrlOf(file: string): string {
-  return SITE_ORIGIN + '/' + file.split('/').map(encodeRouteSegment).join('/');
-}
-
-/**
- * The resolution source of a page: its file location, its route URL and its `<base href>`
- * (first base with an href, resolved against the route URL; ignored when it does not parse,
- * as the HTML standard says).
- */
-export function pageSource(page: number, kind: FileKind, file: string, route: string, baseHref?: string): LinkSource {
-  const path = route.startsWith('/') ? route : '/' + route;
-  const routeUrl = SITE_ORIGIN + path;
-  const fileUrl = fileUrlOf(file);
-  const fileDir = file.slice(0, file.lastIndexOf('/') + 1);
-  if (baseHref !== undefined && !baseHref.includes('\0')) {
-    try {
-      return { page, kind, fileUrl, baseUrl: new URL(baseHref, routeUrl).href, hasBase: true, fileDir, routeDir: null };
-    } catch {
-      // An unparsable base URL is ignored (HTML standard: fall back to the document URL).
-    }
-  }
-  const routeDir = DOT_SEGMENT.test(path) ? null : path.slice(0, path.lastIndexOf('/') + 1);
-  return { page, kind, fileUrl, baseUrl: routeUrl, hasBase: false, fileDir, routeDir };
-}
-
-/**
- * The resolution source of the navigation file: links resolve against the file's own
- * location, under `basePath` for route-style links.
- */
-export function navigationSource(file: string, basePath: string, kind: FileKind = 'markdown'): LinkSource {
-  const encoded = file.split('/').map(encodeRouteSegment).join('/');
-  const routePath = basePath + encoded;
-  const routeDir = DOT_SEGMENT.test(routePath) ? null : routePath.slice(0, routePath.lastIndexOf('/') + 1);
-  const fileDir = file.slice(0, file.lastIndexOf('/') + 1);
-  return { page: -1, kind, fileUrl: fileUrlOf(file), baseUrl: SITE_ORIGIN + routePath, hasBase: false, fileDir, routeDir };
 }
 
 /**
@@ -297,87 +238,8 @@ function classifyForeign(raw: RawLink, src: LinkSource, url: URL): ResolvedLink 
   return make(raw, src, -1, raw.href.replace(URL_TRIM, ''), '', 'other', 'other');
 }
 
-/**
- * RFC 3986 section 5.2.4 "remove_dot_segments" on an absolute path: `.` segments vanish, `..`
- * removes the segment before it (never above the root), a final `.` or `..` leaves a slash.
- */
-export function removeDotSegments(path: string): string {
-  if (path.indexOf('.') < 0) return path;
-  const parts = path.split('/');
-  const out: string[] = [];
-  const last = parts.length - 1;
-  for (let i = 1; i <= last; i++) {
-    const s = parts[i]!;
-    if (s === '.') {
-      if (i === last) out.push('');
-    } else if (s === '..') {
-      out.pop();
-      if (i === last) out.push('');
-    } else out.push(s);
-  }
-  return '/' + out.join('/');
-}
-
-/**
- * `removeDotSegments(dir + rel)` for a folder `dir` (`/a/b/`) and a relative path, with the
- * usual leading `./` and `../` taken off by string slicing (no split and join).
- */
-export function joinPath(dir: string, rel: string): string {
-  let d = dir;
-  let i = 0;
-  for (;;) {
-    if (rel.startsWith('./', i)) i += 2;
-    else if (rel.startsWith('../', i)) {
-      i += 3;
-      d = d.length > 1 ? d.slice(0, d.lastIndexOf('/', d.length - 2) + 1) : d;
-    } else break;
-  }
-  const rest = i === 0 ? rel : rel.slice(i);
-  const joined = d + rest;
-  return rest.indexOf('.') >= 0 && DOT_SEGMENT.test('/' + rest) ? removeDotSegments(joined) : joined;
-}
-
-/** `/a/index.html` and `/a/index.htm` stand for `/a/` (as `canonicalPath` does). */
-function stripIndexFile(path: string): string {
-  if (path.endsWith('/index.html')) return path.slice(0, -10);
-  if (path.endsWith('/index.htm')) return path.slice(0, -9);
-  return path;
-}
-
-/** Decoded file path (relative to the content root) of a URL path; null when it does not decode. */
-function filePathOf(pathname: string): string | null {
-  if (pathname.indexOf('%') < 0) return pathname.slice(1);
-  const segments = decodePathSegments(pathname);
-  if (segments === null) return null;
-  for (const s of segments) if (s.includes('/')) return null;
-  return segments.join('/');
-}
-
 function assetTarget(file: string, ctx: ResolveContext): string {
   return ctx.basePath + file.split('/').map(encodeRouteSegment).join('/');
-}
-
-/** Decoded fragment without `#`; null when it does not decode or holds a NUL. */
-function decodeFragment(hash: string): string | null {
-  if (hash.length <= 1) return '';
-  const raw = hash.slice(1);
-  if (raw.indexOf('%') < 0) return raw;
-  try {
-    const d = decodeURIComponent(raw);
-    return d.indexOf('\0') < 0 ? d : null;
-  } catch {
-    return null;
-  }
-}
-
-/** The path part of an href: before the first `?` or `#`. */
-function pathPart(href: string): string {
-  let end = href.length;
-  const q = href.indexOf('?');
-  if (q >= 0) end = q;
-  const h = href.indexOf('#');
-  if (h >= 0 && h < end) end = h;
-  return end === href.length ? href : href.slice(0, end);
 }
 
 function broken(raw: RawLink, src: LinkSource, target: string, kind: LinkKind, fragment = ''): ResolvedLink {
