@@ -1,4 +1,5 @@
 import { describe, it, expect } from 'vitest';
+import fc from 'fast-check';
 import { buildGraph } from '../../src/graph/index.js';
 import { rankGraph } from '../../src/rank/index.js';
 import type { Config } from '../../src/options.js';
@@ -52,5 +53,50 @@ describe('rankGraph', () => {
   it('the iteration limit comes from the options and is reported', () => {
     const r = ranked({ pagerankIterations: 2 }).ranking;
     expect(r).toMatchObject({ iterations: 2, converged: false });
+  });
+});
+
+describe('random sites through buildGraph and rankGraph (fast-check)', () => {
+  it('PageRank sums to 1 and click depth equals a BFS over the resolved links', () => {
+    const site = fc.integer({ min: 1, max: 12 }).chain((n) =>
+      fc.tuple(
+        fc.constant(n),
+        fc.array(fc.array(fc.tuple(fc.nat(n - 1), fc.constantFrom('file', 'route', 'external', 'broken'), fc.boolean()), { maxLength: 8 }), { minLength: n, maxLength: n }),
+      ),
+    );
+    fc.assert(
+      fc.property(site, fc.boolean(), ([n, linkLists], countTemplate) => {
+        const pages = linkLists.map((ls, i) =>
+          page(i === 0 ? 'index.md' : `s/p${i}.md`, i === 0 ? '/' : `/s/p${i}/`, {
+            links: ls.map(([j, how, template], k) =>
+              link(
+                how === 'file' ? (i === 0 ? '' : '../') + (j === 0 ? 'index.md' : `s/p${j}.md`) : how === 'route' ? (j === 0 ? '/' : `/s/p${j}/`) : how === 'external' ? 'https://example.test/' : '/nope/',
+                k + 1,
+                { context: template ? 'template' : 'content', text: `t${i}-${k}` },
+              ),
+            ),
+          }),
+        );
+        const opts = options({ depthCountsTemplate: countTemplate });
+        const graph = buildGraph({ pages, assets: [], navigation: null, redirects: [] }, opts);
+        const ranking = rankGraph(graph, opts);
+        let s = 0;
+        for (const x of ranking.pagerank) s += x;
+        expect(Math.abs(s - 1)).toBeLessThan(1e-12);
+        // Reference BFS straight from the resolved links.
+        const adj: number[][] = Array.from({ length: n }, () => []);
+        for (const l of graph.links) if (l.from >= 0 && l.to >= 0 && l.to !== l.from && (countTemplate || l.context === 'content')) adj[l.from]!.push(l.to);
+        const depth = new Array<number>(n).fill(-1);
+        const queue = [...graph.entries];
+        for (const e of queue) depth[e] = 0;
+        while (queue.length > 0) {
+          const u = queue.shift()!;
+          for (const v of adj[u]!) if (depth[v] === -1) { depth[v] = depth[u]! + 1; queue.push(v); }
+        }
+        expect([...ranking.depth]).toEqual(depth);
+        expect(graph.entries).toEqual([0]);
+      }),
+      { numRuns: 150, seed: 23 },
+    );
   });
 });
