@@ -4,11 +4,15 @@
  * This file only wires the stages together (DESIGN section 2); each stage is a pure function of
  * its inputs except `collect` (reads the sources) and the cache.
  */
+import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
+import { parseWithCache } from './cache/index.js';
 import { collectSources, readAuxFile } from './collect/index.js';
 import type { CollectResult } from './collect/index.js';
-import { parseSource, parseNavigation, parseRedirects } from './parse/index.js';
+import { parseNavigation, parseRedirects } from './parse/index.js';
 import type { Redirect } from './parse/index.js';
+import { parseFiles } from './parallel/index.js';
+import type { ParseHooks, WorkerStats } from './parallel/index.js';
 import { buildGraph } from './graph/index.js';
 import { rankGraph } from './rank/index.js';
 import { buildTermIndex, relatedPages, contentCentrality } from './text/index.js';
@@ -93,13 +97,26 @@ async function collectInputs(options: ResolvedOptions): Promise<CollectedInputs>
   return { sources, navigation, redirects, traffic, auxProblems };
 }
 
-async function parseAll(sources: CollectResult, options: ResolvedOptions, hooks: AnalyzeHooks): Promise<PageFacts[]> {
-  const total = sources.files.length;
-  const facts: PageFacts[] = [];
-  for (const file of sources.files) {
-    facts.push(parseSource(file, options));
-    if (facts.length % 256 === 0 || facts.length === total) hooks.onProgress?.('parse', facts.length, total);
-  }
+/**
+ * The parse stage: facts from the cache where they are current, the rest parsed on the main
+ * thread or in worker threads (`options.workers`), the cache saved. Cache problems never fail
+ * the run; they are in the stats given to `hooks.onParseStats`.
+ */
+async function parseAll(sources: CollectResult, options: ResolvedOptions, hooks: AnalyzeHooks & ParseHooks): Promise<PageFacts[]> {
+  const cores = availableParallelism();
+  let workers: WorkerStats = { threads: 1, batches: 0, fallback: null };
+  const { facts, stats } = await parseWithCache(sources.files, options, {
+    // `cache.dir` is relative to the working folder of this run.
+    dir: options.cache.enabled ? resolve(options.cache.dir) : null,
+    version: VERSION,
+    parseMisses: async (files, onParsed) => {
+      const parsed = await parseFiles(files, options, { cores, onParsed });
+      workers = parsed.stats;
+      return parsed.facts;
+    },
+    onProgress: (done, total) => hooks.onProgress?.('parse', done, total),
+  });
+  hooks.onParseStats?.({ cache: stats, workers });
   return facts;
 }
 

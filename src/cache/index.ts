@@ -1,0 +1,9 @@
+/** The page-facts cache: facts keyed by path, content hash, tool version and parse options. */
+export { parseWithCache } from './parse-cached.js';
+export { parseFingerprint } from './fingerprint.js';
+export { openCache } from './store.js';
+export type { CacheKey, CacheSession, Lookup } from './store.js';
+export { CACHE_SCHEMA, SHARDS, shardFileName, shardOfPath, isCacheable, packFacts, unpackFacts } from './format.js';
+export type { ShardHeader, StoredFacts } from './format.js';
+export { isStoredFacts } from './validate.js';
+export type { CacheSettings, CacheStats, IgnoredReason, ParseMisses } from './types.js';
