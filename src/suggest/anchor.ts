@@ -14,8 +14,10 @@
  * - part of one (two words or more, or one key term) that contains the name's rarest word (the
  *   stem with the smallest document frequency): "tile cache" alone does not stand for
  *   "Warming the tile cache", "warming the tile cache" does;
- * - a run of key terms written next to each other (no stop word between them): two or more
- *   words, or one of the target's two heaviest terms.
+ * - a run of two or more key terms written next to each other (no stop word between them), one
+ *   of them "strong" (the target is among the pages where it weighs most). A single key term is
+ *   not enough: read on the example site, lone words ("days", "folder", "kit") named the topic
+ *   of a sentence far more often than the target page.
  * A phrase made only of words of the source's own title is the source speaking of itself, never
  * an anchor for another page.
  *
@@ -58,8 +60,14 @@ export interface TargetNames {
   readonly aliases: readonly TargetName[];
   /** Stems of the target's key terms. */
   readonly keyTerms: ReadonlySet<string>;
-  /** The heaviest key terms, which may stand alone as an anchor. */
-  readonly topKeyTerms: ReadonlySet<string>;
+  /** Key terms for which the target is among the pages they weigh most in (a run needs one). */
+  readonly strongTerms: ReadonlySet<string>;
+}
+
+/** A target's key terms (heaviest first) and the strong ones among them. */
+export interface KeyTerms {
+  readonly all: readonly string[];
+  readonly strong: readonly string[];
 }
 
 /** A source page's prose, tokenised once for all targets. */
@@ -84,9 +92,6 @@ const GAP_CHARS = /^[ \t\u00a0\-'\u2019]*$/;
 const MAX_GAP_STOP_WORDS = 2;
 /** Options kept per (source, target) pair, so a later target can take another phrase. */
 export const ANCHOR_OPTIONS = 3;
-
-/** Keys terms that may be an anchor on their own. */
-const TOP_KEY_TERMS = 2;
 
 /** Tokenise a source page's spans for anchor matching. */
 export function prepareSource(spans: readonly TextSpan[], cache: StemCache, title = ''): SourceTokens {
@@ -153,13 +158,13 @@ export function routeWords(route: string, cache: StemCache): string[] {
 
 /**
  * The names of a target page.
- * @param keyTerms the target's key terms, heaviest first
+ * @param keyTerms the target's key terms; in a plain list every term counts as strong
  * @param df document frequency of a stem (0 when the index does not know it)
  */
 export function targetNames(
   title: string,
   routes: readonly string[],
-  keyTerms: readonly string[],
+  keyTerms: readonly string[] | KeyTerms,
   cache: StemCache,
   df: (stem: string) => number = () => 0,
 ): TargetNames {
@@ -178,7 +183,8 @@ export function targetNames(
     seen.add(key);
     aliases.push(name(words));
   }
-  return { title: name(titleStems), aliases, keyTerms: new Set(keyTerms), topKeyTerms: new Set(keyTerms.slice(0, TOP_KEY_TERMS)) };
+  const keys: KeyTerms = Array.isArray(keyTerms) ? { all: keyTerms, strong: keyTerms } : (keyTerms as KeyTerms);
+  return { title: name(titleStems), aliases, keyTerms: new Set(keys.all), strongTerms: new Set(keys.strong) };
 }
 
 interface Candidate {
@@ -228,7 +234,7 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
       if (i > 0 && source.joinDirect[i - 1] && names.keyTerms.has(source.stem[i - 1]!)) continue;
       let len = 1;
       while (source.joinDirect[i + len - 1] && names.keyTerms.has(source.stem[i + len]!)) len++;
-      if (len === 1 && !names.topKeyTerms.has(key)) continue;
+      if (len < 2 || !anyOf(source, i, len, names.strongTerms)) continue;
       if (own(i, len)) continue;
       found.push({ first: i, words: len, kind: 'key-terms', quality: len });
     }
@@ -245,6 +251,11 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
     if (out.length === ANCHOR_OPTIONS) break;
   }
   return out;
+}
+
+function anyOf(source: SourceTokens, first: number, words: number, set: ReadonlySet<string>): boolean {
+  for (let k = first; k < first + words; k++) if (set.has(source.stem[k]!)) return true;
+  return false;
 }
 
 function toMatch(source: SourceTokens, c: Candidate): AnchorMatch {

@@ -1,5 +1,5 @@
 /** The suggest stage (DESIGN section 7): importance, under-linked pages, link suggestions, impact, repair plan. */
-export { suggestLinks, compareSuggestions, KEY_TERMS } from './suggest.js';
+export { suggestLinks, compareSuggestions, KEY_TERMS, STRONG_LEADERS } from './suggest.js';
 export type { SuggestInput, SuggestResult, UnderlinkedPage, RepairPlan, ImportanceLevel } from './types.js';
 export { parseTraffic } from './traffic.js';
 export type { TrafficResult } from './traffic.js';
@@ -12,7 +12,7 @@ export type { CandidatePair } from './candidates.js';
 export { baseScore, withAnchor, NO_ANCHOR, REACH_TOO_DEEP, REACH_UNREACHABLE } from './score.js';
 export type { ScoreInput } from './score.js';
 export { findAnchors, prepareSource, targetNames, routeWords, positionInSpan, ANCHOR_OPTIONS } from './anchor.js';
-export type { AnchorMatch, AnchorKind, TargetNames, SourceTokens } from './anchor.js';
+export type { AnchorMatch, AnchorKind, TargetName, TargetNames, KeyTerms, SourceTokens } from './anchor.js';
 export { chooseSuggestions } from './select.js';
 export type { ScoredPair, Chosen } from './select.js';
 export { rankModel, pagerankWithLinks, DepthState, depthState } from './impact.js';

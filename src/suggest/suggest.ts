@@ -10,7 +10,7 @@
 import type { ResolvedOptions } from '../options.js';
 import type { PageFacts, Suggestion } from '../types.js';
 import { createStemCache } from '../text/tokenize.js';
-import { topTerms } from '../text/tfidf.js';
+import { termLeaders, topTerms } from '../text/tfidf.js';
 import { findAnchors, prepareSource, targetNames } from './anchor.js';
 import type { TargetNames } from './anchor.js';
 import { findCandidates } from './candidates.js';
@@ -27,6 +27,8 @@ import { findUnderlinked, pagerankPercentiles } from './underlinked.js';
 
 /** Key terms of a target that an anchor may match: its heaviest TF-IDF terms. */
 export const KEY_TERMS = 5;
+/** A key term is strong for a target among the pages it weighs most in (this many). */
+export const STRONG_LEADERS = 3;
 
 /** Propose links for the site. Pure: same input, same output. */
 export function suggestLinks(input: SuggestInput, options: ResolvedOptions): SuggestResult {
@@ -50,6 +52,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
   // Anchors: each source's spans tokenised once, for all its targets.
   const cache = createStemCache();
   const names = new Map<number, TargetNames>();
+  const leaders = termLeaders(index, STRONG_LEADERS);
   const df = (stem: string): number => {
     // index.terms is sorted by code unit: binary search
     let lo = 0;
@@ -67,7 +70,15 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     let v = names.get(t);
     if (v === undefined) {
       const page = graph.pages[t]!;
-      const keys = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS).map((id) => index.terms[id]!) : [];
+      const ids = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS) : [];
+      const leads = (id: number): boolean => {
+        for (let k = 0; k < STRONG_LEADERS; k++) if (leaders[id * STRONG_LEADERS + k] === t) return true;
+        return false;
+      };
+      const keys = {
+        all: ids.map((id) => index.terms[id]!),
+        strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]!),
+      };
       v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache, df);
       names.set(t, v);
     }

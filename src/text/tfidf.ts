@@ -207,3 +207,32 @@ export function topTerms(index: TermIndex, page: number, count: number): number[
   ids.sort((x, y) => index.docWeights[y]! - index.docWeights[x]! || index.docTerms[x]! - index.docTerms[y]!);
   return ids.slice(0, count).map((e) => index.docTerms[e]!);
 }
+
+/**
+ * For every term, the `count` pages where it weighs most (heaviest first, ties by page id),
+ * as a flat array: entries `[t * count, (t + 1) * count)` of term t, -1 where the term has fewer
+ * pages. One pass over the index.
+ */
+export function termLeaders(index: TermIndex, count: number): Int32Array {
+  const t = index.terms.length;
+  const pages = new Int32Array(t * count).fill(-1);
+  const weights = new Float64Array(t * count).fill(-1);
+  const n = index.docOffsets.length - 1;
+  for (let d = 0; d < n; d++) {
+    for (let e = index.docOffsets[d]!; e < index.docOffsets[d + 1]!; e++) {
+      const base = index.docTerms[e]! * count;
+      const w = index.docWeights[e]!;
+      // pages arrive in ascending id, so an equal weight never displaces an earlier page
+      let slot = count;
+      while (slot > 0 && w > weights[base + slot - 1]!) slot--;
+      if (slot === count) continue;
+      for (let k = count - 1; k > slot; k--) {
+        pages[base + k] = pages[base + k - 1]!;
+        weights[base + k] = weights[base + k - 1]!;
+      }
+      pages[base + slot] = d;
+      weights[base + slot] = w;
+    }
+  }
+  return pages;
+}

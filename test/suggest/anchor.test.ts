@@ -41,11 +41,11 @@ describe('findAnchors', () => {
     }
   });
 
-  it('takes one word only when it is a key term of the target', () => {
+  it('takes one word of a name only when it is a key term of the target', () => {
     const source = prepareSource([span('Rotate the logs daily.')], cache);
     expect(findAnchors(source, targetNames('Log rotation policy', [], [], cache))).toEqual([]);
     const keyed = findAnchors(source, targetNames('Log rotation policy', [], ['log'], cache));
-    expect(keyed.map((a) => a.text)).toEqual(['logs']);
+    expect(keyed.map((a) => [a.text, a.kind])).toEqual([['logs', 'title']]);
   });
 
   it('takes part of a name only with its rarest word', () => {
@@ -63,11 +63,13 @@ describe('findAnchors', () => {
   });
 
   it('joins key terms only when they are written next to each other', () => {
-    const names = targetNames('Warming', [], ['warm', 'node', 'cach'], cache);
+    const names = targetNames('Warming', [], { all: ['warm', 'node', 'cach'], strong: ['node'] }, cache);
     expect(findAnchors(prepareSource([span('a cache node restarts')], cache), names).map((a) => a.text)).toEqual(['cache node']);
-    // "cache" alone is not one of the two heaviest key terms; with a stop word between, no run
-    expect(findAnchors(prepareSource([span('the cache of a disk')], cache), names)).toEqual([]);
-    expect(findAnchors(prepareSource([span('the node of the cache')], cache), names).map((a) => a.text)).toEqual(['node']);
+    // a single key term, or key terms with a stop word between them, are no anchor
+    expect(findAnchors(prepareSource([span('the node of the cache')], cache), names)).toEqual([]);
+    // a run needs one strong term
+    const weak = targetNames('Warming', [], { all: ['tile', 'cach'], strong: [] }, cache);
+    expect(findAnchors(prepareSource([span('every tile cache')], cache), weak)).toEqual([]);
   });
 
   it('never gives a phrase made of stop words only', () => {

@@ -16,7 +16,12 @@ describe('predicted PageRank', () => {
           const graph = randomGraph(rnd, n, degree);
           const ranking = rankGraph(graph, options);
           const from = Math.abs(pick) % n;
-          const to = (from + 1 + (Math.abs(pick >> 8) % (n - 1))) % n;
+          // A target the source has no edge to yet (as for a suggestion), so that the rebuilt CSR
+          // holds the new weight exactly (a merged weight would be rounded to float32).
+          const linked = new Set(graph.forward.targets.subarray(graph.forward.offsets[from], graph.forward.offsets[from + 1]));
+          const free = Array.from({ length: n }, (_, v) => v).filter((v) => v !== from && !linked.has(v));
+          if (free.length === 0) return;
+          const to = free[Math.abs(pick >> 8) % free.length]!;
           const predicted = pagerankWithLinks(rankModel(graph, ranking, options), [{ from, to }]);
           const modified = withEdges(graph, [{ from, to }]);
           const t = teleportVector(modified, options);

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { buildTermIndex, cosine, inverseDocumentFrequency, termFrequency, topTerms } from '../../src/text/tfidf.js';
+import { buildTermIndex, cosine, inverseDocumentFrequency, termFrequency, termLeaders, topTerms } from '../../src/text/tfidf.js';
 import type { PageText } from '../../src/types.js';
 
 const page = (body: string, title = '', headings = ''): PageText => ({ title, headings, body });
@@ -101,5 +101,18 @@ describe('cosine', () => {
 
   it('is 0 for documents with no shared term', () => {
     expect(cosine(index, 0, 2)).toBe(0);
+  });
+});
+
+describe('termLeaders', () => {
+  it('lists the pages where each term weighs most, ties by page id', () => {
+    const index = buildTermIndex([page('lease lease quorum'), page('lease quorum'), page('quorum lease'), page('shard')]);
+    const leaders = termLeaders(index, 2);
+    const of = (term: string): number[] => {
+      const t = index.terms.indexOf(term);
+      return [...leaders.subarray(t * 2, t * 2 + 2)];
+    };
+    expect(of('leas')).toEqual([0, 1]); // page 0 says it twice; pages 1 and 2 tie, 1 comes first
+    expect(of('shard')).toEqual([3, -1]);
   });
 });
