@@ -4,7 +4,7 @@
  */
 import { resolve } from 'node:path';
 import { isEngineError } from '../errors.js';
-import { resolveOptions } from '../options.js';
+import { DEFAULT_OPTIONS, resolveOptions } from '../options.js';
 import type { Config } from '../options.js';
 import { VERSION } from '../version.js';
 import { helpText, parseArgs } from './args.js';
@@ -43,7 +43,7 @@ export async function run(argv: readonly string[], io: CliIo): Promise<number> {
     return await command.run({
       io,
       root,
-      config: withFlags(loaded.config as Config, values),
+      config: withCacheDir(withFlags(loaded.config as Config, values), io.cwd),
       configOrigin: loaded.origin,
       flags: commonFlags(values),
       values,
@@ -61,6 +61,11 @@ export function withFlags(config: Config, values: FlagValues): Config {
   if (failOn === 'error' || failOn === 'warning') merged.failOn = failOn;
   if (values['no-cache'] === true) merged.cache = { ...config.cache, enabled: false };
   return merged;
+}
+
+/** The cache folder is relative to the working folder: make it absolute against `io.cwd`. */
+function withCacheDir(config: Config, cwd: string): Config {
+  return { ...config, cache: { ...config.cache, dir: resolve(cwd, config.cache?.dir ?? DEFAULT_OPTIONS.cache.dir) } };
 }
 
 function commonFlags(values: FlagValues): CommonFlags {
