@@ -12,7 +12,8 @@
  *   page order; each page's row is sorted by term id.
  */
 import type { PageText, TermIndex } from '../types.js';
-import { createStemCache, forEachWord, stemToken } from './tokenize.js';
+import { createStemCache, stemToken } from './tokenize.js';
+import { WordTable } from './scan.js';
 import type { StemCache } from './tokenize.js';
 
 /** Field boosts applied to occurrence counts. */
@@ -57,48 +58,43 @@ class EntryBuffer {
  */
 export function buildTermIndex(texts: readonly PageText[], cache: StemCache = createStemCache()): TermIndex {
   const n = texts.length;
-  // Raw token -> provisional term id (-1: dropped). Saves the stem lookup and the stem -> id lookup.
-  const tokenIds = new Map<string, number>();
+  // Word as written -> provisional term id (-1: dropped); stems looked up once per distinct word.
   const stemIds = new Map<string, number>();
   const stems: string[] = [];
   let counts = new Float64Array(1024);
   const touched: number[] = [];
   const entries = new EntryBuffer();
   const rowEnds = new Int32Array(n);
-
-  const add = (raw: string, boost: number): void => {
-    let id = tokenIds.get(raw);
+  const words = new WordTable((raw) => {
+    const stem = stemToken(raw, cache);
+    if (stem === '') return -1;
+    let id = stemIds.get(stem);
     if (id === undefined) {
-      const stem = stemToken(raw, cache);
-      if (stem === '') id = -1;
-      else {
-        id = stemIds.get(stem);
-        if (id === undefined) {
-          id = stems.length;
-          stems.push(stem);
-          stemIds.set(stem, id);
-          if (id === counts.length) {
-            const grown = new Float64Array(counts.length * 2);
-            grown.set(counts);
-            counts = grown;
-          }
-        }
+      id = stems.length;
+      stems.push(stem);
+      stemIds.set(stem, id);
+      if (id === counts.length) {
+        const grown = new Float64Array(counts.length * 2);
+        grown.set(counts);
+        counts = grown;
       }
-      tokenIds.set(raw, id);
     }
+    return id;
+  });
+  const add = (id: number, boost: number): void => {
     if (id < 0) return;
     if (counts[id] === 0) touched.push(id);
     counts[id] += boost;
   };
-  const addTitle = (raw: string): void => add(raw, FIELD_BOOSTS.title);
-  const addHeading = (raw: string): void => add(raw, FIELD_BOOSTS.headings);
-  const addBody = (raw: string): void => add(raw, FIELD_BOOSTS.body);
+  const addTitle = (id: number): void => add(id, FIELD_BOOSTS.title);
+  const addHeading = (id: number): void => add(id, FIELD_BOOSTS.headings);
+  const addBody = (id: number): void => add(id, FIELD_BOOSTS.body);
 
   for (let d = 0; d < n; d++) {
     const text = texts[d]!;
-    forEachWord(text.title, addTitle);
-    forEachWord(text.headings, addHeading);
-    forEachWord(text.body, addBody);
+    words.scan(text.title, addTitle);
+    words.scan(text.headings, addHeading);
+    words.scan(text.body, addBody);
     for (const id of touched) {
       entries.push(id, counts[id]!);
       counts[id] = 0;

@@ -7,7 +7,8 @@
  * global regular expression instead of calling `WordTokenizer.tokenize`, because the anchor
  * search needs each token's offsets (which a split cannot give) and because a single `exec`
  * loop measured 2-4x faster than `split` plus natural's empty-string filter on 14 MB of text.
- * `test/text/tokenize.test.ts` checks that both give the same tokens.
+ * `test/text/tokenize.test.ts` checks that both give the same tokens. The term index scans with
+ * its own character loop (`scan.ts`), checked against `tokenize` in `test/text/tfidf.test.ts`.
  *
  * Stemming is the expensive step (about 2.5 us per token with natural's Porter stemmer), so
  * every caller passes a {@link StemCache} that lives as long as one index build: each distinct

@@ -1,4 +1,6 @@
 import { describe, it, expect } from 'vitest';
+import fc from 'fast-check';
+import { tokenize } from '../../src/text/tokenize.js';
 import { buildTermIndex, cosine, inverseDocumentFrequency, termFrequency, termLeaders, topTerms } from '../../src/text/tfidf.js';
 import type { PageText } from '../../src/types.js';
 
@@ -114,5 +116,41 @@ describe('termLeaders', () => {
     };
     expect(of('leas')).toEqual([0, 1]); // page 0 says it twice; pages 1 and 2 tie, 1 comes first
     expect(of('shard')).toEqual([3, -1]);
+  });
+});
+
+describe('buildTermIndex against tokenize', () => {
+  // The index scans words with its own loop; it must see exactly what `tokenize` sees.
+  const unit = fc.constantFrom('a', 'b', 'c', 'ing', 'é', 'ж', 'Ё', 'ё', 'Q', '1', '_', ' ', '-', '\n', '.', 'the', 'cache', 'ponies');
+  const text = fc.array(unit, { maxLength: 30 }).map((parts) => parts.join(''));
+  const pageArb = fc.record({ title: text, headings: text, body: text });
+
+  it('gives the terms, document frequencies and weights that tokenize implies', () => {
+    fc.assert(
+      fc.property(fc.array(pageArb, { minLength: 1, maxLength: 6 }), (pages) => {
+        const index = buildTermIndex(pages);
+        const counts = pages.map((p) => {
+          const c = new Map<string, number>();
+          for (const [field, boost] of [[p.title, 3], [p.headings, 2], [p.body, 1]] as const) {
+            for (const stem of tokenize(field)) c.set(stem, (c.get(stem) ?? 0) + boost);
+          }
+          return c;
+        });
+        const terms = [...new Set(counts.flatMap((c) => [...c.keys()]))].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+        expect(index.terms).toEqual(terms);
+        const df = terms.map((t) => counts.filter((c) => c.has(t)).length);
+        expect([...index.df]).toEqual(df);
+        counts.forEach((c, d) => {
+          const raw = [...c].map(([t, k]) => [t, termFrequency(k) * inverseDocumentFrequency(pages.length, df[terms.indexOf(t)]!)] as const);
+          const norm = Math.hypot(...raw.map(([, w]) => w));
+          const expected = new Map(raw.map(([t, w]) => [t, w / norm]));
+          for (let e = index.docOffsets[d]!; e < index.docOffsets[d + 1]!; e++) {
+            expect(index.docWeights[e]).toBeCloseTo(expected.get(index.terms[index.docTerms[e]!]!)!, 6);
+          }
+          expect(index.docOffsets[d + 1]! - index.docOffsets[d]!).toBe(c.size);
+        });
+      }),
+      { numRuns: 200 },
+    );
   });
 });
