@@ -41,7 +41,9 @@ export interface SourceProblem {
     | 'parse-failed'
     | 'bad-link-pattern'
     | 'too-many-links'
-    | 'deep-nesting';
+    | 'deep-nesting'
+    /** A paragraph too long or too full of emphasis/bracket marks for the full parser; read with a simple scan. */
+    | 'too-complex';
   readonly message: string;
   readonly line?: number;
   readonly column?: number;
