@@ -56,11 +56,21 @@ export interface HastWalkResult {
 export function walkHast(root: Root, ctx: HastContext, template = false): HastWalkResult {
   const before = ctx.draft.links.length;
   const flags = template ? TEMPLATE | NO_BODY | NO_SPAN : 0;
-  for (const child of root.children) visit(child, ctx, flags);
+  const walk: Walk = { ...ctx, seen: new Set() };
+  for (const child of root.children) visit(child, walk, flags);
   return { links: ctx.draft.links.length - before };
 }
 
-function visit(node: RootContent, ctx: HastContext, flags: number): void {
+interface Walk extends HastContext {
+  /**
+   * Start offsets of the links added. The HTML parser re-opens an `<a>` left open across a
+   * block end (WHATWG HTML, "reconstruct the active formatting elements"): the copy has the
+   * same start position and is the same link, so it is counted once.
+   */
+  readonly seen: Set<number>;
+}
+
+function visit(node: RootContent, ctx: Walk, flags: number): void {
   if (node.type === 'text') {
     if (!ctx.document) return;
     if ((flags & NO_BODY) === 0) ctx.draft.body.push(node.value);
@@ -81,7 +91,8 @@ function visit(node: RootContent, ctx: HastContext, flags: number): void {
   if (SKIP_TAGS.has(tag)) return;
 
   let f = flags;
-  if ((tag === 'a' || tag === 'area') && props.href !== undefined && props.href !== null) {
+  if ((tag === 'a' || tag === 'area') && props.href !== undefined && props.href !== null && !ctx.seen.has(start)) {
+    ctx.seen.add(start);
     const href = String(props.href);
     const text = collapseSpace(plainText(node));
     const rel = props.rel;
