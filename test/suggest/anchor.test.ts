@@ -146,15 +146,39 @@ describe('anchor positions in real Markdown', () => {
             expect(a.endOffset <= b.position!.start.offset! || a.offset >= b.position!.end.offset!).toBe(true);
           }
           const edited = `${source.slice(0, a.offset)}[${a.text}](/target/)${source.slice(a.endOffset)}`;
-          const links = flatten(parseMarkdown(edited)).filter((n) => n.type === 'link' && n.url === '/target/');
+          // re-parsed by the parse stage ...
+          const links = markdownPage('page.md', edited).links.filter((l) => l.href === '/target/');
           expect(links).toHaveLength(1);
-          expect(textOf(links[0]!)).toBe(a.text);
-          expect(links[0]!.position!.start).toMatchObject({ line: a.line, column: a.column, offset: a.offset });
+          expect(links[0]).toMatchObject({ text: a.text, line: a.line, column: a.column });
+          // ... and by remark itself
+          const nodes = flatten(parseMarkdown(edited)).filter((n) => n.type === 'link' && n.url === '/target/');
+          expect(nodes).toHaveLength(1);
+          expect(textOf(nodes[0]!)).toBe(a.text);
+          expect(nodes[0]!.position!.start).toMatchObject({ line: a.line, column: a.column, offset: a.offset });
           checked++;
         }
       }),
       { numRuns: 150 },
     );
     expect(checked).toBeGreaterThan(50);
+  });
+});
+
+describe('anchor positions in HTML', () => {
+  it('finds a phrase in paragraph text, not in code, headings or links, at the right line and column', () => {
+    const source = [
+      '<!doctype html>',
+      '<html><head><title>Ops</title></head><body>',
+      '<h1>Cache server</h1>',
+      '<p>Restart the <code>cache server</code> first, see <a href="x.html">cache server</a>.</p>',
+      '<p>Then the cache server warms up.</p>',
+      '</body></html>',
+    ].join('\r\n');
+    const facts = markdownPage('ops.html', source);
+    const [best] = findAnchors(prepareSource(facts.spans, createStemCache()), targetNames('Cache server', [], [], createStemCache()));
+    expect(best).toMatchObject({ text: 'cache server', line: 5, column: 13 });
+    const edited = `${source.slice(0, best!.offset)}<a href="/target/">${best!.text}</a>${source.slice(best!.endOffset)}`;
+    const link = markdownPage('ops.html', edited).links.find((l) => l.href === '/target/');
+    expect(link).toMatchObject({ text: 'cache server', line: 5, column: 13 });
   });
 });

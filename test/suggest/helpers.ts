@@ -1,99 +1,48 @@
 /**
- * Builders for the suggest tests. Until the parse stage lands, Markdown is turned into
- * `PageFacts` here with unified + remark-parse directly (spans = text nodes outside links,
- * headings, code, images and HTML; `text === source.slice(offset, ...)`); the rest of the
- * pipeline is the real graph, rank and text stages.
+ * Builders for the suggest tests: pages through the real parse stage (`parseSource`), then the
+ * real graph, rank and text stages; random graphs built straight as CSR for the impact tests.
+ * `parseMarkdown` (remark directly) is only for tests that check positions against an
+ * independent Markdown tree.
  */
+import { createHash } from 'node:crypto';
 import { unified } from 'unified';
 import remarkParse from 'remark-parse';
 import remarkGfm from 'remark-gfm';
 import remarkFrontmatter from 'remark-frontmatter';
-import type { Root, Nodes } from 'mdast';
+import type { Root } from 'mdast';
 import { resolveOptions } from '../../src/options.js';
 import type { Config, ResolvedOptions } from '../../src/options.js';
 import { buildCsr, buildGraph, createEdgeList, pushEdge } from '../../src/graph/index.js';
+import { parseSource } from '../../src/parse/index.js';
 import { rankGraph } from '../../src/rank/index.js';
 import { buildTermIndex, contentCentrality, relatedPages } from '../../src/text/index.js';
-import type { PageFacts, PageMeta, PageNode, RawLink, SiteGraph, TextSpan } from '../../src/types.js';
+import type { PageFacts, PageMeta, PageNode, SiteGraph } from '../../src/types.js';
 import type { SuggestInput } from '../../src/suggest/index.js';
 
 const processor = unified().use(remarkParse).use(remarkGfm).use(remarkFrontmatter);
 
-/** Parse Markdown to mdast (positions included). */
+/** Parse Markdown to mdast (positions included), independently of the parse stage. */
 export function parseMarkdown(source: string): Root {
   return processor.parse(source) as Root;
 }
 
-const NO_SPANS = new Set(['link', 'linkReference', 'heading', 'image', 'imageReference', 'code', 'inlineCode', 'html', 'definition', 'yaml']);
-
-function plain(node: Nodes): string {
-  if ('value' in node && typeof node.value === 'string') return node.type === 'code' || node.type === 'inlineCode' ? '' : node.value;
-  if ('children' in node) return (node.children as Nodes[]).map(plain).join(' ');
-  return '';
-}
-
-function walk(node: Nodes, ancestors: Nodes[], fn: (node: Nodes, ancestors: readonly Nodes[]) => void): void {
-  fn(node, ancestors);
-  if ('children' in node) for (const child of node.children as Nodes[]) walk(child, [...ancestors, node], fn);
-}
-
-/** Route of a Markdown file (directory style): `a/b.md` -> `/a/b/`, `a/index.md` -> `/a/`. */
-export function routeOf(file: string): string {
-  const noExt = file.replace(/\.md$/, '');
-  if (noExt === 'index') return '/';
-  if (noExt.endsWith('/index')) return `/${noExt.slice(0, -'/index'.length)}/`;
-  return `/${noExt}/`;
-}
-
-/** PageFacts of a Markdown source, the way the parse stage is specified to give them. */
-export function markdownPage(file: string, source: string, meta: Partial<PageMeta> = {}): PageFacts {
-  const tree = parseMarkdown(source);
-  const spans: TextSpan[] = [];
-  const links: RawLink[] = [];
-  const headings: string[] = [];
-  const body: string[] = [];
-  let title = '';
-  walk(tree, [], (n, ancestors) => {
-    if (n.type === 'heading') {
-      const text = plain(n);
-      if (n.depth === 1 && title === '') title = text;
-      else headings.push(text);
-    }
-    if (n.type === 'link') {
-      links.push({
-        href: n.url,
-        text: plain(n),
-        line: n.position!.start.line,
-        column: n.position!.start.column,
-        context: 'content',
-        nofollow: false,
-        origin: 'markdown',
-      });
-    }
-    if (n.type === 'text') {
-      const inside = ancestors.some((a) => NO_SPANS.has(a.type));
-      if (!ancestors.some((a) => a.type === 'heading')) body.push(n.value);
-      if (!inside) {
-        const start = n.position!.start;
-        const end = n.position!.end;
-        spans.push({ text: source.slice(start.offset!, end.offset!), offset: start.offset!, line: start.line, column: start.column });
-      }
-    }
-  });
-  return {
-    file,
-    kind: 'markdown',
-    hash: `hash-of-${file}`,
-    route: routeOf(file),
-    title: title || file,
-    meta: { draft: false, noindex: false, aliases: [], exclude: false, ...meta },
-    headings: [],
-    ids: [],
-    links,
-    text: { title: title || file, headings: headings.join('\n'), body: body.join('\n') },
-    spans,
-    problems: [],
-  };
+/**
+ * PageFacts of a source file from the parse stage (`.html`/`.htm` as HTML, else Markdown), with
+ * `meta` fields laid over what the frontmatter gave.
+ */
+export function markdownPage(file: string, source: string, meta: Partial<PageMeta> = {}, options: ResolvedOptions = testOptions()): PageFacts {
+  const facts = parseSource(
+    {
+      path: file,
+      kind: /\.html?$/.test(file) ? 'html' : 'markdown',
+      bytes: Buffer.byteLength(source),
+      hash: createHash('sha256').update(source).digest('hex'),
+      text: source,
+      problems: [],
+    },
+    options,
+  );
+  return { ...facts, meta: { ...facts.meta, ...meta } };
 }
 
 /** Options for a test site (root `/site`). */

@@ -21,7 +21,9 @@ describe('findUnderlinked', () => {
 
   it('lists orphans, unreachable and too-deep pages and important pages with few content inlinks', () => {
     const options = testOptions({ suggest: { rankGap: 1 } });
-    const input = siteInput(pages, options);
+    // every page but the hub explicitly normal, so that centrality makes no page important
+    const pinned = pages.map((p) => (p.route === '/hub/' ? p : { ...p, meta: { ...p.meta, importance: 'normal' as const } }));
+    const input = siteInput(pinned, options);
     const importance = computeImportance(input.graph, options, null, input.centrality);
     const found = findUnderlinked(input.graph, input.ranking, importance, pagerankPercentiles(input.graph, input.ranking), options);
     const byRoute = Object.fromEntries(found.map((u) => [input.graph.pages[u.page]!.route, u.reasons]));
