@@ -11,13 +11,15 @@
  *
  * What counts as a match:
  * - the whole title or a whole alias;
- * - part of one (two words or more, or one key term) that contains the name's rarest word (the
- *   stem with the smallest document frequency): "tile cache" alone does not stand for
- *   "Warming the tile cache", "warming the tile cache" does;
+ * - two or more words of one that include the name's rarest word (the stem with the smallest
+ *   document frequency): "tile cache" alone does not stand for "Warming the tile cache",
+ *   "warming the tile" does;
  * - a run of two or more key terms written next to each other (no stop word between them), one
- *   of them "strong" (the target is among the pages where it weighs most). A single key term is
- *   not enough: read on the example site, lone words ("days", "folder", "kit") named the topic
- *   of a sentence far more often than the target page.
+ *   of them "strong" (the target is among the pages where it weighs most) and one a word of the
+ *   title or an alias.
+ * One word is an anchor only when it is the whole name. Read on the example site, lone words
+ * ("week", "app", "repair", "predict") named the topic of a sentence far more often than the
+ * target page ("replace the card within a week" is not about the first-week checklist).
  * A phrase made only of words of the source's own title is the source speaking of itself, never
  * an anchor for another page.
  *
@@ -62,6 +64,8 @@ export interface TargetNames {
   readonly keyTerms: ReadonlySet<string>;
   /** Key terms for which the target is among the pages they weigh most in (a run needs one). */
   readonly strongTerms: ReadonlySet<string>;
+  /** Stems of the title and the aliases (a run of key terms needs one). */
+  readonly nameWords: ReadonlySet<string>;
 }
 
 /** A target's key terms (heaviest first) and the strong ones among them. */
@@ -184,7 +188,8 @@ export function targetNames(
     aliases.push(name(words));
   }
   const keys: KeyTerms = Array.isArray(keyTerms) ? { all: keyTerms, strong: keyTerms } : (keyTerms as KeyTerms);
-  return { title: name(titleStems), aliases, keyTerms: new Set(keys.all), strongTerms: new Set(keys.strong) };
+  const nameWords = new Set([...titleStems, ...aliases.flatMap((a) => a.stems)]);
+  return { title: name(titleStems), aliases, keyTerms: new Set(keys.all), strongTerms: new Set(keys.strong), nameWords };
 }
 
 interface Candidate {
@@ -216,7 +221,7 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
         while (j + len < pattern.length && source.joinNext[i + len - 1] && source.stem[i + len] === pattern[j + len]) len++;
         const whole = j === 0 && len === pattern.length;
         if (!whole) {
-          if (len === 1 && !names.keyTerms.has(pattern[j]!)) continue;
+          if (len === 1) continue;
           let rare = false;
           for (let k = 0; k < len && !rare; k++) rare = name.rarest.has(pattern[j + k]!);
           if (!rare) continue;
@@ -234,7 +239,7 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
       if (i > 0 && source.joinDirect[i - 1] && names.keyTerms.has(source.stem[i - 1]!)) continue;
       let len = 1;
       while (source.joinDirect[i + len - 1] && names.keyTerms.has(source.stem[i + len]!)) len++;
-      if (len < 2 || !anyOf(source, i, len, names.strongTerms)) continue;
+      if (len < 2 || !anyOf(source, i, len, names.strongTerms) || !anyOf(source, i, len, names.nameWords)) continue;
       if (own(i, len)) continue;
       found.push({ first: i, words: len, kind: 'key-terms', quality: len });
     }

@@ -41,11 +41,10 @@ describe('findAnchors', () => {
     }
   });
 
-  it('takes one word of a name only when it is a key term of the target', () => {
+  it('takes one word only when it is the whole name', () => {
     const source = prepareSource([span('Rotate the logs daily.')], cache);
-    expect(findAnchors(source, targetNames('Log rotation policy', [], [], cache))).toEqual([]);
-    const keyed = findAnchors(source, targetNames('Log rotation policy', [], ['log'], cache));
-    expect(keyed.map((a) => [a.text, a.kind])).toEqual([['logs', 'title']]);
+    expect(findAnchors(source, targetNames('Log rotation policy', [], ['log'], cache))).toEqual([]);
+    expect(findAnchors(source, targetNames('Logs', [], [], cache)).map((a) => [a.text, a.kind])).toEqual([['logs', 'title']]);
   });
 
   it('takes part of a name only with its rarest word', () => {
@@ -63,8 +62,11 @@ describe('findAnchors', () => {
   });
 
   it('joins key terms only when they are written next to each other', () => {
-    const names = targetNames('Warming', [], { all: ['warm', 'node', 'cach'], strong: ['node'] }, cache);
+    // "node" is strong and a word of an alias (the route), so the run "cache node" counts
+    const names = targetNames('Warming', ['/ops/node-warmup/'], { all: ['warm', 'node', 'cach'], strong: ['node'] }, cache);
     expect(findAnchors(prepareSource([span('a cache node restarts')], cache), names).map((a) => a.text)).toEqual(['cache node']);
+    // a run without a word of the title or an alias does not
+    expect(findAnchors(prepareSource([span('a cache node restarts')], cache), targetNames('Warming', [], { all: ['node', 'cach'], strong: ['node'] }, cache))).toEqual([]);
     // a single key term, or key terms with a stop word between them, are no anchor
     expect(findAnchors(prepareSource([span('the node of the cache')], cache), names)).toEqual([]);
     // a run needs one strong term
@@ -160,7 +162,7 @@ describe('anchor positions in real Markdown', () => {
       }),
       { numRuns: 150 },
     );
-    expect(checked).toBeGreaterThan(50);
+    expect(checked).toBeGreaterThan(20);
   });
 });
 
