@@ -169,25 +169,55 @@ function isFence(src: string, p: number, e: number, char: number, length: number
   return q === e;
 }
 
+/** A text with some lines emptied, and the way back to source offsets. */
+export interface BlankedText {
+  readonly text: string;
+  /** Offset in `text` -> offset in the source. */
+  readonly toSource: (offset: number) => number;
+}
+
 /**
- * The text with every line of the regions replaced by spaces (line endings kept), so offsets and
- * line numbers stay those of the source.
+ * The text with the content of every line of the regions removed (line endings kept, so the
+ * block structure around them stays and line numbers hold). Removed, not replaced by spaces:
+ * 3,000 lines of spaces inside 32 nested lists took remark 80 s here.
  * @param src the source text
  * @param lines its line table
- * @param heavy regions to blank
+ * @param heavy regions to empty
  */
-export function blankRegions(src: string, lines: LineIndex, heavy: readonly HeavyRegion[]): string {
-  if (heavy.length === 0) return src;
+export function blankRegions(src: string, lines: LineIndex, heavy: readonly HeavyRegion[]): BlankedText {
+  if (heavy.length === 0) return { text: src, toSource: (o) => o };
   const parts: string[] = [];
+  const cuts: number[] = [];
+  const shifts: number[] = [];
   let last = 0;
+  let removed = 0;
+  let length = 0;
   for (const r of heavy) {
     for (let l = r.from; l < r.to; l++) {
       const s = lineStart(lines, l);
       const e = lineContentEnd(lines, src, l);
-      parts.push(src.slice(last, s), ' '.repeat(e - s));
+      if (e === s) continue;
+      parts.push(src.slice(last, s));
+      length += s - last;
+      removed += e - s;
+      cuts.push(length);
+      shifts.push(removed);
       last = e;
     }
   }
   parts.push(src.slice(last));
-  return parts.join('');
+  const toSource = (o: number): number => {
+    let lo = 0;
+    let hi = cuts.length - 1;
+    let k = -1;
+    while (lo <= hi) {
+      const mid = (lo + hi) >>> 1;
+      if (cuts[mid]! <= o) {
+        k = mid;
+        lo = mid + 1;
+      } else hi = mid - 1;
+    }
+    return k < 0 ? o : o + shifts[k]!;
+  };
+  return { text: parts.join(''), toSource };
 }

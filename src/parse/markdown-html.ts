@@ -58,18 +58,17 @@ export function closesTag(value: string, tag: string): boolean {
 /**
  * Add the links and ids of one raw HTML node.
  * @param node the mdast html node
+ * @param start its start offset in the source
+ * @param end its end offset in the source
  * @param src the Markdown source
  * @param lines its line table
  * @param draft the page being collected
  * @param template true when the node sits inside a template region (an inline `<nav>`)
  * @returns the number of links added (the last ones in `draft.links`)
  */
-export function readRawHtml(node: Html, src: string, lines: LineIndex, draft: PageDraft, template: boolean): number {
+export function readRawHtml(node: Html, start: number, end: number, src: string, lines: LineIndex, draft: PageDraft, template: boolean): number {
   const value = node.value;
   if (!INTERESTING.test(value)) return 0;
-  const start = node.position?.start.offset;
-  const end = node.position?.end.offset;
-  if (start === undefined || end === undefined) return 0;
   const tree = parseHtmlFragment(value);
   return walkHast(tree, { src, draft, map: fragmentMapper(src, lines, value, start, end), document: false }, template).links;
 }

@@ -10,6 +10,7 @@
  */
 import type GithubSlugger from 'github-slugger';
 import type { Heading, Html, Nodes, Parents, RootContent } from 'mdast';
+import type { BlankedText } from './assess.js';
 import type { LineIndex } from './lines.js';
 import { lineOf, lineStart } from './lines.js';
 import { closesTag, inlineOpenTag, readRawHtml } from './markdown-html.js';
@@ -28,6 +29,8 @@ const CUSTOM_ID = /\s*\{#([A-Za-z0-9_][\w\-:.]*)\}$/;
 
 interface Walk {
   readonly src: string;
+  /** Offset in the parsed text -> offset in `src`. */
+  readonly map: (offset: number) => number;
   readonly lines: LineIndex;
   readonly draft: PageDraft;
   readonly slugger: GithubSlugger;
@@ -45,7 +48,7 @@ export interface MarkdownFrontmatter {
 /**
  * Parse Markdown and add its links, headings, ids, body text, spans and code ranges to `draft`.
  * @param src the source text (spans are checked against it)
- * @param parseText the text to parse: `src`, or `src` with some lines blanked (same length)
+ * @param parsed the text to parse (`src`, or `src` with some lines emptied) and its offset map
  * @param lines line table of `src`
  * @param draft the page being collected
  * @param slugger the page's slugger
@@ -53,19 +56,19 @@ export interface MarkdownFrontmatter {
  */
 export function readMarkdown(
   src: string,
-  parseText: string,
+  parsed: BlankedText,
   lines: LineIndex,
   draft: PageDraft,
   slugger: GithubSlugger,
 ): MarkdownFrontmatter | null {
-  const tree = parseMarkdownTree(parseText);
-  const w: Walk = { src, lines, draft, slugger, definitions: new Map(), references: [] };
+  const tree = parseMarkdownTree(parsed.text);
+  const w: Walk = { src, map: parsed.toSource, lines, draft, slugger, definitions: new Map(), references: [] };
   let frontmatter: MarkdownFrontmatter | null = null;
   const first = tree.children[0];
   if (first !== undefined && first.type === 'yaml') {
-    const start = startOf(first);
+    const start = startOf(w, first);
     frontmatter = { value: first.value, contentStart: lineStart(lines, lineOf(lines, start) + 1) };
-    draft.code.push(start, endOf(first));
+    draft.code.push(start, endOf(w, first));
   }
   walkChildren(w, tree, 0);
   for (const { link, id } of w.references) {
@@ -92,7 +95,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
   switch (node.type) {
     case 'text':
       if ((flags & NO_BODY) === 0) draft.body.push(node.value);
-      if ((flags & NO_SPAN) === 0) addMarkdownTextSpans(draft, w.src, w.lines, node.value, startOf(node), endOf(node));
+      if ((flags & NO_SPAN) === 0) addMarkdownTextSpans(draft, w.src, w.lines, node.value, startOf(w, node), endOf(w, node));
       return;
     case 'heading':
       heading(w, node, flags);
@@ -106,7 +109,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
     case 'linkReference': {
       const text = collapseSpace(plainText(node, true));
       const link: LinkDraft = {
-        offset: startOf(node),
+        offset: startOf(w, node),
         href: node.type === 'link' ? node.url : '',
         text,
         context: (flags & TEMPLATE) !== 0 ? 'template' : 'content',
@@ -125,10 +128,10 @@ function visit(w: Walk, node: Nodes, flags: number): void {
       return;
     case 'code':
     case 'inlineCode':
-      draft.code.push(startOf(node), endOf(node));
+      draft.code.push(startOf(w, node), endOf(w, node));
       return;
     case 'html':
-      readRawHtml(node, w.src, w.lines, draft, (flags & TEMPLATE) !== 0);
+      readRawHtml(node, startOf(w, node), endOf(w, node), w.src, w.lines, draft, (flags & TEMPLATE) !== 0);
       return;
     case 'table':
       node.children.forEach((row, i) => walkChildren(w, row, i === 0 ? flags | NO_SPAN : flags));
@@ -156,7 +159,7 @@ function heading(w: Walk, node: Heading, flags: number): void {
   const slugText = custom === null ? raw : raw.slice(0, custom.index);
   const text = collapseSpace(slugText);
   const slug = custom === null ? w.slugger.slug(slugText) : custom[1]!;
-  w.draft.headings.push({ depth: node.depth, text, slug, offset: startOf(node) });
+  w.draft.headings.push({ depth: node.depth, text, slug, offset: startOf(w, node) });
   if (node.depth === 1 && w.draft.firstH1 === undefined && text !== '') w.draft.firstH1 = text;
   walkChildren(w, node, flags | NO_SPAN | NO_BODY);
 }
@@ -169,7 +172,7 @@ function heading(w: Walk, node: Heading, flags: number): void {
  */
 function html(w: Walk, children: RootContent[], i: number, flags: number, phrasing: boolean): number {
   const node = children[i] as Html;
-  const added = readRawHtml(node, w.src, w.lines, w.draft, (flags & TEMPLATE) !== 0);
+  const added = readRawHtml(node, startOf(w, node), endOf(w, node), w.src, w.lines, w.draft, (flags & TEMPLATE) !== 0);
   const open = phrasing ? inlineOpenTag(node.value) : blockTemplateOpen(node.value);
   if (open === null) return i;
   let j = i + 1;
@@ -179,7 +182,7 @@ function html(w: Walk, children: RootContent[], i: number, flags: number, phrasi
   if (open.code) f |= NO_SPAN | NO_BODY;
   if (open.template) f |= TEMPLATE | NO_SPAN | NO_BODY;
   if (/^h[1-6]$/.test(open.tag)) f |= NO_SPAN;
-  if (open.code && j > i + 1) w.draft.code.push(endOf(node), endOf(children[j - 1]!));
+  if (open.code && j > i + 1) w.draft.code.push(endOf(w, node), endOf(w, children[j - 1]!));
   if (open.link && added > 0) {
     let text = '';
     for (let k = i + 1; k < j; k++) text += plainText(children[k]!, true);
@@ -189,7 +192,7 @@ function html(w: Walk, children: RootContent[], i: number, flags: number, phrasi
   }
   for (let k = i + 1; k < j; k++) {
     const child = children[k]!;
-    if (child.type === 'html') readRawHtml(child, w.src, w.lines, w.draft, (f & TEMPLATE) !== 0);
+    if (child.type === 'html') readRawHtml(child, startOf(w, child), endOf(w, child), w.src, w.lines, w.draft, (f & TEMPLATE) !== 0);
     else visit(w, child, f);
   }
   return Math.min(j, children.length - 1);
@@ -233,10 +236,11 @@ function plainText(node: Nodes, alt: boolean): string {
   }
 }
 
-function startOf(node: Nodes): number {
-  return node.position?.start.offset ?? 0;
+function startOf(w: Walk, node: Nodes): number {
+  return w.map(node.position?.start.offset ?? 0);
 }
 
-function endOf(node: Nodes): number {
-  return node.position?.end.offset ?? startOf(node);
+function endOf(w: Walk, node: Nodes): number {
+  const end = node.position?.end.offset;
+  return end === undefined ? startOf(w, node) : w.map(end);
 }
