@@ -73,7 +73,9 @@ describe('sarif formatter', () => {
   it('gives a suggestion with an anchor a fix replacing the anchor by the link', () => {
     const s = results.find((r) => r.properties?.['suggestionId'] === 'b7e1c2d4')!;
     expect(s.level).toBe('note');
-    expect(s.message.text).toContain('Add a link to /guide/configure/advanced/tuning/ on "tuning options"');
+    expect(s.message.text).toBe(
+      'Add a link to /guide/configure/advanced/tuning/ on "tuning options" (similarity 0.42, target rank 0.56 -> 1.32, depth 5 -> 2). Why: too deep: 5 clicks, limit 3.',
+    );
     expect(s.fixes).toEqual([
       {
         description: { text: 'Link "tuning options" to /guide/configure/advanced/tuning/' },

@@ -1,7 +1,8 @@
 /**
  * The Markdown writer: a pull-request comment. Gate result first (with the limits crossed),
- * then the counts, the findings (a table; past the first few, collapsed in `<details>`), then
- * the suggested links as a checklist a reviewer can tick, each with its id for `apply`.
+ * then the counts, the findings (a table, errors first; past the first few, collapsed in
+ * `<details>`), then the suggested links as a checklist a reviewer can tick, each with its id
+ * for `apply`, the most useful (highest score) first.
  */
 import type { Finding, Report, Suggestion } from '../../types.js';
 import type { Formatter } from '../types.js';
@@ -82,11 +83,14 @@ export const markdownFormatter: Formatter = {
     const { error, warning } = report.stats.findings;
     const counts = error + warning === 0 ? 'none' : `${plural(error, 'error')}, ${plural(warning, 'warning')}`;
     out.push('', `#### Findings: ${counts}`);
-    if (report.findings.length > 0) out.push('', ...collapse(report.findings, findingsTable, 'finding'));
+    // Stable sorts over the report's order: errors before warnings, best suggestions first.
+    const findings = [...report.findings].sort((a, b) => Number(a.severity !== 'error') - Number(b.severity !== 'error'));
+    if (findings.length > 0) out.push('', ...collapse(findings, findingsTable, 'finding'));
     if (report.suggestions.length > 0) {
-      out.push('', `#### Suggested links (${report.suggestions.length})`, '');
-      out.push(...collapse(report.suggestions, (part) => part.map(suggestionItem), 'suggestion'));
-      const ids = report.suggestions.slice(0, 2).map((s) => s.id).join(',');
+      const suggestions = [...report.suggestions].sort((a, b) => b.score - a.score || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+      out.push('', `#### Suggested links (${suggestions.length})`, '');
+      out.push(...collapse(suggestions, (part) => part.map(suggestionItem), 'suggestion'));
+      const ids = suggestions.slice(0, 2).map((s) => s.id).join(',');
       out.push('', `Accept links by id: ${code(`linkweave apply --ids ${ids}`)}`);
     }
     return `${out.join('\n')}\n`;

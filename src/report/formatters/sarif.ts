@@ -86,10 +86,11 @@ export function linkMarkup(report: Report, s: Suggestion & { anchor: string }): 
 function suggestionResult(report: Report, s: Suggestion, ruleIndex: number): Result {
   const region = { startLine: s.line, startColumn: s.column };
   const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
-  const text =
+  const what =
     s.anchor === null
-      ? `Add a link to ${s.target} near here (no anchor phrase found; ${impact}). ${s.reason}`.trim()
-      : `Add a link to ${s.target} on "${s.anchor}" (${impact}). ${s.reason}`.trim();
+      ? `Add a link to ${s.target} near here (no anchor phrase found; ${impact}).`
+      : `Add a link to ${s.target} on "${s.anchor}" (${impact}).`;
+  const text = s.reason === '' ? what : `${what} Why: ${s.reason}.`;
   const fixes: Fix[] =
     s.anchor === null
       ? []
