@@ -76,7 +76,7 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
     io.stdout.write(formatReport(report, format, terminal));
   } else {
     const text = formatReport(report, format, { color: false, cwd: io.cwd });
-    await writeFileAtomic(output, text, io.tempFiles === undefined ? {} : { tracker: io.tempFiles });
+    await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
     if (!flags.quiet) {
       if (format !== 'text') io.stdout.write(formatReport(report, 'text', terminal));
       io.stderr.write(`linkweave: report written to ${flags.output}\n`);

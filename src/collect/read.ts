@@ -60,7 +60,9 @@ export function readSource(absPath: string, relPath: string, kind: FileKind, ctx
   }
   let fd: number | undefined;
   try {
-    fd = fs.openSync(real, 'r');
+    // O_NONBLOCK: opening a FIFO or device named like a page must not hang the run; the
+    // fstat check below then skips it. No effect on regular files.
+    fd = fs.openSync(real, fs.constants.O_RDONLY | fs.constants.O_NONBLOCK);
     const stat = fs.fstatSync(fd);
     if (!stat.isFile()) {
       return { warning: { file: relPath, code: 'unreadable', message: `"${relPath}" is not a regular file; skipped` } };

@@ -24,6 +24,8 @@ export interface TempFileTracker {
 export interface WriteOptions {
   /** Records the temp file while it exists. @default none */
   readonly tracker?: TempFileTracker;
+  /** How error messages name the file (e.g. the path as the user wrote it). @default the `path` argument */
+  readonly label?: string;
 }
 
 /**
@@ -39,7 +41,10 @@ export async function writeFileAtomic(path: string, data: string | Uint8Array, o
   const { tracker } = options;
   let created = false;
   try {
-    await fs.promises.mkdir(dir, { recursive: true });
+    await fs.promises.mkdir(dir, { recursive: true }).catch((error: NodeJS.ErrnoException) => {
+      // mkdir -p reports a file in the way as EEXIST.
+      throw error.code === 'EEXIST' ? Object.assign(new Error(error.message), { code: 'ENOTDIR' }) : error;
+    });
     const mode = await existingMode(target);
     tracker?.add(temp);
     const handle = await fs.promises.open(temp, 'wx', mode ?? 0o666);
@@ -56,7 +61,7 @@ export async function writeFileAtomic(path: string, data: string | Uint8Array, o
     created = false;
   } catch (error) {
     if (created) await fs.promises.rm(temp, { force: true }).catch(() => undefined);
-    throw new EngineError('E_IO', `cannot write "${path}": ${reason(error)}`, { cause: error });
+    throw new EngineError('E_IO', `cannot write "${options.label ?? path}": ${reason(error)}`, { cause: error });
   } finally {
     tracker?.delete(temp);
   }

@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -222,6 +223,16 @@ describe('collectSources', () => {
     const result = await collect(site(tree));
     expect(result.files).toHaveLength(150);
     expect(result.files[149]!.text).toBe('page 149');
+  });
+
+  it('a FIFO named like a page does not hang the run', async () => {
+    const root = site({ 'index.md': '# Home' });
+    expect(spawnSync('mkfifo', [path.join(root, 'pipe.md')]).status).toBe(0);
+    const result = await collect(root);
+    // The listing leaves out what is not a regular file (read.test.ts covers a FIFO met when reading).
+    expect(result.files.map((f) => f.path)).toEqual(['index.md']);
+    expect(result.assets).toEqual([]);
+    expect(result.warnings).toEqual([]);
   });
 
   // The superuser reads every file whatever its mode; read.test.ts covers the same path with a folder.

@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -49,6 +50,14 @@ describe('readSource', () => {
     fs.mkdirSync(path.join(dir, 'odd.md'));
     const outcome = await readSource(path.join(dir, 'odd.md'), 'odd.md', 'markdown', { realRoot: dir, maxFileBytes: 100 });
     expect(outcome).toMatchObject({ warning: { file: 'odd.md', code: 'unreadable' } });
+  });
+
+  it('a FIFO named like a page is skipped as unreadable instead of blocking the run', async () => {
+    const dir = root();
+    const fifo = path.join(dir, 'pipe.md');
+    expect(spawnSync('mkfifo', [fifo]).status).toBe(0);
+    const outcome = readSource(fifo, 'pipe.md', 'markdown', { realRoot: dir, maxFileBytes: 100 });
+    expect(outcome).toEqual({ warning: { file: 'pipe.md', code: 'unreadable', message: '"pipe.md" is not a regular file; skipped' } });
   });
 
   it('a file swapped for a symlink to outside the root after listing is not read', async () => {

@@ -53,7 +53,10 @@ describe('writeFileAtomic', () => {
   it('fails with E_IO when a parent is a file', async () => {
     const d = dir();
     fs.writeFileSync(path.join(d, 'file'), 'x');
-    await expect(writeFileAtomic(path.join(d, 'file', 'r.json'), 'x')).rejects.toMatchObject({ code: 'E_IO' });
+    await expect(writeFileAtomic(path.join(d, 'file', 'r.json'), 'x', { label: 'file/r.json' })).rejects.toMatchObject({
+      code: 'E_IO',
+      message: 'cannot write "file/r.json": a parent is not a folder (ENOTDIR)',
+    });
     expect(leftovers(d)).toEqual([]);
   });
 
