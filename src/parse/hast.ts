@@ -88,13 +88,19 @@ function visit(node: RootContent, ctx: Walk, flags: number): void {
   const draft = ctx.draft;
   if (typeof props.id === 'string' && props.id !== '') draft.ids.push(props.id);
   if (tag === 'a' && typeof props.name === 'string' && props.name !== '') draft.ids.push(props.name);
-  if (SKIP_TAGS.has(tag)) return;
+  if (SKIP_TAGS.has(tag)) {
+    // Raw text (scripts, styles): no links, no prose, no link patterns.
+    const end = node.position?.end.offset;
+    if (end !== undefined) draft.code.push(start, ctx.map(end));
+    return;
+  }
 
   let f = flags;
   if ((tag === 'a' || tag === 'area') && props.href !== undefined && props.href !== null && !ctx.seen.has(start)) {
     ctx.seen.add(start);
     const href = String(props.href);
-    const text = collapseSpace(plainText(node));
+    // An area has no content: its alt text is what it says.
+    const text = collapseSpace(tag === 'area' ? (typeof props.alt === 'string' ? props.alt : '') : plainText(node));
     const rel = props.rel;
     const nofollow = Array.isArray(rel) ? rel.some((r) => String(r).toLowerCase() === 'nofollow') : typeof rel === 'string' && /(?:^|\s)nofollow(?:\s|$)/i.test(rel);
     draft.links.push({ offset: start, href, text, context: (flags & TEMPLATE) !== 0 ? 'template' : 'content', nofollow, origin: 'html' });
