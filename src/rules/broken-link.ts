@@ -24,7 +24,7 @@ import { nearest } from './nearest.js';
  * ```
  * `guide/index.md:1:6  error  Unexpected link to missing file guide/instal.md (written
  * "instal.md"), expected an existing source file (did you mean guide/install.md?)  broken-link`
- * `guide/index.md:1:42  error  Unexpected link to missing page /guide/instal/, expected an
+ * `guide/index.md:1:40  error  Unexpected link to missing page /guide/instal/, expected an
  * existing page (did you mean /guide/install/?)  broken-link`
  */
 export const brokenLink: Rule = {

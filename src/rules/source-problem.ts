@@ -18,8 +18,9 @@ const FATAL = new Set<string>(['parse-failed', 'binary', 'unreadable']);
  * Options: none. Default severity: per finding as above.
  *
  * @example ok: a Markdown file with valid YAML front matter.
- * @example not ok: front matter `title: [unclosed`:
- * `guide/setup.md:2:8  warning  Unexpected front matter that is not valid YAML ...  source-problem`
+ * @example not ok: front matter `title: [unclosed` (the message is the parse stage's):
+ * `guide/setup.md:2:17  warning  Invalid YAML frontmatter: Flow sequence in block collection must
+ * be sufficiently indented and end with a ]; the page is read without its frontmatter  source-problem`
  */
 export const sourceProblem: Rule = {
   id: 'source-problem',
