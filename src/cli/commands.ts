@@ -4,6 +4,7 @@
  */
 import { resolve } from 'node:path';
 import { analyze } from '../analyze.js';
+import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
 import type { Config } from '../options.js';
 import { formatReport } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
@@ -52,6 +53,7 @@ export const COMMANDS: readonly Command[] = [
     summary: 'check, plus proposed new links (file, line, column, anchor, target, predicted impact)',
     run: (ctx) => reportCommand(ctx, 'suggest'),
   },
+  { name: 'backtest', summary: BACKTEST_SUMMARY, flags: BACKTEST_FLAGS, run: runBacktestCommand },
 ];
 
 /** analyze -> format -> stdout or --output; exit 0 when the gate passed, 1 when it failed. */

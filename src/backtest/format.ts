@@ -1,0 +1,156 @@
+/**
+ * The backtest's outputs: a table for people and JSON for machines (`linkweave/backtest@1`).
+ * Both print the settings the numbers depend on (share held out, seeds, minSimilarity, the
+ * score formula and its factors, k, what the backtest changed), so runs with different
+ * settings can be compared. Pure; numbers in the JSON are rounded to 6 decimals so the same
+ * input gives byte-identical output.
+ */
+import { roundTo } from '../report/round.js';
+import { NO_ANCHOR, REACH_TOO_DEEP, REACH_UNREACHABLE } from '../suggest/index.js';
+import { NO_ANCHOR_SIMILARITY } from '../suggest/score.js';
+import { VERSION } from '../version.js';
+import { K_VALUES, LIST_LENGTH } from './metrics.js';
+import type { BacktestResult, MethodId, MethodScores, Spread } from './types.js';
+
+/** Schema id of the JSON output. */
+export const BACKTEST_SCHEMA = 'linkweave/backtest@1';
+
+const DECIMALS = 6;
+
+/** How the methods are named in the table. */
+export const METHOD_LABELS: Readonly<Record<MethodId, string>> = {
+  linkweave: 'linkweave',
+  tfidf: 'TF-IDF only',
+  random: 'random related',
+  'random-page': 'random page',
+};
+
+/** The suggestion score as the suggestion stage computes it (suggest/score.ts), in words. */
+export function scoreFormula(minSimilarity: number) {
+  return {
+    formula: 'similarity x (0.5 + 0.5 x source PageRank percentile) x reach x anchor',
+    reachTooDeep: REACH_TOO_DEEP,
+    reachUnreachable: REACH_UNREACHABLE,
+    noAnchor: NO_ANCHOR,
+    noAnchorMinSimilarity: roundTo(NO_ANCHOR_SIMILARITY * minSimilarity, DECIMALS),
+  };
+}
+
+const r = (x: number | null): number | null => (x === null ? null : roundTo(x, DECIMALS));
+const rs = (s: Spread) => ({ mean: r(s.mean), sd: r(s.sd) });
+
+function methodJson(m: MethodScores) {
+  return {
+    method: m.method,
+    ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, r(m.recall[i]!)])),
+    ...Object.fromEntries(K_VALUES.map((k, i) => [`precisionAt${k}`, r(m.precision[i]!)])),
+    mrr: r(m.mrr),
+    recovered: m.recovered,
+    anchorOverlap: r(m.anchorOverlap),
+    anchorInPlace: r(m.anchorInPlace),
+  };
+}
+
+/** The JSON output, indented, ending in a newline. */
+export function formatBacktestJson(result: BacktestResult): string {
+  const { settings, suggest } = result;
+  const doc = {
+    schema: BACKTEST_SCHEMA,
+    tool: { name: 'linkweave', version: VERSION },
+    root: result.root,
+    settings: {
+      holdout: settings.holdout,
+      seeds: settings.seeds,
+      runs: settings.runs,
+      k: [...K_VALUES],
+      listLength: LIST_LENGTH,
+      minSimilarity: suggest.minSimilarity,
+      relatedK: suggest.relatedK,
+      targets: suggest.targets,
+      perTarget: suggest.perTarget,
+      maxNewLinksPerPage: suggest.maxNewLinksPerPage,
+      score: scoreFormula(suggest.minSimilarity),
+    },
+    site: result.site,
+    runs: result.runs.map((run) => ({ ...run, candidateCoverage: r(run.candidateCoverage), methods: run.methods.map(methodJson) })),
+    summary: result.summary.map((s) => ({
+      method: s.method,
+      ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, rs(s.recall[i]!)])),
+      ...Object.fromEntries(K_VALUES.map((k, i) => [`precisionAt${k}`, rs(s.precision[i]!)])),
+      mrr: rs(s.mrr),
+      anchorOverlap: rs(s.anchorOverlap),
+      anchorInPlace: rs(s.anchorInPlace),
+    })),
+  };
+  return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+const f3 = (x: number): string => x.toFixed(3);
+
+function cell(s: Spread, runs: number): string {
+  if (s.mean === null) return '-';
+  return runs > 1 && s.sd !== null ? `${f3(s.mean)}±${f3(s.sd)}` : f3(s.mean);
+}
+
+const mean = (xs: readonly number[]): number => (xs.length === 0 ? 0 : xs.reduce((a, b) => a + b, 0) / xs.length);
+const count = (x: number): string => (Number.isInteger(x) ? String(x) : x.toFixed(1));
+
+function coverage(runs: BacktestResult['runs']): string {
+  const xs = runs.map((x) => x.candidateCoverage).filter((x): x is number => x !== null);
+  return xs.length === 0 ? '-' : `${(100 * mean(xs)).toFixed(1)}%`;
+}
+
+/** The table for people, ending in a newline. */
+export function formatBacktestText(result: BacktestResult): string {
+  const { settings, suggest, site, runs } = result;
+  const score = scoreFormula(suggest.minSimilarity);
+  const seeds = settings.runs === 1 ? `seed ${settings.seed}` : `seeds ${settings.seeds[0]}..${settings.seeds[settings.seeds.length - 1]} (${settings.runs} runs)`;
+  const changes = [
+    suggest.targets.configured === 'all' ? null : `suggest.targets ${suggest.targets.configured} -> all`,
+    suggest.perTarget.configured === suggest.perTarget.used ? null : `perTarget ${suggest.perTarget.configured} -> ${suggest.perTarget.used}`,
+    `maxNewLinksPerPage ${suggest.maxNewLinksPerPage.configured} -> ${suggest.maxNewLinksPerPage.used} (no per-source cap)`,
+  ].filter((c): c is string => c !== null);
+  const lines = [
+    `linkweave backtest: ${result.root}`,
+    '',
+    `  pages                ${site.pages}; ${site.contentLinks} content links between ${site.contentPairs} page pairs, ${site.eligiblePairs} of them may be held out`,
+    `  held out             ${roundTo(settings.holdout * 100, 2)}% of those pairs, ${seeds}; a page keeps at least one content inlink`,
+    `  per run${settings.runs > 1 ? ' (mean)' : '       '}       ${count(mean(runs.map((x) => x.heldOutPairs)))} pairs (${count(mean(runs.map((x) => x.heldOutLinks)))} links) into ${count(mean(runs.map((x) => x.targets)))} target pages`,
+    `  candidates           ${coverage(runs)} of the held-out sources are candidates of their target (related, similarity >= ${suggest.minSimilarity}): no method finds more`,
+    `  minSimilarity        ${suggest.minSimilarity} (relatedK ${suggest.relatedK})`,
+    `  score                ${score.formula}`,
+    `                       reach: ${score.reachTooDeep} source too deep to fix the target's depth, ${score.reachUnreachable} unreachable source, else 1`,
+    `                       anchor: ${score.noAnchor} without an anchor phrase (then similarity >= ${score.noAnchorMinSimilarity}), else 1`,
+    `  k                    ${K_VALUES.join(', ')} (lists of ${LIST_LENGTH} sources per target)`,
+    `  changed for this     ${changes.join(', ')}`,
+    '',
+  ];
+  if (result.summary.every((s) => s.mrr.mean === null)) {
+    lines.push(
+      '  Nothing was held out: no page has content inlinks from two or more other pages, so any held-out',
+      '  link would leave a page without inlinks.',
+    );
+    return `${lines.join('\n')}\n`;
+  }
+  const header = ['method', ...K_VALUES.map((k) => `R@${k}`), ...K_VALUES.map((k) => `P@${k}`), 'MRR', 'anchor'];
+  const rows = result.summary.map((s) => [
+    METHOD_LABELS[s.method],
+    ...s.recall.map((x) => cell(x, settings.runs)),
+    ...s.precision.map((x) => cell(x, settings.runs)),
+    cell(s.mrr, settings.runs),
+    cell(s.anchorOverlap, settings.runs),
+  ]);
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i]!.length)));
+  const line = (row: readonly string[]) => `  ${row.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ')}`.trimEnd();
+  lines.push(line(header), ...rows.map(line), '');
+  const ours = result.summary.find((s) => s.method === 'linkweave');
+  const place = ours === undefined ? '-' : cell(ours.anchorInPlace, settings.runs);
+  lines.push(
+    `  ${settings.runs > 1 ? 'Cells: mean±sample standard deviation over the runs. ' : ''}Means over the target pages with held-out inlinks.`,
+    `  R@k: share of a target's held-out sources among its first k proposed sources. P@k: held-out`,
+    `  sources among the first k, divided by k. MRR: 1 / rank of the first held-out source in the`,
+    `  top ${LIST_LENGTH} (0 if none). anchor: share of the recovered links whose anchor shares a word stem with`,
+    `  the original link text (anchor on the original link's place: ${place}).`,
+  );
+  return `${lines.join('\n')}\n`;
+}

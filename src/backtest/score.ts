@@ -1,0 +1,119 @@
+/**
+ * One backtest run (one seed): hold links out, rebuild the graph and ranking from what remains,
+ * run the suggestion stage's choice with every page as a target (choose.ts), and score the three methods' ranked
+ * lists against the held-out pairs (metrics.ts has the definitions).
+ *
+ * The text stage (term index, related pages, content centrality) is run again on what remains
+ * when the held-out links' words leave the pages; with `keepLinkText` the words stay, and the
+ * site's own text stage results (computed once, backtest.ts) are used.
+ */
+import { EngineError } from '../errors.js';
+import { buildGraph } from '../graph/index.js';
+import type { GraphInput } from '../graph/index.js';
+import type { ResolvedOptions } from '../options.js';
+import { rankGraph } from '../rank/index.js';
+import { findCandidates, hasContentLink } from '../suggest/index.js';
+import { buildTermIndex, contentCentrality, createStemCache, relatedPages } from '../text/index.js';
+import type { PageFacts, RelatedList, SiteGraph, TermIndex } from '../types.js';
+import { chooseLikeSuggest } from './choose.js';
+import { holdOut } from './holdout.js';
+import type { ContentPair } from './holdout.js';
+import { randomLists, randomPageLists, similarityLists, suggestionLists } from './methods.js';
+import { heldOutByTarget, LIST_LENGTH, scoreMethod } from './metrics.js';
+import type { RunResult } from './types.js';
+
+/** What the text stage gives the suggestion stage. */
+export interface TextResults {
+  readonly index: TermIndex;
+  readonly related: readonly RelatedList[];
+  readonly centrality: Float64Array;
+}
+
+/** Everything a run needs that does not depend on the seed. */
+export interface RunBase {
+  /** Options of the suggestion stage for the backtest (see `backtestOptions`). */
+  readonly options: ResolvedOptions;
+  /** The site as it is. */
+  readonly graph: SiteGraph;
+  /** The facts given to `buildGraph` for `graph`. */
+  readonly facts: readonly PageFacts[];
+  readonly aux: Omit<GraphInput, 'pages'>;
+  readonly traffic: ReadonlyMap<string, number> | null;
+  /** The text stage's results for the site as it is (used with `keepLinkText`; null: computed when needed). */
+  readonly text: TextResults | null;
+  readonly pairs: readonly ContentPair[];
+  readonly sourceText: (file: string) => string | undefined;
+}
+
+/**
+ * The suggestion options of a backtest: every page a target (`suggest.targets: 'all'`), ten
+ * suggestions per target (the longest list scored) and no per-source cap
+ * (`maxNewLinksPerPage` = the page count), so a source that suits many targets is not hidden
+ * from some of them by the cap. Everything else as configured.
+ */
+export function backtestOptions(options: ResolvedOptions, pages: number): ResolvedOptions {
+  return {
+    ...options,
+    suggest: { ...options.suggest, targets: 'all', perTarget: LIST_LENGTH, maxNewLinksPerPage: Math.max(1, pages, options.suggest.maxNewLinksPerPage) },
+  };
+}
+
+const NO_ANCHORS = { overlap: false, inPlace: false } as const;
+
+/** The text stage as `analyze` runs it, over the facts in page order. */
+export function textStage(ordered: readonly PageFacts[], options: ResolvedOptions): TextResults {
+  const index = buildTermIndex(ordered.map((f) => f.text));
+  const related = relatedPages(index, options.suggest.relatedK);
+  return { index, related, centrality: contentCentrality(related, ordered.length) };
+}
+
+/** Run the backtest once with `seed` (`keepLinkText`: see `BacktestSettings`). */
+export function runOnce(base: RunBase, share: number, seed: number, keepLinkText = false): RunResult {
+  const { graph, options } = base;
+  const n = graph.pages.length;
+  const { facts, heldOut } = holdOut({ graph, facts: base.facts, sourceText: base.sourceText, pairs: base.pairs, keepLinkText }, share, seed);
+  const reduced = buildGraph({ ...base.aux, pages: facts }, options);
+  checkReduced(graph, reduced, heldOut);
+  const ranking = rankGraph(reduced, options);
+  const ordered = reduced.pages.map((p) => facts[p.factsIndex]!);
+  const text = keepLinkText && base.text !== null ? base.text : textStage(ordered, options);
+  const chosen = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic }, options);
+
+  const truth = heldOutByTarget(heldOut);
+  const targets = [...truth.keys()];
+  const candidates = findCandidates(reduced, text.related, targets, options.suggest.minSimilarity);
+  const candidateKeys = new Set(candidates.map((c) => c.source * n + c.target));
+  const covered = heldOut.filter((p) => candidateKeys.has(p.source * n + p.target)).length;
+  const cache = createStemCache();
+  const methods =
+    targets.length === 0
+      ? []
+      : [
+          scoreMethod('linkweave', suggestionLists(chosen), truth, { overlap: true, inPlace: keepLinkText }, cache),
+          scoreMethod('tfidf', similarityLists(candidates), truth, NO_ANCHORS, cache),
+          scoreMethod('random', randomLists(candidates, seed), truth, NO_ANCHORS, cache),
+          scoreMethod('random-page', randomPageLists(reduced, targets, seed), truth, NO_ANCHORS, cache),
+        ];
+  return {
+    seed,
+    heldOutPairs: heldOut.length,
+    heldOutLinks: heldOut.reduce((a, p) => a + p.links.length, 0),
+    targets: targets.length,
+    candidateCoverage: heldOut.length === 0 ? null : covered / heldOut.length,
+    methods,
+  };
+}
+
+/**
+ * The reduced site must have the same pages in the same order (page ids are compared) and no
+ * content link left between a held-out pair; anything else is a bug, not a user error.
+ */
+function checkReduced(graph: SiteGraph, reduced: SiteGraph, heldOut: readonly { source: number; target: number }[]): void {
+  const same = reduced.pages.length === graph.pages.length && reduced.pages.every((p, i) => p.route === graph.pages[i]!.route);
+  if (!same) throw new EngineError('E_INTERNAL', 'backtest: holding links out changed the set of pages');
+  for (const p of heldOut) {
+    if (hasContentLink(reduced.forward, p.source, p.target)) {
+      throw new EngineError('E_INTERNAL', `backtest: the held-out link ${graph.pages[p.source]!.route} -> ${graph.pages[p.target]!.route} is still in the graph`);
+    }
+  }
+}
