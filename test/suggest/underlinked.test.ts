@@ -35,15 +35,17 @@ describe('findUnderlinked', () => {
     });
   });
 
-  it('flags a page whose PageRank percentile is far below its importance percentile', () => {
+  it('flags an important page whose PageRank percentile is far below its importance percentile', () => {
     const options = testOptions({ suggest: { rankGap: 0.5, minInlinks: 0 } });
     const input = siteInput(pages, options);
     const importance = computeImportance(input.graph, options, null, input.centrality);
     const rank = pagerankPercentiles(input.graph, input.ranking);
     const found = findUnderlinked(input.graph, input.ranking, importance, rank, options);
-    for (const u of found) {
-      const gap = importance.score[u.page]! - rank[u.page]!;
-      expect(u.reasons.includes('rank-below-importance')).toBe(gap > 0.5);
+    for (let p = 0; p < input.graph.pages.length; p++) {
+      const gap = importance.score[p]! - rank[p]!;
+      const flagged = found.find((u) => u.page === p)?.reasons.includes('rank-below-importance') ?? false;
+      const eligible = importance.level[p] === 'high' && p !== input.graph.entries[0] && !input.graph.pages[p]!.meta.exclude;
+      expect(flagged).toBe(eligible && gap > 0.5);
     }
     const hub = input.graph.routeIndex.get('/hub/')!;
     // hub: importance 1 (frontmatter high); its PageRank percentile is below 0.5.
