@@ -117,8 +117,11 @@ const schema = z.strictObject({
   workers: z.number().int().min(0).default(0),
 });
 
-/** Configuration as a user writes it (every key optional). */
-export type Config = z.input<typeof schema>;
+/** Configuration as a user writes it (every key optional), documented key by key in src/config.ts. */
+export type { Config } from './config.js';
+
+/** The schema's input type; `test/types/config.test-d.ts` checks it equals `Config`. */
+export type SchemaInput = z.input<typeof schema>;
 
 /** Configuration after defaults and validation. */
 export type ResolvedOptions = z.output<typeof schema> & {
