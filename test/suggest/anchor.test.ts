@@ -1,7 +1,8 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import type { Nodes } from 'mdast';
-import { findAnchors, positionInSpan, prepareSource, routeWords, targetNames } from '../../src/suggest/anchor.js';
+import { findAnchors, positionInSpan, prepareSource } from '../../src/suggest/anchor.js';
+import { routeWords, targetNames } from '../../src/suggest/names.js';
 import { createStemCache, tokenize } from '../../src/text/tokenize.js';
 import type { TextSpan } from '../../src/types.js';
 import { markdownPage, parseMarkdown } from './helpers.js';
