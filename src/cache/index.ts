@@ -1,6 +1,6 @@
 /** The page-facts cache: facts keyed by path, content hash, tool version and parse options. */
 export { parseWithCache } from './parse-cached.js';
-export { parseFingerprint } from './fingerprint.js';
+export { parseFingerprint, PARSE_OPTION_KEYS } from './fingerprint.js';
 export { openCache } from './store.js';
 export type { CacheKey, CacheSession, Lookup } from './store.js';
 export { CACHE_SCHEMA, SHARDS, shardFileName, shardOfPath, isCacheable, packFacts, unpackFacts } from './format.js';

@@ -22,23 +22,33 @@ export function workerUrl(moduleUrl: string = import.meta.url): URL {
 /**
  * Parse `files` with `threads` worker threads.
  * @param onParsed called with the number of files of each batch as it completes
+ * @param worker the worker module (tests give a missing one to see the fallback)
  */
 export async function parseInPool(
   files: readonly SourceFile[],
   options: ResolvedOptions,
   threads: number,
   onParsed: (count: number) => void,
+  worker: URL = workerUrl(),
 ): Promise<{ facts: PageFacts[]; stats: WorkerStats }> {
   const batches = makeBatches(files, threads);
   const used = Math.min(threads, batches.length);
   const facts: PageFacts[] = new Array(files.length);
   const pool = new Piscina<ParseTask, PageFacts[]>({
-    filename: workerUrl().href,
+    filename: worker.href,
     minThreads: used,
     maxThreads: used,
     idleTimeout: 1000,
   });
   let fallback: string | null = null;
+  // A worker that fails while starting (say, its module cannot be loaded) is not replaced and
+  // its queued tasks would wait forever: end the pool, which rejects them, so the batches fall
+  // back to the main thread below.
+  let broken: Promise<void> | null = null;
+  pool.on('error', (error: unknown) => {
+    fallback ??= error instanceof Error ? error.message : String(error);
+    broken ??= pool.destroy();
+  });
   try {
     await Promise.all(
       batches.map(async ({ start, end }) => {
@@ -56,7 +66,7 @@ export async function parseInPool(
       }),
     );
   } finally {
-    await pool.destroy();
+    await (broken ?? pool.destroy());
   }
   return { facts, stats: { threads: used, batches: batches.length, fallback } };
 }
