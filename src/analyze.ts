@@ -72,7 +72,8 @@ export interface CollectedInputs {
   readonly auxProblems: readonly AuxProblem[];
 }
 
-async function collectInputs(options: ResolvedOptions): Promise<CollectedInputs> {
+/** Read everything `analyze` reads before parsing: the sources, navigation, redirects and traffic files. */
+export async function collectInputs(options: ResolvedOptions): Promise<CollectedInputs> {
   const aux = [options.navigation, options.redirects, options.traffic].filter((p): p is string => p !== null);
   const [sources, navText, redirectsText, trafficText] = await Promise.all([
     collectSources(options, aux),
