@@ -20,6 +20,8 @@ export interface RunTiming {
   readonly stages: Record<BenchStage, number>;
   /** Wall time of `analyze` plus the write stage. */
   readonly totalMs: number;
+  /** CPU time of the process (all threads) over the same span. */
+  readonly cpuMs: number;
   readonly pages: number;
   readonly links: number;
   readonly suggestions: number;
@@ -46,15 +48,18 @@ export async function runPipeline(lib: Built, root: string, settings: RunSetting
     },
   };
   const cache = settings.cacheDir === null ? { enabled: false } : { enabled: true, dir: settings.cacheDir };
+  const c0 = process.cpuUsage();
   const t0 = performance.now();
   const report = await lib.api.analyze({ ...siteConfig(root), root, command: 'suggest', cache }, hooks);
   const tw = performance.now();
   await lib.write.writeFileAtomic(settings.outFile, lib.api.formatReport(report, 'json'));
   const end = performance.now();
+  const cpu = process.cpuUsage(c0);
   stages.write = end - tw;
   return {
     stages,
     totalMs: end - t0,
+    cpuMs: (cpu.user + cpu.system) / 1000,
     pages: report.stats.pages,
     links: report.stats.links,
     suggestions: report.suggestions.length,

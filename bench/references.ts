@@ -19,6 +19,25 @@ import type { SiteGraph } from '../src/types.js';
 type GraphologyPagerank = typeof import('graphology-metrics/centrality/pagerank.js').default;
 const graphologyPagerank = createRequire(import.meta.url)('graphology-metrics/centrality/pagerank.js') as GraphologyPagerank;
 
+/** Wall and CPU milliseconds of one measured span (CPU: the whole process, all threads). */
+export interface Span {
+  readonly ms: number;
+  readonly cpuMs: number;
+}
+
+/** Start measuring; `stop()` gives the wall and CPU time since. */
+export function startClock(): { stop(): Span } {
+  const c0 = process.cpuUsage();
+  const t0 = performance.now();
+  return {
+    stop(): Span {
+      const ms = performance.now() - t0;
+      const c = process.cpuUsage(c0);
+      return { ms, cpuMs: (c.user + c.system) / 1000 };
+    },
+  };
+}
+
 /** Milliseconds of `fn`, timed with the high-resolution clock. */
 export function timeMs(fn: () => void): number {
   const t = performance.now();
@@ -27,14 +46,14 @@ export function timeMs(fn: () => void): number {
 }
 
 /** (a) Time to parse every text with remark-parse alone (no plugins, no tree walk). */
-export function bareParseMs(texts: readonly string[]): number {
+export function bareParse(texts: readonly string[]): Span {
   const processor = unified().use(remarkParse);
   let nodes = 0;
-  const ms = timeMs(() => {
-    for (const text of texts) nodes += processor.parse(text).children.length;
-  });
+  const clock = startClock();
+  for (const text of texts) nodes += processor.parse(text).children.length;
+  const span = clock.stop();
   if (nodes === 0 && texts.length > 0) throw new Error('bench: bare parse produced no nodes');
-  return ms;
+  return span;
 }
 
 /** The forward edges of a site graph as plain arrays (the common input of both PageRanks). */
@@ -60,13 +79,13 @@ export interface PagerankComparison {
   readonly nodes: number;
   readonly edges: number;
   /** Ours: CSR construction from the edge arrays plus power iteration. */
-  readonly oursMs: number;
-  /** Ours: power iteration alone (median of 3), on the CSR built above. */
+  readonly ours: Span;
+  /** Ours: power iteration alone (best of 3, the run least disturbed by other work), on the CSR built above. */
   readonly oursIterateMs: number;
   readonly oursIterations: number;
   readonly oursConverged: boolean;
   /** graphology: graph construction from the same edge arrays plus its `pagerank`. */
-  readonly graphologyMs: number;
+  readonly graphology: Span;
   readonly graphologyBuildMs: number;
   /** graphology's message when it did not converge (it throws), else null. */
   readonly graphologyError: string | null;
@@ -90,12 +109,12 @@ export function comparePagerank(lib: Built, edges: EdgeArrays, damping: number, 
   const m = from.length;
   const opts = { damping, tolerance, maxIterations };
 
-  const t0 = performance.now();
+  const oursClock = startClock();
   const list = lib.graph.createEdgeList(m);
   for (let e = 0; e < m; e++) lib.graph.pushEdge(list, from[e]!, to[e]!, weight[e]!, 1);
   const built = lib.graph.buildCsr(list, n);
   const result = lib.rank.pagerank(built.forward, built.reverse, n, opts);
-  const oursMs = performance.now() - t0;
+  const ours = oursClock.stop();
   const iterateRuns: number[] = [];
   for (let r = 0; r < 3; r++) iterateRuns.push(timeMs(() => lib.rank.pagerank(built.forward, built.reverse, n, opts)));
   iterateRuns.sort((a, b) => a - b);
@@ -103,6 +122,7 @@ export function comparePagerank(lib: Built, edges: EdgeArrays, damping: number, 
   let theirs: Record<string, number> | null = null;
   let graphologyError: string | null = null;
   const t1 = performance.now();
+  const theirClock = startClock();
   const g = new DirectedGraph();
   for (let i = 0; i < n; i++) g.addNode(i);
   for (let e = 0; e < m; e++) g.addDirectedEdge(from[e]!, to[e]!, { weight: weight[e]! });
@@ -112,7 +132,7 @@ export function comparePagerank(lib: Built, edges: EdgeArrays, damping: number, 
   } catch (error) {
     graphologyError = (error as Error).message;
   }
-  const graphologyMs = performance.now() - t1;
+  const graphology = theirClock.stop();
 
   let maxAbsDiff = Number.NaN;
   if (theirs !== null) {
@@ -123,11 +143,11 @@ export function comparePagerank(lib: Built, edges: EdgeArrays, damping: number, 
   return {
     nodes: n,
     edges: m,
-    oursMs,
-    oursIterateMs: iterateRuns[1]!,
+    ours,
+    oursIterateMs: iterateRuns[0]!,
     oursIterations: result.iterations,
     oursConverged: result.converged,
-    graphologyMs,
+    graphology,
     graphologyBuildMs,
     graphologyError,
     maxAbsDiff,

@@ -11,7 +11,7 @@
  */
 import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { cpus, tmpdir, totalmem } from 'node:os';
+import { cpus, loadavg, tmpdir, totalmem } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
@@ -59,6 +59,7 @@ function machineInfo(): MachineInfo {
     memoryBytes: totalmem(),
     node: process.version,
     platform: `${process.platform}-${process.arch}`,
+    load: [loadavg()[0]!, loadavg()[0]!],
   };
 }
 
@@ -126,7 +127,7 @@ async function main(): Promise<void> {
   } finally {
     rmSync(base, { recursive: true, force: true });
   }
-  const table = renderTable(results, related, machine);
+  const table = renderTable(results, related, { ...machine, load: [machine.load[0], loadavg()[0]!] });
   process.stdout.write(`\n${table}`);
   if (values.record) {
     const command = `npm run bench -- ${process.argv.slice(2).join(' ')}`.trim();

@@ -3,8 +3,8 @@
  * pass/miss mark beside each measured ratio that has one.
  */
 import type { MeasureResult, RelatedResult, RssResult } from './one-size.js';
-import type { BenchStage } from './pipeline.js';
-import { median } from './pipeline.js';
+import type { BenchStage, RunTiming } from './pipeline.js';
+import { STAGES, median } from './pipeline.js';
 
 /** Everything measured for one size (a child that failed leaves its error). */
 export interface SizeResult {
@@ -22,6 +22,8 @@ export interface MachineInfo {
   readonly memoryBytes: number;
   readonly node: string;
   readonly platform: string;
+  /** 1-minute load average at the start and the end of the run (other work on the machine). */
+  readonly load: readonly [number, number];
 }
 
 /** Targets of issue 9 (the ratios the bench marks pass or miss). */
@@ -90,34 +92,44 @@ export function renderTable(results: readonly SizeResult[], related: RelatedResu
     },
     '<= 2.5 GB at 100,000',
   );
-  row('bare parse ms (remark-parse alone)', m((x) => num(median(x.bareParseMs))));
+  row('total CPU ms, cold (all threads)', m((x) => num(median(x.cold.map((c) => c.cpuMs)))));
+  row('bare parse ms (remark-parse alone)', m((x) => num(median(x.bareParse.map((b) => b.ms)))));
   row(
     'cold total / bare parse',
     m((x) => {
-      const v = median(x.cold.map((c) => c.totalMs)) / median(x.bareParseMs);
-      return x.size === 10_000 ? `${v.toFixed(2)} ${mark(v <= TARGETS.coldOverBareAt10k)}` : v.toFixed(2);
+      const v = median(x.cold.map((c) => c.totalMs)) / median(x.bareParse.map((b) => b.ms));
+      const c = median(x.cold.map((r) => r.cpuMs)) / median(x.bareParse.map((b) => b.cpuMs));
+      const cpu = ` (CPU ${c.toFixed(2)})`;
+      return x.size === 10_000 ? `${v.toFixed(2)} ${mark(v <= TARGETS.coldOverBareAt10k)}${cpu}` : `${v.toFixed(2)}${cpu}`;
     }),
     '<= 1.15 at 10,000',
   );
-  const warmRatio = (pick: (x: Measured) => readonly { totalMs: number }[], limit: number) => m((x) => {
+  const warmRatio = (pick: (x: Measured) => readonly RunTiming[], limit: number) => m((x) => {
     const w = pick(x);
     if (w.length === 0) return 'n/a (cache not built)';
     const v = median(w.map((c) => c.totalMs)) / median(x.cold.map((c) => c.totalMs));
-    return `${v.toFixed(3)} ${mark(v <= limit)}`;
+    const c = median(w.map((r) => r.cpuMs)) / median(x.cold.map((r) => r.cpuMs));
+    return `${v.toFixed(3)} ${mark(v <= limit)} (CPU ${c.toFixed(3)})`;
   });
   row('warm, no change / cold', warmRatio((x) => x.warm, TARGETS.warmOverCold), '<= 0.05');
   row('warm, one file changed / cold', warmRatio((x) => x.warmChanged, TARGETS.warmChangedOverCold), '<= 0.08');
+  row('warm, no change: largest stages ms', m((x) => {
+    if (x.warm.length === 0) return 'n/a';
+    const top = STAGES.map((st) => [st, median(x.warm.map((w) => w.stages[st]))] as const).sort((a, b) => b[1] - a[1]).slice(0, 3);
+    return top.map(([st, v]) => `${st} ${num(v)}`).join(', ');
+  }));
   row('PageRank graph: nodes / edges', m((x) => `${int.format(x.pagerank[0]!.nodes)} / ${int.format(x.pagerank[0]!.edges)}`));
-  row('PageRank ms, ours (CSR build + iterate)', m((x) => num(median(x.pagerank.map((p) => p.oursMs)))));
+  row('PageRank ms, ours (CSR build + iterate)', m((x) => num(median(x.pagerank.map((p) => p.ours.ms)))));
   row('PageRank ms, graphology (graph build + pagerank)', m((x) => {
     const err = x.pagerank.find((p) => p.graphologyError !== null)?.graphologyError ?? null;
-    return err === null ? num(median(x.pagerank.map((p) => p.graphologyMs))) : `threw: ${err.slice(0, 40)}`;
+    return err === null ? num(median(x.pagerank.map((p) => p.graphology.ms))) : `threw: ${err.slice(0, 40)}`;
   }));
   row(
     'PageRank speed-up vs graphology',
     m((x) => {
-      const v = median(x.pagerank.map((p) => p.graphologyMs)) / median(x.pagerank.map((p) => p.oursMs));
-      return `${v.toFixed(1)}x ${mark(v >= TARGETS.pagerankSpeedup)}`;
+      const v = median(x.pagerank.map((p) => p.graphology.ms)) / median(x.pagerank.map((p) => p.ours.ms));
+      const c = median(x.pagerank.map((p) => p.graphology.cpuMs)) / median(x.pagerank.map((p) => p.ours.cpuMs));
+      return `${v.toFixed(1)}x ${mark(v >= TARGETS.pagerankSpeedup)} (CPU ${c.toFixed(1)}x)`;
     }),
     '>= 20x',
   );
@@ -147,10 +159,11 @@ export function renderTable(results: readonly SizeResult[], related: RelatedResu
 
   const relatedCells = (text: string): ((r: SizeResult, i: number) => string) => (_r, i) => (i === 0 ? text : '');
   if (related !== null && 'mode' in related) {
-    const inv = median(related.invertedMs);
-    const speed = related.bruteMs / inv;
-    row(`related top-10 on ${int.format(related.size)} pages: inverted / brute ms`, relatedCells(`${num(inv)} / ${num(related.bruteMs)}`));
-    row('related top-10 speed-up vs brute force', relatedCells(`${speed.toFixed(0)}x ${mark(speed >= TARGETS.relatedSpeedup)}`), '>= 40x');
+    const inv = median(related.inverted.map((s) => s.ms));
+    const speed = related.brute.ms / inv;
+    const cpuSpeed = related.brute.cpuMs / median(related.inverted.map((s) => s.cpuMs));
+    row(`related top-10 on ${int.format(related.size)} pages: inverted / brute ms`, relatedCells(`${num(inv)} / ${num(related.brute.ms)}`));
+    row('related top-10 speed-up vs brute force', relatedCells(`${speed.toFixed(0)}x ${mark(speed >= TARGETS.relatedSpeedup)} (CPU ${cpuSpeed.toFixed(0)}x)`), '>= 40x');
     const same = related.differing === 0 ? 'identical' : `${related.differing} pages differ (${related.differingBeyondTies} beyond k-th place ties)`;
     row('related top-10 sets vs brute force', relatedCells(same), 'identical');
   } else if (related !== null) {
@@ -158,7 +171,7 @@ export function renderTable(results: readonly SizeResult[], related: RelatedResu
   }
 
   const lines = [
-    `${machine.date} · ${machine.cpu} × ${machine.cores} · ${(machine.memoryBytes / 1024 ** 3).toFixed(0)} GiB · Node ${machine.node} · ${machine.platform}`,
+    `${machine.date} · ${machine.cpu} × ${machine.cores} · ${(machine.memoryBytes / 1024 ** 3).toFixed(0)} GiB · Node ${machine.node} · ${machine.platform} · load average ${machine.load[0].toFixed(1)} at start, ${machine.load[1].toFixed(1)} at end`,
     '',
     `| ${header.join(' | ')} |`,
     `| ${header.map((_, i) => (i === 0 ? '---' : '---:')).join(' | ')} |`,
