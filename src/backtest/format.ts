@@ -62,6 +62,7 @@ export function formatBacktestJson(result: BacktestResult): string {
       holdout: settings.holdout,
       seeds: settings.seeds,
       runs: settings.runs,
+      keepLinkText: settings.keepLinkText,
       k: [...K_VALUES],
       listLength: LIST_LENGTH,
       minSimilarity: suggest.minSimilarity,
@@ -110,19 +111,22 @@ export function formatBacktestText(result: BacktestResult): string {
     suggest.perTarget.configured === suggest.perTarget.used ? null : `perTarget ${suggest.perTarget.configured} -> ${suggest.perTarget.used}`,
     `maxNewLinksPerPage ${suggest.maxNewLinksPerPage.configured} -> ${suggest.maxNewLinksPerPage.used} (no per-source cap)`,
   ].filter((c): c is string => c !== null);
+  const field = (label: string, value: string) => `  ${label.padEnd(16)}${value}`;
+  const perRun = (f: (x: BacktestResult['runs'][number]) => number) => count(mean(runs.map(f)));
   const lines = [
     `linkweave backtest: ${result.root}`,
     '',
-    `  pages                ${site.pages}; ${site.contentLinks} content links between ${site.contentPairs} page pairs, ${site.eligiblePairs} of them may be held out`,
-    `  held out             ${roundTo(settings.holdout * 100, 2)}% of those pairs, ${seeds}; a page keeps at least one content inlink`,
-    `  per run${settings.runs > 1 ? ' (mean)' : '       '}       ${count(mean(runs.map((x) => x.heldOutPairs)))} pairs (${count(mean(runs.map((x) => x.heldOutLinks)))} links) into ${count(mean(runs.map((x) => x.targets)))} target pages`,
-    `  candidates           ${coverage(runs)} of the held-out sources are candidates of their target (related, similarity >= ${suggest.minSimilarity}): no method finds more`,
-    `  minSimilarity        ${suggest.minSimilarity} (relatedK ${suggest.relatedK})`,
-    `  score                ${score.formula}`,
-    `                       reach: ${score.reachTooDeep} source too deep to fix the target's depth, ${score.reachUnreachable} unreachable source, else 1`,
-    `                       anchor: ${score.noAnchor} without an anchor phrase (then similarity >= ${score.noAnchorMinSimilarity}), else 1`,
-    `  k                    ${K_VALUES.join(', ')} (lists of ${LIST_LENGTH} sources per target)`,
-    `  changed for this     ${changes.join(', ')}`,
+    field('site', `${site.pages} pages; ${site.contentLinks} content links between ${site.contentPairs} page pairs, ${site.eligiblePairs} of which may be held out`),
+    field('held out', `${roundTo(settings.holdout * 100, 2)}% of those pairs per run, ${seeds}; every page keeps a content inlink`),
+    field('link words', settings.keepLinkText ? 'kept in the page as prose, where an anchor may go (--keep-link-text)' : 'removed with the link (--keep-link-text keeps them as prose)'),
+    field(settings.runs > 1 ? 'per run (mean)' : 'this run', `${perRun((x) => x.heldOutPairs)} pairs (${perRun((x) => x.heldOutLinks)} links) into ${perRun((x) => x.targets)} target pages`),
+    field('candidates', `${coverage(runs)} of the held-out sources are candidates of their target (related, similarity >= ${suggest.minSimilarity}); no method finds more`),
+    field('minSimilarity', `${suggest.minSimilarity} (relatedK ${suggest.relatedK})`),
+    field('score', score.formula),
+    field('', `reach: ${score.reachTooDeep} source too deep to fix the target's depth, ${score.reachUnreachable} unreachable source, else 1`),
+    field('', `anchor: ${score.noAnchor} without an anchor phrase (then similarity >= ${score.noAnchorMinSimilarity}), else 1`),
+    field('k', `${K_VALUES.join(', ')} (ranked lists of ${LIST_LENGTH} sources per target)`),
+    field('backtest sets', changes.join(', ')),
     '',
   ];
   if (result.summary.every((s) => s.mrr.mean === null)) {
@@ -144,13 +148,13 @@ export function formatBacktestText(result: BacktestResult): string {
   const line = (row: readonly string[]) => `  ${row.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ')}`.trimEnd();
   lines.push(line(header), ...rows.map(line), '');
   const ours = result.summary.find((s) => s.method === 'linkweave');
-  const place = ours === undefined ? '-' : cell(ours.anchorInPlace, settings.runs);
+  const place = settings.keepLinkText && ours !== undefined ? ` On the original link's own place: ${cell(ours.anchorInPlace, settings.runs)}.` : '';
   lines.push(
     `  ${settings.runs > 1 ? 'Cells: mean±sample standard deviation over the runs. ' : ''}Means over the target pages with held-out inlinks.`,
-    `  R@k: share of a target's held-out sources among its first k proposed sources. P@k: held-out`,
-    `  sources among the first k, divided by k. MRR: 1 / rank of the first held-out source in the`,
-    `  top ${LIST_LENGTH} (0 if none). anchor: share of the recovered links whose anchor shares a word stem with`,
-    `  the original link text (anchor on the original link's place: ${place}).`,
+    '  R@k: share of a target\'s held-out sources among its first k proposed sources. P@k: held-out',
+    '  sources among the first k, divided by k. MRR: 1 / rank of the first held-out source in the',
+    `  top ${LIST_LENGTH} (0 if none). anchor: share of the recovered links whose anchor shares a word stem`,
+    `  with the original link text.${place}`,
   );
   return `${lines.join('\n')}\n`;
 }

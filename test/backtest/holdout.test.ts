@@ -14,7 +14,17 @@ import { link, options, page } from '../graph/facts.js';
 const opts = options();
 
 /** A random site: pages p0..p(n-1), content and template links, a footer link, excluded pages, maybe a navigation file. */
-const siteArb = fc
+interface Site {
+  readonly n: number;
+  readonly links: readonly { readonly from: number; readonly to: number; readonly template: boolean; readonly text: string }[];
+  readonly footerShare: number;
+  readonly excluded: readonly boolean[];
+  readonly navigation: boolean;
+  readonly share: number;
+  readonly seed: number;
+}
+
+const siteArb: fc.Arbitrary<Site> = fc
   .integer({ min: 2, max: 14 })
   .chain((n) =>
     fc.record({
@@ -30,8 +40,6 @@ const siteArb = fc
       seed: fc.integer(),
     }),
   );
-
-type Site = fc.Infer<typeof siteArb>;
 
 function factsOf(site: Site): PageFacts[] {
   return Array.from({ length: site.n }, (_, i) => {
@@ -110,7 +118,7 @@ describe('holdOut', () => {
     const site: Site = {
       n: 12,
       // Page i links to the five pages after it: every page has five content inlink sources.
-      links: Array.from({ length: 60 }, (_, k) => ({ from: k % 12, to: (k % 12 + 1 + Math.floor(k / 12)) % 12, template: false, text: 'guide' as const })),
+      links: Array.from({ length: 60 }, (_, k) => ({ from: k % 12, to: (k % 12 + 1 + Math.floor(k / 12)) % 12, template: false, text: 'guide' })),
       footerShare: 0,
       excluded: new Array(12).fill(false),
       navigation: false,
