@@ -26,7 +26,7 @@ export interface FrontResult {
 }
 
 /** Collect, parse and build the graph of the site at `root`. */
-export async function runFront(lib: Built, root: string): Promise<FrontResult> {
+export async function runFront(lib: Pick<Built, 'api' | 'collect' | 'parse' | 'graph'>, root: string): Promise<FrontResult> {
   const options = lib.api.resolveOptions({ ...siteConfig(root), cache: { enabled: false } }, root);
   const aux = options.navigation === null ? [] : [options.navigation];
   const collected = await lib.collect.collectSources(options, aux);

@@ -104,7 +104,7 @@ export interface PagerankComparison {
  * stopping rule: graphology stops when the L1 change < `N * tolerance`, so its tolerance is
  * set to `1e-10 / N` for the L1 change < 1e-10 that ours uses; both at most 200 iterations.
  */
-export function comparePagerank(lib: Built, edges: EdgeArrays, damping: number, tolerance: number, maxIterations: number): PagerankComparison {
+export function comparePagerank(lib: Pick<Built, 'graph' | 'rank'>, edges: EdgeArrays, damping: number, tolerance: number, maxIterations: number): PagerankComparison {
   const { n, from, to, weight } = edges;
   const m = from.length;
   const opts = { damping, tolerance, maxIterations };
