@@ -7,7 +7,9 @@ export type ErrorCode =
   | 'E_RANK_NO_CONVERGE'
   | 'E_REPORT_INVALID'
   | 'E_APPLY_REFUSED'
-  | 'E_INTERNAL';
+  | 'E_INTERNAL'
+  /** A build plugin's gate failed (the message lists the findings that failed it). */
+  | 'E_GATE_FAILED';
 
 /** An error with a stable `code`; the message says what failed and how to fix it. */
 export class EngineError extends Error {
