@@ -6,9 +6,10 @@ import { isDeadEnd } from './structure.js';
 /** Options of `dead-end`. */
 export interface DeadEndOptions {
   /**
-   * Count template links (navigation, header, footer) as outlinks. `false`: a page whose only
-   * links are the sidebar's is a dead end too.
-   * @default true
+   * Count template links (navigation, header, footer) as outlinks. With the default `false`, a
+   * page whose only links are the sidebar's is a dead end: the reader finishes the text and finds
+   * nowhere to go on but the menu, which every page has.
+   * @default false
    */
   readonly countTemplateLinks: boolean;
 }
@@ -19,7 +20,7 @@ export interface DeadEndOptions {
  * Links to external sites, files and the page itself do not count. A one-page site has no
  * dead ends. Reported at line 1, column 1 of the page's file.
  *
- * Options: `countTemplateLinks` (default `true`). Default severity: `warning`.
+ * Options: `countTemplateLinks` (default `false`). Default severity: `warning`.
  *
  * @example ok: `/guide/install/` ends with "Next: [configure](configure.md)".
  * @example not ok: `/guide/faq/` links only to an external site:
@@ -30,7 +31,7 @@ export const deadEnd: Rule<DeadEndOptions> = {
   id: 'dead-end',
   description: 'Every page links on to at least one other page.',
   defaultSeverity: 'warning',
-  defaultOptions: { countTemplateLinks: true },
+  defaultOptions: { countTemplateLinks: false },
   optionsSchema: z.strictObject({ countTemplateLinks: z.boolean() }),
   check(ctx, options) {
     const findings: RuleFinding[] = [];

@@ -18,17 +18,18 @@ export interface OrphanPageOptions {
  *
  * Entry pages are exempt. Reported at line 1, column 1 of the page's file.
  *
- * Options: `countTemplateLinks` (default `true`). Default severity: `warning`.
+ * Options: `countTemplateLinks` (default `true`). Default severity: `error`: nothing leads a
+ * reader to an orphan page, so it is unreachable too.
  *
  * @example ok: `index.md` links to `about.md`, so `/about/` is no orphan.
  * @example not ok: nothing links to `old/notes.md`:
- * `old/notes.md:1:1  warning  Unexpected orphan page /old/notes/, expected a link to it from
+ * `old/notes.md:1:1  error  Unexpected orphan page /old/notes/, expected a link to it from
  * at least one other page  orphan-page`
  */
 export const orphanPage: Rule<OrphanPageOptions> = {
   id: 'orphan-page',
   description: 'Every page is linked from at least one other page.',
-  defaultSeverity: 'warning',
+  defaultSeverity: 'error',
   defaultOptions: { countTemplateLinks: true },
   optionsSchema: z.strictObject({ countTemplateLinks: z.boolean() }),
   check(ctx, options) {

@@ -47,10 +47,10 @@ export function isOrphan(
 }
 
 /**
- * Dead end: no outlinks to other pages (template links count unless `countTemplateLinks` is
- * false). A site of one page has no dead ends: there is nowhere to link to.
+ * Dead end: no content outlinks to other pages (template links count only when
+ * `countTemplateLinks` is true). A site of one page has no dead ends: there is nowhere to link to.
  */
-export function isDeadEnd(graph: SiteGraph, ranking: Ranking, page: number, countTemplateLinks = true): boolean {
+export function isDeadEnd(graph: SiteGraph, ranking: Ranking, page: number, countTemplateLinks = false): boolean {
   if (graph.pages.length < 2) return false;
   const outlinks = countTemplateLinks ? ranking.outlinks[page]! : contentOutlinks(graph.forward, page);
   return outlinks === 0;

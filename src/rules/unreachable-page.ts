@@ -1,12 +1,14 @@
 import type { Rule, RuleFinding } from './types.js';
 import { listRoutes, pageFinding } from './place.js';
-import { isUnreachable } from './structure.js';
+import { entrySet, isOrphan, isUnreachable } from './structure.js';
 
 /**
  * `unreachable-page`: every page can be reached by following links from an entry page.
  *
  * Click depth follows content links, and template links when `depthCountsTemplate` is true.
- * An orphan page is unreachable too and gets both findings. When no entry page exists the rule
+ * An orphan page is unreachable too, but `orphan-page` already says why, so this rule reports
+ * only the pages that do have inlinks, all from pages that are unreachable themselves; the
+ * message names those pages, which is where the fix goes. When no entry page exists the rule
  * is silent: `missing-entry` reports the cause once instead of every page.
  * Reported at line 1, column 1 of the page's file.
  *
@@ -25,11 +27,21 @@ export const unreachablePage: Rule = {
   check(ctx) {
     if (ctx.graph.entries.length === 0) return [];
     const entries = listRoutes(ctx.graph.entries.map((id) => ctx.graph.pages[id]!.route));
+    const entryIds = entrySet(ctx.graph);
     const findings: RuleFinding[] = [];
+    const { reverse } = ctx.graph;
     for (const page of ctx.graph.pages) {
-      if (!isUnreachable(ctx.ranking, page.id)) continue;
+      if (!isUnreachable(ctx.ranking, page.id) || isOrphan(ctx.graph, ctx.ranking, entryIds, page.id)) continue;
+      const from: string[] = [];
+      for (let e = reverse.offsets[page.id]!; e < reverse.offsets[page.id + 1]!; e++) {
+        if (reverse.targets[e] !== page.id) from.push(ctx.graph.pages[reverse.targets[e]!]!.route);
+      }
       findings.push(
-        pageFinding(page, `Unexpected unreachable page ${page.route}, expected a path of links to it from an entry page (${entries})`),
+        pageFinding(
+          page,
+          `Unexpected unreachable page ${page.route}, expected a path of links to it from an entry page (${entries}); ` +
+            `only unreachable pages link to it: ${listRoutes(from)}`,
+        ),
       );
     }
     return findings;

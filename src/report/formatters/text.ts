@@ -1,7 +1,8 @@
 /**
- * The terminal writer: findings grouped by file (`file:line:column  severity  message
- * rule-id`, columns aligned, long messages wrapped under themselves), suggested links grouped
- * by source file, then the counts and the gate result last, where a CI log ends.
+ * The terminal writer: findings grouped by file, each as `file:line:column  severity  rule-id`
+ * with its message wrapped on the lines below (the location stays whole, so editors and CI logs
+ * can link it), suggested links grouped by source file the same way, then the counts and the
+ * gate result last, where a CI log ends.
  * Colour through picocolors, only when `ctx.color`.
  */
 import pc from 'picocolors';
@@ -18,20 +19,11 @@ interface Word {
   readonly paint: Paint;
 }
 
-/** Continuation lines indent under the message up to this column, else by `SHORT_INDENT`. */
-const MAX_INDENT = 36;
-const SHORT_INDENT = 6;
-
-/** Indent of continuation lines after a prefix of `prefixWidth` columns. */
-function hanging(prefixWidth: number): number {
-  return prefixWidth <= MAX_INDENT ? prefixWidth : SHORT_INDENT;
-}
-
 /**
  * Lay `words` out after `prefix` (already painted; `prefixWidth` visible columns): lines of at
  * most `width` columns, continuation lines indented by `indent`. `width` 0: one line.
  */
-function wrap(prefix: string, prefixWidth: number, words: readonly Word[], width: number, indent = hanging(prefixWidth)): string[] {
+function wrap(prefix: string, prefixWidth: number, words: readonly Word[], width: number, indent: number): string[] {
   const lines: string[] = [];
   let line = prefix;
   let used = prefixWidth;
@@ -84,51 +76,69 @@ function groupByFile<T extends { readonly file: string }>(items: readonly T[]): 
   return groups;
 }
 
+/** Message lines sit under their location, indented by this much. */
+const BODY_INDENT = 4;
+
 function findingLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
   const loc = (f: Finding): string => `${clean(displayPath(f.file, report.root, ctx.cwd)) || '(site)'}:${f.line}:${f.column}`;
   const out: string[] = [];
   for (const group of groupByFile(report.findings)) {
     if (out.length > 0) out.push('');
-    const locWidth = Math.max(...group.map((f) => loc(f).length));
     for (const f of group) {
       const location = loc(f);
-      const sevText = f.severity.padEnd(7);
       const paintSev = f.severity === 'error' ? c.red : c.yellow;
-      const pad = ' '.repeat(Math.max(0, locWidth - location.length));
       const cut = location.lastIndexOf(':', location.lastIndexOf(':') - 1);
-      const prefix = `${location.slice(0, cut)}${c.dim(location.slice(cut))}${pad}  ${paintSev(sevText)}  `;
-      const prefixWidth = locWidth + 2 + sevText.length + 2;
-      out.push(...wrap(prefix, prefixWidth, [...words(f.message, (s) => s), { text: f.rule, sep: '  ', paint: c.dim }], width));
+      out.push(`${location.slice(0, cut)}${c.dim(location.slice(cut))}  ${paintSev(f.severity)}  ${c.dim(f.rule)}`);
+      out.push(...wrap(' '.repeat(BODY_INDENT), BODY_INDENT, words(f.message, (s) => s), width, BODY_INDENT));
     }
   }
   return out;
 }
 
-function suggestionWords(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
+function suggestionHead(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
   const plain = (x: string): string => x;
-  const head: Word[] = [
+  return [
     ...words(s.anchor === null ? 'add a link' : 'add link', c.green),
     ...(s.anchor === null ? [] : words(`"${s.anchor}"`, plain)),
     { text: '->', sep: ' ', paint: plain },
     { text: clean(s.target), sep: ' ', paint: c.cyan },
   ];
-  const noAnchor = s.anchor === null ? 'no anchor phrase found, ' : '';
-  const impact = `(${noAnchor}similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')})`;
-  return [...head, ...words(impact, c.dim, '  '), { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` }];
+}
+
+function suggestionDetail(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
+  const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
+  return [...words(impact, c.dim, ''), { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` }];
 }
 
 function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
-  const loc = (s: Suggestion): string => `${clean(displayPath(s.file, report.root, ctx.cwd))}:${s.line}:${s.column}`;
-  const out = [c.bold(`Suggested links (${report.suggestions.length})`)];
-  for (const group of groupByFile(report.suggestions)) {
+  const where = (s: Suggestion): string => clean(displayPath(s.file, report.root, ctx.cwd));
+  const anchored = report.suggestions.filter((s) => s.anchor !== null);
+  const loose = report.suggestions.filter((s) => s.anchor === null);
+  const out = [c.bold(`Suggested links (${anchored.length})`)];
+  for (const group of groupByFile(anchored)) {
     out.push('');
-    const locWidth = Math.max(...group.map((s) => loc(s).length));
     for (const s of group) {
-      const prefix = `${loc(s).padEnd(locWidth)}  `;
-      out.push(...wrap(prefix, locWidth + 2, suggestionWords(s, c), width));
+      const location = `${where(s)}:${s.line}:${s.column}`;
+      out.push(...wrap(`${location}  `, location.length + 2, suggestionHead(s, c), width, BODY_INDENT));
+      out.push(...wrap(' '.repeat(BODY_INDENT), BODY_INDENT, suggestionDetail(s, c), width, BODY_INDENT));
     }
   }
-  const ids = report.suggestions.slice(0, 2).map((s) => s.id).join(',');
+  if (loose.length > 0) {
+    // No phrase of the source names the target: a writer has to add a sentence, so these come
+    // last, one line each, without a position.
+    out.push('', c.bold(`Related pages with no anchor phrase (${loose.length}): a sentence that links would help`), '');
+    for (const s of loose) {
+      const head = `${where(s)} -> `;
+      out.push(
+        ...wrap(head, head.length, [
+          { text: clean(s.target), sep: '', paint: c.cyan },
+          ...words(`(similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')})`, c.dim, '  '),
+          { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` },
+        ], width, BODY_INDENT),
+      );
+    }
+  }
+  const ids = (anchored.length > 0 ? anchored : loose).slice(0, 2).map((s) => s.id).join(',');
   out.push('', c.dim(`Apply chosen links with: linkweave apply --ids ${ids}${report.suggestions.length > 2 ? ',...' : ''}`));
   return out;
 }
@@ -148,7 +158,7 @@ export const textFormatter: Formatter = {
     const problems = problemsLine(report);
     out.push(error > 0 ? c.red(c.bold(problems)) : warning > 0 ? c.yellow(c.bold(problems)) : c.green(problems));
     const parts = summaryParts(report);
-    out.push(...wrap('', 0, phrases(parts, ','), width));
+    out.push(...wrap('', 0, phrases(parts, ','), width, 0));
 
     const { gate } = report;
     if (gate.passed) {
