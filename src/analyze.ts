@@ -22,7 +22,7 @@ import type { AuxProblem } from './rules/index.js';
 import { buildReport } from './report/index.js';
 import { resolveOptions } from './options.js';
 import type { Config, ResolvedOptions } from './options.js';
-import type { PageFacts, RawLink, Report, Suggestion } from './types.js';
+import type { Finding, PageFacts, RawLink, Report, Suggestion } from './types.js';
 import { VERSION } from './version.js';
 
 /** The stages `analyze` runs, in order, as reported to hooks. */
@@ -44,6 +44,8 @@ export type AnalyzeInput = Config & {
   readonly command?: 'check' | 'suggest';
   /** Where the configuration came from, named in error messages. @default 'configuration' */
   readonly configOrigin?: string;
+  /** Findings accepted for now (`--baseline`, read by `parseBaseline`): only new ones fail the gate. @default none */
+  readonly baseline?: { readonly findings: readonly Finding[] };
 };
 
 /**
@@ -53,14 +55,14 @@ export type AnalyzeInput = Config & {
  *   or auxiliary file). A bad source file is a finding, never a throw.
  */
 export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Promise<Report> {
-  const { root, command = 'check', configOrigin = 'configuration', ...config } = input;
+  const { root, command = 'check', configOrigin = 'configuration', baseline, ...config } = input;
   const options = resolveOptions(config, resolve(root), configOrigin);
   validateRuleConfig(options, configOrigin);
   const stage = stageTimer(hooks);
 
   const collected = await stage('collect', () => collectInputs(options));
   const facts = await stage('parse', () => parseAll(collected.sources, options, hooks));
-  return finishAnalysis({ options, command, facts, collected, hooks });
+  return finishAnalysis({ options, command, facts, collected, hooks, ...(baseline === undefined ? {} : { baseline }) });
 }
 
 /** Everything read from disk before parsing. */
@@ -128,8 +130,9 @@ export async function finishAnalysis(input: {
   readonly facts: readonly PageFacts[];
   readonly collected: CollectedInputs;
   readonly hooks: AnalyzeHooks;
+  readonly baseline?: { readonly findings: readonly Finding[] };
 }): Promise<Report> {
-  const { options, command, facts, collected, hooks } = input;
+  const { options, command, facts, collected, hooks, baseline } = input;
   const stage = stageTimer(hooks);
   const graph = await stage('graph', () =>
     buildGraph(
@@ -166,6 +169,7 @@ export async function finishAnalysis(input: {
       files: collected.sources.files.length,
       version: VERSION,
       ...(importance === undefined ? {} : { importance }),
+      ...(baseline === undefined ? {} : { baseline }),
     }),
   );
 }

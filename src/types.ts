@@ -339,4 +339,54 @@ export interface Report {
     /** Deepest click depth allowed (`ResolvedOptions.maxDepth`). */
     readonly maxDepth: number;
   };
+  /** This run's findings against a baseline file (`--baseline`); the gate counted only `new`. */
+  readonly baseline?: BaselineResult;
+  /** This run against a base report (`--compare BASE.json`): what a change did to the site. */
+  readonly comparison?: Comparison;
+}
+
+/**
+ * Findings matched against a baseline by rule, route and target (not line or message), with
+ * multiplicity. Severity failures of the gate count `new` only; the gate's numeric limits
+ * (`gate.maxDepth`, `gate.maxBrokenLinks`, ...) read the whole site.
+ */
+export interface BaselineResult {
+  /** Findings of this run that the baseline accepts. */
+  readonly known: number;
+  /** Findings of this run not in the baseline, sorted as `Report.findings`. */
+  readonly new: readonly Finding[];
+  /** Baseline findings this run no longer has, as the baseline recorded them. */
+  readonly fixed: readonly Finding[];
+}
+
+/** A page whose rank or click depth differs between two runs. */
+export interface PageChange {
+  readonly route: string;
+  readonly file: string;
+  /** Rank (pagerank x pages) or click depth in the base run; depth null = unreachable. */
+  readonly before: number | null;
+  readonly after: number | null;
+  /** after - before; null when the page became reachable or unreachable. */
+  readonly change: number | null;
+}
+
+/** Two runs compared (`--compare`): findings matched as for a baseline, pages by route. */
+export interface Comparison {
+  /** The base run: tool version and counts. */
+  readonly base: { readonly version: string; readonly pages: number; readonly findings: number };
+  /** Findings of this run the base did not have. */
+  readonly newFindings: readonly Finding[];
+  /** Findings of the base this run no longer has. */
+  readonly fixedFindings: readonly Finding[];
+  /** Findings both runs have. */
+  readonly knownFindings: number;
+  /** Pages only this run has / only the base had, by route. */
+  readonly pagesAdded: readonly { readonly route: string; readonly file: string }[];
+  readonly pagesRemoved: readonly { readonly route: string; readonly file: string }[];
+  /** Pages in both runs whose rank changed most (top 10 by absolute change, then route). */
+  readonly rankChanges: readonly PageChange[];
+  /** Pages in both runs whose click depth changed most (reachability changes first). */
+  readonly depthChanges: readonly PageChange[];
+  /** How many pages changed rank (by at least 0.005) and depth, beyond the top 10 shown. */
+  readonly changedPages: { readonly rank: number; readonly depth: number };
 }

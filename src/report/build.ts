@@ -14,8 +14,11 @@
  *   detection.
  * - `findings`: by file, line, column, rule, message.
  * - `suggestions`: by file, line, column, target, id.
+ * - `baseline` (only with `input.baseline`): findings matched against it (`baseline/match.ts`);
+ *   the gate's severity failures and `gate.maxWarnings` count the new ones only.
  */
 import type { Finding, Report, ReportLink, ReportPage, ResolvedLink, Suggestion } from '../types.js';
+import { matchFindings } from '../baseline/match.js';
 import { compareFindings } from '../rules/engine.js';
 import { compareText, navigationFile } from '../rules/structure.js';
 import { evaluateGate } from './gate.js';
@@ -54,6 +57,7 @@ export function buildReport(input: ReportInput): Report {
   const findings: Finding[] = [...input.findings].sort(compareFindings);
   const suggestions = input.suggestions.map(roundSuggestion).sort(compareSuggestions);
   const { stats, gate } = computeStats({ graph, ranking, findings, files: input.files, importance });
+  const matched = input.baseline === undefined ? null : matchFindings(findings, input.baseline.findings);
 
   return {
     schema: 'linkweave/report@1',
@@ -64,8 +68,9 @@ export function buildReport(input: ReportInput): Report {
     links,
     findings,
     suggestions,
-    gate: evaluateGate(findings, gate, options),
+    gate: evaluateGate(matched?.new ?? findings, gate, options),
     options: { maxDepth: options.maxDepth },
+    ...(matched === null ? {} : { baseline: { known: matched.known.length, new: matched.new, fixed: matched.fixed } }),
   };
 }
 

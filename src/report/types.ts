@@ -23,6 +23,11 @@ export interface ReportInput {
   readonly importance?: readonly Importance[];
   /** The tool's version (`VERSION`). */
   readonly version: string;
+  /**
+   * Findings accepted for now (`--baseline`): the gate's severity failures count only the
+   * findings not in it; the report lists new and fixed ones in `Report.baseline`.
+   */
+  readonly baseline?: { readonly findings: readonly Finding[] };
 }
 
 /** The counts the gate's limits read (from the report's stats, plus one the stats do not carry). */
