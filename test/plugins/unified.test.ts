@@ -22,6 +22,7 @@ const site = path.resolve(import.meta.dirname, '../fixtures/unified-site');
 const expected = JSON.parse(fs.readFileSync(path.join(site, 'expected.json'), 'utf8')) as {
   config: { navigation: string; redirects: string };
   routes: string[];
+  orphans: string[];
   findings: { rule: string; severity: string; file: string; line: number; column: number }[];
 };
 const config = { ...expected.config, cache: { enabled: false } };
@@ -54,9 +55,10 @@ describe('linkweave/unified', () => {
     const [fromPipeline, fromAnalyze] = await Promise.all([collector.report(), analyze({ ...config, root: site })]);
 
     expect(fromPipeline.pages.map((p) => p.route)).toEqual(expected.routes);
-    expect(fromPipeline.findings.map(({ rule, severity, file, line, column }) => ({ rule, severity, file, line, column }))).toEqual(
-      expected.findings,
-    );
+    const linkFindings = fromPipeline.findings.filter((f) => f.rule === 'broken-link' || f.rule === 'broken-fragment');
+    expect(linkFindings.map(({ rule, severity, file, line, column }) => ({ rule, severity, file, line, column }))).toEqual(expected.findings);
+    expect(fromPipeline.pages.filter((p) => p.inlinks === 0).map((p) => p.route)).toEqual(expected.orphans);
+    expect(fromPipeline.findings.some((f) => f.rule === 'orphan-page' && f.file === 'reference/hydration.md')).toBe(true);
     // The navigation file's template links and the redirect were read as analyze reads them.
     expect(fromPipeline.links.some((l) => l.file === 'nav.yml' && l.to === '/guide/' && l.context === 'template')).toBe(true);
     expect(fromPipeline.links.find((l) => l.file === 'reference/hydration.md')).toMatchObject({ to: '/reference/feeding-schedule/', status: 'ok' });
@@ -73,23 +75,28 @@ describe('linkweave/unified', () => {
     const files = await readSite(site);
     const collector = createCollector({ ...config, root: site });
     await collectAll(files, collector);
-    await collector.report();
+    const fromReport = await collector.report();
     for (const file of files) collector.attach(file);
 
     const byFile = new Map(files.map((f) => [path.relative(site, f.path).split(path.sep).join('/'), f]));
-    for (const want of expected.findings) {
+    const wanted: { rule: string; file: string; line: number; column: number }[] = [
+      ...expected.findings,
+      { rule: 'orphan-page', file: 'reference/hydration.md', line: 1, column: 1 },
+    ];
+    for (const want of wanted) {
       const message = byFile.get(want.file)!.messages.find((m) => m.ruleId === want.rule);
       expect(message, `${want.file} ${want.rule}`).toBeDefined();
       expect(message!.source).toBe('linkweave');
       expect([message!.line, message!.column]).toEqual([want.line, want.column]);
-      expect(message!.fatal).toBe(want.severity === 'error');
+      const severity = fromReport.findings.find((f) => f.file === want.file && f.rule === want.rule)!.severity;
+      expect(message!.fatal).toBe(severity === 'error');
     }
     expect(byFile.get('index.md')!.messages).toEqual([]);
 
     // vfile-reporter prints them like any lint rule's messages: place, severity, reason, rule.
     const printed = reporter(files, { quiet: true, color: false });
     expect(printed).toMatch(/first-starter\.md\n5:31\s+error\s+Unexpected link to missing file reference\/flour-types\.md[^\n]*broken-link\s+linkweave/);
-    expect(printed).toMatch(/hydration\.md\n(?:.*\n)*?1:1\s+warning\s+Unexpected orphan page[^\n]*orphan-page\s+linkweave/);
+    expect(printed).toMatch(/hydration\.md\n(?:.*\n)*?1:1\s+(?:warning|error)\s+Unexpected orphan page[^\n]*orphan-page\s+linkweave/);
   });
 
   it('runs the report pass as a second unified plugin (linkweaveReport)', async () => {
@@ -100,6 +107,27 @@ describe('linkweave/unified', () => {
     for (const file of files) await second.run(second.parse(file), file);
     const starter = files.find((f) => f.path.endsWith('first-starter.md'))!;
     expect(starter.messages.map((m) => [m.ruleId, m.source, m.line, m.column])).toEqual([['broken-link', MESSAGE_SOURCE, 5, 31]]);
+  });
+
+  it("command 'suggest': the same suggestions as analyze, attached as info messages at the anchor", async () => {
+    // The suggestion stage's fixture site (its own expected.json belongs to the suggest tests).
+    const related = path.resolve(import.meta.dirname, '../fixtures/suggest-related');
+    const files = await readSite(related);
+    const collector = createCollector({ root: related, command: 'suggest', cache: { enabled: false } });
+    await collectAll(files, collector);
+    const [fromPipeline, fromAnalyze] = await Promise.all([
+      collector.report(),
+      analyze({ root: related, command: 'suggest', cache: { enabled: false } }),
+    ]);
+    expect(fromPipeline.suggestions.length).toBeGreaterThan(0);
+    expect(fromPipeline).toEqual(fromAnalyze);
+    for (const file of files) collector.attach(file);
+    for (const s of fromPipeline.suggestions) {
+      const file = files.find((f) => f.path === path.join(related, s.file))!;
+      const info = file.messages.find((m) => m.ruleId === 'link-suggestion' && m.reason.includes(s.target));
+      expect(info, `${s.file} -> ${s.target}`).toBeDefined();
+      expect([info!.line, info!.column, info!.fatal, info!.source]).toEqual([s.line, s.column, undefined, 'linkweave']);
+    }
   });
 
   it('gives the pages only of the files the pipeline processed, and takes vfiles relative to their cwd', async () => {
