@@ -363,11 +363,16 @@ export interface BaselineResult {
 export interface PageChange {
   readonly route: string;
   readonly file: string;
-  /** Rank (pagerank x pages) or click depth in the base run; depth null = unreachable. */
-  readonly before: number | null;
-  readonly after: number | null;
-  /** after - before; null when the page became reachable or unreachable. */
-  readonly change: number | null;
+  /** Rank (pagerank x pages: 1.0 is an average page) in the base run and in this run. */
+  readonly rankBefore: number;
+  readonly rankAfter: number;
+  /** rankAfter - rankBefore. */
+  readonly rankChange: number;
+  /** Click depth in the base run and in this run; null = unreachable. */
+  readonly depthBefore: number | null;
+  readonly depthAfter: number | null;
+  /** depthAfter - depthBefore; 0 when equal (both unreachable too); null when the page became reachable or unreachable. */
+  readonly depthChange: number | null;
 }
 
 /** Two runs compared (`--compare`): findings matched as for a baseline, pages by route. */
@@ -385,8 +390,8 @@ export interface Comparison {
   readonly pagesRemoved: readonly { readonly route: string; readonly file: string }[];
   /** Pages in both runs whose rank changed most (top 10 by absolute change, then route). */
   readonly rankChanges: readonly PageChange[];
-  /** Pages in both runs whose click depth changed most (reachability changes first). */
+  /** Pages in both runs whose click depth changed most (top 10; reachability changes first). */
   readonly depthChanges: readonly PageChange[];
-  /** How many pages changed rank (by at least 0.005) and depth, beyond the top 10 shown. */
+  /** How many pages changed rank (by at least 0.005) and depth in all (the lists show 10 at most). */
   readonly changedPages: { readonly rank: number; readonly depth: number };
 }

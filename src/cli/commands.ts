@@ -13,6 +13,8 @@ import { colorEnabled } from './io.js';
 import type { CliIo } from './io.js';
 import { checkOutputPath, formatFromOutput } from './output.js';
 import { progressHooks } from './progress.js';
+import { APPLY_FLAGS, APPLY_SUMMARY, runApplyCommand } from './apply.js';
+import { readReviewInputs, withComparison, writeBaselineIfAsked, REVIEW_FLAGS } from './review.js';
 
 /** The flags every command shares, typed. */
 export interface CommonFlags {
@@ -46,13 +48,16 @@ export const COMMANDS: readonly Command[] = [
   {
     name: 'check',
     summary: 'build the link graph, run the rules, print the findings, apply the gate',
+    flags: REVIEW_FLAGS,
     run: (ctx) => reportCommand(ctx, 'check'),
   },
   {
     name: 'suggest',
     summary: 'check, plus proposed new links (file, line, column, anchor, target, predicted impact)',
+    flags: REVIEW_FLAGS,
     run: (ctx) => reportCommand(ctx, 'suggest'),
   },
+  { name: 'apply', summary: APPLY_SUMMARY, flags: APPLY_FLAGS, run: runApplyCommand },
   { name: 'backtest', summary: BACKTEST_SUMMARY, flags: BACKTEST_FLAGS, run: runBacktestCommand },
 ];
 
@@ -64,13 +69,17 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   const format = flags.format ?? (output === null ? 'text' : formatFromOutput(output));
   const color = colorEnabled(io);
 
+  const review = readReviewInputs(ctx.values, io, ctx.root);
   const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
   let report;
   try {
-    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin }, progress?.hooks ?? {});
+    const baseline = review.baseline === null ? {} : { baseline: review.baseline };
+    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, progress?.hooks ?? {});
   } finally {
     progress?.done();
   }
+  report = withComparison(report, review);
+  await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
   // The text report shows paths relative to the working folder, wrapped to the terminal.
   const terminal = { color, cwd: io.cwd, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };

@@ -30,9 +30,10 @@ export function formatFromOutput(path: string): FormatName {
  * Other files inside the root are allowed: naming them with `--output` is asking for it.
  * @param output absolute path from the flag
  * @param shownPath the path as the user wrote it, for the message
+ * @param flag the flag that named the file, for the message
  * @throws EngineError `E_USAGE`
  */
-export function checkOutputPath(output: string, root: string, shownPath: string): void {
+export function checkOutputPath(output: string, root: string, shownPath: string, flag = 'output'): void {
   const realRoot = realOrNull(root);
   if (realRoot === null) return; // analyze reports a missing root
   const target = realTarget(output);
@@ -40,7 +41,7 @@ export function checkOutputPath(output: string, root: string, shownPath: string)
   if (inside && kindOfPath(target) !== null) {
     throw new EngineError(
       'E_USAGE',
-      `flag --output: refusing to write "${shownPath}": it is inside the content root with a source extension, so it could overwrite a page or be read as one; write the report outside the root or use another extension`,
+      `flag --${flag}: refusing to write "${shownPath}": it is inside the content root with a source extension, so it could overwrite a page or be read as one; write the ${flag === 'output' ? 'report' : 'file'} outside the root or use another extension`,
     );
   }
 }

@@ -39,18 +39,24 @@ export function compareReports(base: ReportFile, head: Pick<Report, 'pages' | 'f
     const old = before.get(page.route);
     if (old === undefined) continue;
     const rankChange = roundTo(page.rank - old.rank, RATIO_DECIMALS);
-    if (Math.abs(rankChange) >= MIN_RANK_CHANGE) {
-      rank.push({ route: page.route, file: page.file, before: old.rank, after: page.rank, change: rankChange });
-    }
-    if (page.depth !== old.depth) {
-      const change = page.depth === null || old.depth === null ? null : page.depth - old.depth;
-      depth.push({ route: page.route, file: page.file, before: old.depth, after: page.depth, change });
-    }
+    const depthChange = page.depth === old.depth ? 0 : page.depth === null || old.depth === null ? null : page.depth - old.depth;
+    const change: PageChange = {
+      route: page.route,
+      file: page.file,
+      rankBefore: old.rank,
+      rankAfter: page.rank,
+      rankChange,
+      depthBefore: old.depth,
+      depthAfter: page.depth,
+      depthChange,
+    };
+    if (Math.abs(rankChange) >= MIN_RANK_CHANGE) rank.push(change);
+    if (depthChange !== 0) depth.push(change);
   }
-  const size = (c: PageChange) => (c.change === null ? Number.POSITIVE_INFINITY : Math.abs(c.change));
-  const biggest = (a: PageChange, b: PageChange) => size(b) - size(a) || compareText(a.route, b.route);
-  rank.sort(biggest);
-  depth.sort((a, b) => (size(a) === size(b) ? compareText(a.route, b.route) : size(b) - size(a)));
+  rank.sort((a, b) => Math.abs(b.rankChange) - Math.abs(a.rankChange) || compareText(a.route, b.route));
+  // Reachability changes (null) first, then by size of the change.
+  const size = (c: PageChange) => (c.depthChange === null ? Number.MAX_SAFE_INTEGER : Math.abs(c.depthChange));
+  depth.sort((a, b) => size(b) - size(a) || compareText(a.route, b.route));
 
   return {
     base: { version: base.version, pages: base.pages.length, findings: base.findings.length },

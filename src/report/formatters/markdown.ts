@@ -3,10 +3,15 @@
  * then the counts, the findings (a table, errors first; past the first few, collapsed in
  * `<details>`), then the suggested links as a checklist a reviewer can tick, each with its id
  * for `apply`, the most useful (highest score) first.
+ *
+ * With a base report (`--compare`) or a baseline (`--baseline`), the findings part becomes the
+ * new findings, then the fixed ones, with every finding collapsed below; with a base report a
+ * "structure changes" part follows (pages added and removed, a table of the pages whose rank or
+ * depth changed most), before the suggestions.
  */
-import type { Finding, Report, Suggestion } from '../../types.js';
+import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { Formatter } from '../types.js';
-import { failureParts, formatSimilarity, impactOf, plural, summaryParts } from './common.js';
+import { failureParts, formatDepth, formatRank, formatSimilarity, impactOf, plural, summaryParts } from './common.js';
 
 /** Rows shown before the rest is collapsed. */
 const SHOWN = 10;
@@ -58,7 +63,11 @@ function suggestionItem(s: Suggestion): string {
 
 function gateSection(report: Report): string[] {
   const { gate } = report;
-  if (gate.passed) return [`### linkweave: gate passed`, '', `Nothing at or above ${code(gate.failOn)} and no limit crossed.`];
+  const known =
+    report.baseline === undefined
+      ? []
+      : ['', `${plural(report.baseline.known, 'finding')} known from the baseline ${report.baseline.known === 1 ? 'does' : 'do'} not count; ${report.baseline.new.length} new.`];
+  if (gate.passed) return [`### linkweave: gate passed`, '', `Nothing at or above ${code(gate.failOn)} and no limit crossed.`, ...known];
   const rows = gate.failures.map((f) => {
     const { check, found, allowed } = failureParts(f, gate.failOn);
     return `| ${code(check)} | ${found} | ${allowed} |`;
@@ -71,7 +80,58 @@ function gateSection(report: Report): string[] {
     '| Check | Found | Allowed |',
     '| --- | --- | --- |',
     ...rows,
+    ...known,
   ];
+}
+
+/** Errors before warnings, keeping the report's order otherwise. */
+function errorsFirst(findings: readonly Finding[]): Finding[] {
+  return [...findings].sort((a, b) => Number(a.severity !== 'error') - Number(b.severity !== 'error'));
+}
+
+/** New and fixed findings against the base report (preferred) or the baseline; every finding collapsed. */
+function reviewSections(report: Report, against: 'base report' | 'baseline', added: readonly Finding[], fixed: readonly Finding[]): string[] {
+  const out = ['', added.length === 0 ? `#### New findings: none (compared with the ${against})` : `#### New findings (${added.length}, not in the ${against})`];
+  if (added.length > 0) out.push('', ...collapse(errorsFirst(added), findingsTable, 'finding'));
+  out.push('', fixed.length === 0 ? '#### Fixed findings: none' : `#### Fixed findings (${fixed.length}, in the ${against}, gone now)`);
+  if (fixed.length > 0) out.push('', ...collapse(errorsFirst(fixed), findingsTable, 'finding'));
+  if (report.findings.length > 0) {
+    out.push('', '<details>', `<summary>All ${plural(report.findings.length, 'finding')} of this run</summary>`, '', ...findingsTable(errorsFirst(report.findings)), '', '</details>');
+  }
+  return out;
+}
+
+function change(before: string, after: string): string {
+  return before === after ? after : `${before} -> ${after}`;
+}
+
+/** One row of the structure table; a rank change below 0.005 (0.00 at two decimals) shows as none. */
+function changeRow(c: PageChange): string {
+  const rank =
+    Math.abs(c.rankChange) < 0.005
+      ? formatRank(c.rankAfter)
+      : `${formatRank(c.rankBefore)} -> ${formatRank(c.rankAfter)} (${c.rankChange > 0 ? '+' : '-'}${formatRank(Math.abs(c.rankChange))})`;
+  return `| ${code(c.route)} | ${rank} | ${change(formatDepth(c.depthBefore), formatDepth(c.depthAfter))} |`;
+}
+
+function pageList(pages: Comparison['pagesAdded']): string[] {
+  return pages.map((p) => `- ${code(p.route)} (${code(p.file)})`);
+}
+
+/** Pages added and removed, then the pages whose depth or rank changed most, in one table. */
+function structureSection(report: Report, c: Comparison): string[] {
+  const out = ['', '#### Structure changes', ''];
+  const head = `${plural(report.pages.length, 'page')} (base ${c.base.pages}): ${c.pagesAdded.length} added, ${c.pagesRemoved.length} removed; ${plural(c.changedPages.depth, 'page')} changed click depth, ${c.changedPages.rank} changed rank.`;
+  out.push(head);
+  if (c.pagesAdded.length > 0) out.push('', `Added (${c.pagesAdded.length}):`, '', ...collapse(c.pagesAdded, pageList, 'page'));
+  if (c.pagesRemoved.length > 0) out.push('', `Removed (${c.pagesRemoved.length}):`, '', ...collapse(c.pagesRemoved, pageList, 'page'));
+  const seen = new Set<string>();
+  const rows = [...c.depthChanges, ...c.rankChanges].filter((p) => !seen.has(p.route) && seen.add(p.route));
+  if (rows.length > 0) {
+    out.push('', 'Biggest changes (depth first, then rank):', '');
+    out.push(...collapse(rows, (part) => ['| Page | Rank | Depth |', '| --- | --- | --- |', ...part.map(changeRow)], 'page'));
+  }
+  return out;
 }
 
 /** The Markdown formatter. */
@@ -82,10 +142,16 @@ export const markdownFormatter: Formatter = {
     const out = [...gateSection(report), '', `${summaryParts(report).join(' · ')}.`];
     const { error, warning } = report.stats.findings;
     const counts = error + warning === 0 ? 'none' : `${plural(error, 'error')}, ${plural(warning, 'warning')}`;
-    out.push('', `#### Findings: ${counts}`);
-    // Stable sorts over the report's order: errors before warnings, best suggestions first.
-    const findings = [...report.findings].sort((a, b) => Number(a.severity !== 'error') - Number(b.severity !== 'error'));
-    if (findings.length > 0) out.push('', ...collapse(findings, findingsTable, 'finding'));
+    const { comparison, baseline } = report;
+    if (comparison !== undefined) out.push(...reviewSections(report, 'base report', comparison.newFindings, comparison.fixedFindings));
+    else if (baseline !== undefined) out.push(...reviewSections(report, 'baseline', baseline.new, baseline.fixed));
+    else {
+      out.push('', `#### Findings: ${counts}`);
+      // Stable sorts over the report's order: errors before warnings, best suggestions first.
+      const findings = errorsFirst(report.findings);
+      if (findings.length > 0) out.push('', ...collapse(findings, findingsTable, 'finding'));
+    }
+    if (comparison !== undefined) out.push(...structureSection(report, comparison));
     if (report.suggestions.length > 0) {
       const suggestions = [...report.suggestions].sort((a, b) => b.score - a.score || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
       out.push('', `#### Suggested links (${suggestions.length})`, '');

@@ -1,0 +1,107 @@
+/**
+ * Planning the edits of one source file: which of its chosen suggestions can be written, and
+ * the text after writing them. Pure.
+ *
+ * A suggestion is refused (the others in the file still apply) when:
+ * - the file's content hash is not the `sourceHash` the suggestion was made for (the file
+ *   changed since the report; its offsets may point anywhere now);
+ * - the file could not be decoded exactly (binary, too large, invalid UTF-8: writing it back
+ *   would change bytes other than the link);
+ * - the anchor phrase is not at its offsets;
+ * - its anchor overlaps one of an earlier suggestion in the file (by offset);
+ * - re-parsing the edited text (`parseSource`) does not show a link with that href starting at
+ *   the anchor's place, e.g. when the anchor sits where link syntax is not read.
+ * Edits are made from the end of the file backwards, so every offset still refers to the
+ * original text; nothing but the link markup is inserted.
+ */
+import type { ResolvedOptions } from '../options.js';
+import { buildLineIndex, parseSource, positionOf } from '../parse/index.js';
+import type { SourceFile, Suggestion } from '../types.js';
+import { linkMarkup } from './markup.js';
+import type { AppliedLink, FilePlan, LinkStyle, NotApplied } from './types.js';
+
+/** What planning one file needs. */
+export interface PlanInput {
+  /** The file as read now. */
+  readonly file: SourceFile;
+  /** The chosen suggestions in this file, each with an anchor. */
+  readonly suggestions: readonly Suggestion[];
+  /** The href of each suggestion's link, by id (from `hrefFor`). */
+  readonly hrefs: ReadonlyMap<string, string>;
+  readonly style: LinkStyle;
+  /** For re-parsing the edited text as the analysis would. */
+  readonly options: ResolvedOptions;
+}
+
+/** Source problems that mean the decoded text is not the file's bytes. */
+const UNWRITABLE = new Set(['binary', 'too-large', 'invalid-utf8', 'unreadable']);
+
+/** Plan one file's edits. */
+export function planFile(input: PlanInput): FilePlan {
+  const { file } = input;
+  const refused: NotApplied[] = [];
+  const refuse = (s: Suggestion, reason: string) => refused.push({ id: s.id, file: file.path, reason });
+  const bad = file.problems.find((p) => UNWRITABLE.has(p.code));
+
+  let candidates: Suggestion[] = [];
+  for (const s of input.suggestions) {
+    if (bad !== undefined) refuse(s, `cannot be edited without changing other bytes: ${bad.message}`);
+    else if (s.sourceHash !== file.hash) {
+      refuse(s, `changed since the report (content hash ${s.sourceHash.slice(0, 12)}, now ${file.hash.slice(0, 12)}); run "linkweave suggest" again`);
+    } else if (s.anchor === null || s.anchor === '') refuse(s, 'no anchor phrase to link');
+    else if (s.offset < 0 || s.endOffset > file.text.length || file.text.slice(s.offset, s.endOffset) !== s.anchor) {
+      refuse(s, `the anchor "${s.anchor}" is not at offset ${s.offset}`);
+    } else if (!input.hrefs.has(s.id)) refuse(s, `the target ${s.target} is not a page of the report`);
+    else candidates.push(s);
+  }
+  candidates.sort((a, b) => a.offset - b.offset || a.endOffset - b.endOffset || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const chosen: Suggestion[] = [];
+  for (const s of candidates) {
+    const last = chosen[chosen.length - 1];
+    if (last !== undefined && s.offset < last.endOffset) refuse(s, `its anchor overlaps the anchor of ${last.id} ("${last.anchor}")`);
+    else chosen.push(s);
+  }
+  candidates = chosen;
+
+  // Re-parse and drop what does not read as a link; a drop can change how the rest parses, so
+  // repeat until every remaining edit checks out.
+  for (;;) {
+    const { text, applied } = edit(file.text, candidates, input);
+    if (applied.length === 0) return done(file, input.style, applied, refused, file.text);
+    const links = parseSource({ ...file, text }, input.options).links;
+    const failed = applied.filter((a) => !links.some((l) => l.href === a.href && l.line === a.line && l.column === a.column));
+    if (failed.length === 0) return done(file, input.style, applied, refused, text);
+    for (const f of failed) refuse(candidates.find((s) => s.id === f.id)!, `a link here would not be read as a link (checked by parsing the edited file)`);
+    const gone = new Set(failed.map((f) => f.id));
+    candidates = candidates.filter((s) => !gone.has(s.id));
+  }
+}
+
+/** Insert the markup of `sorted` (ascending, not overlapping) into `text`. */
+function edit(text: string, sorted: readonly Suggestion[], input: PlanInput): { text: string; applied: AppliedLink[] } {
+  const parts: string[] = [];
+  let at = text.length;
+  for (let i = sorted.length - 1; i >= 0; i--) {
+    const s = sorted[i]!;
+    const { open, close } = linkMarkup(input.file.kind, input.hrefs.get(s.id)!);
+    parts.push(text.slice(s.endOffset, at), close, text.slice(s.offset, s.endOffset), open);
+    at = s.offset;
+  }
+  parts.push(text.slice(0, at));
+  const edited = parts.reverse().join('');
+  const lines = buildLineIndex(edited);
+  let shift = 0;
+  const applied = sorted.map((s): AppliedLink => {
+    const href = input.hrefs.get(s.id)!;
+    const { open, close } = linkMarkup(input.file.kind, href);
+    const offset = s.offset + shift;
+    shift += open.length + close.length;
+    const { line, column } = positionOf(lines, offset);
+    return { id: s.id, file: input.file.path, line, column, anchor: s.anchor!, target: s.target, href, open, close, offset };
+  });
+  return { text: edited, applied };
+}
+
+function done(file: SourceFile, style: LinkStyle, applied: AppliedLink[], refused: NotApplied[], after: string): FilePlan {
+  return { file: file.path, before: file.text, after, style, applied, refused: refused.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0)) };
+}
