@@ -7,8 +7,9 @@ import { entrySet, isOrphan, isUnreachable } from './structure.js';
  *
  * Click depth follows content links, and template links when `depthCountsTemplate` is true.
  * An orphan page is unreachable too, but `orphan-page` already says why, so this rule reports
- * only the pages that do have inlinks, all from pages that are unreachable themselves; the
- * message names those pages, which is where the fix goes. When no entry page exists the rule
+ * only the pages that do have inlinks (from pages that are unreachable themselves, or through
+ * links that click depth does not follow); the message names those pages, which is where the
+ * fix goes. When no entry page exists the rule
  * is silent: `missing-entry` reports the cause once instead of every page.
  * Reported at line 1, column 1 of the page's file.
  *
@@ -40,7 +41,7 @@ export const unreachablePage: Rule = {
         pageFinding(
           page,
           `Unexpected unreachable page ${page.route}, expected a path of links to it from an entry page (${entries}); ` +
-            `only unreachable pages link to it: ${listRoutes(from)}`,
+            `linked only from ${listRoutes(from)}`,
         ),
       );
     }

@@ -28,7 +28,7 @@ describe('buildReport on the fixture site (values worked out by hand from the si
       maxDepth: 5,
       iterations: 12,
       converged: true,
-      findings: { error: 3, warning: 4 },
+      findings: { error: 3, warning: 3 },
     });
   });
 
@@ -96,7 +96,7 @@ describe('buildReport on the fixture site (values worked out by hand from the si
       failures: [
         { rule: 'broken-fragment', limit: 0, actual: 1 },
         { rule: 'broken-link', limit: 0, actual: 1 },
-        { rule: 'unreachable-page', limit: 0, actual: 1 },
+        { rule: 'orphan-page', limit: 0, actual: 1 },
       ],
     });
   });
@@ -120,7 +120,11 @@ describe('buildReport choices', () => {
     expect(report.links[0]).toMatchObject({ from: '', to: '/', line: 1 });
     expect(report.links[3]).toMatchObject({ from: '/', to: '/a/', file: 'index.md' });
     expect(report.stats.brokenLinks).toBe(1);
-    expect(report.findings.map((f) => `${f.file}:${f.line}:${f.column} ${f.rule}`)).toEqual(['_nav.md:3:3 broken-link']);
+    expect(report.findings.map((f) => `${f.file}:${f.line}:${f.column} ${f.rule}`)).toEqual([
+      '_nav.md:3:3 broken-link',
+      // a.md's only links are the navigation's (template links): a dead end in its content.
+      'a.md:1:1 dead-end',
+    ]);
   });
 
   it('importance from the suggest stage wins over frontmatter; else frontmatter, else normal', () => {

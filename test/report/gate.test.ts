@@ -88,7 +88,7 @@ describe('evaluateGate: limits (a count above its limit fails; at the limit pass
 describe('the gate in a built report reads the report\'s own counts', () => {
   it('fixture: deepest page 5 over maxDepth 4; the tuning page (high importance) has 1 content inlink', () => {
     const report = fixtureReport({
-      spec: { options: { rules: { 'broken-link': 'warning', 'broken-fragment': 'off', 'unreachable-page': 'off' }, gate: { maxDepth: 4, minInlinksForImportant: 2 } } },
+      spec: { options: { rules: { 'broken-link': 'warning', 'broken-fragment': 'off', 'orphan-page': 'off' }, gate: { maxDepth: 4, minInlinksForImportant: 2 } } },
     });
     expect(report.gate.failures).toEqual([
       { rule: 'gate.maxDepth', limit: 4, actual: 5 },

@@ -54,7 +54,7 @@ describe('sarif formatter', () => {
     expect(driver.rules![driver.rules!.findIndex((r) => r.id === 'orphan-page')]).toEqual({
       id: 'orphan-page',
       shortDescription: { text: 'Every page is linked from at least one other page.' },
-      defaultConfiguration: { level: 'warning' },
+      defaultConfiguration: { level: 'error' },
     });
     for (const r of results) expect(driver.rules![r.ruleIndex!]!.id).toBe(r.ruleId);
   });
@@ -67,7 +67,7 @@ describe('sarif formatter', () => {
     expect(broken.locations).toEqual([
       { physicalLocation: { artifactLocation: { uri: 'index.md', uriBaseId: 'SRCROOT' }, region: { startLine: 9, startColumn: 3 } } },
     ]);
-    expect(results.find((r) => r.ruleId === 'orphan-page')!.level).toBe('warning');
+    expect(results.find((r) => r.ruleId === 'orphan-page')!.level).toBe('error');
   });
 
   it('gives a suggestion with an anchor a fix replacing the anchor by the link', () => {

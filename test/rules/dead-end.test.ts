@@ -1,7 +1,7 @@
 import { deadEnd } from '../../src/rules/index.js';
 import { ruleTable } from './table.js';
 
-const message = (route: string, which = 'links'): string =>
+const message = (route: string, which = 'content links'): string =>
   `Unexpected dead end ${route} with no ${which} to other pages, expected at least one link onward`;
 
 ruleTable(deadEnd, {
@@ -9,8 +9,12 @@ ruleTable(deadEnd, {
     { name: 'pages that link onward', site: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] } },
     { name: 'a one-page site has nowhere to link to', site: { pages: [{ route: '/' }] } },
     {
-      name: 'navigation links count as outlinks by default',
-      site: { pages: [{ route: '/' }, { route: '/a/' }], navigation: ['/', '/a/'] },
+      name: 'countTemplateLinks true: navigation links count as outlinks',
+      site: {
+        pages: [{ route: '/' }, { route: '/a/' }],
+        navigation: ['/', '/a/'],
+        options: { rules: { 'dead-end': ['warning', { countTemplateLinks: true }] } },
+      },
     },
   ],
   invalid: [
@@ -27,13 +31,12 @@ ruleTable(deadEnd, {
       findings: [{ file: 'a.md', line: 1, column: 1, message: message('/a/') }],
     },
     {
-      name: 'countTemplateLinks false: only the sidebar links onward',
+      name: 'by default a page whose only links are the sidebar\'s is a dead end',
       site: {
         pages: [{ route: '/', links: ['/a/'] }, { route: '/a/' }],
         navigation: ['/', '/a/'],
-        options: { rules: { 'dead-end': ['warning', { countTemplateLinks: false }] } },
       },
-      findings: [{ file: 'a.md', line: 1, column: 1, message: message('/a/', 'content links') }],
+      findings: [{ file: 'a.md', line: 1, column: 1, message: message('/a/') }],
     },
   ],
 });

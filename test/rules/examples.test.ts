@@ -62,7 +62,7 @@ describe('rule documentation examples', () => {
   it('orphan-page', () => {
     expect(check(orphanPage, { 'index.md': '[About](about.md)\n', 'about.md': '# About\n' })).toEqual([]);
     expect(check(orphanPage, { 'index.md': '[Guide](guide.md)\n', 'guide.md': '# Guide\n', 'old/notes.md': '# Notes\n' })).toEqual([
-      'old/notes.md:1:1  warning  Unexpected orphan page /old/notes/, expected a link to it from at least one other page',
+      'old/notes.md:1:1  error  Unexpected orphan page /old/notes/, expected a link to it from at least one other page',
     ]);
   });
 
@@ -72,8 +72,8 @@ describe('rule documentation examples', () => {
     expect(
       check(unreachablePage, { ...chain, 'archive/index.md': '[2019](2019.md)\n', 'archive/2019.md': '[Archive](index.md)\n' }),
     ).toEqual([
-      'archive/2019.md:1:1  error  Unexpected unreachable page /archive/2019/, expected a path of links to it from an entry page (/)',
-      'archive/index.md:1:1  error  Unexpected unreachable page /archive/, expected a path of links to it from an entry page (/)',
+      'archive/2019.md:1:1  error  Unexpected unreachable page /archive/2019/, expected a path of links to it from an entry page (/); linked only from /archive/',
+      'archive/index.md:1:1  error  Unexpected unreachable page /archive/, expected a path of links to it from an entry page (/); linked only from /archive/2019/',
     ]);
   });
 
@@ -89,9 +89,9 @@ describe('rule documentation examples', () => {
 
   it('dead-end', () => {
     const index = { 'index.md': '[Install](guide/install.md) [FAQ](guide/faq.md)\n' };
-    expect(check(deadEnd, { ...index, 'guide/install.md': 'Next: [configure](configure.md)\n', 'guide/configure.md': '[Home](../index.md)\n', 'guide/faq.md': '[Home](../index.md)\n' })).toEqual([]);
+    expect(check(deadEnd, { ...index, 'guide/install.md': 'Next: [configure](configure.md)\n', 'guide/configure.md': '[Home](../index.md)\n', 'guide/faq.md': '[Start again](../index.md)\n' })).toEqual([]);
     expect(check(deadEnd, { ...index, 'guide/install.md': '[Home](../index.md)\n', 'guide/faq.md': 'Ask on [the forum](https://forum.example.org/).\n' })).toEqual([
-      'guide/faq.md:1:1  warning  Unexpected dead end /guide/faq/ with no links to other pages, expected at least one link onward',
+      'guide/faq.md:1:1  warning  Unexpected dead end /guide/faq/ with no content links to other pages, expected at least one link onward',
     ]);
   });
 

@@ -35,7 +35,7 @@ ruleTable(orphanPage, {
         navigation: ['/a/', '/b/'],
         options: { rules: { 'orphan-page': ['warning', { countTemplateLinks: false }] } },
       },
-      findings: [{ file: 'b.md', line: 1, column: 1, message: orphanMessage('/b/', 'a content link') }],
+      findings: [{ file: 'b.md', line: 1, column: 1, severity: 'warning', message: orphanMessage('/b/', 'a content link') }],
     },
     {
       name: 'the configured severity replaces the default',

@@ -44,14 +44,17 @@ describe('rules over buildGraph + rankGraph', () => {
       page('guide/deep/b.md', '/guide/deep/b/', [link('../../index.md', 1, 1)]),
       page('lost.md', '/lost/', [link('index.md', 1, 1)]),
     ]);
+    // Three pages link to / with the same text: a template link (templateShare 0.5), so the two
+    // whose only link it is are dead ends in their content.
     expect(findings.map((f) => `${f.file}:${f.line}:${f.column} ${f.severity} ${f.rule}: ${f.message}`)).toEqual([
+      'guide/deep/b.md:1:1 warning dead-end: Unexpected dead end /guide/deep/b/ with no content links to other pages, expected at least one link onward',
       'guide/deep/b.md:1:1 warning max-click-depth: Unexpected click depth 4 for /guide/deep/b/, expected at most 3 clicks from an entry page',
       'guide/index.md:2:4 error broken-fragment: Unexpected link to missing fragment #setup on /guide/install/, expected a heading or id of that page (did you mean #set-up?)',
       'index.md:5:7 error broken-link: Unexpected link to missing file guide/instal.md, expected an existing source file (did you mean guide/install.md?)',
-      'lost.md:1:1 warning orphan-page: Unexpected orphan page /lost/, expected a link to it from at least one other page',
-      'lost.md:1:1 error unreachable-page: Unexpected unreachable page /lost/, expected a path of links to it from an entry page (/)',
+      'lost.md:1:1 warning dead-end: Unexpected dead end /lost/ with no content links to other pages, expected at least one link onward',
+      'lost.md:1:1 error orphan-page: Unexpected orphan page /lost/, expected a link to it from at least one other page',
     ]);
-    expect(report.stats).toMatchObject({ pages: 6, links: 9, brokenLinks: 1, brokenFragments: 1, orphans: 1, unreachable: 1, deadEnds: 0, maxDepth: 4 });
+    expect(report.stats).toMatchObject({ pages: 6, links: 9, brokenLinks: 1, brokenFragments: 1, orphans: 1, unreachable: 1, deadEnds: 2, maxDepth: 4 });
     expect(report.links.find((l) => l.status === 'broken-fragment')!.to).toBe('/guide/install/#setup');
     const sum = report.pages.reduce((s, p) => s + p.pagerank, 0);
     expect(sum).toBeCloseTo(1, 8);
@@ -64,10 +67,11 @@ describe('rules over buildGraph + rankGraph', () => {
     );
     expect(findings.map((f) => `${f.file}:${f.line}:${f.column} ${f.rule}`)).toEqual([
       '_sidebar.md:2:3 broken-link',
-      // The sidebar's only other link is to a.md itself: a.md links nowhere else.
+      // Sidebar links are template links: no page links onward in its content.
       'a.md:1:1 dead-end',
+      'b.md:1:1 dead-end',
       'b.md:1:1 orphan-page',
-      'b.md:1:1 unreachable-page',
+      'index.md:1:1 dead-end',
     ]);
     expect(findings[0]!.route).toBe('');
     expect(report.links.filter((l) => l.from === '').map((l) => [l.file, l.to, l.context])).toEqual([

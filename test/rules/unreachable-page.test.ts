@@ -12,6 +12,10 @@ ruleTable(unreachablePage, {
       site: { pages: [{ route: '/' }, { route: '/guide/' }], navigation: ['/guide/'] },
     },
     {
+      name: 'an orphan page is left to orphan-page',
+      site: { pages: [{ route: '/' }, { route: '/lost/', links: ['/'] }] },
+    },
+    {
       name: 'no entry page at all: silent (missing-entry reports the cause)',
       site: { pages: [{ route: '/a/' }, { route: '/b/' }] },
     },
@@ -33,14 +37,14 @@ ruleTable(unreachablePage, {
           line: 1,
           column: 1,
           route: '/archive/2019/',
-          message: 'Unexpected unreachable page /archive/2019/, expected a path of links to it from an entry page (/)',
+          message: 'Unexpected unreachable page /archive/2019/, expected a path of links to it from an entry page (/); linked only from /archive/',
         },
         {
           file: 'archive/index.md',
           line: 1,
           column: 1,
           route: '/archive/',
-          message: 'Unexpected unreachable page /archive/, expected a path of links to it from an entry page (/)',
+          message: 'Unexpected unreachable page /archive/, expected a path of links to it from an entry page (/); linked only from /archive/2019/',
         },
       ],
     },
@@ -52,7 +56,7 @@ ruleTable(unreachablePage, {
         options: { depthCountsTemplate: false, entry: ['/', '/missing/'] },
       },
       findings: [
-        { file: 'guide.md', line: 1, column: 1, message: 'Unexpected unreachable page /guide/, expected a path of links to it from an entry page (/)' },
+        { file: 'guide.md', line: 1, column: 1, message: 'Unexpected unreachable page /guide/, expected a path of links to it from an entry page (/); linked only from /' },
       ],
     },
   ],
