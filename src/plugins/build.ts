@@ -48,12 +48,20 @@ export interface BuildLogger {
 export interface BuildPluginContext {
   warn(message: string): void;
   info?(message: string): void;
+  /** Vite 6+: the environment being built; a server (SSR) build writes no pages and is skipped. */
+  readonly environment?: { readonly config?: { readonly consumer?: string } };
 }
 
 /** The part of Vite's resolved configuration the plugin reads. */
 export interface ViteConfigLike {
   readonly root: string;
-  readonly build: { readonly outDir: string };
+  readonly build: {
+    readonly outDir: string;
+    /** `false`: nothing is written, so there is nothing to check. */
+    readonly write?: boolean;
+    /** An SSR build writes server code, not pages: skipped. */
+    readonly ssr?: boolean | string | object;
+  };
   readonly logger: BuildLogger;
 }
 
@@ -65,7 +73,7 @@ export interface LinkweaveBuildPlugin {
   /** Vite only: the project root, output folder and logger. */
   configResolved(config: ViteConfigLike): void;
   /** Records where the bundle was written. */
-  writeBundle(output: { readonly dir?: string | undefined; readonly file?: string | undefined }): void;
+  writeBundle(this: BuildPluginContext, output: { readonly dir?: string | undefined; readonly file?: string | undefined }): void;
   /** Analyses the written output. @throws EngineError `E_GATE_FAILED` when the gate fails and `failBuild` is on */
   closeBundle(this: BuildPluginContext, error?: Error): Promise<void>;
 }
@@ -91,10 +99,12 @@ export function createBuildPlugin(options: LinkweaveBuildOptions = {}): Linkweav
       vite = config;
     },
     writeBundle(output) {
+      if (isServerBuild(this, vite)) return;
       written = output.dir ?? (output.file === undefined ? null : dirname(output.file));
     },
     async closeBundle(error) {
-      if (error !== undefined) return; // the build already failed; nothing was written to check
+      // A failed build, a build that writes nothing, or server code: no pages to check.
+      if (error !== undefined || vite?.build.write === false || isServerBuild(this, vite)) return;
       const project = vite === null ? process.cwd() : resolve(vite.root);
       const outDir =
         options.outDir !== undefined ? resolve(project, options.outDir) : (written ?? (vite === null ? null : resolve(project, vite.build.outDir)));
@@ -136,6 +146,11 @@ function checkReports(reports: readonly ReportTarget[]): ReportTarget[] {
     }
     return { format: r.format, file: r.file };
   });
+}
+
+function isServerBuild(ctx: BuildPluginContext, vite: ViteConfigLike | null): boolean {
+  const ssr = vite?.build.ssr;
+  return ctx.environment?.config?.consumer === 'server' || (ssr !== undefined && ssr !== false);
 }
 
 /** Rollup's context: `this.info` where the bundler has it (Rollup 3.28+, Rolldown), else `this.warn`. */

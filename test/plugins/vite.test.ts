@@ -131,6 +131,23 @@ describe('linkweave/vite in a real Vite build', () => {
     expect(warnings).toContain('(broken-link)');
   });
 
+  it('skips an SSR build (server code, no pages) and a build that writes nothing', async () => {
+    const root = path.join(fixtures, 'vite-site');
+    for (const build_ of [{ ssr: path.join(root, 'src/main.js') }, { write: false }]) {
+      const logger = recordingLogger();
+      const outDir = fs.mkdtempSync(path.join(temp, 'skipped-'));
+      await build({
+        root,
+        configFile: false,
+        customLogger: logger,
+        build: { outDir, emptyOutDir: true, ...build_ },
+        plugins: [linkweave({ config: noCache, reports: [{ format: 'json', file: path.join(outDir, 'never.json') }] })],
+      });
+      expect(logger.lines.some((l) => l.text.startsWith('linkweave')), JSON.stringify(build_)).toBe(false);
+      expect(fs.existsSync(path.join(outDir, 'never.json'))).toBe(false);
+    }
+  });
+
   it('rejects a report with an unknown format before the build, naming the option', () => {
     expect(() => linkweave({ reports: [{ format: 'pdf' as never, file: 'x.pdf' }] })).toThrowError(/"reports\.0\.format": unknown format "pdf"/);
   });
