@@ -6,7 +6,7 @@ import { analyze, formatReport, isEngineError } from 'linkweave';
 
 const root = fileURLToPath(new URL('../docs-site/', import.meta.url));
 // The same configuration file the CLI reads: one set of keys for every entry point.
-const config = JSON.parse(await readFile(new URL('linkweave.config.json', `file://${root}`), 'utf8'));
+const config = JSON.parse(await readFile(`${root}linkweave.config.json`, 'utf8'));
 
 try {
   const report = await analyze({ ...config, root, command: 'suggest' });

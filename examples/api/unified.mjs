@@ -11,7 +11,7 @@ import { reporter } from 'vfile-reporter';
 import { createCollector, linkweaveCollect } from 'linkweave/unified';
 
 const root = fileURLToPath(new URL('../docs-site/', import.meta.url));
-const config = JSON.parse(await readFile(new URL('linkweave.config.json', `file://${root}`), 'utf8'));
+const config = JSON.parse(await readFile(`${root}linkweave.config.json`, 'utf8'));
 
 // One collector for the whole site; the same options as analyze().
 const collector = createCollector({ ...config, root });
