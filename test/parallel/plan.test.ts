@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { AUTO_MAX_THREADS, AUTO_MIN_FILES, chooseThreads, makeBatches } from '../../src/parallel/plan.js';
+import { AUTO_MAX_THREADS, AUTO_MIN_CORES, AUTO_MIN_FILES, chooseThreads, makeBatches } from '../../src/parallel/plan.js';
 import type { SourceFile } from '../../src/types.js';
 
 describe('chooseThreads', () => {
@@ -8,10 +8,13 @@ describe('chooseThreads', () => {
     expect(chooseThreads(3, 10, 2)).toBe(3);
   });
 
-  it('automatic: main thread below the threshold or on one core, else one thread per core', () => {
+  it('automatic: main thread below the file threshold or on one or two cores, else a worker per core but one', () => {
+    expect(AUTO_MIN_CORES).toBe(3);
     expect(chooseThreads(0, AUTO_MIN_FILES - 1, 8)).toBe(1);
-    expect(chooseThreads(0, AUTO_MIN_FILES, 1)).toBe(1);
-    expect(chooseThreads(0, AUTO_MIN_FILES, 2)).toBe(2);
+    expect(chooseThreads(0, 1_000_000, 1)).toBe(1);
+    expect(chooseThreads(0, 1_000_000, 2)).toBe(1);
+    expect(chooseThreads(0, AUTO_MIN_FILES, 3)).toBe(2);
+    expect(chooseThreads(0, AUTO_MIN_FILES, 4)).toBe(3);
     expect(chooseThreads(0, 1_000_000, 64)).toBe(AUTO_MAX_THREADS);
   });
 
