@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import { findingKey, matchFindings } from '../../src/baseline/index.js';
+import type { Finding } from '../../src/types.js';
+
+const broken = (line: number, over: Partial<Finding> = {}): Finding => ({
+  rule: 'broken-link',
+  severity: 'error',
+  file: 'guide/index.md',
+  line,
+  column: 5,
+  route: '/guide/',
+  message: 'Unexpected link to missing file guide/old.md, expected an existing source file',
+  target: 'guide/old.md',
+  ...over,
+});
+
+const orphan = (route: string): Finding => ({
+  rule: 'orphan-page',
+  severity: 'error',
+  file: `${route.slice(1, -1)}.md`,
+  line: 1,
+  column: 1,
+  route,
+  message: `Unexpected orphan page ${route}, expected a link to it from at least one other page`,
+});
+
+describe('findingKey', () => {
+  it('is rule, route and target: not file, line, column, message or severity', () => {
+    const a = broken(3);
+    const b = broken(40, { column: 1, message: 'reworded', severity: 'warning', file: 'guide/README.md' });
+    expect(findingKey(a)).toBe(findingKey(b));
+    expect(findingKey(a)).not.toBe(findingKey(broken(3, { target: 'guide/other.md' })));
+    expect(findingKey(a)).not.toBe(findingKey(broken(3, { route: '/other/' })));
+    expect(findingKey(a)).not.toBe(findingKey(broken(3, { rule: 'broken-fragment' })));
+    // No target and an empty target are the same key; a target never runs into the route.
+    expect(findingKey({ rule: 'r', route: '/a/', target: '' })).toBe(findingKey({ rule: 'r', route: '/a/' }));
+    expect(findingKey({ rule: 'r', route: '/a', target: 'b' })).not.toBe(findingKey({ rule: 'r', route: '/ab' }));
+  });
+});
+
+describe('matchFindings', () => {
+  it('a line inserted above a finding keeps it known', () => {
+    const m = matchFindings([broken(4)], [broken(3)]);
+    expect(m).toEqual({ known: [broken(4)], new: [], fixed: [] });
+  });
+
+  it('counts multiplicity: two identical broken links, one fixed -> one known, one fixed', () => {
+    const m = matchFindings([broken(12)], [broken(3), broken(12)]);
+    expect(m.known).toEqual([broken(12)]);
+    expect(m.new).toEqual([]);
+    // The one at the same place is the one kept; the other is the fixed one.
+    expect(m.fixed).toEqual([broken(3)]);
+  });
+
+  it('a second identical broken link is new, the first stays known', () => {
+    const m = matchFindings([broken(3), broken(9)], [broken(3)]);
+    expect(m.known).toEqual([broken(3)]);
+    expect(m.new).toEqual([broken(9)]);
+    expect(m.fixed).toEqual([]);
+  });
+
+  it('with every line shifted, pairs in order', () => {
+    const m = matchFindings([broken(5), broken(11)], [broken(3), broken(9), broken(20)]);
+    expect(m.known).toEqual([broken(5), broken(11)]);
+    expect(m.fixed).toEqual([broken(20)]);
+  });
+
+  it('new and fixed pages by route; output sorted as the report sorts findings', () => {
+    const m = matchFindings([orphan('/b/'), orphan('/a/'), broken(2)], [orphan('/c/'), broken(2)]);
+    expect(m.new.map((f) => f.route)).toEqual(['/a/', '/b/']);
+    expect(m.fixed.map((f) => f.route)).toEqual(['/c/']);
+    expect(m.known).toEqual([broken(2)]);
+  });
+
+  it('empty sides', () => {
+    expect(matchFindings([], [])).toEqual({ known: [], new: [], fixed: [] });
+    expect(matchFindings([broken(1)], []).new).toEqual([broken(1)]);
+    expect(matchFindings([], [broken(1)]).fixed).toEqual([broken(1)]);
+  });
+});
