@@ -65,7 +65,9 @@ interface Walk extends HastContext {
   /**
    * Start offsets of the links added. The HTML parser re-opens an `<a>` left open across a
    * block end (WHATWG HTML, "reconstruct the active formatting elements"): the copy has the
-   * same start position and is the same link, so it is counted once.
+   * same start position and is the same link, so it is counted once. Copies made by the
+   * adoption agency algorithm (an `<a>` opened while another is still open) have no position
+   * at all: they are not links the author wrote and are not counted.
    */
   readonly seen: Set<number>;
 }
@@ -96,7 +98,7 @@ function visit(node: RootContent, ctx: Walk, flags: number): void {
   }
 
   let f = flags;
-  if ((tag === 'a' || tag === 'area') && props.href !== undefined && props.href !== null && !ctx.seen.has(start)) {
+  if ((tag === 'a' || tag === 'area') && props.href !== undefined && props.href !== null && node.position !== undefined && !ctx.seen.has(start)) {
     ctx.seen.add(start);
     const href = String(props.href);
     // An area has no content: its alt text is what it says.
