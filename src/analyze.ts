@@ -22,7 +22,7 @@ import type { AuxProblem } from './rules/index.js';
 import { buildReport } from './report/index.js';
 import { resolveOptions } from './options.js';
 import type { Config, ResolvedOptions } from './options.js';
-import type { Finding, PageFacts, RawLink, Report, Suggestion } from './types.js';
+import type { Finding, PageFacts, RawLink, RepairPlan, Report, Suggestion } from './types.js';
 import { VERSION } from './version.js';
 
 /** The stages `analyze` runs, in order, as reported to hooks. */
@@ -143,6 +143,7 @@ export async function finishAnalysis(input: {
   const ranking = await stage('rank', () => rankGraph(graph, options));
   let suggestions: Suggestion[] = [];
   let importance: readonly ('high' | 'normal' | 'low')[] | undefined;
+  let repair: RepairPlan | undefined;
   if (command === 'suggest') {
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
     const text = await stage('text', () => {
@@ -155,6 +156,7 @@ export async function finishAnalysis(input: {
     );
     suggestions = result.suggestions;
     importance = result.importance;
+    repair = result.plan;
   }
   const findings = await stage('rules', () =>
     runRules({ graph, facts, ranking, options, warnings: collected.sources.warnings, auxProblems: collected.auxProblems }),
@@ -169,6 +171,7 @@ export async function finishAnalysis(input: {
       files: collected.sources.files.length,
       version: VERSION,
       ...(importance === undefined ? {} : { importance }),
+      ...(repair === undefined ? {} : { repair }),
       ...(baseline === undefined ? {} : { baseline }),
     }),
   );

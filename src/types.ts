@@ -341,6 +341,11 @@ export interface Report {
   };
   /** This run's findings against a baseline file (`--baseline`); the gate counted only `new`. */
   readonly baseline?: BaselineResult;
+  /**
+   * The depth-repair plan of `suggest`: the fewest suggestions (chosen greedily) that bring the
+   * most too-deep or unreachable pages within `maxDepth`. Absent for `check`.
+   */
+  readonly repair?: RepairPlan;
   /** This run against a base report (`--compare BASE.json`): what a change did to the site. */
   readonly comparison?: Comparison;
 }
@@ -394,4 +399,15 @@ export interface Comparison {
   readonly depthChanges: readonly PageChange[];
   /** How many pages changed rank (by at least 0.005) and depth in all (the lists show 10 at most). */
   readonly changedPages: { readonly rank: number; readonly depth: number };
+}
+
+/** A set of suggestions that together fix click-depth findings. */
+export interface RepairPlan {
+  readonly maxDepth: number;
+  /** Pages (not excluded) deeper than `maxDepth` or unreachable, before. */
+  readonly tooDeepBefore: number;
+  /** The same count with every suggestion of the plan added. */
+  readonly tooDeepAfter: number;
+  /** Ids of the chosen suggestions, in the order the greedy pass chose them. */
+  readonly suggestionIds: readonly string[];
 }

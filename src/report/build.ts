@@ -71,6 +71,7 @@ export function buildReport(input: ReportInput): Report {
     gate: evaluateGate(matched?.new ?? findings, gate, options),
     options: { maxDepth: options.maxDepth },
     ...(matched === null ? {} : { baseline: { known: matched.known.length, new: matched.new, fixed: matched.fixed } }),
+    ...(input.repair === undefined ? {} : { repair: { ...input.repair, suggestionIds: [...input.repair.suggestionIds] } }),
   };
 }
 

@@ -27,16 +27,8 @@ export interface UnderlinkedPage {
   readonly reasons: UnderlinkedReason[];
 }
 
-/** The greedy depth-repair plan: a small set of suggestions that fixes the most depth findings. */
-export interface RepairPlan {
-  readonly maxDepth: number;
-  /** Pages (not excluded) deeper than `maxDepth` or unreachable, before. */
-  readonly tooDeepBefore: number;
-  /** The same count with every suggestion of the plan added. */
-  readonly tooDeepAfter: number;
-  /** Ids of the chosen suggestions, in the order the greedy pass chose them. */
-  readonly suggestionIds: string[];
-}
+import type { RepairPlan } from '../types.js';
+export type { RepairPlan };
 
 /** Result of `suggestLinks`. */
 export interface SuggestResult {

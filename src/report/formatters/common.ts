@@ -80,3 +80,17 @@ export function displayPath(file: string, root: string, cwd: string | undefined)
   if (file === '' || cwd === undefined || !isAbsolute(root)) return file;
   return relative(cwd, join(root, file)).replace(/\\/g, '/');
 }
+
+/**
+ * The depth-repair plan in one sentence, or null when the report has none or it would add
+ * nothing: "3 links (ids a, b, c) bring the pages deeper than 3 clicks or unreachable from 7 to 2."
+ */
+export function repairLine(report: Report, code: (s: string) => string = (s) => s): string | null {
+  const plan = report.repair;
+  if (plan === undefined || plan.suggestionIds.length === 0) return null;
+  const ids = plan.suggestionIds.map(code).join(', ');
+  return (
+    `Depth repair: ${plural(plan.suggestionIds.length, 'link')} (${ids}) bring the pages deeper than ` +
+    `${plural(plan.maxDepth, 'click')} or unreachable from ${plan.tooDeepBefore} to ${plan.tooDeepAfter}.`
+  );
+}

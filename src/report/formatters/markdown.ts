@@ -11,7 +11,7 @@
  */
 import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { Formatter } from '../types.js';
-import { failureParts, formatDepth, formatRank, formatSimilarity, impactOf, plural, summaryParts } from './common.js';
+import { failureParts, formatDepth, formatRank, formatSimilarity, impactOf, plural, repairLine, summaryParts } from './common.js';
 
 /** Rows shown before the rest is collapsed. */
 const SHOWN = 10;
@@ -155,6 +155,8 @@ export const markdownFormatter: Formatter = {
     if (report.suggestions.length > 0) {
       const suggestions = [...report.suggestions].sort((a, b) => b.score - a.score || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
       out.push('', `#### Suggested links (${suggestions.length})`, '');
+      const repair = repairLine(report, code);
+      if (repair !== null) out.push(repair, '');
       out.push(...collapse(suggestions, (part) => part.map(suggestionItem), 'suggestion'));
       const ids = suggestions.slice(0, 2).map((s) => s.id).join(',');
       out.push('', `Accept links by id: ${code(`linkweave apply --ids ${ids}`)}`);

@@ -8,7 +8,7 @@
 import pc from 'picocolors';
 import type { Finding, Report, Suggestion } from '../../types.js';
 import type { FormatContext, Formatter } from '../types.js';
-import { describeFailure, displayPath, formatSimilarity, impactOf, problemsLine, summaryParts } from './common.js';
+import { describeFailure, displayPath, formatSimilarity, impactOf, problemsLine, repairLine, summaryParts } from './common.js';
 
 type Paint = (s: string) => string;
 
@@ -138,6 +138,8 @@ function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeo
       );
     }
   }
+  const repair = repairLine(report);
+  if (repair !== null) out.push('', ...wrap('', 0, words(repair, c.bold, ''), width, 0));
   const ids = (anchored.length > 0 ? anchored : loose).slice(0, 2).map((s) => s.id).join(',');
   out.push('', c.dim(`Apply chosen links with: linkweave apply --ids ${ids}${report.suggestions.length > 2 ? ',...' : ''}`));
   return out;
