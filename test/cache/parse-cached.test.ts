@@ -83,6 +83,16 @@ describe('cold, warm and partly changed runs', () => {
     expect(JSON.stringify(again.facts)).toBe(JSON.stringify(partial.facts));
   });
 
+  it('stores the spans of the real parser packed (as numbers), not as a second copy of the text', async () => {
+    await run(optionsOf());
+    const entries = fs
+      .readdirSync(cacheDir)
+      .flatMap((name) => JSON.parse(fs.readFileSync(path.join(cacheDir, name), 'utf8').split('\n').slice(1).join('\n')) as { spans: unknown[] }[]);
+    expect(entries.length).toBe(FILES);
+    expect(entries.some((e) => e.spans.length > 0)).toBe(true);
+    for (const e of entries) expect(e.spans.every((x) => typeof x === 'number')).toBe(true);
+  });
+
   it('re-parses exactly the edited file, for each file kind', async () => {
     const options = optionsOf();
     await run(options);
