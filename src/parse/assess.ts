@@ -18,10 +18,14 @@ export const MAX_MARKERS_PER_PARAGRAPH = 3000;
 /** Characters in one paragraph above which it is read by the simple scanner. */
 export const MAX_PARAGRAPH_CHARS = 500_000;
 
-/** Lines `[from, to)` (0-based) that the full parser should not see. */
-export interface HeavyRegion {
+/** Lines `[from, to)`, 0-based. */
+export interface LineRange {
   readonly from: number;
   readonly to: number;
+}
+
+/** Lines that the full parser should not see, and why. */
+export interface HeavyRegion extends LineRange {
   readonly code: 'deep-nesting' | 'too-complex';
   readonly message: string;
 }
@@ -182,9 +186,9 @@ export interface BlankedText {
  * 3,000 lines of spaces inside 32 nested lists took remark 80 s here.
  * @param src the source text
  * @param lines its line table
- * @param heavy regions to empty
+ * @param heavy line ranges to empty, in line order, not overlapping
  */
-export function blankRegions(src: string, lines: LineIndex, heavy: readonly HeavyRegion[]): BlankedText {
+export function blankRegions(src: string, lines: LineIndex, heavy: readonly LineRange[]): BlankedText {
   if (heavy.length === 0) return { text: src, toSource: (o) => o };
   const parts: string[] = [];
   const cuts: number[] = [];

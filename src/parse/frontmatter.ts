@@ -7,7 +7,7 @@
  */
 import { isMap, isScalar, parseDocument } from 'yaml';
 import type { PageMeta } from '../types.js';
-import type { ProblemDraft } from './types.js';
+import type { PageDraft, ProblemDraft, Read } from './types.js';
 
 /** Frontmatter of a page that has none. */
 export const EMPTY_META: PageMeta = { draft: false, noindex: false, aliases: [], exclude: false };
@@ -184,4 +184,16 @@ function nestedOffset(contents: unknown, dotted: string): number {
     }
   }
   return 0;
+}
+
+/**
+ * Read a page's frontmatter block (if any) and put its problems on the draft.
+ * @param draft the page being collected
+ * @param block the YAML and the offset of its first character, or null
+ */
+export function applyFrontmatter(draft: PageDraft, block: { readonly value: string; readonly contentStart: number } | null): Read {
+  if (block === null) return { draft, meta: EMPTY_META };
+  const result = readFrontmatter(block.value, block.contentStart);
+  draft.problems.push(...result.problems);
+  return result.title === undefined ? { draft, meta: result.meta } : { draft, meta: result.meta, title: result.title };
 }

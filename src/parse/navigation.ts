@@ -15,7 +15,7 @@ import { EngineError } from '../errors.js';
 import type { RawLink } from '../types.js';
 import type { LineIndex } from './lines.js';
 import { buildLineIndex, positionOf } from './lines.js';
-import { readMarkdownPage } from './source.js';
+import { readMarkdownPage } from './markdown-page.js';
 
 const LINK_KEYS = ['link', 'href', 'path', 'url', 'file'];
 const TEXT_KEYS = ['title', 'text', 'label', 'name'];

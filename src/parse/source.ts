@@ -3,28 +3,18 @@
  * problem on the page and whatever could be read is still returned, so one bad file never stops
  * a run.
  */
-import GithubSlugger from 'github-slugger';
 import type { ResolvedOptions } from '../options.js';
-import type { PageFacts, PageMeta, RawLink, SourceFile, SourceProblem } from '../types.js';
-import { blankRegions, findHeavyRegions } from './assess.js';
-import { scanHtml, scanMarkdownLines } from './fallback.js';
-import { EMPTY_META, findFrontmatter, readFrontmatter } from './frontmatter.js';
-import { walkHast } from './hast.js';
+import type { PageFacts, RawLink, SourceFile, SourceProblem } from '../types.js';
+import { describeError } from './failure.js';
+import { EMPTY_META } from './frontmatter.js';
+import { readHtmlPage } from './html.js';
 import type { LineIndex } from './lines.js';
-import { buildLineIndex, lineOf, positionOf } from './lines.js';
-import { readMarkdown } from './markdown.js';
+import { buildLineIndex, positionOf } from './lines.js';
+import { readMarkdownPage } from './markdown-page.js';
 import { addPatternLinks } from './patterns.js';
-import { parseHtmlDocument } from './processors.js';
 import { routeOfFile } from './routes.js';
-import type { PageDraft } from './types.js';
+import type { PageDraft, Read } from './types.js';
 import { newDraft } from './types.js';
-
-/** A file read into a draft, with its frontmatter. */
-export interface Read {
-  readonly draft: PageDraft;
-  readonly meta: PageMeta;
-  readonly title?: string;
-}
 
 /**
  * Parse one source file: route, title, frontmatter, headings and ids, links with positions,
@@ -39,7 +29,7 @@ export function parseSource(file: SourceFile, options: ResolvedOptions): PageFac
   let lines: LineIndex | null = null;
   try {
     lines = buildLineIndex(src);
-    const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines);
+    const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines, /\.mdx$/i.test(file.path));
     addPatternLinks(src, options.linkPatterns, read.draft);
     return assemble(file, options, bom, lines, read);
   } catch (error) {
@@ -67,72 +57,6 @@ function failedFacts(file: SourceFile, options: ResolvedOptions, bom: number, li
       text: { title, headings: '', body: '' }, spans: [], problems: [...file.problems, { code: 'parse-failed', message }],
     };
   }
-}
-
-/**
- * Read a Markdown text into a draft: heavy regions to the simple scanner, the rest through
- * remark; a parser failure (a tree too deep for the stack) sends the whole text to the simple
- * scanner. Used for pages and for Markdown navigation files.
- * @param src Markdown source (BOM removed)
- * @param lines its line table
- */
-export function readMarkdownPage(src: string, lines: LineIndex): Read {
-  const draft = newDraft();
-  const slugger = new GithubSlugger();
-  const fmBlock = findFrontmatter(src);
-  const bodyLine = fmBlock === null ? 0 : lineOf(lines, fmBlock.end) + 1;
-  const heavy = findHeavyRegions(src, lines, bodyLine);
-  let fm: { value: string; contentStart: number } | null;
-  try {
-    fm = readMarkdown(src, blankRegions(src, lines, heavy), lines, draft, slugger);
-  } catch (error) {
-    // A tree too deep for the stack, or a parser failure: read the whole page simply.
-    const fresh = newDraft();
-    const deep = error instanceof RangeError;
-    fresh.problems.push({
-      code: deep ? 'deep-nesting' : 'parse-failed',
-      message: deep
-        ? 'Unexpected nesting too deep to parse; the page is read with a simple scan (links and headings only, no places to insert links)'
-        : `Unexpected failure of the Markdown parser (${describeError(error)}); the page is read with a simple scan`,
-    });
-    scanMarkdownLines(src, lines, bodyLine, lines.count, fresh, new GithubSlugger());
-    return withFrontmatter(fresh, fmBlock === null ? null : { value: fmBlock.value, contentStart: fmBlock.contentStart });
-  }
-  for (const r of heavy) {
-    draft.problems.push({ code: r.code, message: r.message, offset: lines.starts[r.from]! });
-    scanMarkdownLines(src, lines, r.from, r.to, draft, slugger);
-  }
-  return withFrontmatter(draft, fm);
-}
-
-function readHtmlPage(src: string): Read {
-  const draft = newDraft();
-  const fmBlock = findFrontmatter(src);
-  // Frontmatter (as some generators allow in HTML files) is blanked, not cut, so offsets hold.
-  const html = fmBlock === null ? src : src.slice(0, fmBlock.end).replace(/[^\r\n]/g, ' ') + src.slice(fmBlock.end);
-  if (fmBlock !== null) draft.code.push(0, fmBlock.end);
-  try {
-    walkHast(parseHtmlDocument(html), { src, draft, map: (o) => o, document: true });
-  } catch (error) {
-    const fresh = newDraft();
-    const deep = error instanceof RangeError;
-    fresh.problems.push({
-      code: deep ? 'deep-nesting' : 'parse-failed',
-      message: deep
-        ? 'Unexpected element nesting too deep to parse; the page is read with a simple scan (links and headings only, no places to insert links)'
-        : `Unexpected failure of the HTML parser (${describeError(error)}); the page is read with a simple scan`,
-    });
-    scanHtml(html, fresh);
-    return withFrontmatter(fresh, fmBlock);
-  }
-  return withFrontmatter(draft, fmBlock);
-}
-
-function withFrontmatter(draft: PageDraft, fm: { value: string; contentStart: number } | null): Read {
-  if (fm === null) return { draft, meta: EMPTY_META };
-  const result = readFrontmatter(fm.value, fm.contentStart);
-  draft.problems.push(...result.problems);
-  return result.title === undefined ? { draft, meta: result.meta } : { draft, meta: result.meta, title: result.title };
 }
 
 function assemble(file: SourceFile, options: ResolvedOptions, bom: number, lines: LineIndex, read: Read): PageFacts {
@@ -198,8 +122,4 @@ function pickTitle(fromFrontmatter: string | undefined, draft: PageDraft, path: 
   const stem = parts[parts.length - 1]!.replace(/\.[^.]+$/, '');
   const isIndex = stem.toLowerCase() === 'index' || options.routes.indexNames.some((n) => n.toLowerCase() === stem.toLowerCase());
   return isIndex && parts.length > 1 ? parts[parts.length - 2]! : stem;
-}
-
-function describeError(error: unknown): string {
-  return error instanceof Error ? error.message : String(error);
 }

@@ -2,7 +2,7 @@
  * Types of the parse stage: the redirect record it exports, and the draft it fills while walking
  * one file (offsets only; line/column are computed once at the end from the line table).
  */
-import type { LinkContext, LinkOrigin, SourceProblem } from '../types.js';
+import type { LinkContext, LinkOrigin, PageMeta, SourceProblem } from '../types.js';
 
 /** One line of a redirects file: `from to`. */
 export interface Redirect {
@@ -70,4 +70,12 @@ export interface PageDraft {
 /** A fresh, empty draft. */
 export function newDraft(): PageDraft {
   return { links: [], headings: [], ids: [], spans: [], body: [], code: [], problems: [] };
+}
+
+/** A file read into a draft, with its frontmatter. */
+export interface Read {
+  readonly draft: PageDraft;
+  readonly meta: PageMeta;
+  /** Frontmatter `title`, when given. */
+  readonly title?: string;
 }

@@ -166,3 +166,15 @@ describe('Markdown spans', () => {
     expect(f.spans.map((s) => s.text)).toEqual(['Plain line']);
   });
 });
+
+describe('MDX files', () => {
+  it('top-level import/export blocks are code: no spans, no text, no link patterns there', () => {
+    const text = "import Tabs from './tabs.js'\nexport const meta = {\n  see: '{{ref \"x.md\"}}',\n}\n\n# Tabs\n\nUse the [tabs](/tabs/) widget.\n\n```js\nimport inCode from 'kept'\n```\n";
+    const f = md(text, { linkPatterns: [{ pattern: '\\{\\{ref "([^"]+)"\\}\\}', route: '$1' }] }, 'guide/tabs.mdx');
+    expect(f.route).toBe('/guide/tabs/');
+    expect(f.links.map((l) => l.href)).toEqual(['/tabs/']);
+    expect(f.spans.map((s) => s.text)).toEqual(['Use the', 'widget.']);
+    expect(f.text.body).not.toMatch(/import|export|meta/);
+    expect(f.headings.map((h) => [h.text, h.line])).toEqual([['Tabs', 6]]);
+  });
+});
