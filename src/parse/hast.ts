@@ -18,6 +18,7 @@ const IN_LINK = 2;
 const NO_BODY = 4;
 const SPAN_OK = 8;
 const NO_SPAN = 16;
+const IN_SVG = 32;
 
 const TEMPLATE_TAGS = new Set(['nav', 'header', 'footer', 'aside']);
 const SPAN_TAGS = new Set(['p', 'li', 'td', 'dd']);
@@ -117,18 +118,20 @@ function visit(node: RootContent, ctx: Walk, flags: number): void {
   }
   if (NO_SPAN_TAGS.has(tag)) f |= NO_SPAN;
   if (SPAN_TAGS.has(tag)) f |= SPAN_OK;
+  if (tag === 'svg') f |= IN_SVG | NO_BODY | NO_SPAN;
 
   if (ctx.document) {
     if (tag === 'base') {
       if (draft.baseHref === undefined && typeof props.href === 'string') draft.baseHref = props.href;
       return;
     }
-    if (tag === 'title') {
+    if (tag === 'title' && (flags & IN_SVG) === 0) {
       if (draft.htmlTitle === undefined) draft.htmlTitle = collapseSpace(plainText(node));
       return;
     }
     const h = HEADING.exec(tag);
-    if (h !== null) {
+    // A heading in a template region (the site name in a header) is not the page's.
+    if (h !== null && (flags & TEMPLATE) === 0) {
       const text = collapseSpace(plainText(node));
       const depth = Number(h[1]);
       draft.headings.push({ depth, text, slug: typeof props.id === 'string' ? props.id : '', offset: start });

@@ -80,3 +80,15 @@ describe('HTML pages', () => {
     for (const s of f.spans) expect(PAGE.slice(s.offset, s.offset + s.text.length)).toBe(s.text);
   });
 });
+
+describe('HTML page titles and headings', () => {
+  it('a heading inside a template region (the site name in a header) is not the page title', () => {
+    const f = html('<header><h1>Site name</h1></header><main><h1>Real page</h1></main>');
+    expect(f.title).toBe('Real page');
+    expect(f.headings.map((h) => h.text)).toEqual(['Real page']);
+  });
+
+  it('an SVG <title> is not the document title', () => {
+    expect(html('<p><svg><title>icon</title></svg> text</p>', {}, 'x/icon-page.html').title).toBe('icon-page');
+  });
+});
