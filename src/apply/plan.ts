@@ -51,6 +51,8 @@ export function planFile(input: PlanInput): FilePlan {
     } else if (s.anchor === null || s.anchor === '') refuse(s, 'no anchor phrase to link');
     else if (s.offset < 0 || s.endOffset > file.text.length || file.text.slice(s.offset, s.endOffset) !== s.anchor) {
       refuse(s, `the anchor "${s.anchor}" is not at offset ${s.offset}`);
+    } else if (splitsPair(file.text, s.offset) || splitsPair(file.text, s.endOffset)) {
+      refuse(s, `the anchor "${s.anchor}" starts or ends inside a character (between the halves of a surrogate pair)`);
     } else if (!input.hrefs.has(s.id)) refuse(s, `the target ${s.target} is not a page of the report`);
     else candidates.push(s);
   }
@@ -75,6 +77,14 @@ export function planFile(input: PlanInput): FilePlan {
     const gone = new Set(failed.map((f) => f.id));
     candidates = candidates.filter((s) => !gone.has(s.id));
   }
+}
+
+/** True when `offset` falls between a high and a low surrogate (inserting there would break the character). */
+function splitsPair(text: string, offset: number): boolean {
+  if (offset <= 0 || offset >= text.length) return false;
+  const before = text.charCodeAt(offset - 1);
+  const after = text.charCodeAt(offset);
+  return before >= 0xd800 && before <= 0xdbff && after >= 0xdc00 && after <= 0xdfff;
 }
 
 /** Insert the markup of `sorted` (ascending, not overlapping) into `text`. */
