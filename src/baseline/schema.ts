@@ -27,7 +27,7 @@ export const suggestionSchema = z.object({
   similarity: z.number(),
   score: z.number(),
   targetRankBefore: z.number(),
-  targetRankAfter: z.number(),
+  targetRankAfter: z.number().nullable(), // null: not computed (outside suggest.impactLimit)
   depthBefore: z.number().int().nullable(),
   depthAfter: z.number().int().nullable(),
   reason: z.string(),

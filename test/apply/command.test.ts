@@ -106,7 +106,7 @@ describe('apply on the pr-base site', () => {
     const after = await analyze({ root, cache: { enabled: false } });
     const target = after.pages.find((p) => p.route === s.target)!;
     expect(target.depth).toBe(s.depthAfter);
-    expect(target.rank).toBeCloseTo(s.targetRankAfter, 3);
+    expect(target.rank).toBeCloseTo(s.targetRankAfter!, 3);
     expect(after.links.some((l) => l.from === s.source && l.to === s.target && l.status === 'ok')).toBe(true);
     expect(after.findings.some((f) => f.rule === 'orphan-page' && f.route === s.target)).toBe(false);
   });

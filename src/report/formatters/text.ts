@@ -1,14 +1,26 @@
 /**
  * The terminal writer: findings grouped by file, each as `file:line:column  severity  rule-id`
  * with its message wrapped on the lines below (the location stays whole, so editors and CI logs
- * can link it), suggested links grouped by source file the same way, then the counts and the
+ * can link it), suggested links grouped by source file the same way, then (with `--baseline` or
+ * `--compare`) the new and fixed findings and the structure changes, then the counts and the
  * gate result last, where a CI log ends.
  * Colour through picocolors, only when `ctx.color`.
  */
 import pc from 'picocolors';
-import type { Finding, Report, Suggestion } from '../../types.js';
+import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { FormatContext, Formatter } from '../types.js';
-import { describeFailure, displayPath, formatSimilarity, impactOf, problemsLine, repairLine, summaryParts } from './common.js';
+import {
+  describeFailure,
+  displayPath,
+  formatDepth,
+  formatRank,
+  formatSimilarity,
+  impactOf,
+  plural,
+  problemsLine,
+  repairLine,
+  summaryParts,
+} from './common.js';
 
 type Paint = (s: string) => string;
 
@@ -145,6 +157,51 @@ function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeo
   return out;
 }
 
+/** New and fixed findings, one line each: `file:line:column  rule  message`. */
+function changedFindings(title: string, list: readonly Finding[], report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+  if (list.length === 0) return [];
+  const out = [`${title} (${list.length}):`];
+  for (const f of list) {
+    const location = `  ${clean(displayPath(f.file, report.root, ctx.cwd)) || '(site)'}:${f.line}:${f.column}  `;
+    const width0 = location.length + f.rule.length + 2;
+    out.push(...wrap(`${location}${c.dim(f.rule)}  `, width0, words(f.message, (x) => x, ''), width, BODY_INDENT));
+  }
+  return out;
+}
+
+function pageChangeLine(p: PageChange): string {
+  const rank = p.rankBefore === p.rankAfter ? `rank ${formatRank(p.rankAfter)}` : `rank ${formatRank(p.rankBefore)} -> ${formatRank(p.rankAfter)}`;
+  const depth = p.depthBefore === p.depthAfter ? `depth ${formatDepth(p.depthAfter)}` : `depth ${formatDepth(p.depthBefore)} -> ${formatDepth(p.depthAfter)}`;
+  return `  ${clean(p.route)}  ${rank}, ${depth}`;
+}
+
+/** The baseline's and the base report's new and fixed findings, and the structure changes. */
+function reviewLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+  const out: string[] = [];
+  const { baseline, comparison } = report;
+  if (baseline !== undefined) {
+    out.push(c.bold(`Against the baseline: ${baseline.known} known, ${baseline.new.length} new, ${baseline.fixed.length} fixed`));
+    out.push(...changedFindings('New', baseline.new, report, ctx, c, width), ...changedFindings('Fixed', baseline.fixed, report, ctx, c, width));
+  }
+  if (comparison !== undefined) {
+    if (out.length > 0) out.push('');
+    const { newFindings, fixedFindings, pagesAdded, pagesRemoved } = comparison;
+    out.push(
+      c.bold(
+        `Compared with the base report: ${plural(newFindings.length, 'new finding')}, ${fixedFindings.length} fixed, ${plural(pagesAdded.length, 'page')} added, ${pagesRemoved.length} removed`,
+      ),
+    );
+    out.push(...changedFindings('New', newFindings, report, ctx, c, width), ...changedFindings('Fixed', fixedFindings, report, ctx, c, width));
+    const routes = (title: string, pages: Comparison['pagesAdded']) =>
+      pages.length === 0 ? [] : wrap(`${title}: `, title.length + 2, phrases(pages.map((p) => clean(p.route)), ','), width, BODY_INDENT);
+    out.push(...routes('Pages added', pagesAdded), ...routes('Pages removed', pagesRemoved));
+    const seen = new Set<string>();
+    const rows = [...comparison.depthChanges, ...comparison.rankChanges].filter((p) => !seen.has(p.route) && seen.add(p.route));
+    if (rows.length > 0) out.push('Biggest changes (depth first, then rank):', ...rows.map(pageChangeLine));
+  }
+  return out;
+}
+
 /** The terminal formatter. */
 export const textFormatter: Formatter = {
   id: 'text',
@@ -155,6 +212,7 @@ export const textFormatter: Formatter = {
     const out: string[] = [];
     if (report.findings.length > 0) out.push(...findingLines(report, ctx, c, width), '');
     if (report.suggestions.length > 0) out.push(...suggestionLines(report, ctx, c, width), '');
+    if (report.baseline !== undefined || report.comparison !== undefined) out.push(...reviewLines(report, ctx, c, width), '');
 
     const { error, warning } = report.stats.findings;
     const problems = problemsLine(report);
