@@ -45,6 +45,12 @@ export interface SuggestConfig {
   minInlinks?: number | undefined;
   /** Under-linked when importance percentile minus PageRank percentile exceeds this (0..1). @default 0.5 */
   rankGap?: number | undefined;
+  /**
+   * Suggestions whose PageRank after is computed: the best this many by score, plus every
+   * suggestion of the depth-repair plan; 0 = all. The others report `targetRankAfter: null`
+   * (each prediction is a power iteration over the whole graph). @default 200
+   */
+  impactLimit?: number | undefined;
 }
 
 /** Gate limits: the gate fails when a count crosses its limit. `null` = no limit. */
@@ -117,7 +123,7 @@ export interface Config {
   important?: string[] | undefined;
   /** A CSV of `route,views` (relative to the root) used as importance. @default null */
   traffic?: string | null | undefined;
-  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, maxNewLinksPerPage: 3, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5 } */
+  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, maxNewLinksPerPage: 3, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
   suggest?: SuggestConfig | undefined;
   /** Gate limits. @default every limit null (none) */
   gate?: GateConfig | undefined;

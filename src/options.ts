@@ -91,6 +91,16 @@ const schema = z.strictObject({
       minInlinks: z.number().int().min(0).default(2),
       /** Under-linked when importance percentile - PageRank percentile exceeds this. @default 0.5 */
       rankGap: z.number().min(0).max(1).default(0.5),
+      /**
+       * Suggestions whose PageRank after is computed: the best this many by score, plus every
+       * suggestion of the depth-repair plan; 0 = all. The others report `targetRankAfter: null`
+       * ("not computed"); their depth after is always computed. Why a budget: the exact PageRank
+       * after one added link is a fixed point of the whole graph (the link changes its source's
+       * out-weight share, and the change flows around every cycle through the source), so each
+       * prediction is a power iteration over every edge; no exact shortcut stays local.
+       * @default 200
+       */
+      impactLimit: z.number().int().min(0).default(200),
     })
     .prefault({}),
   /** Gate limits: the gate fails when a count exceeds its limit. null = no limit. */

@@ -263,7 +263,8 @@ export interface Suggestion {
   readonly similarity: number;
   readonly score: number;
   readonly targetRankBefore: number;
-  readonly targetRankAfter: number;
+  /** Target rank with the link added; null when not computed (outside `suggest.impactLimit`). */
+  readonly targetRankAfter: number | null;
   readonly depthBefore: number | null;
   readonly depthAfter: number | null;
   readonly reason: string;

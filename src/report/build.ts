@@ -109,7 +109,7 @@ function roundSuggestion(s: Suggestion): Suggestion {
     similarity: roundTo(s.similarity, RATIO_DECIMALS),
     score: roundTo(s.score, RATIO_DECIMALS),
     targetRankBefore: roundTo(s.targetRankBefore, RATIO_DECIMALS),
-    targetRankAfter: roundTo(s.targetRankAfter, RATIO_DECIMALS),
+    targetRankAfter: s.targetRankAfter === null ? null : roundTo(s.targetRankAfter, RATIO_DECIMALS),
   };
 }
 

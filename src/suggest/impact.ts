@@ -2,7 +2,10 @@
  * Predicted impact of a suggestion (DESIGN section 7), computed, not estimated:
  * - PageRank after adding the link: the ranking stage's power iteration, warm-started from the
  *   current vector, with the link passed as an extra edge (weight 1, a content link), under the
- *   same damping, teleport vector and stopping rule as the ranking;
+ *   same damping, teleport vector and stopping rule as the ranking. One such run reads the whole
+ *   graph a few dozen times, so it is done for a budget of suggestions only
+ *   ({@link impactSelection}, option `suggest.impactLimit`), all of them in one batched run
+ *   (`pagerankScenarios`: many scenarios per sweep of the graph);
  * - click depth after: exact. Adding one edge s -> t can only shorten paths through it, so
  *   t's depth becomes min(depth t, depth s + 1) and the change spreads from t by BFS over
  *   the edges click depth follows; {@link DepthState} does this locally (only improved pages
@@ -13,6 +16,7 @@ import type { Csr, Ranking, SiteGraph } from '../types.js';
 import { outWeightSums } from '../graph/csr.js';
 import { pagerank } from '../rank/pagerank.js';
 import type { PagerankOptions } from '../rank/pagerank.js';
+import { pagerankScenarios } from '../rank/pagerank-batch.js';
 import { depthMask, teleportVector } from '../rank/rank.js';
 
 /** Everything needed to predict PageRank after adding links, made once per run. */
@@ -46,6 +50,48 @@ export function pagerankWithLinks(model: RankModel, links: readonly { from: numb
     start: model.current,
     extraEdges: links.map((l) => ({ from: l.from, to: l.to, weight: 1 })),
   }).scores;
+}
+
+/**
+ * PageRank of each link's target with that link alone added (weight 1, a content link), each
+ * link its own scenario; all in one batched run, exactly as {@link pagerankWithLinks} per link.
+ * @returns `after[i]`: PageRank (sum 1) of `links[i].to` with `links[i]` added
+ */
+export function targetRanksWithLinks(model: RankModel, links: readonly { from: number; to: number }[]): Float64Array {
+  const { graph, options } = model;
+  const result = pagerankScenarios(
+    graph.forward,
+    graph.reverse,
+    graph.pages.length,
+    options,
+    links.map((l) => [{ from: l.from, to: l.to, weight: 1 }]),
+    model.current,
+    links.map((l) => [l.to]),
+  );
+  const after = new Float64Array(links.length);
+  for (let i = 0; i < links.length; i++) after[i] = result.values[i]![0]!;
+  return after;
+}
+
+/**
+ * Which suggestions get a PageRank prediction: the `limit` best by score (ties: smaller id
+ * first; `limit` 0 = all) and every suggestion of the depth-repair plan.
+ * @returns one flag per item, 1 = predict
+ */
+export function impactSelection(items: readonly { readonly id: string; readonly score: number }[], planIds: readonly string[], limit: number): Uint8Array {
+  const selected = new Uint8Array(items.length);
+  if (limit === 0 || limit >= items.length) return selected.fill(1);
+  const order = items.map((_, i) => i).sort((a, b) => items[b]!.score - items[a]!.score || cmp(items[a]!.id, items[b]!.id));
+  for (let k = 0; k < limit; k++) selected[order[k]!] = 1;
+  const inPlan = new Set(planIds);
+  items.forEach((item, i) => {
+    if (inPlan.has(item.id)) selected[i] = 1;
+  });
+  return selected;
+}
+
+function cmp(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
 }
 
 /**

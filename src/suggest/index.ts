@@ -17,7 +17,7 @@ export { targetNames, routeWords } from './names.js';
 export type { TargetName, TargetNames, KeyTerms } from './names.js';
 export { chooseSuggestions } from './select.js';
 export type { ScoredPair, Chosen } from './select.js';
-export { rankModel, pagerankWithLinks, DepthState, depthState } from './impact.js';
+export { rankModel, pagerankWithLinks, targetRanksWithLinks, impactSelection, DepthState, depthState } from './impact.js';
 export type { RankModel } from './impact.js';
 export { repairPlan } from './repair.js';
 export type { PlanCandidate } from './repair.js';

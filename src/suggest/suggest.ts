@@ -16,7 +16,7 @@ import { targetNames } from './names.js';
 import type { TargetNames } from './names.js';
 import { findCandidates } from './candidates.js';
 import { suggestionId } from './id.js';
-import { depthState, pagerankWithLinks, rankModel } from './impact.js';
+import { depthState, impactSelection, rankModel, targetRanksWithLinks } from './impact.js';
 import { computeImportance } from './importance.js';
 import { reasonText } from './reason.js';
 import { repairPlan } from './repair.js';
@@ -114,7 +114,6 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     const { source, target } = pair;
     const sourcePage = graph.pages[source]!;
     const targetPage = graph.pages[target]!;
-    const after = pagerankWithLinks(model, [{ from: source, to: target }]);
     const depthBefore = ranking.depth[target]!;
     const depthAfter = depths.depthWith(source, target);
     const anchorText = anchor === null ? null : anchor.text;
@@ -131,7 +130,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
       similarity: pair.similarity,
       score,
       targetRankBefore: ranking.pagerank[target]! * n,
-      targetRankAfter: after[target]! * n,
+      targetRankAfter: null, // filled in below for the suggestions within the impact budget
       depthBefore: depthBefore < 0 ? null : depthBefore,
       depthAfter: depthAfter < 0 ? null : depthAfter,
       reason: reasonText({
@@ -156,6 +155,13 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     options,
     made.map((m) => ({ id: m.suggestion.id, source: m.source, target: m.target, score: m.suggestion.score })),
   );
+  // PageRank after: for the best `impactLimit` by score and the plan, in one batched run.
+  const selected = impactSelection(made.map((m) => m.suggestion), plan.suggestionIds, settings.impactLimit);
+  const predict = made.filter((_, i) => selected[i] === 1);
+  const after = targetRanksWithLinks(model, predict.map((m) => ({ from: m.source, to: m.target })));
+  predict.forEach((m, j) => {
+    m.suggestion = { ...m.suggestion, targetRankAfter: after[j]! * n };
+  });
   return { suggestions: made.map((m) => m.suggestion), underlinked, plan, importance: importance.level };
 }
 

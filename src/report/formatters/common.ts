@@ -24,9 +24,10 @@ export function formatDepth(depth: number | null): string {
   return depth === null ? 'unreachable' : String(depth);
 }
 
-/** "rank 0.80 -> 1.3, depth 5 -> 2": what a suggestion is predicted to change. */
+/** "rank 0.80 -> 1.3, depth 5 -> 2": what a suggestion is predicted to change ("rank 0.80 -> not computed" outside the impact budget). */
 export function impactOf(s: Suggestion, rankLabel = 'rank'): string {
-  const rank = `${rankLabel} ${formatRank(s.targetRankBefore)} -> ${formatRank(s.targetRankAfter)}`;
+  const after = s.targetRankAfter === null ? 'not computed' : formatRank(s.targetRankAfter);
+  const rank = `${rankLabel} ${formatRank(s.targetRankBefore)} -> ${after}`;
   const depth =
     s.depthBefore === s.depthAfter ? `depth ${formatDepth(s.depthAfter)}` : `depth ${formatDepth(s.depthBefore)} -> ${formatDepth(s.depthAfter)}`;
   return `${rank}, ${depth}`;

@@ -116,9 +116,9 @@ function code(text) { return el('code', { text: text }); }
 
 function placeOf(row) { return row.file + ':' + row.line + ':' + row.column; }
 
-/** "4 -> 2" with the change in words beside it; colour only repeats what the words say. */
-function change(before, after, show, delta) {
-  const span = el('span', null, [(before === null ? 'unreachable' : show(before)) + ' \u2192 ' + (after === null ? 'unreachable' : show(after))]);
+/** "4 -> 2" with the change in words beside it; colour only repeats what the words say. null reads as 'unreachable' unless told otherwise. */
+function change(before, after, show, delta, nullAfter) {
+  const span = el('span', null, [(before === null ? 'unreachable' : show(before)) + ' \u2192 ' + (after === null ? nullAfter || 'unreachable' : show(after))]);
   const note = before === null && after !== null ? { up: true, text: 'now reachable' } : before !== null && after !== null && before !== after ? delta(before, after) : null;
   if (note) span.appendChild(el('span', { cls: 'lw-delta ' + (note.up ? 'lw-up' : 'lw-down'), text: note.text }));
   return span;
@@ -128,7 +128,7 @@ function rankChange(r) {
   return change(r.targetRankBefore, r.targetRankAfter, fmtRank, function (a, b) {
     const pct = a > 0 ? Math.round((100 * (b - a)) / a) : 0;
     return { up: b > a, text: (pct >= 0 ? '+' : '\u2212') + Math.abs(pct) + '%' };
-  });
+  }, 'not computed');
 }
 
 function depthChange(r) {
@@ -171,7 +171,7 @@ makeTable({
     { key: 'target', label: 'Link to', sort: function (r) { return r.target; },
       render: function (r) { return el('span', null, [r.targetTitle, el('span', { cls: 'lw-route', text: r.target })]); } },
     { key: 'similarity', label: 'Similarity', numeric: true, firstDir: 'desc', sort: function (r) { return r.similarity; }, render: function (r) { return r.similarity.toFixed(2); } },
-    { key: 'rank', label: 'Target rank', firstDir: 'desc', sort: function (r) { return r.targetRankAfter - r.targetRankBefore; },
+    { key: 'rank', label: 'Target rank', firstDir: 'desc', sort: function (r) { return r.targetRankAfter === null ? null : r.targetRankAfter - r.targetRankBefore; },
       render: rankChange },
     { key: 'depth', label: 'Target depth', firstDir: 'desc',
       sort: function (r) { return r.depthAfter === null ? null : (r.depthBefore === null ? 1000 : r.depthBefore) - r.depthAfter; },

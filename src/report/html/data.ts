@@ -51,7 +51,8 @@ export interface HtmlSuggestion {
   readonly anchor: string | null;
   readonly similarity: number;
   readonly targetRankBefore: number;
-  readonly targetRankAfter: number;
+  /** null: not computed (outside `suggest.impactLimit`). */
+  readonly targetRankAfter: number | null;
   readonly depthBefore: number | null;
   readonly depthAfter: number | null;
   readonly reason: string;
