@@ -2,7 +2,8 @@
  * The SARIF writer: SARIF 2.1.0 (OASIS), one run. Every rule is a rule descriptor (from the
  * rule metadata) plus `link-suggestion` for the suggested links; findings are results at their
  * file, line and column relative to `SRCROOT` (the content root); suggestions are results of
- * level `note` whose `fixes` entry replaces the anchor phrase with the link markup.
+ * level `note` whose `fixes` entry replaces the anchor phrase with the link markup. With a
+ * baseline or a base report, each finding has a `baselineState` (`new` or `unchanged`).
  */
 import { pathToFileURL } from 'node:url';
 import type { ArtifactLocation, Fix, Log, ReportingDescriptor, Result } from 'sarif';
@@ -41,11 +42,12 @@ function artifact(file: string): ArtifactLocation {
 }
 
 /** `ruleIndex` is absent for a rule the descriptors do not know (a plugin's own). */
-function findingResult(f: Finding, ruleIndex: number | undefined): Result {
+function findingResult(f: Finding, ruleIndex: number | undefined, baselineState: Result['baselineState']): Result {
   return {
     ruleId: f.rule,
     ...(ruleIndex === undefined ? {} : { ruleIndex }),
     level: f.severity,
+    ...(baselineState === undefined ? {} : { baselineState }),
     message: { text: f.message },
     ...(f.file === ''
       ? {}
@@ -122,12 +124,33 @@ function suggestionResult(report: Report, s: Suggestion, ruleIndex: number): Res
   };
 }
 
+/**
+ * `baselineState` of each finding when the report was compared with a base report (preferred)
+ * or a baseline: `new` for the findings that run did not have, else `unchanged`. Without
+ * either, no state.
+ */
+function baselineStates(report: Report): (f: Finding) => Result['baselineState'] {
+  const fresh = report.comparison?.newFindings ?? report.baseline?.new;
+  if (fresh === undefined) return () => undefined;
+  const identity = (f: Finding) => JSON.stringify([f.rule, f.file, f.line, f.column, f.route, f.message, f.target ?? null]);
+  const left = new Map<string, number>();
+  for (const f of fresh) left.set(identity(f), (left.get(identity(f)) ?? 0) + 1);
+  return (f) => {
+    const key = identity(f);
+    const n = left.get(key) ?? 0;
+    if (n === 0) return 'unchanged';
+    left.set(key, n - 1);
+    return 'new';
+  };
+}
+
 /** The SARIF log of a report, as an object (the formatter stringifies it). */
 export function toSarif(report: Report): Log {
   const driverRules = descriptors();
   const index = new Map(driverRules.map((r, i) => [r.id, i]));
+  const state = baselineStates(report);
   const results: Result[] = [
-    ...report.findings.map((f) => findingResult(f, index.get(f.rule))),
+    ...report.findings.map((f) => findingResult(f, index.get(f.rule), state(f))),
     ...report.suggestions.map((s) => suggestionResult(report, s, index.get(SUGGESTION_RULE)!)),
   ];
   const root = pathToFileURL(report.root).href;
