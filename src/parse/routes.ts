@@ -10,6 +10,7 @@
  */
 import { canonicalPath, encodeRouteSegment, normalizedBasePath } from '../graph/normalize.js';
 import type { RouteOptions } from '../graph/normalize.js';
+import { removeDotSegments } from '../graph/paths.js';
 import type { PageMeta } from '../types.js';
 
 export { normalizeRoute } from '../graph/normalize.js';
@@ -65,10 +66,12 @@ function completeRoute(route: string, style: RouteOptions['style']): string {
 
 /**
  * Canonical form of a URL path as written (frontmatter, options); a path that does not decode
- * (a stray `%`) is taken literally, its segments encoded.
+ * (a stray `%`) is taken literally, its segments encoded. Dot segments (`.`, `..`, also written
+ * `%2e`) are removed as a browser removes them (RFC 3986 section 5.2.4), so a slug such as
+ * `../../x` gives `/x/`, never a route with `..` in it.
  */
 function canonicalUrlPath(path: string): string {
-  return canonicalPath(path) ?? canonicalPath(path.split('/').map(encodeRouteSegment).join('/')) ?? path;
+  return removeDotSegments(canonicalPath(path) ?? canonicalPath(path.split('/').map(encodeRouteSegment).join('/')) ?? path);
 }
 
 /**
