@@ -119,6 +119,8 @@ async function main(): Promise<void> {
       const measure = await child<MeasureResult>(['--mode', 'measure', '--size', String(size), '--dir', dir, '--runs', runs], ['--expose-gc', heap]);
       results.push({ size, generateMs, rss, measure });
       rmSync(dir, { recursive: true, force: true });
+      // The table so far, so a long run that is stopped still leaves its numbers.
+      log(`so far:\n${renderTable(results, null, { ...machine, load: [machine.load[0], loadavg()[0]!] })}`);
     }
     const dir = join(base, `site-${RELATED_PAGES}`);
     generateSite(dir, { pages: RELATED_PAGES, seed });
