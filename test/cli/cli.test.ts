@@ -163,7 +163,7 @@ describe('linkweave (built command)', () => {
     [['check', 'docs', '--frobnicate'], /^linkweave: unknown flag "--frobnicate" for "check"; accepted flags: --config, /],
     [['check', 'docs', '--format', 'xml'], /^linkweave: flag --format: expected one of text, json, markdown, sarif, html; got "xml"$/],
     [['check', 'docs', '--max-depth', 'deep'], /^linkweave: flag --max-depth: expected a whole number >= 0; got "deep"$/],
-    [['publish'], /^linkweave: unknown command "publish"; accepted commands: check, suggest$/],
+    [['publish'], /^linkweave: unknown command "publish"; accepted commands: check, suggest, apply, backtest$/],
     [['check', 'nowhere'], /^linkweave: content root "\/.*nowhere" cannot be opened: no such file \(ENOENT\)$/],
   ])('%j exits 2 with one line', (args, message) => {
     const { cwd } = project(CLEAN);
