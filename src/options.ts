@@ -4,16 +4,16 @@
  * `ResolvedOptions` with nothing optional.
  */
 import { z } from 'zod';
+import { describeIssue } from './config-issues.js';
 import { EngineError } from './errors.js';
 
 const severity = z
   .enum(['off', 'warn', 'warning', 'error'])
   .transform((s) => (s === 'warn' ? 'warning' : s));
 
-const ruleSetting = z.union([
-  severity,
-  z.tuple([severity, z.record(z.string(), z.unknown())]),
-]);
+const ruleSetting = z
+  .union([severity, z.tuple([severity, z.record(z.string(), z.unknown())])])
+  .describe('a severity ("off", "warning" or "error"; "warn" means "warning"), or [severity, { rule options }]');
 
 const linkPattern = z.strictObject({
   /** A regular expression (JavaScript syntax, `g` flag implied) matched against the page's raw text. */
@@ -150,11 +150,9 @@ export const DEFAULT_OPTIONS: Omit<ResolvedOptions, 'root'> = schema.parse({});
  * @throws EngineError `E_CONFIG_INVALID` naming the key, the problem and the accepted values
  */
 export function resolveOptions(input: unknown, root: string, origin = 'configuration'): ResolvedOptions {
-  const result = schema.safeParse(input ?? {});
+  const result = schema.safeParse(input ?? {}, { reportInput: true });
   if (!result.success) {
-    const issue = result.error.issues[0]!;
-    const key = issue.path.length > 0 ? issue.path.join('.') : '(top level)';
-    throw new EngineError('E_CONFIG_INVALID', `${origin}: key "${key}": ${describeIssue(issue)}`);
+    throw new EngineError('E_CONFIG_INVALID', `${origin}: ${describeIssue(schema, result.error.issues[0]!)}`);
   }
   const options = { ...result.data, root };
   for (const [i, p] of options.linkPatterns.entries()) {
@@ -171,15 +169,4 @@ export function resolveOptions(input: unknown, root: string, origin = 'configura
     throw new EngineError('E_CONFIG_INVALID', `${origin}: key "routes.basePath": must start with "/", got "${options.routes.basePath}"`);
   }
   return options;
-}
-
-function describeIssue(issue: z.core.$ZodIssue): string {
-  switch (issue.code) {
-    case 'unrecognized_keys':
-      return `unknown key${issue.keys.length > 1 ? 's' : ''} ${issue.keys.map((k) => `"${k}"`).join(', ')}`;
-    case 'invalid_value':
-      return `expected one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`;
-    default:
-      return issue.message;
-  }
 }

@@ -2,6 +2,7 @@
  * The rule engine: applies the configured severity and options to each rule, runs it and
  * stamps its findings (as unified-lint-rule does for lint messages).
  */
+import { expectedGot } from '../config-issues.js';
 import { EngineError } from '../errors.js';
 import type { ResolvedOptions } from '../options.js';
 import type { Finding, Severity } from '../types.js';
@@ -58,13 +59,13 @@ function settingOf(
     }
     return { rule, severity, options: merged };
   }
-  const parsed = rule.optionsSchema.safeParse(merged);
+  const parsed = rule.optionsSchema.safeParse(merged, { reportInput: true });
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     const path = [rule.id, ...issue.path.map(String)];
     if (issue.code === 'unrecognized_keys') path.push(issue.keys[0]!);
     const accepted = Object.keys(rule.defaultOptions).map((k) => `"${k}"`).join(', ');
-    const problem = issue.code === 'unrecognized_keys' ? `unknown option, expected one of ${accepted}` : issue.message;
+    const problem = issue.code === 'unrecognized_keys' ? `unknown option, expected one of ${accepted}` : expectedGot(rule.optionsSchema, issue);
     throw new EngineError('E_CONFIG_INVALID', `${origin}: key "rules.${path.join('.')}": ${problem}`);
   }
   return { rule, severity, options: parsed.data as object };

@@ -76,6 +76,6 @@ describe('loadConfig', () => {
   it('the loaded object is validated by resolveOptions with the file as origin', async () => {
     const p = project({ 'docs/linkweave.config.json': '{"maxDepht": 3}' });
     const loaded = await loadConfig({ explicit: null, ...p });
-    expect(() => resolveOptions(loaded.config, p.root, loaded.origin)).toThrow('docs/linkweave.config.json: key "(top level)": unknown key "maxDepht"');
+    expect(() => resolveOptions(loaded.config, p.root, loaded.origin)).toThrow('docs/linkweave.config.json: key "maxDepht": unknown key; accepted keys: include, exclude, routes,');
   });
 });
