@@ -6,7 +6,8 @@
  */
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { parseWithCache } from './cache/index.js';
+import { parseWithCache, readResult, resultKey, writeResult } from './cache/index.js';
+import type { ResultInputs } from './cache/index.js';
 import { collectSources, readAuxFile } from './collect/index.js';
 import type { CollectResult } from './collect/index.js';
 import { parseNavigation, parseRedirects } from './parse/index.js';
@@ -61,8 +62,40 @@ export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Pr
   const stage = stageTimer(hooks);
 
   const collected = await stage('collect', () => collectInputs(options));
+  // Nothing changed since the last run with the cache on: its report is this run's report.
+  const cacheDir = options.cache.enabled ? resolve(options.cache.dir) : null;
+  const key = cacheDir === null ? '' : resultKey(reportInputs(options, command, collected, baseline));
+  const cached = cacheDir === null ? null : readResult(cacheDir, command, key);
+  if (cached !== null) return cached;
   const facts = await stage('parse', () => parseAll(collected.sources, options, hooks));
-  return finishAnalysis({ options, command, facts, collected, hooks, ...(baseline === undefined ? {} : { baseline }) });
+  const report = await finishAnalysis({ options, command, facts, collected, hooks, ...(baseline === undefined ? {} : { baseline }) });
+  if (cacheDir !== null) writeResult(cacheDir, command, key, report);
+  return report;
+}
+
+/** What a report depends on, for the whole-report cache key. */
+function reportInputs(
+  options: ResolvedOptions,
+  command: string,
+  collected: CollectedInputs,
+  baseline: { readonly findings: readonly Finding[] } | undefined,
+): ResultInputs {
+  const { sources, navigation, redirects, traffic, auxProblems } = collected;
+  return {
+    version: VERSION,
+    command,
+    options,
+    sources: sources.files.map((f) => ({ path: f.path, hash: f.hash, problems: f.problems })),
+    rest: {
+      assets: sources.assets,
+      warnings: sources.warnings,
+      navigation,
+      redirects,
+      traffic: traffic === null ? null : [...traffic],
+      auxProblems,
+      baseline: baseline?.findings ?? null,
+    },
+  };
 }
 
 /** Everything read from disk before parsing. */

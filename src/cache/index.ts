@@ -7,3 +7,5 @@ export { CACHE_SCHEMA, SHARDS, shardFileName, shardOfPath, isCacheable, packFact
 export type { ShardHeader, StoredFacts } from './format.js';
 export { isStoredFacts } from './validate.js';
 export type { CacheSettings, CacheStats, IgnoredReason, ParseMisses } from './types.js';
+export { readResult, resultKey, writeResult } from './result.js';
+export type { ResultInputs } from './result.js';

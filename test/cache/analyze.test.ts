@@ -20,8 +20,15 @@ beforeEach(() => {
 });
 afterEach(() => cleanup());
 
-/** One `analyze` run: the report as JSON and the parse stats. */
+/**
+ * One `analyze` run: the report as JSON and the parse stats. The whole-report cache
+ * (`report-*.json`, tested in result.test.ts) is removed first, so every run reaches the
+ * page-facts cache these tests are about.
+ */
 async function run(input: Omit<AnalyzeInput, 'root'>): Promise<{ json: string; stats: ParseStats }> {
+  for (const dir of [path.join(base, 'cache'), path.join(base, 'node_modules/.cache/linkweave'), path.join(process.cwd(), 'node_modules/.cache/linkweave')]) {
+    for (const command of ['check', 'suggest']) fs.rmSync(path.join(dir, `report-${command}.json`), { force: true });
+  }
   let stats: ParseStats | undefined;
   const hooks: AnalyzeHooks & ParseHooks = { onParseStats: (s) => (stats = s) };
   const report = await analyze({ ...CONFIG, command: 'suggest', ...input, root }, hooks);

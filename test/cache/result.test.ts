@@ -1,0 +1,62 @@
+/** The whole-report cache through `analyze`: an unchanged site gives the last report without parsing. */
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { analyze } from '../../src/analyze.js';
+import type { AnalyzeHooks, StageName } from '../../src/analyze.js';
+import { CONFIG, SITE } from './site.js';
+import { tempDir, writeTree } from './helpers.js';
+
+let base: string;
+let root: string;
+let cleanup: () => void;
+beforeEach(() => {
+  const t = tempDir();
+  ({ cleanup } = t);
+  base = t.dir;
+  root = path.join(base, 'site');
+  writeTree(root, SITE);
+});
+afterEach(() => cleanup());
+
+/** A run: the report as JSON and the stages that ran. */
+async function run(extra: Record<string, unknown> = {}): Promise<{ json: string; stages: StageName[] }> {
+  const stages: StageName[] = [];
+  const hooks: AnalyzeHooks = { onStage: (stage, phase) => (phase === 'start' ? stages.push(stage) : undefined) };
+  const report = await analyze({ ...CONFIG, command: 'suggest', cache: { dir: path.join(base, 'cache') }, ...extra, root }, hooks);
+  return { json: JSON.stringify(report), stages };
+}
+
+describe('the whole-report cache', () => {
+  it('an unchanged site gives a byte-identical report without parsing; any change runs the pipeline again', async () => {
+    const uncached = await analyze({ ...CONFIG, command: 'suggest', cache: { enabled: false }, root });
+    const cold = await run();
+    expect(cold.stages).toContain('parse');
+    expect(cold.json).toBe(JSON.stringify(uncached));
+    expect(fs.existsSync(path.join(base, 'cache', 'report-suggest.json'))).toBe(true);
+
+    const warm = await run();
+    expect(warm.stages).toEqual(['collect']);
+    expect(warm.json).toBe(cold.json);
+
+    // A changed source, a changed option and another command each miss.
+    const [first] = Object.keys(SITE).sort();
+    fs.appendFileSync(path.join(root, first!), '\nOne more sentence about nothing in particular.\n');
+    const changed = await run();
+    expect(changed.stages).toContain('parse');
+    expect(changed.json).toBe(JSON.stringify(await analyze({ ...CONFIG, command: 'suggest', cache: { enabled: false }, root })));
+    expect((await run({ maxDepth: 1 })).stages).toContain('rank');
+    expect((await run({ command: 'check' })).stages).toContain('rank');
+  });
+
+  it('a damaged or foreign cached report is ignored and replaced', async () => {
+    const cold = await run();
+    const file = path.join(base, 'cache', 'report-suggest.json');
+    for (const junk of ['{"schema":"linkweave/report-cache@1"', '[]', JSON.stringify({ schema: 'linkweave/report-cache@1', key: 'other', report: {} })]) {
+      fs.writeFileSync(file, junk);
+      const again = await run();
+      expect(again.stages).toContain('parse');
+      expect(again.json).toBe(cold.json);
+    }
+  });
+});
