@@ -46,8 +46,8 @@ export interface SuggestConfig {
   /** Under-linked when importance percentile minus PageRank percentile exceeds this (0..1). @default 0.5 */
   rankGap?: number | undefined;
   /**
-   * Suggestions whose PageRank after is computed: the best this many by score, plus every
-   * suggestion of the depth-repair plan; 0 = all. The others report `targetRankAfter: null`
+   * Suggestions whose PageRank after is computed: the best this many by score, plus the first
+   * this many of the depth-repair plan; 0 = all. The others report `targetRankAfter: null`
    * (each prediction is a power iteration over the whole graph). @default 200
    */
   impactLimit?: number | undefined;

@@ -92,12 +92,14 @@ const schema = z.strictObject({
       /** Under-linked when importance percentile - PageRank percentile exceeds this. @default 0.5 */
       rankGap: z.number().min(0).max(1).default(0.5),
       /**
-       * Suggestions whose PageRank after is computed: the best this many by score, plus every
-       * suggestion of the depth-repair plan; 0 = all. The others report `targetRankAfter: null`
-       * ("not computed"); their depth after is always computed. Why a budget: the exact PageRank
-       * after one added link is a fixed point of the whole graph (the link changes its source's
-       * out-weight share, and the change flows around every cycle through the source), so each
-       * prediction is a power iteration over every edge; no exact shortcut stays local.
+       * Suggestions whose PageRank after is computed: the best this many by score, plus the first
+       * this many of the depth-repair plan (the links that fix the most pages); 0 = all. The
+       * others report `targetRankAfter: null` ("not computed"); depth after is always computed.
+       * Why a budget: PageRank after one added link is the fixed point of the whole changed graph
+       * (the link changes the share of every out-link of its source, and the change flows around
+       * every cycle through it), so each exact prediction is a power iteration over every edge.
+       * No exact shortcut stays local: even the rank-one update formula needs entries of the
+       * inverse of the whole graph's matrix, one whole-graph solve per page involved.
        * @default 200
        */
       impactLimit: z.number().int().min(0).default(200),
