@@ -27,6 +27,9 @@ export interface DeadEndOptions {
  * `guide/faq.md:1:1  warning  Unexpected dead end /guide/faq/ with no links to other pages,
  * expected at least one link onward  dead-end`
  */
+/** Problems after which a page's links were never read. */
+const UNREAD: ReadonlySet<string> = new Set(['too-large', 'binary', 'unreadable']);
+
 export const deadEnd: Rule<DeadEndOptions> = {
   id: 'dead-end',
   description: 'Every page links on to at least one other page.',
@@ -37,6 +40,9 @@ export const deadEnd: Rule<DeadEndOptions> = {
     const findings: RuleFinding[] = [];
     const which = options.countTemplateLinks ? 'links' : 'content links';
     for (const page of ctx.graph.pages) {
+      // A file that was never read (too large, binary, unreadable) has no links to judge:
+      // source-problem already reports it.
+      if (ctx.facts[page.factsIndex]?.problems.some((p) => UNREAD.has(p.code))) continue;
       if (!isDeadEnd(ctx.graph, ctx.ranking, page.id, options.countTemplateLinks)) continue;
       findings.push(
         pageFinding(page, `Unexpected dead end ${page.route} with no ${which} to other pages, expected at least one link onward`),

@@ -9,6 +9,12 @@ ruleTable(deadEnd, {
     { name: 'pages that link onward', site: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] } },
     { name: 'a one-page site has nowhere to link to', site: { pages: [{ route: '/' }] } },
     {
+      name: 'a file that was never read (too large) is left to source-problem',
+      site: {
+        pages: [{ route: '/', links: ['/big/'] }, { route: '/big/', problems: [{ code: 'too-large', message: 'over maxFileBytes' }] }],
+      },
+    },
+    {
       name: 'countTemplateLinks true: navigation links count as outlinks',
       site: {
         pages: [{ route: '/' }, { route: '/a/' }],
