@@ -109,6 +109,8 @@ export function comparePagerank(lib: Pick<Built, 'graph' | 'rank'>, edges: EdgeA
   const m = from.length;
   const opts = { damping, tolerance, maxIterations };
 
+  const gc = (globalThis as { gc?: () => void }).gc;
+  gc?.();
   const oursClock = startClock();
   const list = lib.graph.createEdgeList(m);
   for (let e = 0; e < m; e++) lib.graph.pushEdge(list, from[e]!, to[e]!, weight[e]!, 1);
@@ -121,6 +123,7 @@ export function comparePagerank(lib: Pick<Built, 'graph' | 'rank'>, edges: EdgeA
 
   let theirs: Record<string, number> | null = null;
   let graphologyError: string | null = null;
+  gc?.();
   const t1 = performance.now();
   const theirClock = startClock();
   const g = new DirectedGraph();
