@@ -138,7 +138,7 @@ export async function collectInputs(options: ResolvedOptions): Promise<Collected
  * thread or in worker threads (`options.workers`), the cache saved. Cache problems never fail
  * the run; they are in the stats given to `hooks.onParseStats`.
  */
-async function parseAll(sources: CollectResult, options: ResolvedOptions, hooks: AnalyzeHooks & ParseHooks): Promise<PageFacts[]> {
+export async function parseAll(sources: CollectResult, options: ResolvedOptions, hooks: AnalyzeHooks & ParseHooks): Promise<PageFacts[]> {
   const cores = availableParallelism();
   let workers: WorkerStats = { threads: 1, batches: 0, fallback: null };
   const { facts, stats } = await parseWithCache(sources.files, options, {

@@ -4,7 +4,6 @@
  * it, the backtest run, the table or JSON printed or written atomically. Exit 0 on success;
  * bad flags throw `E_USAGE` (the CLI turns that into exit 2).
  */
-import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import type { CommandContext } from '../cli/commands.js';
 import { checkOutputPath } from '../cli/output.js';
@@ -31,7 +30,7 @@ export async function runBacktestCommand(ctx: CommandContext): Promise<number> {
   const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
   let result;
   try {
-    const site = await loadSite(options, availableParallelism(), progress?.hooks ?? {});
+    const site = await loadSite(options, progress?.hooks ?? {});
     progress?.hooks.onStage?.('suggest', 'start');
     result = backtest({ options, facts: site.facts, collected: site.collected }, settings, (done, total) =>
       progress?.hooks.onProgress?.('suggest', done, total),

@@ -50,7 +50,7 @@ beforeAll(async () => {
   root = path.join(dir, 'site');
   generateSite(root, { pages: 400, seed: 1 });
   before = hashes(root);
-  site = await loadSite(options(), 1);
+  site = await loadSite(options());
 });
 
 afterAll(() => cleanup());
