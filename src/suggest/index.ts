@@ -1,5 +1,6 @@
 /** The suggest stage (DESIGN section 7): importance, under-linked pages, link suggestions, impact, repair plan. */
-export { suggestLinks, compareSuggestions, KEY_TERMS, STRONG_LEADERS } from './suggest.js';
+export { suggestLinks, compareSuggestions } from './suggest.js';
+export { chooseForTargets, KEY_TERMS, STRONG_LEADERS } from './choose.js';
 export type { SuggestInput, SuggestResult, UnderlinkedPage, RepairPlan, ImportanceLevel } from './types.js';
 export { parseTraffic } from './traffic.js';
 export type { TrafficResult } from './traffic.js';

@@ -9,31 +9,19 @@
  */
 import type { ResolvedOptions } from '../options.js';
 import type { PageFacts, Suggestion } from '../types.js';
-import { createStemCache } from '../text/tokenize.js';
-import { termLeaders, topTerms } from '../text/tfidf.js';
-import { findAnchors, prepareSource } from './anchor.js';
-import { targetNames } from './names.js';
-import type { TargetNames } from './names.js';
-import { findCandidates } from './candidates.js';
+import { chooseForTargets } from './choose.js';
 import { suggestionId } from './id.js';
 import { depthState, impactSelection, rankModel, targetRanksWithLinks } from './impact.js';
 import { computeImportance } from './importance.js';
 import { reasonText } from './reason.js';
 import { repairPlan } from './repair.js';
-import { baseScore, NO_ANCHOR_SIMILARITY } from './score.js';
-import { chooseSuggestions } from './select.js';
-import type { ScoredPair } from './select.js';
 import type { SuggestInput, SuggestResult } from './types.js';
 import { findUnderlinked, pagerankPercentiles } from './underlinked.js';
 
-/** Key terms of a target that an anchor may match: its heaviest TF-IDF terms. */
-export const KEY_TERMS = 5;
-/** A key term is strong for a target among the pages it weighs most in (this many). */
-export const STRONG_LEADERS = 3;
 
 /** Propose links for the site. Pure: same input, same output. */
 export function suggestLinks(input: SuggestInput, options: ResolvedOptions): SuggestResult {
-  const { graph, ranking, index, related, centrality, traffic } = input;
+  const { graph, ranking, centrality, traffic } = input;
   const n = graph.pages.length;
   const ordered = input.facts.length === n && input.facts.every((f, i) => f.file === graph.pages[i]!.file);
   const factsOf = (i: number): PageFacts | undefined => (ordered ? input.facts[i] : input.facts[graph.pages[i]!.factsIndex]);
@@ -48,66 +36,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     settings.targets === 'all'
       ? graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id)
       : underlinked.map((u) => u.page);
-  const pairs = findCandidates(graph, related, targets, settings.minSimilarity);
-
-  // Anchors: each source's spans tokenised once, for all its targets.
-  const cache = createStemCache();
-  const names = new Map<number, TargetNames>();
-  const leaders = termLeaders(index, STRONG_LEADERS);
-  const df = (stem: string): number => {
-    // index.terms is sorted by code unit: binary search
-    let lo = 0;
-    let hi = index.terms.length - 1;
-    while (lo <= hi) {
-      const mid = (lo + hi) >> 1;
-      const t = index.terms[mid]!;
-      if (t === stem) return index.df[mid]!;
-      if (t < stem) lo = mid + 1;
-      else hi = mid - 1;
-    }
-    return 0;
-  };
-  const namesOf = (t: number): TargetNames => {
-    let v = names.get(t);
-    if (v === undefined) {
-      const page = graph.pages[t]!;
-      const ids = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS) : [];
-      const leads = (id: number): boolean => {
-        for (let k = 0; k < STRONG_LEADERS; k++) if (leaders[id * STRONG_LEADERS + k] === t) return true;
-        return false;
-      };
-      const keys = {
-        all: ids.map((id) => index.terms[id]!),
-        strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]!),
-      };
-      v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache, df);
-      names.set(t, v);
-    }
-    return v;
-  };
-  const bySource = [...pairs].sort((a, b) => a.source - b.source || a.target - b.target);
-  const scored: ScoredPair[] = [];
-  const minSimilarityWithoutAnchor = NO_ANCHOR_SIMILARITY * settings.minSimilarity;
-  for (let i = 0; i < bySource.length; ) {
-    const source = bySource[i]!.source;
-    const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source]!.title);
-    for (; i < bySource.length && bySource[i]!.source === source; i++) {
-      const pair = bySource[i]!;
-      const targetDepth = ranking.depth[pair.target]!;
-      const base = baseScore({
-        similarity: pair.similarity,
-        sourceRankPercentile: rankPct[source]!,
-        sourceDepth: ranking.depth[source]!,
-        targetNeedsDepth: targetDepth < 0 || targetDepth > maxDepth,
-        maxDepth,
-      });
-      const anchors = findAnchors(tokens, namesOf(pair.target));
-      if (anchors.length === 0 && pair.similarity < minSimilarityWithoutAnchor) continue;
-      scored.push({ ...pair, base, anchors });
-    }
-  }
-
-  const chosen = chooseSuggestions(scored, settings.maxNewLinksPerPage, settings.perTarget, minSimilarityWithoutAnchor);
+  const chosen = chooseForTargets(input, options, targets, rankPct);
   const model = rankModel(graph, ranking, options);
   const depths = depthState(graph, ranking, options);
   const made = chosen.map(({ pair, anchor, score }): { suggestion: Suggestion; source: number; target: number } => {
