@@ -9,13 +9,15 @@
  * generators accept).
  */
 import type GithubSlugger from 'github-slugger';
-import type { Heading, Html, Nodes, Parents, RootContent } from 'mdast';
+import type { Heading, Html, Nodes, Parents, RootContent, Text } from 'mdast';
 import type { BlankedText } from './assess.js';
 import type { LineIndex } from './lines.js';
 import { lineOf, lineStart } from './lines.js';
 import { closesTag, inlineOpenTag, readRawHtml } from './markdown-html.js';
 import { parseMarkdownTree } from './processors.js';
-import { addMarkdownTextSpans, collapseSpace, looksLikeUrl } from './spans.js';
+import { findLiteralLinks, mayHoldLiteralLink } from './literal-links.js';
+import type { LiteralLink } from './literal-links.js';
+import { addMarkdownTextSpans, collapseSpace, cutSpans, looksLikeUrl } from './spans.js';
 import type { LinkDraft, PageDraft } from './types.js';
 
 const IN_LINK = 1;
@@ -93,10 +95,16 @@ function walkChildren(w: Walk, parent: Parents, flags: number): void {
 function visit(w: Walk, node: Nodes, flags: number): void {
   const draft = w.draft;
   switch (node.type) {
-    case 'text':
+    case 'text': {
+      const literal = (flags & IN_LINK) === 0 && mayHoldLiteralLink(node.value) ? findLiteralLinks(node.value) : [];
+      if (literal.length > 0) {
+        textWithLiteralLinks(w, node, flags, literal);
+        return;
+      }
       if ((flags & NO_BODY) === 0) draft.body.push(node.value);
       if ((flags & NO_SPAN) === 0) addMarkdownTextSpans(draft, w.src, w.lines, node.value, startOf(w, node), endOf(w, node));
       return;
+    }
     case 'heading':
       heading(w, node, flags);
       return;
@@ -151,6 +159,44 @@ function visit(w: Walk, node: Nodes, flags: number): void {
     default:
       if ('children' in node) walkChildren(w, node, flags);
   }
+}
+
+/**
+ * A text node holding literal autolinks: each is a link (its text, an address, is no prose), and
+ * the text around them is body text and spans as usual.
+ */
+function textWithLiteralLinks(w: Walk, node: Text, flags: number, literal: readonly LiteralLink[]): void {
+  const { draft, src } = w;
+  const start = startOf(w, node);
+  const end = endOf(w, node);
+  const exact = end - start === node.value.length && src.startsWith(node.value, start);
+  const cuts: number[] = [];
+  let searchFrom = start;
+  let at = 0;
+  for (const l of literal) {
+    // Where the value is not the source slice (inside containers), find the address in the source.
+    let offset = exact ? start + l.index : src.indexOf(l.text, searchFrom);
+    if (offset === -1 || offset + l.text.length > end) offset = -1;
+    draft.links.push({
+      offset: offset === -1 ? start : offset,
+      href: l.href,
+      text: l.text,
+      context: (flags & TEMPLATE) !== 0 ? 'template' : 'content',
+      nofollow: false,
+      origin: 'markdown',
+    });
+    if (offset !== -1) {
+      cuts.push(offset, offset + l.text.length);
+      searchFrom = offset + l.text.length;
+    }
+    if ((flags & NO_BODY) === 0) draft.body.push(node.value.slice(at, l.index));
+    at = l.index + l.text.length;
+  }
+  if ((flags & NO_BODY) === 0) draft.body.push(node.value.slice(at));
+  if ((flags & NO_SPAN) !== 0) return;
+  const first = draft.spans.length;
+  addMarkdownTextSpans(draft, src, w.lines, node.value, start, end);
+  cutSpans(draft, first, cuts);
 }
 
 function heading(w: Walk, node: Heading, flags: number): void {

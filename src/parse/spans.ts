@@ -94,6 +94,30 @@ export function addMarkdownTextSpans(
 }
 
 /**
+ * Take source ranges out of the spans added since `first` (a span overlapping a range keeps the
+ * trimmed pieces around it that still hold a letter or digit).
+ * @param draft the page being collected
+ * @param first index of the first span to look at
+ * @param cuts ranges `[start, end)` as pairs, in offset order
+ */
+export function cutSpans(draft: PageDraft, first: number, cuts: readonly number[]): void {
+  if (cuts.length === 0) return;
+  const added = draft.spans.splice(first);
+  for (const span of added) {
+    const spanEnd = span.offset + span.text.length;
+    let from = span.offset;
+    for (let c = 0; c < cuts.length; c += 2) {
+      const cutStart = cuts[c]!;
+      const cutEnd = cuts[c + 1]!;
+      if (cutEnd <= from || cutStart >= spanEnd) continue;
+      if (cutStart > from) pushTrimmed(draft, span.text, from - span.offset, cutStart - span.offset, span.offset);
+      from = Math.max(from, cutEnd);
+    }
+    if (from < spanEnd) pushTrimmed(draft, span.text, from - span.offset, spanEnd - span.offset, span.offset);
+  }
+}
+
+/**
  * Spans of an HTML text node: parse5 turns `\r\n` and `\r` into `\n` in text values, so the
  * source slice is compared with its line endings normalised, and the spans come from the source.
  * @param draft the page being collected
