@@ -13,7 +13,7 @@ export { resolveOptions, DEFAULT_OPTIONS } from './options.js';
 export type { Config, ResolvedOptions } from './options.js';
 export { EngineError, isEngineError } from './errors.js';
 export type { ErrorCode } from './errors.js';
-export { formatReport, formatters, FORMAT_IDS, isFormatId, writeFileAtomic } from './report/index.js';
+export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId, writeFileAtomic } from './report/index.js';
 export type { FormatContext, FormatId, Formatter, WriteOptions } from './report/index.js';
 export type { CacheConfig, GateConfig, LinkPatternConfig, RoutesConfig, SeverityInput, SuggestConfig } from './config.js';
 export { VERSION } from './version.js';

@@ -11,7 +11,7 @@ import fs from 'node:fs';
 import { join } from 'node:path';
 import type { Report } from '../types.js';
 
-const RESULT_SCHEMA = 'linkweave/report-cache@1';
+const RESULT_SCHEMA = 'linkweave/report-cache@2';
 
 /** Everything a report depends on, as plain data (hashed, never stored). */
 export interface ResultInputs {
@@ -35,30 +35,72 @@ function resultFile(dir: string, command: string): string {
   return join(dir, `report-${command}.json`);
 }
 
+/**
+ * The file holds one JSON value per line, so that no line outgrows a string (V8 strings hold at
+ * most 2^29 - 24 characters; a 100,000-page report is several times that): first
+ * `{"schema","key"}`, then one line per report field, `[name, value]`, with long arrays split
+ * into lines of `ROWS_PER_LINE` items, `[name, items, true]` for each line after the first.
+ */
+const ROWS_PER_LINE = 5000;
+
 /** The cached report for `key`, or null (absent, unreadable, foreign or stale). */
 export function readResult(dir: string, command: string, key: string): Report | null {
   try {
-    const stored = JSON.parse(fs.readFileSync(resultFile(dir, command), 'utf8')) as unknown;
-    if (typeof stored !== 'object' || stored === null) return null;
-    const { schema, key: storedKey, report } = stored as { schema?: unknown; key?: unknown; report?: unknown };
-    if (schema !== RESULT_SCHEMA || storedKey !== key) return null;
-    if (typeof report !== 'object' || report === null || (report as { schema?: unknown }).schema !== 'linkweave/report@1') return null;
-    return report as Report;
+    const bytes = fs.readFileSync(resultFile(dir, command));
+    const lines = splitLines(bytes);
+    const head = JSON.parse(lines[0] ?? '') as { schema?: unknown; key?: unknown } | null;
+    if (typeof head !== 'object' || head === null || head.schema !== RESULT_SCHEMA || head.key !== key) return null;
+    const report: Record<string, unknown> = {};
+    for (let i = 1; i < lines.length; i++) {
+      const [name, value, more] = JSON.parse(lines[i]!) as [string, unknown, boolean?];
+      if (more === true) (report[name] as unknown[]).push(...(value as unknown[]));
+      else report[name] = value;
+    }
+    if (report.schema !== 'linkweave/report@1') return null;
+    return report as unknown as Report;
   } catch {
     return null;
   }
+}
+
+function splitLines(bytes: Buffer): string[] {
+  const lines: string[] = [];
+  let start = 0;
+  while (start < bytes.length) {
+    let end = bytes.indexOf(10, start);
+    if (end === -1) end = bytes.length;
+    lines.push(bytes.toString('utf8', start, end));
+    start = end + 1;
+  }
+  return lines;
 }
 
 /** Store `report` under `key` (temp file + rename). Never throws: a cache that cannot be written is skipped. */
 export function writeResult(dir: string, command: string, key: string, report: Report): void {
   const target = resultFile(dir, command);
   const temp = join(dir, `.report-${command}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  let fd: number | null = null;
   try {
     fs.mkdirSync(dir, { recursive: true });
-    fs.writeFileSync(temp, JSON.stringify({ schema: RESULT_SCHEMA, key, report }));
+    fd = fs.openSync(temp, 'w');
+    fs.writeSync(fd, `${JSON.stringify({ schema: RESULT_SCHEMA, key })}\n`);
+    for (const [name, value] of Object.entries(report)) {
+      if (value === undefined) continue;
+      if (!Array.isArray(value) || value.length <= ROWS_PER_LINE) {
+        fs.writeSync(fd, `${JSON.stringify([name, value])}\n`);
+        continue;
+      }
+      for (let i = 0; i < value.length; i += ROWS_PER_LINE) {
+        const line = i === 0 ? [name, value.slice(0, ROWS_PER_LINE)] : [name, value.slice(i, i + ROWS_PER_LINE), true];
+        fs.writeSync(fd, `${JSON.stringify(line)}\n`);
+      }
+    }
+    fs.closeSync(fd);
+    fd = null;
     fs.renameSync(temp, target);
   } catch {
     try {
+      if (fd !== null) fs.closeSync(fd);
       fs.rmSync(temp, { force: true });
     } catch {
       // The folder itself is unusable; there is nothing to clean.

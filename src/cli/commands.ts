@@ -6,7 +6,7 @@ import { resolve } from 'node:path';
 import { analyze } from '../analyze.js';
 import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
 import type { Config } from '../options.js';
-import { formatReport } from '../report/index.js';
+import { formatReport, formatReportPieces } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
 import type { CommandInfo, FlagValues, FormatName } from './args.js';
 import { colorEnabled } from './io.js';
@@ -84,9 +84,9 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   // The text report shows paths relative to the working folder, wrapped to the terminal.
   const terminal = { color, cwd: io.cwd, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
   if (output === null) {
-    io.stdout.write(formatReport(report, format, terminal));
+    for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);
   } else {
-    const text = formatReport(report, format, { color: false, cwd: io.cwd });
+    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd });
     await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
     if (!flags.quiet) {
       if (format !== 'text') io.stdout.write(formatReport(report, 'text', terminal));

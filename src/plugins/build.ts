@@ -9,7 +9,7 @@ import { analyze } from '../analyze.js';
 import { loadConfig } from '../cli/config.js';
 import type { Config } from '../config.js';
 import { EngineError } from '../errors.js';
-import { FORMAT_IDS, formatReport, isFormatId, writeFileAtomic } from '../report/index.js';
+import { FORMAT_IDS, formatReportPieces, isFormatId, writeFileAtomic } from '../report/index.js';
 import type { FormatId } from '../report/index.js';
 import type { Report } from '../types.js';
 import { failingFindings, findingLines, gateErrorMessage, summaryOf } from './summary.js';
@@ -113,7 +113,7 @@ export function createBuildPlugin(options: LinkweaveBuildOptions = {}): Linkweav
       const targets = reports.map((r) => ({ ...r, path: resolve(project, r.file) }));
       const report = await analyzeOutput(outDir, options.config, project, targets.map((t) => t.path));
       for (const t of targets) {
-        await writeFileAtomic(t.path, formatReport(report, t.format, { color: false, cwd: project }), { label: t.file });
+        await writeFileAtomic(t.path, formatReportPieces(report, t.format, { color: false, cwd: project }), { label: t.file });
       }
       if (!report.gate.passed && failBuild) throw new EngineError('E_GATE_FAILED', gateErrorMessage(report, LABEL, project));
       logger.info(summaryOf(report, LABEL));

@@ -31,9 +31,24 @@ export function isFormatId(id: string): id is FormatId {
  * @throws EngineError `E_USAGE` for an unknown format id, listing the known ones
  */
 export function formatReport(report: Report, id: FormatId, ctx: Partial<FormatContext> = {}): string {
+  return formatterOf(id).format(report, { color: false, ...ctx });
+}
+
+/**
+ * The same text as {@link formatReport}, in pieces to write one after another: use this for
+ * files and streams, since the JSON of a very large site does not fit in one string.
+ * @throws EngineError `E_USAGE` for an unknown format id, listing the known ones
+ */
+export function formatReportPieces(report: Report, id: FormatId, ctx: Partial<FormatContext> = {}): string[] {
+  const formatter = formatterOf(id);
+  const full = { color: false, ...ctx };
+  return formatter.pieces === undefined ? [formatter.format(report, full)] : formatter.pieces(report, full);
+}
+
+function formatterOf(id: FormatId): Formatter {
   const formatter = isFormatId(id) ? formatters[id] : undefined;
   if (formatter === undefined) {
     throw new EngineError('E_USAGE', `unknown format "${String(id)}", expected one of ${FORMAT_IDS.map((f) => `"${f}"`).join(', ')}`);
   }
-  return formatter.format(report, { color: false, ...ctx });
+  return formatter;
 }

@@ -3,7 +3,7 @@ export { buildReport } from './build.js';
 export { evaluateGate } from './gate.js';
 export { computeStats } from './stats.js';
 export { PAGERANK_DECIMALS, RATIO_DECIMALS, roundTo } from './round.js';
-export { formatReport, formatters, FORMAT_IDS, isFormatId } from './format.js';
+export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId } from './format.js';
 export { textFormatter } from './formatters/text.js';
 export { jsonFormatter } from './formatters/json.js';
 export { markdownFormatter, escapeMarkdown } from './formatters/markdown.js';

@@ -65,4 +65,9 @@ export interface Formatter {
   /** File extension of its output, with the dot (`.json`). */
   readonly fileExtension: string;
   format(report: Report, ctx: FormatContext): string;
+  /**
+   * The same text in pieces to be written one after another, for outputs that may outgrow one
+   * string (V8 strings hold at most 2^29 - 24 characters). Absent: `format` is one piece.
+   */
+  pieces?(report: Report, ctx: FormatContext): string[];
 }

@@ -29,12 +29,13 @@ export interface WriteOptions {
 }
 
 /**
- * Write `data` to `path` atomically: temp file in the same folder (created if needed), flushed,
+ * Write `data` (text, bytes, or text in pieces written one after another) to `path` atomically:
+ * temp file in the same folder (created if needed), flushed,
  * then renamed over `path`. An existing file keeps its permission bits. On any error the temp
  * file is removed and the target is left as it was.
  * @throws EngineError `E_IO` naming the path and the reason
  */
-export async function writeFileAtomic(path: string, data: string | Uint8Array, options: WriteOptions = {}): Promise<void> {
+export async function writeFileAtomic(path: string, data: string | Uint8Array | readonly string[], options: WriteOptions = {}): Promise<void> {
   const target = resolve(path);
   const dir = dirname(target);
   const temp = join(dir, `${TEMP_PREFIX}${basename(target)}-${process.pid}-${randomBytes(6).toString('hex')}`);
@@ -50,7 +51,8 @@ export async function writeFileAtomic(path: string, data: string | Uint8Array, o
     const handle = await fs.promises.open(temp, 'wx', mode ?? 0o666);
     created = true;
     try {
-      await handle.writeFile(data);
+      if (typeof data === 'string' || data instanceof Uint8Array) await handle.writeFile(data);
+      else for (const piece of data) await handle.writeFile(piece);
       await handle.sync();
       // open() applies the umask; restore the old file's exact bits.
       if (mode !== undefined) await handle.chmod(mode);

@@ -60,3 +60,17 @@ describe('the whole-report cache', () => {
     }
   });
 });
+
+describe('the whole-report cache file', () => {
+  it('keeps a report with more rows than fit on one line, field order and all', async () => {
+    const { readResult, writeResult } = await import('../../src/cache/result.js');
+    const row = (i: number): Record<string, unknown> => ({ from: `/p${i}/`, to: '/b/', line: i, text: 'é ✓ "quoted"' });
+    const report = { schema: 'linkweave/report@1', stats: { pages: 2 }, links: Array.from({ length: 12_001 }, (_, i) => row(i)), pages: [] };
+    const dir = path.join(base, 'lines');
+    writeResult(dir, 'check', 'k1', report as never);
+    const lines = fs.readFileSync(path.join(dir, 'report-check.json'), 'utf8').trimEnd().split('\n');
+    expect(lines.length).toBe(1 + 2 + 3 + 1); // header, schema and stats, links in 3 lines, pages
+    expect(JSON.stringify(readResult(dir, 'check', 'k1'))).toBe(JSON.stringify(report));
+    expect(readResult(dir, 'check', 'other')).toBeNull();
+  });
+});

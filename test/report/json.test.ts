@@ -1,5 +1,8 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { buildReport, formatReport } from '../../src/report/index.js';
+import { jsonPieces } from '../../src/report/formatters/json.js';
+import { buildReport, formatReport, formatReportPieces } from '../../src/report/index.js';
+import type { Report } from '../../src/types.js';
 import { runRules } from '../../src/rules/index.js';
 import { buildSite } from '../rules/helpers.js';
 import { SITE, SUGGESTIONS } from './fixture.js';
@@ -52,5 +55,36 @@ describe('json formatter', () => {
     expect(text.split('\n')[1]).toBe('  "schema": "linkweave/report@1",');
     const parsed = JSON.parse(text) as { pages: { route: string; depth: number | null }[] };
     expect(parsed.pages.find((p) => p.route === '/notes/old/')!.depth).toBeNull();
+  });
+});
+
+describe('the JSON writer in pieces', () => {
+  it('joins to exactly JSON.stringify(report, null, 2) for a real report', () => {
+    const report = JSON.parse(jsonOf(null)) as Report;
+    const pieces = formatReportPieces(report, 'json');
+    expect(pieces.join('')).toBe(`${JSON.stringify(report, null, 2)}\n`);
+    expect(formatReport(report, 'json')).toBe(pieces.join(''));
+  });
+
+  it('joins to exactly JSON.stringify(value, null, 2) for any JSON-like value (fast-check)', () => {
+    const value = fc.oneof(
+      fc.jsonValue(),
+      fc.dictionary(fc.string(), fc.oneof(fc.jsonValue(), fc.constant(undefined), fc.array(fc.oneof(fc.jsonValue(), fc.constant(undefined))))),
+    );
+    fc.assert(
+      fc.property(value, (v) => {
+        expect(jsonPieces(v as unknown as Report).join('')).toBe(`${JSON.stringify(v, null, 2)}\n`);
+      }),
+      { numRuns: 500, seed: 3 },
+    );
+  });
+
+  it('cuts a long report into pieces of about a megabyte, none much longer', () => {
+    const row = { from: '/a/', to: '/b/', file: 'a.md', line: 1, column: 1, text: 'x'.repeat(40), context: 'content' };
+    const report = { schema: 'linkweave/report@1', links: Array.from({ length: 30_000 }, () => row) } as unknown as Report;
+    const pieces = jsonPieces(report);
+    expect(pieces.length).toBeGreaterThan(3);
+    expect(Math.max(...pieces.map((p) => p.length))).toBeLessThan((1 << 20) + 1000);
+    expect(pieces.join('')).toBe(`${JSON.stringify(report, null, 2)}\n`);
   });
 });
