@@ -35,11 +35,12 @@ export function formatReport(report: Report, id: FormatId, ctx: Partial<FormatCo
 }
 
 /**
- * The same text as {@link formatReport}, in pieces to write one after another: use this for
- * files and streams, since the JSON of a very large site does not fit in one string.
+ * The same text as {@link formatReport}, in pieces made as they are read, to write one after
+ * another: use this for files and streams, since the JSON of a very large site does not fit in
+ * one string.
  * @throws EngineError `E_USAGE` for an unknown format id, listing the known ones
  */
-export function formatReportPieces(report: Report, id: FormatId, ctx: Partial<FormatContext> = {}): string[] {
+export function formatReportPieces(report: Report, id: FormatId, ctx: Partial<FormatContext> = {}): Iterable<string> {
   const formatter = formatterOf(id);
   const full = { color: false, ...ctx };
   return formatter.pieces === undefined ? [formatter.format(report, full)] : formatter.pieces(report, full);

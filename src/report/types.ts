@@ -66,8 +66,9 @@ export interface Formatter {
   readonly fileExtension: string;
   format(report: Report, ctx: FormatContext): string;
   /**
-   * The same text in pieces to be written one after another, for outputs that may outgrow one
-   * string (V8 strings hold at most 2^29 - 24 characters). Absent: `format` is one piece.
+   * The same text in pieces to be written one after another, made as they are read, for outputs
+   * that may outgrow one string (V8 strings hold at most 2^29 - 24 characters) or that should
+   * not be held whole in memory. Absent: `format` is one piece.
    */
-  pieces?(report: Report, ctx: FormatContext): string[];
+  pieces?(report: Report, ctx: FormatContext): Iterable<string>;
 }

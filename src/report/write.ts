@@ -35,7 +35,7 @@ export interface WriteOptions {
  * file is removed and the target is left as it was.
  * @throws EngineError `E_IO` naming the path and the reason
  */
-export async function writeFileAtomic(path: string, data: string | Uint8Array | readonly string[], options: WriteOptions = {}): Promise<void> {
+export async function writeFileAtomic(path: string, data: string | Uint8Array | Iterable<string>, options: WriteOptions = {}): Promise<void> {
   const target = resolve(path);
   const dir = dirname(target);
   const temp = join(dir, `${TEMP_PREFIX}${basename(target)}-${process.pid}-${randomBytes(6).toString('hex')}`);

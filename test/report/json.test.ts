@@ -61,7 +61,7 @@ describe('json formatter', () => {
 describe('the JSON writer in pieces', () => {
   it('joins to exactly JSON.stringify(report, null, 2) for a real report', () => {
     const report = JSON.parse(jsonOf(null)) as Report;
-    const pieces = formatReportPieces(report, 'json');
+    const pieces = [...formatReportPieces(report, 'json')];
     expect(pieces.join('')).toBe(`${JSON.stringify(report, null, 2)}\n`);
     expect(formatReport(report, 'json')).toBe(pieces.join(''));
   });
@@ -73,7 +73,7 @@ describe('the JSON writer in pieces', () => {
     );
     fc.assert(
       fc.property(value, (v) => {
-        expect(jsonPieces(v as unknown as Report).join('')).toBe(`${JSON.stringify(v, null, 2)}\n`);
+        expect([...jsonPieces(v as unknown as Report)].join('')).toBe(`${JSON.stringify(v, null, 2)}\n`);
       }),
       { numRuns: 500, seed: 3 },
     );
@@ -82,7 +82,7 @@ describe('the JSON writer in pieces', () => {
   it('cuts a long report into pieces of about a megabyte, none much longer', () => {
     const row = { from: '/a/', to: '/b/', file: 'a.md', line: 1, column: 1, text: 'x'.repeat(40), context: 'content' };
     const report = { schema: 'linkweave/report@1', links: Array.from({ length: 30_000 }, () => row) } as unknown as Report;
-    const pieces = jsonPieces(report);
+    const pieces = [...jsonPieces(report)];
     expect(pieces.length).toBeGreaterThan(3);
     expect(Math.max(...pieces.map((p) => p.length))).toBeLessThan((1 << 20) + 1000);
     expect(pieces.join('')).toBe(`${JSON.stringify(report, null, 2)}\n`);

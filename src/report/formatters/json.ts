@@ -18,77 +18,65 @@ export const jsonFormatter: Formatter = {
   id: 'json',
   fileExtension: '.json',
   format(report) {
-    return jsonPieces(report).join('');
+    return [...jsonPieces(report)].join('');
   },
   pieces(report) {
     return jsonPieces(report);
   },
 };
 
-/** `JSON.stringify(report, null, 2)` plus a final newline, in pieces. */
-export function jsonPieces(report: Report): string[] {
-  const out = new Pieces();
-  writeValue(out, report, '', 2);
-  out.push('\n');
-  return out.done();
-}
-
-/** Collects small strings into pieces of about `PIECE_CHARS`. */
-class Pieces {
-  private readonly pieces: string[] = [];
-  private current: string[] = [];
-  private size = 0;
-
-  push(text: string): void {
-    this.current.push(text);
-    this.size += text.length;
-    if (this.size >= PIECE_CHARS) this.flush();
+/**
+ * `JSON.stringify(report, null, 2)` plus a final newline, in pieces of about `PIECE_CHARS`,
+ * made as they are asked for (so the whole text never exists at once).
+ */
+export function* jsonPieces(report: Report): Generator<string, void, undefined> {
+  let current: string[] = [];
+  let size = 0;
+  for (const text of valueParts(report, '', 2)) {
+    current.push(text);
+    size += text.length;
+    if (size >= PIECE_CHARS) {
+      yield current.join('');
+      current = [];
+      size = 0;
+    }
   }
-
-  done(): string[] {
-    this.flush();
-    return this.pieces;
-  }
-
-  private flush(): void {
-    if (this.current.length > 0) this.pieces.push(this.current.join(''));
-    this.current = [];
-    this.size = 0;
-  }
+  current.push('\n');
+  yield current.join('');
 }
 
 /**
  * Write `value` as `JSON.stringify` with 2-space indentation would, at nesting `indent`; objects
  * and arrays are opened up `levels` deep, anything deeper is stringified whole.
  */
-function writeValue(out: Pieces, value: unknown, indent: string, levels: number): void {
+function* valueParts(value: unknown, indent: string, levels: number): Generator<string, void, undefined> {
   if (levels === 0 || value === null || typeof value !== 'object' || typeof (value as { toJSON?: unknown }).toJSON === 'function') {
-    out.push(indented(JSON.stringify(value, null, 2), indent));
+    yield indented(JSON.stringify(value, null, 2), indent);
     return;
   }
   const inner = `${indent}  `;
   if (Array.isArray(value)) {
     if (value.length === 0) {
-      out.push('[]');
+      yield '[]';
       return;
     }
-    out.push('[');
-    value.forEach((item: unknown, i) => {
-      out.push(i === 0 ? `\n${inner}` : `,\n${inner}`);
+    for (let i = 0; i < value.length; i++) {
+      yield i === 0 ? `[\n${inner}` : `,\n${inner}`;
+      const item: unknown = value[i];
       // Inside arrays, `undefined` and functions are written as null.
-      writeValue(out, item === undefined || typeof item === 'function' || typeof item === 'symbol' ? null : item, inner, levels - 1);
-    });
-    out.push(`\n${indent}]`);
+      yield* valueParts(item === undefined || typeof item === 'function' || typeof item === 'symbol' ? null : item, inner, levels - 1);
+    }
+    yield `\n${indent}]`;
     return;
   }
   let first = true;
   for (const [key, item] of Object.entries(value)) {
     if (item === undefined || typeof item === 'function' || typeof item === 'symbol') continue;
-    out.push(`${first ? '{' : ','}\n${inner}${JSON.stringify(key)}: `);
+    yield `${first ? '{' : ','}\n${inner}${JSON.stringify(key)}: `;
     first = false;
-    writeValue(out, item, inner, levels - 1);
+    yield* valueParts(item, inner, levels - 1);
   }
-  out.push(first ? '{}' : `\n${indent}}`);
+  yield first ? '{}' : `\n${indent}}`;
 }
 
 function indented(json: string, indent: string): string {
