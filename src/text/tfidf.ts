@@ -29,18 +29,23 @@ export function inverseDocumentFrequency(n: number, df: number): number {
   return Math.log((1 + n) / (1 + df)) + 1;
 }
 
-/** Growable typed buffers for the (doc, term, count) triples met while reading the pages. */
+/**
+ * Growable typed buffers for the (term, count) pairs met while reading the pages, 8 bytes a pair
+ * (boosted counts are small integers, exact in a Float32). Memory is the limit on large sites:
+ * at 100,000 pages there are tens of millions of pairs.
+ */
 class EntryBuffer {
   terms = new Int32Array(1 << 16);
-  counts = new Float64Array(1 << 16);
+  counts = new Float32Array(1 << 16);
   length = 0;
 
   push(term: number, count: number): void {
     if (this.length === this.terms.length) {
-      const terms = new Int32Array(this.terms.length * 2);
+      const size = Math.ceil(this.terms.length * 1.5);
+      const terms = new Int32Array(size);
       terms.set(this.terms);
       this.terms = terms;
-      const counts = new Float64Array(this.counts.length * 2);
+      const counts = new Float32Array(size);
       counts.set(this.counts);
       this.counts = counts;
     }
@@ -114,58 +119,58 @@ export function buildTermIndex(texts: readonly PageText[], cache: StemCache = cr
   }
 
   const nnz = entries.length;
+  const entryTerm = entries.terms;
+  for (let e = 0; e < nnz; e++) entryTerm[e] = finalId[entryTerm[e]!]!;
   const df = new Int32Array(t);
-  for (let e = 0; e < nnz; e++) df[finalId[entries.terms[e]!]!]! += 1;
+  for (let e = 0; e < nnz; e++) df[entryTerm[e]!]! += 1;
   const idf = new Float64Array(t);
   for (let i = 0; i < t; i++) idf[i] = inverseDocumentFrequency(n, df[i]!);
+  const weightOf = (e: number): number => termFrequency(entries.counts[e]!) * idf[entryTerm[e]!]!;
 
-  // Normalised weights in reading order.
-  const weights = new Float64Array(nnz);
+  // Each page's norm; the weight of an entry is computed again where it is stored (cheaper in
+  // memory than keeping a weight per entry, and the same double each time).
+  const scales = new Float64Array(n);
   let start = 0;
   for (let d = 0; d < n; d++) {
     const end = rowEnds[d]!;
     let norm = 0;
     for (let e = start; e < end; e++) {
-      const w = termFrequency(entries.counts[e]!) * idf[finalId[entries.terms[e]!]!]!;
-      weights[e] = w;
+      const w = weightOf(e);
       norm += w * w;
     }
-    const scale = norm > 0 ? 1 / Math.sqrt(norm) : 0;
-    for (let e = start; e < end; e++) weights[e] = weights[e]! * scale;
+    scales[d] = norm > 0 ? 1 / Math.sqrt(norm) : 0;
     start = end;
   }
 
-  // Two counting-sort passes (doc-major -> term-major -> doc-major) sort every row by term id in O(nnz).
+  // A counting sort by term (stable, so pages stay in ascending order within a term), then the
+  // entries dealt back to their rows in term order: every row ends up sorted by term id, O(nnz).
   const termStart = new Int32Array(t + 1);
   for (let i = 0; i < t; i++) termStart[i + 1] = termStart[i]! + df[i]!;
   const cursor = termStart.slice(0, t);
-  const byTermDoc = new Int32Array(nnz);
-  const byTermWeight = new Float64Array(nnz);
-  start = 0;
-  for (let d = 0; d < n; d++) {
-    const end = rowEnds[d]!;
-    for (let e = start; e < end; e++) {
-      const term = finalId[entries.terms[e]!]!;
-      const at = cursor[term]!;
-      cursor[term] = at + 1;
-      byTermDoc[at] = d;
-      byTermWeight[at] = weights[e]!;
-    }
-    start = end;
+  const byTerm = new Int32Array(nnz);
+  for (let e = 0; e < nnz; e++) {
+    const term = entryTerm[e]!;
+    byTerm[cursor[term]!] = e;
+    cursor[term] = cursor[term]! + 1;
   }
   const docOffsets = new Int32Array(n + 1);
   for (let d = 0; d < n; d++) docOffsets[d + 1] = rowEnds[d]!;
+  const rowOf = new Int32Array(nnz);
+  start = 0;
+  for (let d = 0; d < n; d++) {
+    for (let e = start; e < rowEnds[d]!; e++) rowOf[e] = d;
+    start = rowEnds[d]!;
+  }
   const rowCursor = docOffsets.slice(0, n);
   const docTerms = new Int32Array(nnz);
   const docWeights = new Float32Array(nnz);
-  for (let term = 0; term < t; term++) {
-    for (let at = termStart[term]!; at < termStart[term + 1]!; at++) {
-      const d = byTermDoc[at]!;
-      const slot = rowCursor[d]!;
-      rowCursor[d] = slot + 1;
-      docTerms[slot] = term;
-      docWeights[slot] = byTermWeight[at]!;
-    }
+  for (let at = 0; at < nnz; at++) {
+    const e = byTerm[at]!;
+    const d = rowOf[e]!;
+    const slot = rowCursor[d]!;
+    rowCursor[d] = slot + 1;
+    docTerms[slot] = entryTerm[e]!;
+    docWeights[slot] = weightOf(e) * scales[d]!;
   }
   return { terms, df, docOffsets, docTerms, docWeights };
 }
