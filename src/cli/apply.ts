@@ -90,7 +90,9 @@ export async function runApplyCommand(ctx: CommandContext): Promise<number> {
     throw new EngineError('E_USAGE', `flag --ids: no suggestion with id ${selected.unknown.map((id) => `"${id}"`).join(', ')} in ${where}; nothing was written`);
   }
 
-  const pages = new Map(source.pages.map((p) => [p.route, { route: p.route, file: p.file }]));
+  // A page row without a route or file (a hand-edited report) gives no address to link to: its
+  // suggestions are refused as targets that are not pages of the report.
+  const pages = new Map(source.pages.filter((p) => p.route.startsWith('/') && p.file !== '').map((p) => [p.route, { route: p.route, file: p.file }]));
   const out: Outcome = { applied: [], skipped: [...selected.skipped], refused: [], styles: new Map(), diff: [], writeFailed: false };
   const realRoot = fs.realpathSync(root);
   let site: StyleCounts | null = null;

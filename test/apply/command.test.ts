@@ -127,6 +127,20 @@ describe('apply on the pr-base site', () => {
     expect(fs.readFileSync(path.join(root, 'reference', 'codes.md'), 'utf8')).toContain('The [flame sensor threshold](../guide/tuning.md) is out of range.');
   });
 
+  it('refuses a suggestion whose target page has no file or route in a hand-edited report, writing nothing for it', async () => {
+    const { cwd, root } = project();
+    const report = await suggestions(cwd);
+    const stale = byAnchor(report, 'tuning the flame sensor');
+    const forged = { ...report, pages: report.pages.map((p) => (p.route === stale.target ? { ...p, file: '' } : p)) };
+    fs.writeFileSync(path.join(cwd, 'report.json'), JSON.stringify(forged));
+    const install = path.join(root, 'guide', 'install.md');
+    const before = fs.readFileSync(install);
+    const r = await cli(cwd, ['apply', 'docs', '--from', 'report.json', '--ids', stale.id]);
+    expect(r.code).toBe(1);
+    expect(r.stdout).toContain(`id ${stale.id}: the target ${stale.target} is not a page of the report`);
+    expect(fs.readFileSync(install)).toEqual(before);
+  });
+
   it('exit codes: 1 for an id without an anchor, 2 for usage and bad reports, with nothing written', async () => {
     const { cwd } = project();
     const report = await suggestions(cwd);
