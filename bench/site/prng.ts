@@ -3,22 +3,12 @@
  * comes from one of these streams, so the same seed gives the same bytes on every machine.
  */
 
-/** A stream of numbers in [0, 1). */
-export type Random = () => number;
+// The generator is the project's own (the backtest samples with it too): one copy of mulberry32.
+import { mulberry32 } from '../../src/backtest/prng.js';
+import type { Random } from '../../src/backtest/prng.js';
 
-/**
- * mulberry32: a small 32-bit generator, good enough for synthetic text and graphs.
- * @param seed any 32-bit integer
- */
-export function mulberry32(seed: number): Random {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) | 0;
-    let t = Math.imul(a ^ (a >>> 15), 1 | a);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { mulberry32 };
+export type { Random };
 
 /**
  * Mix two integers into a seed (for an independent stream per page, so pages can be rendered in
