@@ -16,7 +16,7 @@ import { parseFiles } from './parallel/index.js';
 import type { ParseHooks, WorkerStats } from './parallel/index.js';
 import { buildGraph } from './graph/index.js';
 import { rankGraph } from './rank/index.js';
-import { buildTermIndex, relatedPages, contentCentrality } from './text/index.js';
+import { buildTermIndex, createStemCache, relatedPages, contentCentrality } from './text/index.js';
 import { suggestLinks, parseTraffic } from './suggest/index.js';
 import { runRules, validateRuleConfig } from './rules/index.js';
 import type { AuxProblem } from './rules/index.js';
@@ -203,9 +203,10 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
   let repair: RepairPlan | undefined;
   if (command === 'suggest') {
     const text = await stage('text', () => {
-      const index = buildTermIndex(graph.pages.map((p) => facts[p.factsIndex]!.text));
+      const stems = createStemCache();
+      const index = buildTermIndex(graph.pages.map((p) => facts[p.factsIndex]!.text), stems);
       const related = relatedPages(index, options.suggest.relatedK);
-      return { index, related, centrality: contentCentrality(related, graph.pages.length) };
+      return { index, related, centrality: contentCentrality(related, graph.pages.length), stems };
     });
     facts = withoutBodies(facts);
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);

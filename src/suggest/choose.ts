@@ -40,7 +40,7 @@ export function chooseForTargets(
   const pairs = findCandidates(graph, related, targets, settings.minSimilarity);
 
   // Anchors: each source's spans tokenised once, for all its targets.
-  const cache = createStemCache();
+  const cache = input.stems ?? createStemCache();
   const names = new Map<number, TargetNames>();
   const leaders = termLeaders(index, STRONG_LEADERS);
   const df = (stem: string): number => {

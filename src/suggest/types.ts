@@ -1,4 +1,5 @@
 /** Types of the suggest stage (contracts.md). */
+import type { StemCache } from '../text/tokenize.js';
 import type { PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
 
 /** What `suggestLinks` works from. Arrays are indexed by page id (the graph's order). */
@@ -16,6 +17,11 @@ export interface SuggestInput {
   readonly centrality: Float64Array;
   /** Views per route from the traffic CSV (see `parseTraffic`), or null. */
   readonly traffic: ReadonlyMap<string, number> | null;
+  /**
+   * Stems already computed in this run (the one the term index was built with), so the anchor
+   * search does not stem the same words again. A memo: results do not depend on it. @default a new one
+   */
+  readonly stems?: StemCache;
 }
 
 /** Importance level of a page. */
