@@ -6,7 +6,7 @@ import { resolve } from 'node:path';
 import { analyze } from '../analyze.js';
 import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
 import type { Config } from '../options.js';
-import { formatReport, formatReportPieces } from '../report/index.js';
+import { formatReportPieces } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
 import type { CommandInfo, FlagValues, FormatName } from './args.js';
 import { colorEnabled } from './io.js';
@@ -61,6 +61,9 @@ export const COMMANDS: readonly Command[] = [
   { name: 'backtest', summary: BACKTEST_SUMMARY, flags: BACKTEST_FLAGS, run: runBacktestCommand },
 ];
 
+/** Findings and suggestions listed in the terminal summary after a report file is written. */
+const SUMMARY_ITEMS = 20;
+
 /** analyze -> format -> stdout or --output; exit 0 when the gate passed, 1 when it failed. */
 async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'): Promise<number> {
   const { io, flags } = ctx;
@@ -89,7 +92,9 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
     const text = formatReportPieces(report, format, { color: false, cwd: io.cwd });
     await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
     if (!flags.quiet) {
-      if (format !== 'text') io.stdout.write(formatReport(report, 'text', terminal));
+      // After another format went to a file, the terminal gets a summary: the counts, the gate
+      // and the first findings and suggestions (a large site has a hundred thousand).
+      if (format !== 'text') for (const piece of formatReportPieces(report, 'text', { ...terminal, maxItems: SUMMARY_ITEMS })) io.stdout.write(piece);
       io.stderr.write(`linkweave: report written to ${flags.output}\n`);
     }
   }

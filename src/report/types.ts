@@ -57,6 +57,12 @@ export interface FormatContext {
   readonly cwd?: string;
   /** Terminal width for wrapping the text format; 0 = never wrap. @default 80 */
   readonly width?: number;
+  /**
+   * Text format: list at most this many findings and this many suggestions, then say how many
+   * more there are (for the summary printed after another format was written to a file).
+   * @default all
+   */
+  readonly maxItems?: number;
 }
 
 /** A report writer: pure, one file each under `report/formatters/`. */

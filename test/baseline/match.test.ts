@@ -78,3 +78,14 @@ describe('matchFindings', () => {
     expect(matchFindings([], [broken(1)]).fixed).toEqual([broken(1)]);
   });
 });
+
+describe('matchFindings on a large site', () => {
+  it('pairs 150,000 repeats of one key by count (no spread of that length, which overflows the stack)', () => {
+    const then = Array.from({ length: 150_000 }, (_, i) => broken(i + 1));
+    const now = Array.from({ length: 150_001 }, (_, i) => broken(i + 2));
+    const result = matchFindings(now, then);
+    expect(result.known).toHaveLength(150_000);
+    expect(result.new).toHaveLength(1);
+    expect(result.fixed).toHaveLength(0);
+  });
+});

@@ -26,6 +26,15 @@ describe('markdown formatter', () => {
     expect(md.indexOf('id `id09`')).toBeLessThan(md.indexOf('<details>'));
   });
 
+  it('lists at most 60 items of a long list, then says how many more the full reports have', () => {
+    const many: Suggestion[] = Array.from({ length: 500 }, (_, i) => ({ ...SUGGESTIONS[0]!, id: `id${String(i).padStart(3, '0')}`, line: i + 1 }));
+    const md = formatReport(fixtureReport({ suggestions: many }), 'markdown');
+    expect(md.split('\n').filter((l) => l.startsWith('- [ ] '))).toHaveLength(60);
+    expect(md).toContain('<summary>490 more suggestions</summary>');
+    expect(md).toContain('\n... and 440 more suggestions, not listed here: the JSON and HTML reports have them all.\n\n</details>');
+    expect(md.length).toBeLessThan(65_536);
+  });
+
   it('a passing run says so first', () => {
     const clean = fixtureReport({ spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }], pagerank: [0.5, 0.5] }, suggestions: [] });
     expect(formatReport(clean, 'markdown')).toBe(

@@ -72,3 +72,25 @@ describe('text formatter safety', () => {
     expect(text).toContain('a\uFFFD[2Jb.md:1:1  warning  max-click-depth\n    Unexpected \uFFFD]0;title\uFFFD text');
   });
 });
+
+describe('text formatter on a large site', () => {
+  it('prints 150,000 findings (no argument list of that length, which overflows the stack)', () => {
+    const report = fixtureReport();
+    const one = report.findings[0]!;
+    const findings = Array.from({ length: 150_000 }, (_, i) => ({ ...one, file: `p${String(i).padStart(6, '0')}.md`, line: 1, column: 1 }));
+    const text = formatReport({ ...report, findings }, 'text');
+    expect(text.split('\n').filter((l) => /^p\d{6}\.md:1:1 {2}/.test(l))).toHaveLength(150_000);
+  });
+});
+
+
+describe('text formatter summary (maxItems)', () => {
+  it('lists the first findings and suggestions, then how many more the full report has', () => {
+    const report = fixtureReport();
+    const findings = Array.from({ length: 25 }, (_, i) => ({ ...report.findings[0]!, file: `p${String(i).padStart(2, '0')}.md` }));
+    const text = formatReport({ ...report, findings }, 'text', { maxItems: 20 });
+    expect(text.split('\n').filter((l) => /^p\d\d\.md:/.test(l))).toHaveLength(20);
+    expect(text).toContain('\n... and 5 more findings, in the full report\n');
+    expect(formatReport({ ...report, findings }, 'text')).not.toContain('more findings');
+  });
+});

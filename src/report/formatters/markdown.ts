@@ -41,16 +41,29 @@ function findingsTable(findings: readonly Finding[]): string[] {
   ];
 }
 
-/** `lines` as they are when short, else the first `SHOWN` and the rest in `<details>`. */
+/**
+ * Most items of one list in the comment. A pull-request comment has a size limit (65,536
+ * characters on the largest code host; common practice, no source), and a reviewer reads the
+ * first screens: a long list stops here and points to the full reports.
+ */
+const LISTED = 60;
+
+/**
+ * `lines` as they are when short, else the first `SHOWN` and the rest in `<details>`, at most
+ * `LISTED` items in all, then how many more there are.
+ */
 function collapse<T>(items: readonly T[], render: (part: readonly T[]) => string[], noun: string): string[] {
   if (items.length <= SHOWN + 2) return render(items);
+  const listed = Math.min(items.length, LISTED);
+  const unlisted = items.length - listed;
   return [
     ...render(items.slice(0, SHOWN)),
     '',
     '<details>',
     `<summary>${plural(items.length - SHOWN, `more ${noun}`, `more ${noun}s`)}</summary>`,
     '',
-    ...render(items.slice(SHOWN)),
+    ...render(items.slice(SHOWN, listed)),
+    ...(unlisted === 0 ? [] : ['', `... and ${plural(unlisted, `more ${noun}`, `more ${noun}s`)}, not listed here: the JSON and HTML reports have them all.`]),
     '',
     '</details>',
   ];

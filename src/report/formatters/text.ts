@@ -94,17 +94,24 @@ const BODY_INDENT = 4;
 function findingLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
   const loc = (f: Finding): string => `${clean(displayPath(f.file, report.root, ctx.cwd)) || '(site)'}:${f.line}:${f.column}`;
   const out: string[] = [];
-  for (const group of groupByFile(report.findings)) {
+  const shown = report.findings.slice(0, ctx.maxItems ?? report.findings.length);
+  for (const group of groupByFile(shown)) {
     if (out.length > 0) out.push('');
     for (const f of group) {
       const location = loc(f);
       const paintSev = f.severity === 'error' ? c.red : c.yellow;
       const cut = location.lastIndexOf(':', location.lastIndexOf(':') - 1);
       out.push(`${location.slice(0, cut)}${c.dim(location.slice(cut))}  ${paintSev(f.severity)}  ${c.dim(f.rule)}`);
-      out.push(...wrap(' '.repeat(BODY_INDENT), BODY_INDENT, words(f.message, (s) => s), width, BODY_INDENT));
+      append(out, wrap(' '.repeat(BODY_INDENT), BODY_INDENT, words(f.message, (s) => s), width, BODY_INDENT));
     }
   }
+  if (shown.length < report.findings.length) out.push('', c.dim(moreLine(report.findings.length - shown.length, 'finding')));
   return out;
+}
+
+/** The line after a cut list. */
+function moreLine(count: number, noun: string): string {
+  return `... and ${plural(count, `more ${noun}`)}, in the full report`;
 }
 
 function suggestionHead(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
@@ -126,23 +133,26 @@ function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeo
   const where = (s: Suggestion): string => clean(displayPath(s.file, report.root, ctx.cwd));
   const anchored = report.suggestions.filter((s) => s.anchor !== null);
   const loose = report.suggestions.filter((s) => s.anchor === null);
+  const limit = ctx.maxItems ?? report.suggestions.length;
   const out = [c.bold(`Suggested links (${anchored.length})`)];
-  for (const group of groupByFile(anchored)) {
+  for (const group of groupByFile(anchored.slice(0, limit))) {
     out.push('');
     for (const s of group) {
       const location = `${where(s)}:${s.line}:${s.column}`;
-      out.push(...wrap(`${location}  `, location.length + 2, suggestionHead(s, c), width, BODY_INDENT));
-      out.push(...wrap(' '.repeat(BODY_INDENT), BODY_INDENT, suggestionDetail(s, c), width, BODY_INDENT));
+      append(out, wrap(`${location}  `, location.length + 2, suggestionHead(s, c), width, BODY_INDENT));
+      append(out, wrap(' '.repeat(BODY_INDENT), BODY_INDENT, suggestionDetail(s, c), width, BODY_INDENT));
     }
   }
+  if (anchored.length > limit) out.push('', c.dim(moreLine(anchored.length - limit, 'suggested link')));
   if (loose.length > 0) {
     // No phrase of the source names the target: a writer has to add a sentence, so these come
     // last, one line each, without a position.
     out.push('', c.bold(`Related pages with no anchor phrase (${loose.length}): a sentence that links would help`), '');
-    for (const s of loose) {
+    for (const s of loose.slice(0, limit)) {
       const head = `${where(s)} -> `;
-      out.push(
-        ...wrap(head, head.length, [
+      append(
+        out,
+        wrap(head, head.length, [
           { text: clean(s.target), sep: '', paint: c.cyan },
           ...words(`(similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')})`, c.dim, '  '),
           { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` },
@@ -150,8 +160,9 @@ function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeo
       );
     }
   }
+  if (loose.length > limit) out.push('', c.dim(moreLine(loose.length - limit, 'related page')));
   const repair = repairLine(report);
-  if (repair !== null) out.push('', ...wrap('', 0, words(repair, c.bold, ''), width, 0));
+  if (repair !== null) append(out, ['', ...wrap('', 0, words(repair, c.bold, ''), width, 0)]);
   const ids = (anchored.length > 0 ? anchored : loose).slice(0, 2).map((s) => s.id).join(',');
   out.push('', c.dim(`Apply chosen links with: linkweave apply --ids ${ids}${report.suggestions.length > 2 ? ',...' : ''}`));
   return out;
@@ -164,7 +175,7 @@ function changedFindings(title: string, list: readonly Finding[], report: Report
   for (const f of list) {
     const location = `  ${clean(displayPath(f.file, report.root, ctx.cwd)) || '(site)'}:${f.line}:${f.column}  `;
     const width0 = location.length + f.rule.length + 2;
-    out.push(...wrap(`${location}${c.dim(f.rule)}  `, width0, words(f.message, (x) => x, ''), width, BODY_INDENT));
+    append(out, wrap(`${location}${c.dim(f.rule)}  `, width0, words(f.message, (x) => x, ''), width, BODY_INDENT));
   }
   return out;
 }
@@ -181,7 +192,8 @@ function reviewLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc
   const { baseline, comparison } = report;
   if (baseline !== undefined) {
     out.push(c.bold(`Against the baseline: ${baseline.known} known, ${baseline.new.length} new, ${baseline.fixed.length} fixed`));
-    out.push(...changedFindings('New', baseline.new, report, ctx, c, width), ...changedFindings('Fixed', baseline.fixed, report, ctx, c, width));
+    append(out, changedFindings('New', baseline.new, report, ctx, c, width));
+    append(out, changedFindings('Fixed', baseline.fixed, report, ctx, c, width));
   }
   if (comparison !== undefined) {
     if (out.length > 0) out.push('');
@@ -191,15 +203,26 @@ function reviewLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc
         `Compared with the base report: ${plural(newFindings.length, 'new finding')}, ${fixedFindings.length} fixed, ${plural(pagesAdded.length, 'page')} added, ${pagesRemoved.length} removed`,
       ),
     );
-    out.push(...changedFindings('New', newFindings, report, ctx, c, width), ...changedFindings('Fixed', fixedFindings, report, ctx, c, width));
+    append(out, changedFindings('New', newFindings, report, ctx, c, width));
+    append(out, changedFindings('Fixed', fixedFindings, report, ctx, c, width));
     const routes = (title: string, pages: Comparison['pagesAdded']) =>
       pages.length === 0 ? [] : wrap(`${title}: `, title.length + 2, phrases(pages.map((p) => clean(p.route)), ','), width, BODY_INDENT);
-    out.push(...routes('Pages added', pagesAdded), ...routes('Pages removed', pagesRemoved));
+    append(out, routes('Pages added', pagesAdded));
+    append(out, routes('Pages removed', pagesRemoved));
     const seen = new Set<string>();
     const rows = [...comparison.depthChanges, ...comparison.rankChanges].filter((p) => !seen.has(p.route) && seen.add(p.route));
-    if (rows.length > 0) out.push('Biggest changes (depth first, then rank):', ...rows.map(pageChangeLine));
+    if (rows.length > 0) append(out, ['Biggest changes (depth first, then rank):', ...rows.map(pageChangeLine)]);
   }
   return out;
+}
+
+/**
+ * Add `lines` (and `extra`) to `out` one by one: `out.push(...lines)` passes every line as an
+ * argument, which overflows the call stack past about 100,000 lines (a large site's findings).
+ */
+function append(out: string[], lines: readonly string[], ...extra: string[]): void {
+  for (const line of lines) out.push(line);
+  for (const line of extra) out.push(line);
 }
 
 /** The terminal formatter. */
@@ -210,9 +233,9 @@ export const textFormatter: Formatter = {
     const c = pc.createColors(ctx.color);
     const width = ctx.width ?? 80;
     const out: string[] = [];
-    if (report.findings.length > 0) out.push(...findingLines(report, ctx, c, width), '');
-    if (report.suggestions.length > 0) out.push(...suggestionLines(report, ctx, c, width), '');
-    if (report.baseline !== undefined || report.comparison !== undefined) out.push(...reviewLines(report, ctx, c, width), '');
+    if (report.findings.length > 0) append(out, findingLines(report, ctx, c, width), '');
+    if (report.suggestions.length > 0) append(out, suggestionLines(report, ctx, c, width), '');
+    if (report.baseline !== undefined || report.comparison !== undefined) append(out, reviewLines(report, ctx, c, width), '');
 
     const { error, warning } = report.stats.findings;
     const problems = problemsLine(report);
