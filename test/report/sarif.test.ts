@@ -112,9 +112,17 @@ describe('sarif formatter', () => {
 
   it('links HTML sources with <a href> and percent-encodes file URIs', () => {
     const s = { ...report.suggestions[1]!, file: 'old pages/intro.html', anchor: 'tuning options' };
-    expect(linkMarkup(report, s)).toBe('<a href="/guide/configure/advanced/tuning/">tuning options</a>');
+    expect(linkMarkup(s, report.pages.find((p) => p.route === s.target)?.file)).toBe('<a href="/guide/configure/advanced/tuning/">tuning options</a>');
     const spaced = toSarif({ ...report, findings: [{ ...report.findings[0]!, file: 'old pages/a b.md' }], suggestions: [] });
     expect(spaced.runs[0]!.results![0]!.locations![0]!.physicalLocation!.artifactLocation!.uri).toBe('old%20pages/a%20b.md');
     expect(validate(spaced)).toBe(true);
+  });
+});
+
+describe('SARIF in pieces', () => {
+  it('joins to exactly the one-string log', async () => {
+    const { formatReportPieces } = await import('../../src/report/index.js');
+    const report = fixtureReport();
+    expect([...formatReportPieces(report, 'sarif')].join('')).toBe(formatReport(report, 'sarif'));
   });
 });

@@ -29,10 +29,18 @@ export const jsonFormatter: Formatter = {
  * `JSON.stringify(report, null, 2)` plus a final newline, in pieces of about `PIECE_CHARS`,
  * made as they are asked for (so the whole text never exists at once).
  */
-export function* jsonPieces(report: Report): Generator<string, void, undefined> {
+export function jsonPieces(report: Report): Generator<string, void, undefined> {
+  return jsonTextPieces(report, 2);
+}
+
+/**
+ * `JSON.stringify(value, null, 2)` plus a final newline, in pieces: objects and arrays are
+ * opened `levels` deep (so the items of arrays at that depth are stringified one by one).
+ */
+export function* jsonTextPieces(value: unknown, levels: number): Generator<string, void, undefined> {
   let current: string[] = [];
   let size = 0;
-  for (const text of valueParts(report, '', 2)) {
+  for (const text of valueParts(value, '', levels)) {
     current.push(text);
     size += text.length;
     if (size >= PIECE_CHARS) {

@@ -9,6 +9,7 @@ import { pathToFileURL } from 'node:url';
 import type { ArtifactLocation, Fix, Log, ReportingDescriptor, Result } from 'sarif';
 import { rules } from '../../rules/registry.js';
 import type { Finding, Report, Suggestion } from '../../types.js';
+import { jsonTextPieces } from './json.js';
 import type { Formatter } from '../types.js';
 import { formatSimilarity, impactOf } from './common.js';
 
@@ -78,14 +79,18 @@ function relativePath(from: string, to: string): string {
  * relative to the source (how authors link Markdown files), else to the target route; in HTML
  * an `<a href>` to the route.
  */
-export function linkMarkup(report: Report, s: Suggestion & { anchor: string }): string {
+export function linkMarkup(s: Suggestion & { anchor: string }, targetFile: string | undefined): string {
   if (/\.html?$/i.test(s.file)) return `<a href="${s.target}">${s.anchor}</a>`;
-  const target = report.pages.find((p) => p.route === s.target);
-  const href = target !== undefined && /\.(md|markdown|mdx)$/i.test(target.file) ? relativePath(s.file, target.file) : s.target;
+  const href = targetFile !== undefined && /\.(md|markdown|mdx)$/i.test(targetFile) ? relativePath(s.file, targetFile) : s.target;
   return `[${s.anchor}](${encodeURI(href)})`;
 }
 
-function suggestionResult(report: Report, s: Suggestion, ruleIndex: number): Result {
+/** Source file by route (looked up per suggestion; a search of the pages each time was quadratic). */
+function filesByRoute(report: Report): Map<string, string> {
+  return new Map(report.pages.map((p) => [p.route, p.file]));
+}
+
+function suggestionResult(files: ReadonlyMap<string, string>, s: Suggestion, ruleIndex: number): Result {
   const region = { startLine: s.line, startColumn: s.column };
   const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
   const what =
@@ -105,7 +110,7 @@ function suggestionResult(report: Report, s: Suggestion, ruleIndex: number): Res
                 replacements: [
                   {
                     deletedRegion: { ...region, ...endOf(s.line, s.column, s.anchor) },
-                    insertedContent: { text: linkMarkup(report, { ...s, anchor: s.anchor }) },
+                    insertedContent: { text: linkMarkup({ ...s, anchor: s.anchor }, files.get(s.target)) },
                   },
                 ],
               },
@@ -149,9 +154,10 @@ export function toSarif(report: Report): Log {
   const driverRules = descriptors();
   const index = new Map(driverRules.map((r, i) => [r.id, i]));
   const state = baselineStates(report);
+  const files = filesByRoute(report);
   const results: Result[] = [
     ...report.findings.map((f) => findingResult(f, index.get(f.rule), state(f))),
-    ...report.suggestions.map((s) => suggestionResult(report, s, index.get(SUGGESTION_RULE)!)),
+    ...report.suggestions.map((s) => suggestionResult(files, s, index.get(SUGGESTION_RULE)!)),
   ];
   const root = pathToFileURL(report.root).href;
   return {
@@ -174,5 +180,10 @@ export const sarifFormatter: Formatter = {
   fileExtension: '.sarif',
   format(report) {
     return `${JSON.stringify(toSarif(report), null, 2)}\n`;
+  },
+  // The log, runs, one run, results: each result stringified alone (a large site's log is
+  // longer than one string can be).
+  pieces(report) {
+    return jsonTextPieces(toSarif(report), 4);
   },
 };
