@@ -1,6 +1,6 @@
 /**
  * One timed run of the real pipeline: `analyze` with `command: 'suggest'` (stages timed from
- * its hooks), then the write stage as the command line does it: `formatReport(report, 'json')`
+ * its hooks), then the write stage as the command line does it: `formatReportPieces(report, 'json')`
  * and `writeFileAtomic`.
  */
 import { existsSync, readdirSync, statSync } from 'node:fs';
@@ -52,7 +52,8 @@ export async function runPipeline(lib: Built, root: string, settings: RunSetting
   const t0 = performance.now();
   const report = await lib.api.analyze({ ...siteConfig(root), root, command: 'suggest', cache }, hooks);
   const tw = performance.now();
-  await lib.write.writeFileAtomic(settings.outFile, lib.api.formatReport(report, 'json'));
+  // As the command line writes it: in pieces (one string cannot hold a 100,000-page report).
+  await lib.write.writeFileAtomic(settings.outFile, lib.api.formatReportPieces(report, 'json'));
   const end = performance.now();
   const cpu = process.cpuUsage(c0);
   stages.write = end - tw;

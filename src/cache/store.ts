@@ -43,9 +43,21 @@ interface Shard {
   readonly loaded: ReadonlyMap<string, StoredFacts>;
   /** True when the file existed and was ignored: it is rewritten. */
   readonly ignored: boolean;
-  /** Entries of this run: hits carried over, misses stored. */
-  readonly next: Map<string, StoredFacts>;
+  /**
+   * Entries of this run: hits carried over as read, misses as their facts and source text
+   * (packed only when the shard is written, one entry at a time, so a cold run of a large site
+   * does not hold a packed copy of every page's facts until the end).
+   */
+  readonly next: Map<string, StoredFacts | Unpacked>;
   stored: number;
+}
+
+/** Fresh facts waiting to be packed for the shard file (a class, so no entry read from a file can pass for one). */
+class Unpacked {
+  constructor(
+    readonly facts: PageFacts,
+    readonly source: string,
+  ) {}
 }
 
 const TEMP_PREFIX = '.linkweave-tmp-';
@@ -76,7 +88,7 @@ export function openCache(dir: string, key: CacheKey): CacheSession {
     },
     store(file, facts) {
       const shard = shards[shardOfPath(file.path)]!;
-      shard.next.set(file.path, packFacts(facts, file.text));
+      shard.next.set(file.path, new Unpacked(facts, file.text));
       shard.stored++;
     },
     save() {
@@ -134,7 +146,7 @@ function readShard(path: string, index: number, key: CacheKey): ShardRead {
 }
 
 /** Serialise and write one shard atomically; the reason on failure, else null. */
-function writeShard(dir: string, index: number, key: CacheKey, entries: ReadonlyMap<string, StoredFacts>): string | null {
+function writeShard(dir: string, index: number, key: CacheKey, entries: ReadonlyMap<string, StoredFacts | Unpacked>): string | null {
   const target = join(dir, shardFileName(index));
   const temp = join(dir, `${TEMP_PREFIX}${shardFileName(index)}-${process.pid}-${randomBytes(6).toString('hex')}`);
   try {
@@ -154,13 +166,14 @@ function writeShard(dir: string, index: number, key: CacheKey, entries: Readonly
 }
 
 /** The text of a shard file: header line, then the entries sorted by path, one per line. */
-function serializeShard(index: number, key: CacheKey, entries: ReadonlyMap<string, StoredFacts>): string {
+function serializeShard(index: number, key: CacheKey, entries: ReadonlyMap<string, StoredFacts | Unpacked>): string {
   const paths = [...entries.keys()].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
   const header: ShardHeader = { schema: CACHE_SCHEMA, version: key.version, fingerprint: key.fingerprint, shard: index, count: paths.length };
   const parts: string[] = [JSON.stringify(header), '\n[\n'];
   for (let i = 0; i < paths.length; i++) {
     if (i > 0) parts.push(',\n');
-    parts.push(JSON.stringify(entries.get(paths[i]!)));
+    const entry = entries.get(paths[i]!)!;
+    parts.push(JSON.stringify(entry instanceof Unpacked ? packFacts(entry.facts, entry.source) : entry));
   }
   parts.push('\n]\n');
   return parts.join('');

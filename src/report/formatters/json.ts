@@ -12,6 +12,8 @@ import type { Formatter } from '../types.js';
 
 /** Pieces of about this many characters are handed to the writer. */
 const PIECE_CHARS = 1 << 20;
+/** Array items stringified in one call. */
+const CHUNK_ITEMS = 1000;
 
 /** The JSON formatter (the report is already sorted and rounded by `buildReport`). */
 export const jsonFormatter: Formatter = {
@@ -66,6 +68,17 @@ function* valueParts(value: unknown, indent: string, levels: number): Generator<
   if (Array.isArray(value)) {
     if (value.length === 0) {
       yield '[]';
+      return;
+    }
+    if (levels === 1) {
+      // The items are stringified whole: a slice of them at a time, as one array, gives the
+      // same text as one by one, with far fewer calls. `[\n` and `\n<indent>]` are cut off.
+      for (let i = 0; i < value.length; i += CHUNK_ITEMS) {
+        const json = indented(JSON.stringify(value.slice(i, i + CHUNK_ITEMS), null, 2), indent);
+        const items = json.slice(2, json.length - indent.length - 2);
+        yield i === 0 ? `[\n${items}` : `,\n${items}`;
+      }
+      yield `\n${indent}]`;
       return;
     }
     for (let i = 0; i < value.length; i++) {
