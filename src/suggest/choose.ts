@@ -4,7 +4,6 @@
  * under the per-source and per-target caps. Impact is not part of it.
  */
 import type { ResolvedOptions } from '../options.js';
-import type { PageFacts } from '../types.js';
 import { createStemCache } from '../text/tokenize.js';
 import { termLeaders, topTerms } from '../text/tfidf.js';
 import { findAnchors, prepareSource } from './anchor.js';
@@ -14,6 +13,7 @@ import { findCandidates } from './candidates.js';
 import { baseScore, NO_ANCHOR_SIMILARITY } from './score.js';
 import { chooseSuggestions } from './select.js';
 import type { Chosen, ScoredPair } from './select.js';
+import { factsByPage } from './facts-of.js';
 import type { SuggestInput } from './types.js';
 
 /** Key terms of a target that an anchor may match: its heaviest TF-IDF terms. */
@@ -32,9 +32,7 @@ export function chooseForTargets(
   rankPct: ArrayLike<number>,
 ): Chosen[] {
   const { graph, ranking, index, related } = input;
-  const n = graph.pages.length;
-  const ordered = input.facts.length === n && input.facts.every((f, i) => f.file === graph.pages[i]!.file);
-  const factsOf = (i: number): PageFacts | undefined => (ordered ? input.facts[i] : input.facts[graph.pages[i]!.factsIndex]);
+  const factsOf = factsByPage(input);
   const { maxDepth } = options;
   const settings = options.suggest;
   const pairs = findCandidates(graph, related, targets, settings.minSimilarity);

@@ -8,23 +8,22 @@
  * depth per suggestion -> repair plan. Output sorted by file, line, column, target.
  */
 import type { ResolvedOptions } from '../options.js';
-import type { PageFacts, Suggestion } from '../types.js';
+import type { Suggestion } from '../types.js';
 import { chooseForTargets } from './choose.js';
 import { suggestionId } from './id.js';
 import { depthState, impactSelection, rankModel, targetRanksWithLinks } from './impact.js';
 import { computeImportance } from './importance.js';
 import { reasonText } from './reason.js';
 import { repairPlan } from './repair.js';
+import { factsByPage } from './facts-of.js';
 import type { SuggestInput, SuggestResult } from './types.js';
 import { findUnderlinked, pagerankPercentiles } from './underlinked.js';
-
 
 /** Propose links for the site. Pure: same input, same output. */
 export function suggestLinks(input: SuggestInput, options: ResolvedOptions): SuggestResult {
   const { graph, ranking, centrality, traffic } = input;
   const n = graph.pages.length;
-  const ordered = input.facts.length === n && input.facts.every((f, i) => f.file === graph.pages[i]!.file);
-  const factsOf = (i: number): PageFacts | undefined => (ordered ? input.facts[i] : input.facts[graph.pages[i]!.factsIndex]);
+  const factsOf = factsByPage(input);
   const { maxDepth } = options;
   const settings = options.suggest;
 
