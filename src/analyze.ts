@@ -23,7 +23,7 @@ import type { AuxProblem } from './rules/index.js';
 import { buildReport } from './report/index.js';
 import { resolveOptions } from './options.js';
 import type { Config, ResolvedOptions } from './options.js';
-import type { Finding, PageFacts, RawLink, RepairPlan, Report, Suggestion } from './types.js';
+import type { Finding, LinkModelReport, PageFacts, RawLink, RepairPlan, Report, Suggestion } from './types.js';
 import { VERSION } from './version.js';
 
 /** The stages `analyze` runs, in order, as reported to hooks. */
@@ -201,6 +201,7 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
   let suggestions: Suggestion[] = [];
   let importance: readonly ('high' | 'normal' | 'low')[] | undefined;
   let repair: RepairPlan | undefined;
+  let model: LinkModelReport | undefined;
   if (command === 'suggest') {
     const text = await stage('text', () => {
       const stems = createStemCache();
@@ -216,6 +217,7 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
     suggestions = result.suggestions;
     importance = result.importance;
     repair = result.plan;
+    model = result.model;
   }
   const findings = await stage('rules', () =>
     runRules({ graph, facts, ranking, options, warnings: collected.sources.warnings, auxProblems: collected.auxProblems }),
@@ -231,6 +233,7 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
       version: VERSION,
       ...(importance === undefined ? {} : { importance }),
       ...(repair === undefined ? {} : { repair }),
+      ...(model === undefined ? {} : { model }),
       ...(baseline === undefined ? {} : { baseline }),
     }),
   );

@@ -35,11 +35,11 @@ export interface SuggestConfig {
   targets?: 'underlinked' | 'all' | undefined;
   /** Suggestions per target page. @default 5 */
   perTarget?: number | undefined;
-  /** New links proposed per source page. @default 3 */
-  maxNewLinksPerPage?: number | undefined;
-  /** Least cosine similarity (0..1) between source and target. @default 0.1 */
+  /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
+  perSource?: number | undefined;
+  /** Least cosine similarity (0..1) for a TF-IDF neighbour to be a candidate source. @default 0.1 */
   minSimilarity?: number | undefined;
-  /** Related pages kept per page. @default 10 */
+  /** TF-IDF neighbours per page: related pages kept, and candidate sources of each target. @default 10 */
   relatedK?: number | undefined;
   /** Important pages with fewer content inlinks than this are under-linked. @default 2 */
   minInlinks?: number | undefined;
@@ -123,7 +123,7 @@ export interface Config {
   important?: string[] | undefined;
   /** A CSV of `route,views` (relative to the root) used as importance. @default null */
   traffic?: string | null | undefined;
-  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, maxNewLinksPerPage: 3, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
+  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
   suggest?: SuggestConfig | undefined;
   /** Gate limits. @default every limit null (none) */
   gate?: GateConfig | undefined;

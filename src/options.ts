@@ -81,11 +81,11 @@ const schema = z.strictObject({
       targets: z.enum(['underlinked', 'all']).default('underlinked'),
       /** Suggestions per target page. @default 5 */
       perTarget: z.number().int().positive().default(5),
-      /** New links proposed per source page. @default 3 */
-      maxNewLinksPerPage: z.number().int().positive().default(3),
-      /** Least cosine similarity between source and target. @default 0.1 */
+      /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
+      perSource: z.number().int().min(0).default(3),
+      /** Least cosine similarity for a TF-IDF neighbour to be a candidate source. @default 0.1 */
       minSimilarity: z.number().min(0).max(1).default(0.1),
-      /** Related pages kept per page. @default 10 */
+      /** TF-IDF neighbours per page: related pages kept, and candidate sources of each target. @default 10 */
       relatedK: z.number().int().positive().default(10),
       /** Important pages with fewer content inlinks than this are under-linked. @default 2 */
       minInlinks: z.number().int().min(0).default(2),

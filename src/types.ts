@@ -272,6 +272,29 @@ export interface Suggestion {
   readonly sourceHash: string;
 }
 
+/**
+ * The link model of a `suggest` run (`suggest/model.ts`): a logistic regression fitted on the
+ * site's own content links, or fixed weights when the site has too few links to learn from.
+ * `weights[i]` belongs to `features[i]` on the standardised scale ((x - means[i]) / scales[i]),
+ * so their sizes compare: the larger a weight, the more that feature moves the score.
+ */
+export interface LinkModelReport {
+  readonly source: 'fitted' | 'fixed';
+  readonly features: readonly string[];
+  readonly intercept: number;
+  readonly weights: readonly number[];
+  readonly means: readonly number[];
+  readonly scales: readonly number[];
+  /** Pairs the model was fitted on: existing content links, and candidate pairs without one. */
+  readonly trainingPairs: { readonly linked: number; readonly notLinked: number };
+  /** Pairs kept out of the fit (one in five, by a hash of the pair) to measure the AUC. */
+  readonly heldOutPairs: { readonly linked: number; readonly notLinked: number };
+  /** Area under the ROC curve on the held-out pairs; null when either kind is missing. */
+  readonly auc: number | null;
+  readonly iterations: number;
+  readonly converged: boolean;
+}
+
 /** One page row of the report. */
 export interface ReportPage {
   readonly route: string;
@@ -347,6 +370,8 @@ export interface Report {
    * most too-deep or unreachable pages within `maxDepth`. Absent for `check`.
    */
   readonly repair?: RepairPlan;
+  /** The link model that scored the suggestions (`suggest` only): what this site's linking habits are. */
+  readonly model?: LinkModelReport;
   /** This run against a base report (`--compare BASE.json`): what a change did to the site. */
   readonly comparison?: Comparison;
 }

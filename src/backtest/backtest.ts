@@ -27,7 +27,7 @@ export interface BacktestInput {
 }
 
 /** The methods in the order they are reported. */
-export const METHODS: readonly MethodId[] = ['linkweave', 'tfidf', 'random', 'random-page'];
+export const METHODS: readonly MethodId[] = ['linkweave', 'tfidf', 'title-phrase', 'random', 'random-page'];
 
 /**
  * Run the backtest.
@@ -67,7 +67,7 @@ export function backtest(input: BacktestInput, settings: BacktestSettings, onRun
       minSimilarity: options.suggest.minSimilarity,
       relatedK: options.suggest.relatedK,
       perTarget: { configured: options.suggest.perTarget, used: runOptions.suggest.perTarget },
-      maxNewLinksPerPage: { configured: options.suggest.maxNewLinksPerPage, used: runOptions.suggest.maxNewLinksPerPage },
+      perSource: { configured: options.suggest.perSource, used: runOptions.suggest.perSource },
       targets: { configured: options.suggest.targets, used: 'all' },
     },
     site: {
@@ -93,6 +93,7 @@ function summarize(runs: readonly RunResult[]): MethodSummary[] {
       mrr: of((m) => m.mrr),
       anchorOverlap: of((m) => m.anchorOverlap),
       anchorInPlace: of((m) => m.anchorInPlace),
+      lineMatch: of((m) => m.lineMatch),
     };
   });
 }

@@ -6,14 +6,14 @@
  */
 import type { ResolvedOptions } from '../options.js';
 import { chooseForTargets, pagerankPercentiles } from '../suggest/index.js';
-import type { Chosen, SuggestInput } from '../suggest/index.js';
+import type { ChooseResult, SuggestInput } from '../suggest/index.js';
 
 /**
  * The suggestions `suggestLinks` would choose with `suggest.targets: 'all'`, in the order it
  * chooses them, before impact. (`centrality` and `traffic` of the input only serve importance,
  * which does not matter when every page is a target.)
  */
-export function chooseLikeSuggest(input: SuggestInput, options: ResolvedOptions): Chosen[] {
+export function chooseLikeSuggest(input: SuggestInput, options: ResolvedOptions): ChooseResult {
   const { graph, ranking } = input;
   const targets = graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id);
   return chooseForTargets(input, options, targets, pagerankPercentiles(graph, ranking));

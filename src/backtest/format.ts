@@ -6,8 +6,6 @@
  * input gives byte-identical output.
  */
 import { roundTo } from '../report/round.js';
-import { NO_ANCHOR, REACH_TOO_DEEP, REACH_UNREACHABLE } from '../suggest/index.js';
-import { NO_ANCHOR_SIMILARITY } from '../suggest/score.js';
 import { VERSION } from '../version.js';
 import { K_VALUES, LIST_LENGTH } from './metrics.js';
 import type { BacktestResult, MethodId, MethodScores, Spread } from './types.js';
@@ -21,18 +19,15 @@ const DECIMALS = 6;
 export const METHOD_LABELS: Readonly<Record<MethodId, string>> = {
   linkweave: 'linkweave',
   tfidf: 'TF-IDF only',
+  'title-phrase': 'title phrase',
   random: 'random related',
   'random-page': 'random page',
 };
 
-/** The suggestion score as the suggestion stage computes it (suggest/score.ts), in words. */
-export function scoreFormula(minSimilarity: number) {
+/** The suggestion score as the suggestion stage computes it, in words. */
+export function scoreFormula(_minSimilarity: number) {
   return {
-    formula: 'similarity x (0.5 + 0.5 x source PageRank percentile) x reach x anchor',
-    reachTooDeep: REACH_TOO_DEEP,
-    reachUnreachable: REACH_UNREACHABLE,
-    noAnchor: NO_ANCHOR,
-    noAnchorMinSimilarity: roundTo(NO_ANCHOR_SIMILARITY * minSimilarity, DECIMALS),
+    formula: "the link model's probability, refitted on each run's remaining links",
   };
 }
 
@@ -48,6 +43,7 @@ function methodJson(m: MethodScores) {
     recovered: m.recovered,
     anchorOverlap: r(m.anchorOverlap),
     anchorInPlace: r(m.anchorInPlace),
+    lineMatch: r(m.lineMatch),
   };
 }
 
@@ -69,7 +65,7 @@ export function formatBacktestJson(result: BacktestResult): string {
       relatedK: suggest.relatedK,
       targets: suggest.targets,
       perTarget: suggest.perTarget,
-      maxNewLinksPerPage: suggest.maxNewLinksPerPage,
+      perSource: suggest.perSource,
       score: scoreFormula(suggest.minSimilarity),
     },
     site: result.site,
@@ -81,6 +77,7 @@ export function formatBacktestJson(result: BacktestResult): string {
       mrr: rs(s.mrr),
       anchorOverlap: rs(s.anchorOverlap),
       anchorInPlace: rs(s.anchorInPlace),
+      lineMatch: rs(s.lineMatch),
     })),
   };
   return `${JSON.stringify(doc, null, 2)}\n`;
@@ -101,6 +98,14 @@ function coverage(runs: BacktestResult['runs']): string {
   return xs.length === 0 ? '-' : `${(100 * mean(xs)).toFixed(1)}%`;
 }
 
+function modelLine(runs: BacktestResult['runs']): string {
+  const fitted = runs.filter((x) => x.model.source === 'fitted').length;
+  const aucs = runs.map((x) => x.model.auc).filter((x): x is number => x !== null);
+  const pairs = count(mean(runs.map((x) => x.model.trainingPairs)));
+  const auc = aucs.length === 0 ? '' : `, AUC ${f3(mean(aucs))} on pairs kept out of the fit`;
+  return `fitted on ${pairs} pairs per run (${fitted} of ${runs.length} runs fitted, the rest fixed weights)${auc}`;
+}
+
 /** The table for people, ending in a newline. */
 export function formatBacktestText(result: BacktestResult): string {
   const { settings, suggest, site, runs } = result;
@@ -109,7 +114,7 @@ export function formatBacktestText(result: BacktestResult): string {
   const changes = [
     suggest.targets.configured === 'all' ? null : `suggest.targets ${suggest.targets.configured} -> all`,
     suggest.perTarget.configured === suggest.perTarget.used ? null : `perTarget ${suggest.perTarget.configured} -> ${suggest.perTarget.used}`,
-    `maxNewLinksPerPage ${suggest.maxNewLinksPerPage.configured} -> ${suggest.maxNewLinksPerPage.used} (no per-source cap)`,
+    `perSource ${suggest.perSource.configured} -> no cap`,
   ].filter((c): c is string => c !== null);
   const field = (label: string, value: string) => `  ${label.padEnd(16)}${value}`;
   const perRun = (f: (x: BacktestResult['runs'][number]) => number) => count(mean(runs.map(f)));
@@ -120,11 +125,10 @@ export function formatBacktestText(result: BacktestResult): string {
     field('held out', `${roundTo(settings.holdout * 100, 2)}% of those pairs per run, ${seeds}; every page keeps a content inlink`),
     field('link words', settings.keepLinkText ? 'kept in the page as prose, where an anchor may go (--keep-link-text)' : 'removed with the link (--keep-link-text keeps them as prose)'),
     field(settings.runs > 1 ? 'per run (mean)' : 'this run', `${perRun((x) => x.heldOutPairs)} pairs (${perRun((x) => x.heldOutLinks)} links) into ${perRun((x) => x.targets)} target pages`),
-    field('candidates', `${coverage(runs)} of the held-out sources are candidates of their target (related, similarity >= ${suggest.minSimilarity}); no method finds more`),
+    field('candidates', `${coverage(runs)} of the held-out sources are candidates of their target (names mentioned, TF-IDF neighbours, graph neighbourhood)`),
+    field('model', modelLine(runs)),
     field('minSimilarity', `${suggest.minSimilarity} (relatedK ${suggest.relatedK})`),
     field('score', score.formula),
-    field('', `reach: ${score.reachTooDeep} source too deep to fix the target's depth, ${score.reachUnreachable} unreachable source, else 1`),
-    field('', `anchor: ${score.noAnchor} without an anchor phrase (then similarity >= ${score.noAnchorMinSimilarity}), else 1`),
     field('k', `${K_VALUES.join(', ')} (ranked lists of ${LIST_LENGTH} sources per target)`),
     field('backtest sets', changes.join(', ')),
     '',
@@ -136,13 +140,14 @@ export function formatBacktestText(result: BacktestResult): string {
     );
     return `${lines.join('\n')}\n`;
   }
-  const header = ['method', ...K_VALUES.map((k) => `R@${k}`), ...K_VALUES.map((k) => `P@${k}`), 'MRR', 'anchor'];
+  const header = ['method', ...K_VALUES.map((k) => `R@${k}`), ...K_VALUES.map((k) => `P@${k}`), 'MRR', 'anchor', 'line'];
   const rows = result.summary.map((s) => [
     METHOD_LABELS[s.method],
     ...s.recall.map((x) => cell(x, settings.runs)),
     ...s.precision.map((x) => cell(x, settings.runs)),
     cell(s.mrr, settings.runs),
     cell(s.anchorOverlap, settings.runs),
+    cell(s.lineMatch, settings.runs),
   ]);
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i]!.length)));
   const line = (row: readonly string[]) => `  ${row.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ')}`.trimEnd();
@@ -154,7 +159,8 @@ export function formatBacktestText(result: BacktestResult): string {
     '  R@k: share of a target\'s held-out sources among its first k proposed sources. P@k: held-out',
     '  sources among the first k, divided by k. MRR: 1 / rank of the first held-out source in the',
     `  top ${LIST_LENGTH} (0 if none). anchor: share of the recovered links whose anchor shares a word stem`,
-    `  with the original link text.${place}`,
+    `  with the original link text. line: share of the recovered links whose anchor is on the line of`,
+    `  the original link.${place}`,
   );
   return `${lines.join('\n')}\n`;
 }

@@ -7,6 +7,9 @@
  * - TF-IDF only: the same candidate sources the stage starts from (related pages with
  *   similarity >= `minSimilarity` that do not link to the target yet), ordered by cosine
  *   similarity alone, ties by source route: no PageRank, no click depth, no anchor search;
+ * - title phrase: the pages whose prose holds the target's whole title (on stems, as one run of
+ *   words in one text span, stop words allowed between), most occurrences first, then by cosine
+ *   similarity, then by source; the anchor is the first occurrence. No model, no graph.
  * - random related page: the same candidates in a seeded random order (a stream of its own,
  *   separate from the sampler's): what the ordering adds over the candidate set;
  * - random page: ten pages drawn at random (seeded) from every page that could link to the
@@ -14,8 +17,10 @@
  *   candidate set itself adds.
  */
 import type { CandidatePair, Chosen } from '../suggest/index.js';
-import { hasContentLink } from '../suggest/index.js';
-import type { SiteGraph } from '../types.js';
+import { hasContentLink, positionInSpan } from '../suggest/index.js';
+import { cosine, forEachWord, stemToken } from '../text/index.js';
+import type { StemCache } from '../text/index.js';
+import type { PageFacts, SiteGraph, TermIndex } from '../types.js';
 import { LIST_LENGTH } from './metrics.js';
 import type { RankedSource } from './metrics.js';
 import { shuffle, streamFor } from './prng.js';
@@ -30,8 +35,8 @@ export function suggestionLists(chosen: readonly Chosen[]): Map<number, RankedSo
   for (const { pair, anchor, score } of chosen) {
     const list = scored.get(pair.target) ?? [];
     const item: RankedSource = anchor === null
-      ? { source: pair.source, anchor: null, offset: -1, endOffset: -1 }
-      : { source: pair.source, anchor: anchor.text, offset: anchor.offset, endOffset: anchor.endOffset };
+      ? { source: pair.source, anchor: null, offset: -1, endOffset: -1, line: -1 }
+      : { source: pair.source, anchor: anchor.text, offset: anchor.offset, endOffset: anchor.endOffset, line: anchor.line };
     list.push({ item, score });
     scored.set(pair.target, list);
   }
@@ -55,7 +60,7 @@ function byTarget(candidates: readonly CandidatePair[]): Map<number, CandidatePa
   return out;
 }
 
-const plain = (source: number): RankedSource => ({ source, anchor: null, offset: -1, endOffset: -1 });
+const plain = (source: number): RankedSource => ({ source, anchor: null, offset: -1, endOffset: -1, line: -1 });
 
 /** TF-IDF only: candidates by similarity, best first, ties by source. */
 export function similarityLists(candidates: readonly CandidatePair[]): Map<number, RankedSource[]> {
@@ -106,6 +111,72 @@ export function randomPageLists(graph: SiteGraph, targets: readonly number[], se
       drawn.push(...shuffle(rnd, all).slice(0, LIST_LENGTH));
     }
     out.set(t, drawn.map(plain));
+  }
+  return out;
+}
+
+/**
+ * Title phrase only: for each target, the sources whose prose holds its whole title, most
+ * occurrences first, then by cosine similarity, ties by source; anchored on the first one.
+ * @param facts facts in page order
+ */
+export function titlePhraseLists(
+  graph: SiteGraph,
+  facts: readonly PageFacts[],
+  index: TermIndex,
+  targets: readonly number[],
+  cache: StemCache,
+): Map<number, RankedSource[]> {
+  const wanted = new Set(targets);
+  const byTitle = new Map<string, number[]>();
+  let longest = 0;
+  for (const t of wanted) {
+    const stems: string[] = [];
+    forEachWord(graph.pages[t]!.title, (raw) => {
+      const s = stemToken(raw, cache);
+      if (s !== '') stems.push(s);
+    });
+    if (stems.length === 0) continue;
+    const key = stems.join(' ');
+    byTitle.set(key, [...(byTitle.get(key) ?? []), t]);
+    longest = Math.max(longest, stems.length);
+  }
+  const found = new Map<number, Map<number, { count: number; first: RankedSource }>>();
+  graph.pages.forEach((page, s) => {
+    if (page.meta.exclude) return;
+    for (const span of facts[s]?.spans ?? []) {
+      const words: { stem: string; start: number; end: number }[] = [];
+      forEachWord(span.text, (raw, start, end) => {
+        const stem = stemToken(raw, cache);
+        if (stem !== '') words.push({ stem, start, end });
+      });
+      for (let i = 0; i < words.length; i++) {
+        let key = '';
+        for (let len = 1; len <= longest && i + len <= words.length; len++) {
+          key = len === 1 ? words[i]!.stem : `${key} ${words[i + len - 1]!.stem}`;
+          for (const t of byTitle.get(key) ?? []) {
+            if (t === s || hasContentLink(graph.forward, s, t)) continue;
+            const m = found.get(t) ?? new Map<number, { count: number; first: RankedSource }>();
+            found.set(t, m);
+            const prev = m.get(s);
+            if (prev !== undefined) {
+              prev.count++;
+              continue;
+            }
+            const start = words[i]!.start;
+            const end = words[i + len - 1]!.end;
+            const { line } = positionInSpan(span, start);
+            m.set(s, { count: 1, first: { source: s, anchor: span.text.slice(start, end), offset: span.offset + start, endOffset: span.offset + end, line } });
+          }
+        }
+      }
+    }
+  });
+  const out = new Map<number, RankedSource[]>();
+  for (const t of [...found.keys()].sort((a, b) => a - b)) {
+    const list = [...found.get(t)!.entries()].map(([s, v]) => ({ s, v, sim: cosine(index, s, t) }));
+    list.sort((a, b) => b.v.count - a.v.count || b.sim - a.sim || a.s - b.s);
+    out.set(t, list.slice(0, LIST_LENGTH).map((x) => x.v.first));
   }
   return out;
 }

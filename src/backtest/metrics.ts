@@ -18,6 +18,8 @@
  * - anchor in place = among recovered pairs, the share whose anchor's offsets in the source
  *                    overlap the place of one of the pair's held-out link texts (only when the
  *                    link texts are kept as prose; otherwise that place cannot be proposed)
+ * - line match     = among recovered pairs, the share whose anchor is on the line of one of the
+ *                    pair's held-out links (a pair without an anchor does not match)
  */
 import { tokenize } from '../text/index.js';
 import type { StemCache } from '../text/index.js';
@@ -36,6 +38,8 @@ export interface RankedSource {
   /** UTF-16 offsets of the anchor in the source file, -1 when there is none. */
   readonly offset: number;
   readonly endOffset: number;
+  /** 1-based line of the anchor, -1 when there is none. */
+  readonly line: number;
 }
 
 /** Held-out pairs grouped by target page, targets ascending. */
@@ -72,6 +76,7 @@ export function scoreMethod(
   let recovered = 0;
   let overlap = 0;
   let inPlace = 0;
+  let onLine = 0;
   for (const [target, truth] of byTarget) {
     const list = (lists.get(target) ?? []).slice(0, LIST_LENGTH);
     let first = -1;
@@ -87,6 +92,7 @@ export function scoreMethod(
       if (first < 0) first = r;
       recovered++;
       if (!withAnchors || item.anchor === null) return;
+      if (item.line >= 0 && pair.links.some((l) => l.line === item.line)) onLine++;
       const stems = new Set(tokenize(item.anchor, cache));
       if (pair.links.some((l) => tokenize(l.text, cache).some((s) => stems.has(s)))) overlap++;
       if (item.offset >= 0 && pair.links.some((l) => l.offset >= 0 && item.offset < l.endOffset && l.offset < item.endOffset)) inPlace++;
@@ -104,6 +110,7 @@ export function scoreMethod(
     recovered,
     anchorOverlap: share(overlap, withAnchors),
     anchorInPlace: share(inPlace, withAnchors && anchors.inPlace),
+    lineMatch: share(onLine, withAnchors),
   };
 }
 

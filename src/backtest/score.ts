@@ -18,7 +18,7 @@ import type { PageFacts, RelatedList, SiteGraph, TermIndex } from '../types.js';
 import { chooseLikeSuggest } from './choose.js';
 import { holdOut } from './holdout.js';
 import type { ContentPair } from './holdout.js';
-import { randomLists, randomPageLists, similarityLists, suggestionLists } from './methods.js';
+import { randomLists, randomPageLists, similarityLists, suggestionLists, titlePhraseLists } from './methods.js';
 import { heldOutByTarget, LIST_LENGTH, scoreMethod } from './metrics.js';
 import type { RunResult } from './types.js';
 
@@ -47,18 +47,19 @@ export interface RunBase {
 
 /**
  * The suggestion options of a backtest: every page a target (`suggest.targets: 'all'`), ten
- * suggestions per target (the longest list scored) and no per-source cap
- * (`maxNewLinksPerPage` = the page count), so a source that suits many targets is not hidden
- * from some of them by the cap. Everything else as configured.
+ * suggestions per target (the longest list scored) and no per-source cap (`perSource: 0`), so a
+ * source that suits many targets is not hidden from some of them by the cap. Everything else as
+ * configured.
  */
-export function backtestOptions(options: ResolvedOptions, pages: number): ResolvedOptions {
+export function backtestOptions(options: ResolvedOptions, _pages: number): ResolvedOptions {
   return {
     ...options,
-    suggest: { ...options.suggest, targets: 'all', perTarget: LIST_LENGTH, maxNewLinksPerPage: Math.max(1, pages, options.suggest.maxNewLinksPerPage) },
+    suggest: { ...options.suggest, targets: 'all', perTarget: LIST_LENGTH, perSource: 0 },
   };
 }
 
 const NO_ANCHORS = { overlap: false, inPlace: false } as const;
+const TITLE_ANCHORS = { overlap: true, inPlace: false } as const;
 
 /** The text stage as `analyze` runs it, over the facts in page order. */
 export function textStage(ordered: readonly PageFacts[], options: ResolvedOptions): TextResults {
@@ -77,20 +78,20 @@ export function runOnce(base: RunBase, share: number, seed: number, keepLinkText
   const ranking = rankGraph(reduced, options);
   const ordered = reduced.pages.map((p) => facts[p.factsIndex]!);
   const text = keepLinkText && base.text !== null ? base.text : textStage(ordered, options);
-  const chosen = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic }, options);
+  const cache = createStemCache();
+  const choice = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic, stems: cache }, options);
 
   const truth = heldOutByTarget(heldOut);
   const targets = [...truth.keys()];
   const candidates = findCandidates(reduced, text.related, targets, options.suggest.minSimilarity);
-  const candidateKeys = new Set(candidates.map((c) => c.source * n + c.target));
-  const covered = heldOut.filter((p) => candidateKeys.has(p.source * n + p.target)).length;
-  const cache = createStemCache();
+  const covered = heldOut.filter((p) => choice.candidatesOf(p.target).includes(p.source)).length;
   const methods =
     targets.length === 0
       ? []
       : [
-          scoreMethod('linkweave', suggestionLists(chosen), truth, { overlap: true, inPlace: keepLinkText }, cache),
+          scoreMethod('linkweave', suggestionLists(choice.chosen), truth, { overlap: true, inPlace: keepLinkText }, cache),
           scoreMethod('tfidf', similarityLists(candidates), truth, NO_ANCHORS, cache),
+          scoreMethod('title-phrase', titlePhraseLists(reduced, ordered, text.index, targets, cache), truth, { ...TITLE_ANCHORS, inPlace: keepLinkText }, cache),
           scoreMethod('random', randomLists(candidates, seed), truth, NO_ANCHORS, cache),
           scoreMethod('random-page', randomPageLists(reduced, targets, seed), truth, NO_ANCHORS, cache),
         ];
@@ -100,6 +101,11 @@ export function runOnce(base: RunBase, share: number, seed: number, keepLinkText
     heldOutLinks: heldOut.reduce((a, p) => a + p.links.length, 0),
     targets: targets.length,
     candidateCoverage: heldOut.length === 0 ? null : covered / heldOut.length,
+    model: {
+      source: choice.modelReport.source,
+      trainingPairs: choice.modelReport.trainingPairs.linked + choice.modelReport.trainingPairs.notLinked,
+      auc: choice.modelReport.auc,
+    },
     methods,
   };
 }

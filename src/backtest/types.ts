@@ -36,7 +36,7 @@ export interface HeldOutPair {
 }
 
 /** The methods compared. */
-export type MethodId = 'linkweave' | 'tfidf' | 'random' | 'random-page';
+export type MethodId = 'linkweave' | 'tfidf' | 'title-phrase' | 'random' | 'random-page';
 
 /** The metrics of one method in one run (means over the scored target pages). */
 export interface MethodScores {
@@ -60,6 +60,12 @@ export interface MethodScores {
    * then not available).
    */
   readonly anchorInPlace: number | null;
+  /**
+   * Line match: share of recovered pairs whose proposed anchor is on a line where one of the
+   * pair's held-out links was (a pair without an anchor does not match); null for methods
+   * without anchors or when nothing was recovered.
+   */
+  readonly lineMatch: number | null;
 }
 
 /** One run (one seed). */
@@ -75,6 +81,8 @@ export interface RunResult {
    * nothing was held out.
    */
   readonly candidateCoverage: number | null;
+  /** The link model fitted on this run's reduced site (source, training pairs, AUC). */
+  readonly model: { readonly source: 'fitted' | 'fixed'; readonly trainingPairs: number; readonly auc: number | null };
   readonly methods: readonly MethodScores[];
 }
 
@@ -92,6 +100,7 @@ export interface MethodSummary {
   readonly mrr: Spread;
   readonly anchorOverlap: Spread;
   readonly anchorInPlace: Spread;
+  readonly lineMatch: Spread;
 }
 
 /** The suggestion settings the backtest ran with, as configured and as used. */
@@ -99,7 +108,7 @@ export interface SuggestSettingsUsed {
   readonly minSimilarity: number;
   readonly relatedK: number;
   readonly perTarget: { readonly configured: number; readonly used: number };
-  readonly maxNewLinksPerPage: { readonly configured: number; readonly used: number };
+  readonly perSource: { readonly configured: number; readonly used: number };
   readonly targets: { readonly configured: 'underlinked' | 'all'; readonly used: 'all' };
 }
 

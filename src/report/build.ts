@@ -17,7 +17,7 @@
  * - `baseline` (only with `input.baseline`): findings matched against it (`baseline/match.ts`);
  *   the gate's severity failures and `gate.maxWarnings` count the new ones only.
  */
-import type { Finding, Report, ReportLink, ReportPage, ResolvedLink, Suggestion } from '../types.js';
+import type { Finding, LinkModelReport, Report, ReportLink, ReportPage, ResolvedLink, Suggestion } from '../types.js';
 import { matchFindings } from '../baseline/match.js';
 import { compareFindings } from '../rules/engine.js';
 import { compareText, navigationFile } from '../rules/structure.js';
@@ -72,6 +72,7 @@ export function buildReport(input: ReportInput): Report {
     options: { maxDepth: options.maxDepth },
     ...(matched === null ? {} : { baseline: { known: matched.known.length, new: matched.new, fixed: matched.fixed } }),
     ...(input.repair === undefined ? {} : { repair: { ...input.repair, suggestionIds: [...input.repair.suggestionIds] } }),
+    ...(input.model === undefined ? {} : { model: roundModel(input.model) }),
   };
 }
 
@@ -121,4 +122,17 @@ function compareSuggestions(a: Suggestion, b: Suggestion): number {
     compareText(a.target, b.target) ||
     compareText(a.id, b.id)
   );
+}
+
+/** The model with its numbers rounded to 6 decimals (the report's rule for floats). */
+function roundModel(m: LinkModelReport): LinkModelReport {
+  const r = (x: number): number => roundTo(x, 6);
+  return {
+    ...m,
+    intercept: r(m.intercept),
+    weights: m.weights.map(r),
+    means: m.means.map(r),
+    scales: m.scales.map(r),
+    auc: m.auc === null ? null : r(m.auc),
+  };
 }

@@ -1,6 +1,6 @@
 /** Types of the report stage: what `buildReport` takes and what formatters share. */
 import type { ResolvedOptions } from '../options.js';
-import type { Finding, Ranking, RepairPlan, Report, SiteGraph, Suggestion } from '../types.js';
+import type { Finding, LinkModelReport, Ranking, RepairPlan, Report, SiteGraph, Suggestion } from '../types.js';
 
 /** Importance of a page, as the suggest stage decides it. */
 export type Importance = 'high' | 'normal' | 'low';
@@ -30,6 +30,8 @@ export interface ReportInput {
   readonly baseline?: { readonly findings: readonly Finding[] };
   /** The depth-repair plan from `suggestLinks` (suggest only). */
   readonly repair?: RepairPlan;
+  /** The link model from `suggestLinks` (suggest only). */
+  readonly model?: LinkModelReport;
 }
 
 /** The counts the gate's limits read (from the report's stats, plus one the stats do not carry). */

@@ -32,7 +32,7 @@ import type { StemCache } from '../text/tokenize.js';
 import type { TargetName, TargetNames } from './names.js';
 
 /** Which of the target's names an anchor matched. */
-export type AnchorKind = 'title' | 'alias' | 'key-terms';
+export type AnchorKind = 'title' | 'alias' | 'key-terms' | 'name';
 
 /** An anchor phrase in a source file. */
 export interface AnchorMatch {

@@ -1,13 +1,32 @@
 /**
- * Candidate sources of each target (DESIGN section 7): pages related to it (in its related
- * list, or listing it in theirs) with similarity >= `suggest.minSimilarity`, that are not the
- * target, not excluded (`linkweave.exclude`) and have no content link to it yet (a template
- * link alone, such as a sidebar entry, does not count: a link in the text is what is proposed).
+ * Candidate sources of a target (DESIGN section 7), recall first: the union of
+ *
+ * - the pages whose prose mentions one of the target's names (`mentions.ts`; for a linked pair,
+ *   its own link text counts, so the training pairs see the site as if the link were absent),
+ *   at most {@link MENTION_LIMIT} (most mentions first);
+ * - its TF-IDF neighbours: the pages in its related list or listing it in theirs
+ *   (`suggest.relatedK` per page) with similarity >= `suggest.minSimilarity`;
+ * - its graph neighbourhood: pages sharing a content-link neighbour with it, best Adamic-Adar
+ *   first, at most {@link GRAPH_LIMIT}, through neighbours of degree at most {@link HUB_DEGREE}.
+ *
+ * Each comes from an index (the mention index, the related lists, the neighbour lists), never
+ * from a scan of all pairs. Excluded pages (`linkweave.exclude`) and the target itself are never
+ * sources. Whether a candidate already links to the target is the caller's question.
  */
 import type { Csr, RelatedList, SiteGraph } from '../types.js';
 import { EDGE_CONTENT } from '../graph/csr.js';
+import type { MentionIndex } from './mentions.js';
+import type { Neighbours } from './proximity.js';
+import { graphNeighbourhood } from './proximity.js';
 
-/** A (source, target) pair worth a suggestion. */
+/** Mention candidates kept per target. */
+export const MENTION_LIMIT = 100;
+/** Graph-neighbourhood candidates kept per target. */
+export const GRAPH_LIMIT = 30;
+/** Neighbours linked with more pages than this bring no candidates (they link with nearly everything). */
+export const HUB_DEGREE = 200;
+
+/** A (source, target) pair of the TF-IDF neighbour source. */
 export interface CandidatePair {
   readonly source: number;
   readonly target: number;
@@ -28,27 +47,28 @@ export function hasContentLink(forward: Csr, from: number, to: number): boolean 
   return false;
 }
 
+/** Pages listing each page in their related lists (similarity is symmetric, so the value is the same). */
+function listedBy(related: readonly RelatedList[], n: number): { page: number; similarity: number }[][] {
+  const out: { page: number; similarity: number }[][] = Array.from({ length: n }, () => []);
+  for (const list of related) {
+    for (const r of list.related) if (r.page >= 0 && r.page < n) out[r.page]!.push({ page: list.page, similarity: r.similarity });
+  }
+  return out;
+}
+
 /**
- * Candidate pairs for the given targets, sorted by target then source.
+ * The TF-IDF neighbour candidates of the given targets that do not link to them yet, sorted by
+ * target then source (the candidates of the TF-IDF-only ranking the backtest compares with).
  * @param targets page ids, ascending
  */
-export function findCandidates(
-  graph: SiteGraph,
-  related: readonly RelatedList[],
-  targets: readonly number[],
-  minSimilarity: number,
-): CandidatePair[] {
+export function findCandidates(graph: SiteGraph, related: readonly RelatedList[], targets: readonly number[], minSimilarity: number): CandidatePair[] {
   const n = graph.pages.length;
-  // Pages listing each page in their related lists (similarity is symmetric, so the value is the same).
-  const listedBy: { page: number; similarity: number }[][] = Array.from({ length: n }, () => []);
-  for (const list of related) {
-    for (const r of list.related) if (r.page >= 0 && r.page < n) listedBy[r.page]!.push({ page: list.page, similarity: r.similarity });
-  }
+  const by = listedBy(related, n);
   const out: CandidatePair[] = [];
   for (const target of targets) {
     const seen = new Map<number, number>();
     for (const r of related[target]?.related ?? []) seen.set(r.page, r.similarity);
-    for (const r of listedBy[target]!) if (!seen.has(r.page)) seen.set(r.page, r.similarity);
+    for (const r of by[target]!) if (!seen.has(r.page)) seen.set(r.page, r.similarity);
     const sources = [...seen.keys()].sort((a, b) => a - b);
     for (const source of sources) {
       const similarity = seen.get(source)!;
@@ -58,4 +78,47 @@ export function findCandidates(
     }
   }
   return out;
+}
+
+/** What the candidate pool is built from. */
+export interface PoolInput {
+  readonly graph: SiteGraph;
+  readonly related: readonly RelatedList[];
+  readonly mentions: MentionIndex;
+  readonly neighbours: Neighbours;
+  readonly minSimilarity: number;
+}
+
+/**
+ * A function giving a target's candidate sources (ascending page ids), linked ones included.
+ */
+export function candidatePool(input: PoolInput): (target: number) => number[] {
+  const { graph, related, mentions, neighbours, minSimilarity } = input;
+  const n = graph.pages.length;
+  const by = listedBy(related, n);
+  // Mention candidates per target, most mentions first.
+  const mentioned: { source: number; count: number }[][] = Array.from({ length: n }, () => []);
+  mentions.bySource.forEach((hits, s) => {
+    for (const [t, hit] of hits) mentioned[t]!.push({ source: s, count: hit.count });
+  });
+  const fromLinkText: number[][] = Array.from({ length: n }, () => []);
+  mentions.linkMatches.forEach((matches, s) => {
+    for (const m of matches) {
+      if (mentions.phrases[m.phrase]!.names.some((r) => r.target === m.target)) fromLinkText[m.target]!.push(s);
+    }
+  });
+  const hubDegree = Math.max(HUB_DEGREE, Math.ceil(Math.sqrt(n)));
+  return (t: number): number[] => {
+    const set = new Set<number>();
+    const m = mentioned[t]!;
+    m.sort((a, b) => b.count - a.count || a.source - b.source);
+    for (let k = 0; k < m.length && k < MENTION_LIMIT; k++) set.add(m[k]!.source);
+    for (const s of fromLinkText[t]!) set.add(s);
+    for (const r of related[t]?.related ?? []) if (r.similarity >= minSimilarity) set.add(r.page);
+    for (const r of by[t]!) if (r.similarity >= minSimilarity) set.add(r.page);
+    for (const s of graphNeighbourhood(neighbours, t, GRAPH_LIMIT, hubDegree)) set.add(s);
+    const out: number[] = [];
+    for (const s of set) if (s !== t && s >= 0 && s < n && !graph.pages[s]!.meta.exclude) out.push(s);
+    return out.sort((a, b) => a - b);
+  };
 }

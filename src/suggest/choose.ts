@@ -1,16 +1,30 @@
 /**
- * The choice part of the suggest stage, shared by `suggestLinks` and the backtest: for the given
- * targets, candidate sources -> anchors (each source tokenised once) -> scores -> greedy choice
- * under the per-source and per-target caps. Impact is not part of it.
+ * The choice part of the suggest stage, shared by `suggestLinks` and the backtest: the mention
+ * index and the candidate pool -> the link model fitted on the site's own links -> every
+ * candidate of the targets scored by the model -> anchors -> greedy choice under the
+ * per-source and per-target caps (presentation limits, applied after ranking). Impact is not
+ * part of it.
  */
 import type { ResolvedOptions } from '../options.js';
+import type { LinkModelReport } from '../types.js';
 import { createStemCache } from '../text/tokenize.js';
 import { termLeaders, topTerms } from '../text/tfidf.js';
 import { findAnchors, prepareSource } from './anchor.js';
+import type { AnchorMatch } from './anchor.js';
+import { candidatePool, hasContentLink } from './candidates.js';
+import { pairFeatures, withoutNames } from './features.js';
+import type { FeatureContext } from './features.js';
+import { predictLogistic } from './logistic.js';
+import type { LogisticModel } from './logistic.js';
+import { buildMentionIndex } from './mentions.js';
+import type { MentionIndex } from './mentions.js';
+import { fitLinkModel, trainingPairs } from './model.js';
 import { targetNames } from './names.js';
 import type { TargetNames } from './names.js';
-import { findCandidates } from './candidates.js';
-import { baseScore, NO_ANCHOR_SIMILARITY } from './score.js';
+import { contentNeighbours } from './proximity.js';
+import { contributions } from './logistic.js';
+import { adamicAdar, sharedFolders, twoStepPaths } from './proximity.js';
+import type { Evidence } from './reason.js';
 import { chooseSuggestions } from './select.js';
 import type { Chosen, ScoredPair } from './select.js';
 import { factsByPage } from './facts-of.js';
@@ -21,28 +35,89 @@ export const KEY_TERMS = 5;
 /** A key term is strong for a target among the pages it weighs most in (this many). */
 export const STRONG_LEADERS = 3;
 
+/** The choice and the model behind it. */
+export interface ChooseResult {
+  /** In the order they were chosen (best score first, caps applied). */
+  readonly chosen: Chosen[];
+  readonly model: LogisticModel;
+  readonly modelReport: LinkModelReport;
+  readonly mentions: MentionIndex;
+  /** A target's candidate sources (ascending; linked ones included). */
+  readonly candidatesOf: (target: number) => number[];
+  /** The evidence of a chosen pair, for its reason text. */
+  readonly evidenceOf: (chosen: Chosen) => Evidence;
+}
+
 /**
- * The suggestions chosen for `targets`, in the order they are chosen.
+ * The suggestions chosen for `targets`.
  * @param rankPct PageRank percentile per page id
  */
-export function chooseForTargets(
-  input: SuggestInput,
-  options: ResolvedOptions,
-  targets: readonly number[],
-  rankPct: ArrayLike<number>,
-): Chosen[] {
+export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, targets: readonly number[], rankPct: ArrayLike<number>): ChooseResult {
   const { graph, ranking, index, related } = input;
+  const n = graph.pages.length;
   const factsOf = factsByPage(input);
-  const { maxDepth } = options;
   const settings = options.suggest;
-  const pairs = findCandidates(graph, related, targets, settings.minSimilarity);
-
-  // Anchors: each source's spans tokenised once, for all its targets.
   const cache = input.stems ?? createStemCache();
-  const names = new Map<number, TargetNames>();
+
+  const mentions = buildMentionIndex(graph, factsOf, cache);
+  const neighbours = contentNeighbours(graph);
+  const isEntry = new Uint8Array(n);
+  for (const e of graph.entries) isEntry[e] = 1;
+  const ctx: FeatureContext = { graph, ranking, index, mentions, neighbours, rankPct, isEntry };
+  const pool = candidatePool({ graph, related, mentions, neighbours, minSimilarity: settings.minSimilarity });
+  const linked = (s: number, t: number): boolean => hasContentLink(graph.forward, s, t);
+
+  const eligible = graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id);
+  const fitted = fitLinkModel(trainingPairs(eligible, pool, linked), (s, t) => pairFeatures(ctx, s, t));
+  const model = fitted.model;
+
+  const scored: ScoredPair[] = [];
+  for (const t of targets) {
+    for (const s of pool(t)) {
+      if (linked(s, t)) continue;
+      const features = pairFeatures(ctx, s, t);
+      const hit = mentions.bySource[s]!.get(t);
+      scored.push({
+        source: s,
+        target: t,
+        similarity: features[0]!,
+        score: predictLogistic(model, features),
+        scoreWithoutAnchor: predictLogistic(model, withoutNames(features)),
+        anchors: hit === undefined ? [] : hit.anchors,
+        features,
+      });
+    }
+  }
+  fallbackAnchors(input, scored, cache);
+  const perSource = settings.perSource === 0 ? Number.POSITIVE_INFINITY : settings.perSource;
+  const evidenceOf = (c: Chosen): Evidence => {
+    const { source: s, target: t } = c.pair;
+    const shared = sharedFolders(graph.pages[s]!.route, graph.pages[t]!.route);
+    const segments = graph.pages[t]!.route.split('/').filter((x) => x !== '');
+    return {
+      features: c.pair.features,
+      contributions: contributions(model, [...c.pair.features]),
+      anchor: c.anchor,
+      commonNeighbours: adamicAdar(neighbours, s, t).common,
+      twoStep: twoStepPaths(graph, s, t),
+      folder: shared === 0 ? '' : `/${segments.slice(0, shared).join('/')}/`,
+    };
+  };
+  return { chosen: chooseSuggestions(scored, perSource, settings.perTarget), model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };
+}
+
+/**
+ * Pairs whose source mentions none of the target's names get the anchor search of `anchor.ts`
+ * (part of the title, or a run of the target's key terms) instead; each source is tokenised once.
+ */
+function fallbackAnchors(input: SuggestInput, scored: ScoredPair[], cache: ReturnType<typeof createStemCache>): void {
+  const { graph, index } = input;
+  const factsOf = factsByPage(input);
+  const need = scored.map((p, i) => i).filter((i) => scored[i]!.anchors.length === 0);
+  if (need.length === 0) return;
+  need.sort((a, b) => scored[a]!.source - scored[b]!.source || a - b);
   const leaders = termLeaders(index, STRONG_LEADERS);
   const df = (stem: string): number => {
-    // index.terms is sorted by code unit: binary search
     let lo = 0;
     let hi = index.terms.length - 1;
     while (lo <= hi) {
@@ -54,6 +129,7 @@ export function chooseForTargets(
     }
     return 0;
   };
+  const names = new Map<number, TargetNames>();
   const namesOf = (t: number): TargetNames => {
     let v = names.get(t);
     if (v === undefined) {
@@ -63,36 +139,20 @@ export function chooseForTargets(
         for (let k = 0; k < STRONG_LEADERS; k++) if (leaders[id * STRONG_LEADERS + k] === t) return true;
         return false;
       };
-      const keys = {
-        all: ids.map((id) => index.terms[id]!),
-        strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]!),
-      };
+      const keys = { all: ids.map((id) => index.terms[id]!), strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]!) };
       v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache, df);
       names.set(t, v);
     }
     return v;
   };
-  const bySource = [...pairs].sort((a, b) => a.source - b.source || a.target - b.target);
-  const scored: ScoredPair[] = [];
-  const minSimilarityWithoutAnchor = NO_ANCHOR_SIMILARITY * settings.minSimilarity;
-  for (let i = 0; i < bySource.length; ) {
-    const source = bySource[i]!.source;
+  for (let k = 0; k < need.length; ) {
+    const source = scored[need[k]!]!.source;
     const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source]!.title);
-    for (; i < bySource.length && bySource[i]!.source === source; i++) {
-      const pair = bySource[i]!;
-      const targetDepth = ranking.depth[pair.target]!;
-      const base = baseScore({
-        similarity: pair.similarity,
-        sourceRankPercentile: rankPct[source]!,
-        sourceDepth: ranking.depth[source]!,
-        targetNeedsDepth: targetDepth < 0 || targetDepth > maxDepth,
-        maxDepth,
-      });
-      const anchors = findAnchors(tokens, namesOf(pair.target));
-      if (anchors.length === 0 && pair.similarity < minSimilarityWithoutAnchor) continue;
-      scored.push({ ...pair, base, anchors });
+    for (; k < need.length && scored[need[k]!]!.source === source; k++) {
+      const i = need[k]!;
+      const pair = scored[i]!;
+      const anchors: AnchorMatch[] = findAnchors(tokens, namesOf(pair.target));
+      if (anchors.length > 0) scored[i] = { ...pair, anchors };
     }
   }
-
-  return chooseSuggestions(scored, settings.maxNewLinksPerPage, settings.perTarget, minSimilarityWithoutAnchor);
 }

@@ -1,6 +1,12 @@
-/** The `reason` text of a suggestion: why the target wants links and where the anchor came from. */
+/**
+ * The `reason` text of a suggestion, in plain words: why the target wants links, then the
+ * strongest evidence the link model weighed for this pair (its largest positive parts of the
+ * score), e.g. `orphan page (no inlinks); mentions "trait objects" twice (its title); 4 pages are
+ * linked with both; same folder`. No internal key name is ever shown.
+ */
 import type { UnderlinkedReason } from '../types.js';
-import type { AnchorKind } from './anchor.js';
+import type { AnchorMatch } from './anchor.js';
+import { F, NAME_FEATURES } from './features.js';
 
 /** Facts about the target that the reason mentions. */
 export interface ReasonFacts {
@@ -11,17 +17,34 @@ export interface ReasonFacts {
   readonly minInlinks: number;
   readonly rankPercentile: number;
   readonly importancePercentile: number;
-  readonly anchor: AnchorKind | null;
 }
 
-const ANCHOR_WORDS: Record<AnchorKind, string> = {
-  title: "anchor matches the target's title",
-  alias: "anchor matches the target's route",
-  'key-terms': "anchor matches the target's key terms",
-};
+/** The pair's evidence: its features, each feature's part of the score, and the anchor. */
+export interface Evidence {
+  readonly features: readonly number[];
+  readonly contributions: readonly number[];
+  readonly anchor: AnchorMatch | null;
+  /** Pages linked with both (content links either way). */
+  readonly commonNeighbours: number;
+  /** Pages the source links to that link to the target. */
+  readonly twoStep: number;
+  /** The folder the two routes share ('' for none). */
+  readonly folder: string;
+}
 
-/** e.g. `orphan page, 5 clicks deep (limit 3); anchor matches the target's title`. */
-export function reasonText(f: ReasonFacts): string {
+/** Evidence items shown at most. */
+export const EVIDENCE_SHOWN = 3;
+
+/** The whole reason: why the target, then the evidence for this source. */
+export function reasonText(f: ReasonFacts, e: Evidence): string {
+  const why = targetReasons(f);
+  const evidence = evidenceWords(e);
+  const anchor = e.anchor === null ? 'no anchor phrase in the text: the link needs a sentence written by hand' : null;
+  return [why, ...evidence, ...(anchor === null ? [] : [anchor])].join('; ');
+}
+
+/** Why the target wants links, e.g. `orphan page (no inlinks), 5 clicks deep (limit 3)`. */
+export function targetReasons(f: ReasonFacts): string {
   const parts = f.reasons.map((r) => {
     switch (r) {
       case 'orphan':
@@ -36,8 +59,46 @@ export function reasonText(f: ReasonFacts): string {
         return `PageRank percentile ${pct(f.rankPercentile)} far below importance percentile ${pct(f.importancePercentile)}`;
     }
   });
-  const why = parts.length > 0 ? parts.join(', ') : 'related page';
-  return `${why}; ${f.anchor === null ? 'no anchor phrase' : ANCHOR_WORDS[f.anchor]}`;
+  return parts.length > 0 ? parts.join(', ') : 'related page';
+}
+
+/** The strongest positive parts of the score, in words, largest first. */
+export function evidenceWords(e: Evidence): string[] {
+  const c = e.contributions;
+  const x = e.features;
+  const items: { weight: number; words: string }[] = [];
+  const names = NAME_FEATURES.reduce((a, j) => a + (x[j]! !== 0 ? c[j]! : 0), 0);
+  if (x[F.mentions]! > 0 && e.anchor !== null) {
+    const times = Math.round(Math.expm1(x[F.mentions]!));
+    const which =
+      x[F['anchor-text-mention']] === 1
+        ? 'the words other pages link it with'
+        : x[F['title-mention']] === 1
+          ? 'its title'
+          : x[F['label-mention']] === 1
+            ? 'its navigation label'
+            : 'its route name';
+    items.push({ weight: names, words: `mentions "${e.anchor.text}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
+  }
+  const add = (j: number, words: string): void => {
+    items.push({ weight: c[j]!, words });
+  };
+  add(F.similarity, `similar text (cosine ${x[F.similarity]!.toFixed(2)}, where 1 = the same words)`);
+  if (e.commonNeighbours > 0) add(F['adamic-adar'], `${count(e.commonNeighbours, 'page')} ${e.commonNeighbours === 1 ? 'is' : 'are'} linked with both`);
+  if (e.twoStep > 0) add(F['two-step-paths'], `links to ${count(e.twoStep, 'page')} that link to it`);
+  if (e.folder !== '') add(F['shared-folders'], `same folder ${e.folder}`);
+  add(F['target-inlinks'], `a page others link to often (${count(Math.round(Math.expm1(x[F['target-inlinks']]!)), 'page')})`);
+  add(F['source-rank'], `the source ranks high (PageRank percentile ${pct(x[F['source-rank']]!)})`);
+  add(F['source-outlinks'], `the source links out a lot (${count(Math.round(Math.expm1(x[F['source-outlinks']]!)), 'page')})`);
+  return items
+    .filter((i) => i.weight > 0.05)
+    .sort((a, b) => b.weight - a.weight)
+    .slice(0, EVIDENCE_SHOWN)
+    .map((i) => i.words);
+}
+
+function count(n: number, noun: string): string {
+  return `${n} ${noun}${n === 1 ? '' : 's'}`;
 }
 
 function pct(x: number): string {

@@ -1,18 +1,25 @@
 /**
- * Greedy choice of suggestions across all targets: best score first, at most
- * `suggest.maxNewLinksPerPage` new links per source and `suggest.perTarget` per target, and no
- * two targets anchored on overlapping text of the same source. When a pair's phrase is taken,
- * its next phrase is used; when none is left it falls back to no anchor (lower score) and
- * waits for its turn again, if its similarity allows a suggestion without an anchor.
+ * Greedy choice of suggestions across all targets: best score first, at most `suggest.perSource`
+ * new links per source and `suggest.perTarget` per target, and no two targets anchored on
+ * overlapping text of the same source. When a pair's phrase is taken, its next phrase is used;
+ * when none is left it falls back to no anchor, with the model's score of the pair as if the
+ * source did not mention the target, and waits for its turn again.
  */
 import type { AnchorMatch } from './anchor.js';
-import type { CandidatePair } from './candidates.js';
-import { withAnchor } from './score.js';
 
-/** A candidate pair with its score before the anchor factor and its anchor options (best first). */
-export interface ScoredPair extends CandidatePair {
-  readonly base: number;
+/** A candidate pair, its scores and its anchor options (best first). */
+export interface ScoredPair {
+  readonly source: number;
+  readonly target: number;
+  /** TF-IDF cosine similarity. */
+  readonly similarity: number;
+  /** The model's probability for the pair. */
+  readonly score: number;
+  /** The probability with the name evidence taken away (used when no anchor is left). */
+  readonly scoreWithoutAnchor: number;
   readonly anchors: readonly AnchorMatch[];
+  /** The pair's feature vector (`features.ts`), for the reason text. */
+  readonly features: readonly number[];
 }
 
 /** A chosen pair with its anchor (or none) and its final score. */
@@ -31,15 +38,9 @@ interface Entry {
 
 /**
  * Choose suggestions greedily.
- * @param minSimilarityWithoutAnchor a pair whose phrases are all taken stays only with this similarity
  * @returns chosen pairs in the order they were chosen
  */
-export function chooseSuggestions(
-  pairs: readonly ScoredPair[],
-  maxPerSource: number,
-  maxPerTarget: number,
-  minSimilarityWithoutAnchor = 0,
-): Chosen[] {
+export function chooseSuggestions(pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): Chosen[] {
   const before = (a: Entry, b: Entry): boolean => {
     if (a.score !== b.score) return a.score > b.score;
     const pa = pairs[a.pair]!;
@@ -47,7 +48,7 @@ export function chooseSuggestions(
     return pa.target !== pb.target ? pa.target < pb.target : pa.source < pb.source;
   };
   const heap = new Heap<Entry>(before);
-  pairs.forEach((p, i) => heap.push({ pair: i, score: withAnchor(p.base, p.anchors.length > 0), option: p.anchors.length > 0 ? 0 : -1 }));
+  pairs.forEach((p, i) => heap.push({ pair: i, score: p.anchors.length > 0 ? p.score : Math.min(p.score, p.scoreWithoutAnchor), option: p.anchors.length > 0 ? 0 : -1 }));
   const perSource = new Map<number, number>();
   const perTarget = new Map<number, number>();
   const used = new Map<number, [number, number][]>();
@@ -62,7 +63,7 @@ export function chooseSuggestions(
       let k = e.option;
       while (k < pair.anchors.length && !free(pair.anchors[k]!)) k++;
       if (k === pair.anchors.length) {
-        if (pair.similarity >= minSimilarityWithoutAnchor) heap.push({ pair: e.pair, score: withAnchor(pair.base, false), option: -1 });
+        heap.push({ pair: e.pair, score: Math.min(pair.score, pair.scoreWithoutAnchor), option: -1 });
         continue;
       }
       anchor = pair.anchors[k]!;

@@ -35,10 +35,12 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     settings.targets === 'all'
       ? graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id)
       : underlinked.map((u) => u.page);
-  const chosen = chooseForTargets(input, options, targets, rankPct);
+  const choice = chooseForTargets(input, options, targets, rankPct);
+  const chosen = choice.chosen;
   const model = rankModel(graph, ranking, options);
   const depths = depthState(graph, ranking, options);
-  const made = chosen.map(({ pair, anchor, score }): { suggestion: Suggestion; source: number; target: number } => {
+  const made = chosen.map((c): { suggestion: Suggestion; source: number; target: number } => {
+    const { pair, anchor, score } = c;
     const { source, target } = pair;
     const sourcePage = graph.pages[source]!;
     const targetPage = graph.pages[target]!;
@@ -61,16 +63,18 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
       targetRankAfter: null, // filled in below for the suggestions within the impact budget
       depthBefore: depthBefore < 0 ? null : depthBefore,
       depthAfter: depthAfter < 0 ? null : depthAfter,
-      reason: reasonText({
-        reasons: reasonsOf.get(target) ?? [],
-        depth: depthBefore,
-        maxDepth,
-        contentInlinks: ranking.contentInlinks[target]!,
-        minInlinks: settings.minInlinks,
-        rankPercentile: rankPct[target]!,
-        importancePercentile: importance.score[target]!,
-        anchor: anchor === null ? null : anchor.kind,
-      }),
+      reason: reasonText(
+        {
+          reasons: reasonsOf.get(target) ?? [],
+          depth: depthBefore,
+          maxDepth,
+          contentInlinks: ranking.contentInlinks[target]!,
+          minInlinks: settings.minInlinks,
+          rankPercentile: rankPct[target]!,
+          importancePercentile: importance.score[target]!,
+        },
+        choice.evidenceOf(c),
+      ),
       sourceHash: factsOf(source)?.hash ?? '',
     };
     return { suggestion, source, target };
@@ -90,7 +94,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
   predict.forEach((m, j) => {
     m.suggestion = { ...m.suggestion, targetRankAfter: after[j]! * n };
   });
-  return { suggestions: made.map((m) => m.suggestion), underlinked, plan, importance: importance.level };
+  return { suggestions: made.map((m) => m.suggestion), underlinked, plan, importance: importance.level, model: choice.modelReport };
 }
 
 /** Output order: file, line, column, then target route (code-unit order). */

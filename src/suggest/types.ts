@@ -1,6 +1,6 @@
 /** Types of the suggest stage (contracts.md). */
 import type { StemCache } from '../text/tokenize.js';
-import type { PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
+import type { LinkModelReport, PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
 
 /** What `suggestLinks` works from. Arrays are indexed by page id (the graph's order). */
 export interface SuggestInput {
@@ -43,4 +43,6 @@ export interface SuggestResult {
   readonly plan: RepairPlan;
   /** Importance level per page id. */
   readonly importance: ImportanceLevel[];
+  /** The link model the suggestions were scored with. */
+  readonly model: LinkModelReport;
 }

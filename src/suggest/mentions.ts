@@ -1,0 +1,269 @@
+/**
+ * The site's names for its pages, and where the prose mentions them (the candidate source and
+ * the name evidence of the link model, after Milne and Witten, "Learning to link with
+ * Wikipedia", CIKM 2008, and Gerlach et al., CIKM 2021: a dictionary of names built from the
+ * site's own links, matched on the longest n-grams of the text).
+ *
+ * A page's names: its title, its aliases (the words of the last segment of its route and of its
+ * frontmatter aliases), the labels its template links carry (a sidebar's words for it), and the
+ * anchor texts of the content links other pages already point at it with. Names are compared
+ * on Porter stems (the text stage's tokenizer), so "Caching tiles" matches "cached tile".
+ *
+ * Each distinct name (a phrase) counts its occurrences over the site: in prose, and as the whole
+ * text of a content link (to which page). From those come a phrase's link probability (the
+ * share of its occurrences that are links) and its commonness for a page (the share of its links
+ * that point there). A phrase that names more than {@link MAX_PAGES_PER_NAME} pages is too
+ * ambiguous to be a name and is left out.
+ *
+ * Built in one pass over every page's prose through a trie of the phrases, so the cost is the
+ * number of words times the length of the longest match, never pages times names.
+ */
+import type { PageFacts, SiteGraph } from '../types.js';
+import { tokenize } from '../text/tokenize.js';
+import type { StemCache } from '../text/tokenize.js';
+import { positionInSpan, prepareSource } from './anchor.js';
+import type { AnchorMatch, SourceTokens } from './anchor.js';
+import { routeWords } from './names.js';
+
+/** Where a name comes from. */
+export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text';
+
+/** A phrase that names more pages than this is left out of the dictionary. */
+export const MAX_PAGES_PER_NAME = 8;
+/** Longest name, in kept words. */
+export const MAX_NAME_WORDS = 8;
+/** Mentions kept per (source, target) pair as anchor options, earliest first. */
+export const MENTIONS_KEPT = 3;
+
+/** One page's claim on a phrase. */
+export interface NameRef {
+  readonly target: number;
+  readonly kind: NameKind;
+  /** For anchor texts: source page -> number of its content links to the target with this text. */
+  readonly users: Map<number, number> | null;
+}
+
+/** A distinct name, with its counts over the site. */
+export interface Phrase {
+  readonly stems: readonly string[];
+  readonly names: NameRef[];
+  /** Occurrences in prose. */
+  prose: number;
+  /** Content links whose whole text is this phrase. */
+  linked: number;
+  /** Of those, per target page. */
+  readonly linkedTo: Map<number, number>;
+}
+
+/** Where a source mentions one target. */
+export interface MentionHit {
+  /** Mentions of any of the target's names (sub-phrases of a longer match count too). */
+  count: number;
+  /** Distinct phrases matched. */
+  readonly phrases: number[];
+  /** Its earliest mentions (at most {@link MENTIONS_KEPT}, not overlapping), as anchor options. */
+  readonly anchors: AnchorMatch[];
+  /** The phrase of each anchor option. */
+  readonly anchorPhrases: number[];
+}
+
+/** The dictionary and the mentions found. */
+export interface MentionIndex {
+  readonly phrases: readonly Phrase[];
+  /** Per source page id: target -> the source's mentions of it. */
+  readonly bySource: readonly Map<number, MentionHit>[];
+  /** Per source page id: the phrases found in the texts of its content links to pages. */
+  readonly linkMatches: readonly (readonly LinkTextMatch[])[];
+}
+
+/** A phrase found in the text of a content link. */
+export interface LinkTextMatch {
+  /** The page the link points to. */
+  readonly target: number;
+  readonly phrase: number;
+  /** The phrase is the link's whole text. */
+  readonly exact: boolean;
+}
+
+interface TrieNode {
+  phrase: number;
+  readonly next: Map<string, TrieNode>;
+}
+
+/**
+ * Build the name dictionary and find every mention in the prose of every page.
+ * @param factsOf facts by page id (spans give the prose)
+ */
+export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => PageFacts | undefined, cache: StemCache): MentionIndex {
+  const n = graph.pages.length;
+  const phrases: Phrase[] = [];
+  const byKey = new Map<string, number>();
+  const phraseOf = (stems: readonly string[]): number => {
+    const key = stems.join(' ');
+    let id = byKey.get(key);
+    if (id === undefined) {
+      id = phrases.length;
+      phrases.push({ stems, names: [], prose: 0, linked: 0, linkedTo: new Map() });
+      byKey.set(key, id);
+    }
+    return id;
+  };
+  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1): void => {
+    if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
+    const phrase = phrases[phraseOf(stems)]!;
+    let ref = phrase.names.find((r) => r.target === target && r.kind === kind);
+    if (ref === undefined) {
+      ref = { target, kind, users: kind === 'anchor-text' ? new Map() : null };
+      phrase.names.push(ref);
+    }
+    if (ref.users !== null && source >= 0) ref.users.set(source, (ref.users.get(source) ?? 0) + 1);
+  };
+
+  for (const page of graph.pages) {
+    claim(tokenize(page.title, cache), page.id, 'title');
+    for (const route of [page.route, ...page.meta.aliases]) claim(routeWords(route, cache), page.id, 'alias');
+  }
+  const contentLinks: { from: number; to: number; stems: string[] }[] = [];
+  for (const link of graph.links) {
+    if (link.from < 0 || link.to < 0 || link.from === link.to) continue;
+    const stems = tokenize(link.raw.text, cache);
+    if (link.context === 'content') {
+      claim(stems, link.to, 'anchor-text', link.from);
+      contentLinks.push({ from: link.from, to: link.to, stems });
+    } else {
+      claim(stems, link.to, 'label');
+    }
+  }
+  // The trie of unambiguous phrases.
+  const root: TrieNode = { phrase: -1, next: new Map() };
+  phrases.forEach((p, id) => {
+    const targets = new Set(p.names.map((r) => r.target));
+    if (targets.size === 0 || targets.size > MAX_PAGES_PER_NAME) return;
+    let node = root;
+    for (const stem of p.stems) {
+      let child = node.next.get(stem);
+      if (child === undefined) {
+        child = { phrase: -1, next: new Map() };
+        node.next.set(stem, child);
+      }
+      node = child;
+    }
+    node.phrase = id;
+  });
+
+  // Link texts: a whole-text match is a linked occurrence; a match inside a longer text is an
+  // occurrence that is not a link (of that phrase).
+  const linkMatches: LinkTextMatch[][] = Array.from({ length: n }, () => []);
+  for (const link of contentLinks) {
+    const exact = link.stems.length > 0 && link.stems.length <= MAX_NAME_WORDS ? byKey.get(link.stems.join(' ')) : undefined;
+    if (exact !== undefined) {
+      const p = phrases[exact]!;
+      p.linked++;
+      p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
+    }
+    const joins = link.stems.map(() => true);
+    scanStems(link.stems, joins, root, (phraseId, _first, words) => {
+      const whole = words === link.stems.length;
+      if (!whole) phrases[phraseId]!.prose++;
+      linkMatches[link.from]!.push({ target: link.to, phrase: phraseId, exact: whole });
+    });
+  }
+
+  const bySource: Map<number, MentionHit>[] = [];
+  for (let s = 0; s < n; s++) {
+    const facts = factsOf(s);
+    const hits = new Map<number, MentionHit>();
+    bySource.push(hits);
+    if (facts === undefined || facts.spans.length === 0) continue;
+    const tokens = prepareSource(facts.spans, cache);
+    scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
+      const phrase = phrases[phraseId]!;
+      phrase.prose++;
+      for (const ref of phrase.names) {
+        if (ref.target === s) continue;
+        let hit = hits.get(ref.target);
+        if (hit === undefined) {
+          hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [] };
+          hits.set(ref.target, hit);
+        }
+        hit.count++;
+        if (!hit.phrases.includes(phraseId)) hit.phrases.push(phraseId);
+        keepAnchor(hit, tokens, phraseId, first, words);
+      }
+    });
+  }
+  return { phrases, bySource, linkMatches };
+}
+
+/**
+ * The phrases of a run of stems, left to right, each the longest that starts at its word; a
+ * word inside a match starts no other (so "file system" is one mention, not also "file").
+ */
+function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: TrieNode, visit: (phrase: number, first: number, words: number) => void): void {
+  for (let i = 0; i < stem.length; ) {
+    let node = root.next.get(stem[i]!);
+    let words = 1;
+    let best = -1;
+    let bestWords = 0;
+    while (node !== undefined) {
+      if (node.phrase >= 0) {
+        best = node.phrase;
+        bestWords = words;
+      }
+      if (words >= MAX_NAME_WORDS || !joinNext[i + words - 1]) break;
+      node = node.next.get(stem[i + words]!);
+      words++;
+    }
+    if (best >= 0) {
+      visit(best, i, bestWords);
+      i += bestWords;
+    } else i++;
+  }
+}
+
+/** Keep the mention as an anchor option if it is among the earliest that do not overlap; a longer match at the same start wins. */
+function keepAnchor(hit: MentionHit, tokens: SourceTokens, phrase: number, first: number, words: number): void {
+  const last = first + words - 1;
+  const span = tokens.spans[tokens.span[first]!]!;
+  const start = tokens.start[first]!;
+  const end = tokens.end[last]!;
+  const offset = span.offset + start;
+  const endOffset = span.offset + end;
+  for (let k = 0; k < hit.anchors.length; k++) {
+    const a = hit.anchors[k]!;
+    if (offset < a.endOffset && a.offset < endOffset) {
+      // Same place: keep the longer phrase.
+      if (a.offset === offset && endOffset > a.endOffset) {
+        hit.anchors[k] = match(span, start, end, offset, endOffset, words);
+        hit.anchorPhrases[k] = phrase;
+      }
+      return;
+    }
+  }
+  if (hit.anchors.length >= MENTIONS_KEPT) return;
+  hit.anchors.push(match(span, start, end, offset, endOffset, words));
+  hit.anchorPhrases.push(phrase);
+}
+
+function match(span: SourceTokens['spans'][number], start: number, end: number, offset: number, endOffset: number, words: number): AnchorMatch {
+  const { line, column } = positionInSpan(span, start);
+  return { offset, endOffset, line, column, text: span.text.slice(start, end), kind: 'name', words, quality: words };
+}
+
+/**
+ * Whether a name of `target` in `phrase` stands for the pair (source, target) as if the pair's
+ * own links were absent: anchor texts count only when another page uses them.
+ */
+export function nameKindsFor(phrase: Phrase, source: number, target: number): NameKind[] {
+  const kinds: NameKind[] = [];
+  for (const ref of phrase.names) {
+    if (ref.target !== target) continue;
+    if (ref.users !== null) {
+      let others = 0;
+      for (const [user, count] of ref.users) if (user !== source) others += count;
+      if (others === 0) continue;
+    }
+    kinds.push(ref.kind);
+  }
+  return kinds;
+}
