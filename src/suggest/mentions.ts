@@ -32,8 +32,8 @@ export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text';
 export const MAX_PAGES_PER_NAME = 8;
 /** Longest name, in kept words. */
 export const MAX_NAME_WORDS = 8;
-/** Mentions kept per (source, target) pair as anchor options, earliest first. */
-export const MENTIONS_KEPT = 3;
+/** Distinct phrases kept per (source, target) pair as anchor options (each at its first mention). */
+export const MENTIONS_KEPT = 6;
 
 /** One page's claim on a phrase. */
 export interface NameRef {
@@ -61,7 +61,10 @@ export interface MentionHit {
   count: number;
   /** Distinct phrases matched. */
   readonly phrases: number[];
-  /** Its earliest mentions (at most {@link MENTIONS_KEPT}, not overlapping), as anchor options. */
+  /**
+   * Anchor options: the first mention of each distinct phrase (at most {@link MENTIONS_KEPT},
+   * not overlapping), best first once `rankAnchors` has run.
+   */
   readonly anchors: AnchorMatch[];
   /** The phrase of each anchor option. */
   readonly anchorPhrases: number[];
@@ -192,7 +195,36 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     });
   }
+  for (const hits of bySource) for (const [t, hit] of hits) rankAnchors(hit, phrases, t);
   return { phrases, bySource, linkMatches };
+}
+
+const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias'];
+
+/**
+ * Order a pair's anchor options the way an author would pick: the phrase most often written as
+ * a link to this target where it occurs (links to the target / occurrences), then the kind of
+ * name (another page's anchor text, the title, a navigation label, the route's words), then the
+ * longer phrase, then the earlier place.
+ */
+function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number): void {
+  const order = hit.anchors.map((_, k) => k);
+  const odds = (k: number): number => {
+    const p = phrases[hit.anchorPhrases[k]!]!;
+    const total = p.prose + p.linked;
+    return total === 0 ? 0 : (p.linkedTo.get(target) ?? 0) / total;
+  };
+  const kind = (k: number): number => {
+    const p = phrases[hit.anchorPhrases[k]!]!;
+    let best = KIND_ORDER.length;
+    for (const r of p.names) if (r.target === target) best = Math.min(best, KIND_ORDER.indexOf(r.kind));
+    return best;
+  };
+  order.sort((a, b) => odds(b) - odds(a) || kind(a) - kind(b) || hit.anchors[b]!.words - hit.anchors[a]!.words || hit.anchors[a]!.offset - hit.anchors[b]!.offset);
+  const anchors = order.map((k) => hit.anchors[k]!);
+  const ids = order.map((k) => hit.anchorPhrases[k]!);
+  hit.anchors.splice(0, anchors.length, ...anchors);
+  hit.anchorPhrases.splice(0, ids.length, ...ids);
 }
 
 /**
@@ -229,6 +261,7 @@ function keepAnchor(hit: MentionHit, tokens: SourceTokens, phrase: number, first
   const end = tokens.end[last]!;
   const offset = span.offset + start;
   const endOffset = span.offset + end;
+  if (hit.anchorPhrases.includes(phrase)) return;
   for (let k = 0; k < hit.anchors.length; k++) {
     const a = hit.anchors[k]!;
     if (offset < a.endOffset && a.offset < endOffset) {
