@@ -27,7 +27,7 @@ describe('chooseLikeSuggest', () => {
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
     const input = { graph, facts: ordered, ranking, ...textStage(ordered, options), traffic: null };
 
-    const ours = chooseLikeSuggest(input, options).map((c) => ({
+    const ours = chooseLikeSuggest(input, options).chosen.map((c) => ({
       source: graph.pages[c.pair.source]!.route,
       target: graph.pages[c.pair.target]!.route,
       anchor: c.anchor?.text ?? null,

@@ -82,10 +82,10 @@ describe('backtest outputs', () => {
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('seeds 3..4 (2 runs)');
     expect(r.stdout).toMatch(/minSimilarity\s+0\.1/);
-    expect(r.stdout).toContain('similarity x (0.5 + 0.5 x source PageRank percentile) x reach x anchor');
-    const rows = r.stdout.split('\n').filter((l) => /^ {2}(method|linkweave|TF-IDF only|random related|random page) /.test(l));
-    expect(rows.map((l) => l.trim().split(/\s{2,}/)[0])).toEqual(['method', 'linkweave', 'TF-IDF only', 'random related', 'random page']);
-    expect(rows[0]!.trim().split(/\s+/)).toEqual(['method', 'R@1', 'R@5', 'R@10', 'P@1', 'P@5', 'P@10', 'MRR', 'anchor']);
+    expect(r.stdout).toContain("the link model's probability, refitted on each run's remaining links");
+    const rows = r.stdout.split('\n').filter((l) => /^ {2}(method|linkweave|TF-IDF only|title phrase|random related|random page) /.test(l));
+    expect(rows.map((l) => l.trim().split(/\s{2,}/)[0])).toEqual(['method', 'linkweave', 'TF-IDF only', 'title phrase', 'random related', 'random page']);
+    expect(rows[0]!.trim().split(/\s+/)).toEqual(['method', 'R@1', 'R@5', 'R@10', 'P@1', 'P@5', 'P@10', 'MRR', 'anchor', 'line']);
   });
 
   it('writes byte-identical JSON for the same seed, to a file named by --output', async () => {
@@ -100,7 +100,7 @@ describe('backtest outputs', () => {
     expect(doc.schema).toBe('linkweave/backtest@1');
     expect(doc.site.pages).toBe(6);
     expect(doc.runs[0].heldOutPairs).toBeGreaterThan(0);
-    expect(doc.summary.map((s: { method: string }) => s.method)).toEqual(['linkweave', 'tfidf', 'random', 'random-page']);
+    expect(doc.summary.map((s: { method: string }) => s.method)).toEqual(['linkweave', 'tfidf', 'title-phrase', 'random', 'random-page']);
   });
 
   it('says so when nothing can be held out', async () => {

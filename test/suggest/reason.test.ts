@@ -1,22 +1,33 @@
 import { describe, it, expect } from 'vitest';
-import { reasonText } from '../../src/suggest/reason.js';
+import { evidenceWords, reasonText } from '../../src/suggest/reason.js';
+import { FEATURES } from '../../src/suggest/features.js';
+import type { AnchorMatch } from '../../src/suggest/anchor.js';
 import { suggestionId } from '../../src/suggest/id.js';
 
 describe('reasonText', () => {
-  const base = { depth: 5, maxDepth: 3, contentInlinks: 1, minInlinks: 2, rankPercentile: 0.12, importancePercentile: 0.95, anchor: 'title' as const };
+  const base = { depth: 5, maxDepth: 3, contentInlinks: 1, minInlinks: 2, rankPercentile: 0.12, importancePercentile: 0.95 };
+  const x = (values: Partial<Record<string, number>>): number[] => FEATURES.map((f) => values[f] ?? 0);
+  const anchorAt: AnchorMatch = { offset: 10, endOffset: 24, line: 3, column: 5, text: 'trait objects', kind: 'name', words: 2, quality: 2 };
 
-  it('names every reason of the target and where the anchor came from', () => {
-    expect(reasonText({ ...base, reasons: ['orphan', 'unreachable'] })).toBe(
-      "orphan page (no inlinks), unreachable from the entry pages; anchor matches the target's title",
+  it('names every reason of the target, then its strongest evidence in words, largest part first', () => {
+    const features = x({ 'title-mention': 1, mentions: Math.log1p(2), similarity: 0.34, 'adamic-adar': 1, 'shared-folders': 1 });
+    const contributions = x({ 'title-mention': 1.2, mentions: 0.4, similarity: 0.3, 'adamic-adar': 0.9, 'shared-folders': 0.1 });
+    const text = reasonText(
+      { ...base, reasons: ['orphan', 'unreachable'] },
+      { features, contributions, anchor: anchorAt, commonNeighbours: 4, twoStep: 0, folder: '/guide/' },
     );
-    expect(reasonText({ ...base, reasons: ['too-deep', 'few-inlinks', 'rank-below-importance'], anchor: 'alias' })).toBe(
-      '5 clicks deep (limit 3), important page with 1 content inlink (minimum 2), PageRank percentile 12 far below importance percentile 95; ' +
-        "anchor matches the target's route",
-    );
+    expect(text).toBe('orphan page (no inlinks), unreachable from the entry pages; mentions "trait objects" twice (its title); 4 pages are linked with both; similar text (cosine 0.34, where 1 = the same words)');
+    expect(text).not.toMatch(/adamic|title-mention|shared-folders/);
   });
 
-  it('says "no anchor phrase" and "related page" for a target that is not under-linked', () => {
-    expect(reasonText({ ...base, reasons: [], anchor: null })).toBe('related page; no anchor phrase');
+  it('says the link needs a sentence written by hand when there is no anchor phrase', () => {
+    const text = reasonText({ ...base, reasons: [] }, { features: x({ similarity: 0.5 }), contributions: x({ similarity: 1 }), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
+    expect(text).toBe('related page; similar text (cosine 0.50, where 1 = the same words); no anchor phrase in the text: the link needs a sentence written by hand');
+  });
+
+  it('leaves out evidence that lowered the score', () => {
+    const words = evidenceWords({ features: x({ 'target-inlinks': Math.log1p(40) }), contributions: x({ 'target-inlinks': -0.5 }), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
+    expect(words).toEqual([]);
   });
 });
 

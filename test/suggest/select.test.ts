@@ -2,7 +2,6 @@ import { describe, it, expect } from 'vitest';
 import { chooseSuggestions } from '../../src/suggest/select.js';
 import type { ScoredPair } from '../../src/suggest/select.js';
 import type { AnchorMatch } from '../../src/suggest/anchor.js';
-import { NO_ANCHOR } from '../../src/suggest/score.js';
 
 const anchor = (offset: number, endOffset: number): AnchorMatch => ({
   offset,
@@ -18,8 +17,11 @@ const pair = (source: number, target: number, base: number, anchors: AnchorMatch
   source,
   target,
   similarity: base,
-  base,
+  score: base,
+  // As if the source did not mention the target: the model's score without the name evidence.
+  scoreWithoutAnchor: base / 4,
   anchors,
+  features: [],
 });
 
 describe('chooseSuggestions', () => {
@@ -45,7 +47,7 @@ describe('chooseSuggestions', () => {
     expect(chosen.map((c) => [c.pair.target, c.anchor?.offset ?? null, c.score])).toEqual([
       [10, 0, 0.9],
       [11, 40, 0.8],
-      [12, null, 0.7 * NO_ANCHOR],
+      [12, null, 0.7 / 4],
     ]);
   });
 
