@@ -37,6 +37,8 @@ export interface SuggestConfig {
   perTarget?: number | undefined;
   /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
   perSource?: number | undefined;
+  /** Least score (0..1, the link model's probability that an author would write the link) a suggestion needs. @default 0.1 */
+  minScore?: number | undefined;
   /** Least cosine similarity (0..1) for a TF-IDF neighbour to be a candidate source. @default 0.1 */
   minSimilarity?: number | undefined;
   /** TF-IDF neighbours per page: related pages kept, and candidate sources of each target. @default 10 */
@@ -123,7 +125,7 @@ export interface Config {
   important?: string[] | undefined;
   /** A CSV of `route,views` (relative to the root) used as importance. @default null */
   traffic?: string | null | undefined;
-  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
+  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minScore: 0.1, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
   suggest?: SuggestConfig | undefined;
   /** Gate limits. @default every limit null (none) */
   gate?: GateConfig | undefined;

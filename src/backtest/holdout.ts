@@ -25,7 +25,7 @@
 import type { PageFacts, RawLink, ResolvedLink, SiteGraph } from '../types.js';
 import { shuffle, streamFor } from './prng.js';
 import type { HeldOutLink, HeldOutPair } from './types.js';
-import { lineStarts, linkTextRange, withoutWords, withSpans } from './unlink.js';
+import { lineStarts, linkTextRange, positionOf, withoutWords, withSpans } from './unlink.js';
 
 /** A (source, target) pair of pages with its content links. */
 export interface ContentPair {
@@ -113,10 +113,12 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
   }
   const facts = [...input.facts];
   const located = new Map<RawLink, { start: number; end: number } | null>();
+  const startsOf = new Map<number, number[]>();
   for (const [f, set] of removed) {
     const page = input.facts[f]!;
     const source = input.sourceText(page.file);
     const starts = source === undefined ? [] : lineStarts(source);
+    startsOf.set(f, starts);
     const ranges: { start: number; end: number }[] = [];
     for (const raw of set) {
       const range = source === undefined ? null : linkTextRange(source, starts, raw, page.kind);
@@ -136,7 +138,9 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
     target: p.target,
     links: p.links.map((l): HeldOutLink => {
       const range = located.get(l.raw) ?? null;
+      const starts = startsOf.get(graph.pages[p.source]!.factsIndex) ?? [];
       return {
+        textLine: range === null || starts.length === 0 ? l.raw.line : positionOf(starts, range.start).line,
         line: l.raw.line,
         column: l.raw.column,
         text: l.raw.text,

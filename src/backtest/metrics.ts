@@ -19,7 +19,9 @@
  *                    overlap the place of one of the pair's held-out link texts (only when the
  *                    link texts are kept as prose; otherwise that place cannot be proposed)
  * - line match     = among recovered pairs, the share whose anchor is on the line of one of the
- *                    pair's held-out links (a pair without an anchor does not match)
+ *                    pair's held-out links, or on the line where that link's text starts (an HTML
+ *                    link's text may follow its tag on the next line); a pair without an anchor
+ *                    does not match
  */
 import { tokenize } from '../text/index.js';
 import type { StemCache } from '../text/index.js';
@@ -92,7 +94,7 @@ export function scoreMethod(
       if (first < 0) first = r;
       recovered++;
       if (!withAnchors || item.anchor === null) return;
-      if (item.line >= 0 && pair.links.some((l) => l.line === item.line)) onLine++;
+      if (item.line >= 0 && pair.links.some((l) => l.textLine === item.line || l.line === item.line)) onLine++;
       const stems = new Set(tokenize(item.anchor, cache));
       if (pair.links.some((l) => tokenize(l.text, cache).some((s) => stems.has(s)))) overlap++;
       if (item.offset >= 0 && pair.links.some((l) => l.offset >= 0 && item.offset < l.endOffset && l.offset < item.endOffset)) inPlace++;

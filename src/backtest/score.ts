@@ -48,13 +48,13 @@ export interface RunBase {
 /**
  * The suggestion options of a backtest: every page a target (`suggest.targets: 'all'`), ten
  * suggestions per target (the longest list scored) and no per-source cap (`perSource: 0`), so a
- * source that suits many targets is not hidden from some of them by the cap. Everything else as
- * configured.
+ * source that suits many targets is not hidden from some of them by the cap, and no least score
+ * (`minScore: 0`: the lists are ranked to their tenth place). Everything else as configured.
  */
 export function backtestOptions(options: ResolvedOptions, _pages: number): ResolvedOptions {
   return {
     ...options,
-    suggest: { ...options.suggest, targets: 'all', perTarget: LIST_LENGTH, perSource: 0 },
+    suggest: { ...options.suggest, targets: 'all', perTarget: LIST_LENGTH, perSource: 0, minScore: 0 },
   };
 }
 

@@ -25,6 +25,11 @@ export interface HeldOutLink {
   /** UTF-16 offsets of the link text in the source file, or -1 when it could not be located. */
   readonly offset: number;
   readonly endOffset: number;
+  /**
+   * 1-based line where the link's text starts (an HTML link's text may stand on the line after
+   * its `<a` tag); `line` when the text could not be located.
+   */
+  readonly textLine: number;
 }
 
 /** A held-out (source, target) pair: every content link of the pair was removed. */

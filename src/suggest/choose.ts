@@ -90,6 +90,7 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
   }
   fallbackAnchors(input, scored, cache);
   const perSource = settings.perSource === 0 ? Number.POSITIVE_INFINITY : settings.perSource;
+  const chosen = chooseSuggestions(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore);
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
     const shared = sharedFolders(graph.pages[s]!.route, graph.pages[t]!.route);
@@ -97,13 +98,14 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
     return {
       features: c.pair.features,
       contributions: contributions(model, [...c.pair.features]),
+      above: c.pair.features.map((v, j) => v > model.means[j]!),
       anchor: c.anchor,
       commonNeighbours: adamicAdar(neighbours, s, t).common,
       twoStep: twoStepPaths(graph, s, t),
       folder: shared === 0 ? '' : `/${segments.slice(0, shared).join('/')}/`,
     };
   };
-  return { chosen: chooseSuggestions(scored, perSource, settings.perTarget), model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };
+  return { chosen, model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };
 }
 
 /**

@@ -23,6 +23,8 @@ export interface ReasonFacts {
 export interface Evidence {
   readonly features: readonly number[];
   readonly contributions: readonly number[];
+  /** Per feature: the pair's value is above the training pairs' mean (the words say "high", "often"). */
+  readonly above: readonly boolean[];
   readonly anchor: AnchorMatch | null;
   /** Pages linked with both (content links either way). */
   readonly commonNeighbours: number;
@@ -80,8 +82,9 @@ export function evidenceWords(e: Evidence): string[] {
             : 'its route name';
     items.push({ weight: names, words: `mentions "${e.anchor.text}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
   }
+  // Only what raised the score because the pair has more of it than the usual pair.
   const add = (j: number, words: string): void => {
-    items.push({ weight: c[j]!, words });
+    if (e.above[j] === true) items.push({ weight: c[j]!, words });
   };
   add(F.similarity, `similar text (cosine ${x[F.similarity]!.toFixed(2)}, where 1 = the same words)`);
   if (e.commonNeighbours > 0) add(F['adamic-adar'], `${count(e.commonNeighbours, 'page')} ${e.commonNeighbours === 1 ? 'is' : 'are'} linked with both`);

@@ -13,13 +13,14 @@ import { createStemCache } from '../../src/text/index.js';
 const pair = (source: number, target: number, text = 'x', offset = -1): HeldOutPair => ({
   source,
   target,
-  links: [{ line: 1, column: 1, text, offset, endOffset: offset < 0 ? -1 : offset + text.length }],
+  links: [{ line: 1, textLine: 1, column: 1, text, offset, endOffset: offset < 0 ? -1 : offset + text.length }],
 });
-const item = (source: number, anchor: string | null = null, offset = -1): RankedSource => ({
+const item = (source: number, anchor: string | null = null, offset = -1, line = -1): RankedSource => ({
   source,
   anchor,
   offset,
   endOffset: anchor === null || offset < 0 ? -1 : offset + anchor.length,
+  line,
 });
 
 describe('scoreMethod', () => {
@@ -60,6 +61,17 @@ describe('scoreMethod', () => {
     expect(m.anchorOverlap).toBeCloseTo(2 / 3, 12);
     // in place: [50, 66) vs [10, 30) no; pair 2's text has no place; [52, 62) vs [40, 62) yes
     expect(m.anchorInPlace).toBeCloseTo(1 / 3, 12);
+  });
+
+  it('computes line match over recovered pairs: an anchor on a held-out link line matches, none does not', () => {
+    // Held-out links are all on line 1. Target 400: sources 1 (anchor on line 1), 2 (line 3),
+    // 3 (no anchor) recovered; source 9 is not held out and does not count.
+    const truth400 = heldOutByTarget([pair(1, 400), pair(2, 400), pair(3, 400)]);
+    const lists400 = new Map([[400, [item(9, 'a', 0, 1), item(1, 'b', 5, 1), item(2, 'c', 9, 3), item(3)]]]);
+    const m = scoreMethod('linkweave', lists400, truth400, { overlap: true, inPlace: false }, createStemCache());
+    expect(m.recovered).toBe(3);
+    expect(m.lineMatch).toBeCloseTo(1 / 3, 12);
+    expect(scoreMethod('tfidf', lists400, truth400, { overlap: false, inPlace: false }, createStemCache()).lineMatch).toBeNull();
   });
 
   it('gives null anchor metrics to a method without anchors, and ignores list entries past ten', () => {

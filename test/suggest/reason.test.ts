@@ -14,20 +14,23 @@ describe('reasonText', () => {
     const contributions = x({ 'title-mention': 1.2, mentions: 0.4, similarity: 0.3, 'adamic-adar': 0.9, 'shared-folders': 0.1 });
     const text = reasonText(
       { ...base, reasons: ['orphan', 'unreachable'] },
-      { features, contributions, anchor: anchorAt, commonNeighbours: 4, twoStep: 0, folder: '/guide/' },
+      { features, contributions, above: FEATURES.map(() => true), anchor: anchorAt, commonNeighbours: 4, twoStep: 0, folder: '/guide/' },
     );
     expect(text).toBe('orphan page (no inlinks), unreachable from the entry pages; mentions "trait objects" twice (its title); 4 pages are linked with both; similar text (cosine 0.34, where 1 = the same words)');
     expect(text).not.toMatch(/adamic|title-mention|shared-folders/);
   });
 
   it('says the link needs a sentence written by hand when there is no anchor phrase', () => {
-    const text = reasonText({ ...base, reasons: [] }, { features: x({ similarity: 0.5 }), contributions: x({ similarity: 1 }), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
+    const text = reasonText({ ...base, reasons: [] }, { features: x({ similarity: 0.5 }), contributions: x({ similarity: 1 }), above: FEATURES.map(() => true), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
     expect(text).toBe('related page; similar text (cosine 0.50, where 1 = the same words); no anchor phrase in the text: the link needs a sentence written by hand');
   });
 
-  it('leaves out evidence that lowered the score', () => {
-    const words = evidenceWords({ features: x({ 'target-inlinks': Math.log1p(40) }), contributions: x({ 'target-inlinks': -0.5 }), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
+  it('leaves out evidence that lowered the score, and a part that rose only because the pair has less of it than usual', () => {
+    const words = evidenceWords({ features: x({ 'target-inlinks': Math.log1p(40) }), contributions: x({ 'target-inlinks': -0.5 }), above: FEATURES.map(() => true), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
     expect(words).toEqual([]);
+    // A negative weight times a value below the mean is a positive part: not "the source ranks high".
+    const low = evidenceWords({ features: x({ 'source-rank': 0.1 }), contributions: x({ 'source-rank': 0.4 }), above: FEATURES.map(() => false), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
+    expect(low).toEqual([]);
   });
 });
 
