@@ -18,20 +18,24 @@ const docsConfig = JSON.parse(fs.readFileSync(path.join(docsSite, 'linkweave.con
 const temp = fs.mkdtempSync(path.join(os.tmpdir(), 'linkweave-examples-'));
 afterAll(() => fs.rmSync(temp, { recursive: true, force: true }));
 
-function run(args: string[], cwd = repo) {
+/** Run from a temp working folder, so the examples' cache (`node_modules/.cache/linkweave` of the working folder) is a fresh one. */
+const work = fs.mkdtempSync(path.join(os.tmpdir(), 'linkweave-examples-cwd-'));
+afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
+
+function run(args: string[], cwd = work) {
   const result = spawnSync(process.execPath, args, { cwd, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1', FORCE_COLOR: '0' } });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
 
 describe('examples/api', () => {
   it('the command: linkweave check on the example site fails its gate with exit code 1', () => {
-    const { status, stdout } = run(['dist/cli/bin.js', 'check', 'examples/docs-site']);
+    const { status, stdout } = run([path.join(repo, 'dist/cli/bin.js'), 'check', docsSite]);
     expect(status).toBe(1);
     expect(stdout).toMatch(/Gate failed \(fail on error\)/);
   });
 
   it('report.mjs: analyze() and formatReport() through the package name print the report summary', async () => {
-    const { status, stdout, stderr } = run(['examples/api/report.mjs']);
+    const { status, stdout, stderr } = run([path.join(repo, 'examples/api/report.mjs')]);
     expect(stderr).toBe('');
     const report = await analyze({ ...docsConfig, root: docsSite, command: 'suggest', cache: { enabled: false } });
     const { stats } = report;
@@ -47,7 +51,7 @@ describe('examples/api', () => {
   });
 
   it('unified.mjs: a remark pipeline prints the Markdown findings through vfile-reporter', async () => {
-    const { status, stdout, stderr } = run(['examples/api/unified.mjs']);
+    const { status, stdout, stderr } = run([path.join(repo, 'examples/api/unified.mjs')]);
     expect(stderr).toBe('');
     expect(status).toBe(0);
     const report = await analyze({ ...docsConfig, root: docsSite, cache: { enabled: false } });
