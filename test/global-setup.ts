@@ -5,32 +5,21 @@
  *   `dist/parallel/worker.js` while the test files run `src/`, so both must be the same code;
  * - unpack the registry package's Chromium binary once (`test/browser/launch.ts`), so that test
  *   files started side by side never race to unpack it;
- * - check after the run that no test wrote the repository's own cache folder
- *   (`node_modules/.cache/linkweave`): tests use temporary cache folders, so a stale cache
- *   there can never answer them.
+ * - record the listing of the repository's own cache folder (`node_modules/.cache/linkweave`):
+ *   `test/setup.ts` fails a test file that changed it, so tests use temporary cache folders and
+ *   a stale cache there can never answer them.
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import registryChromium from '@sparticuz/chromium';
+import type { TestProject } from 'vitest/node';
+import { repoCacheListing } from './repo-cache.js';
 
 const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-const repoCache = path.join(repo, 'node_modules', '.cache', 'linkweave');
 
-/** Every file under `dir` with its size and modification time (empty when absent). */
-function listing(dir: string): string[] {
-  if (!fs.existsSync(dir)) return [];
-  const out: string[] = [];
-  for (const entry of fs.readdirSync(dir, { recursive: true, withFileTypes: true })) {
-    const file = path.join(entry.parentPath, entry.name);
-    const stat = fs.statSync(file);
-    out.push(`${path.relative(dir, file)} ${stat.size} ${stat.mtimeMs}`);
-  }
-  return out.sort();
-}
-
-export default async function setup(): Promise<() => void> {
+export default async function setup(project: TestProject): Promise<void> {
   fs.rmSync(path.join(repo, 'dist'), { recursive: true, force: true });
   const tsc = path.join(repo, 'node_modules', 'typescript', 'bin', 'tsc');
   const result = spawnSync(process.execPath, [tsc, '-p', 'tsconfig.build.json'], { cwd: repo, encoding: 'utf8' });
@@ -41,11 +30,5 @@ export default async function setup(): Promise<() => void> {
     throw new Error('test/global-setup: the build produced no dist/parallel/worker.js');
   }
   await registryChromium.executablePath();
-  const before = listing(repoCache);
-  return () => {
-    const after = listing(repoCache);
-    if (after.join('\n') !== before.join('\n')) {
-      throw new Error(`test/global-setup: a test wrote the repository's cache folder ${repoCache}; give it a temporary cache folder`);
-    }
-  };
+  project.provide('repoCacheListing', repoCacheListing());
 }
