@@ -1,6 +1,7 @@
 /** The parse stage with the cache in front: lookups, then the misses parsed, then the cache saved. */
 import type { ResolvedOptions } from '../options.js';
 import type { PageFacts, SourceFile } from '../types.js';
+import { codeVersion } from './code.js';
 import { parseFingerprint } from './fingerprint.js';
 import { isCacheable } from './format.js';
 import { openCache } from './store.js';
@@ -8,7 +9,8 @@ import type { CacheSettings, CacheStats } from './types.js';
 
 /**
  * Facts of every file, in the order of `files`: taken from the cache when an entry has the same
- * path, content hash, tool version and parse fingerprint (`parseFingerprint`), parsed otherwise
+ * path, content hash, tool version and code (`codeVersion`) and parse fingerprint
+ * (`parseFingerprint`), parsed otherwise
  * (through `settings.parseMisses`), and stored back. The result equals parsing every file.
  * Cache problems never fail the run: a damaged or foreign cache file is ignored (and rewritten),
  * a folder that cannot be written gives `stats.warning`.
@@ -29,7 +31,7 @@ export async function parseWithCache(
     return { facts, stats };
   }
 
-  const session = openCache(settings.dir, { version: settings.version, fingerprint: parseFingerprint(options) });
+  const session = openCache(settings.dir, { version: codeVersion(settings.version), fingerprint: parseFingerprint(options) });
   const facts: PageFacts[] = new Array(total);
   const missIndex: number[] = [];
   let rejected = 0;

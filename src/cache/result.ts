@@ -1,7 +1,8 @@
 /**
  * The whole-report cache: when nothing that a report depends on has changed since the last run
  * (every source's path and content hash, the assets, the navigation, redirects and traffic
- * files, the resolved options, the command, the baseline and the tool version), the last report
+ * files, the resolved options, the command, the baseline, the tool version and the code itself,
+ * see `codeHash`), the last report
  * is returned as it was, without parsing, ranking or suggesting again. It lives beside the
  * page-facts shards, one file per command, written atomically; a file that does not parse, or
  * whose key differs, is ignored (and replaced by the next run), never trusted.
@@ -10,6 +11,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import { join } from 'node:path';
 import type { Report } from '../types.js';
+import { codeVersion } from './code.js';
 
 const RESULT_SCHEMA = 'linkweave/report-cache@2';
 
@@ -22,10 +24,10 @@ export interface ResultInputs {
   readonly rest: unknown;
 }
 
-/** A sha256 over the inputs of a report. */
+/** A sha256 over the inputs of a report and the code that computes it (`codeHash`). */
 export function resultKey(inputs: ResultInputs): string {
   const hash = createHash('sha256');
-  hash.update(`${inputs.version}\n${inputs.command}\n${JSON.stringify(inputs.options)}\n`);
+  hash.update(`${codeVersion(inputs.version)}\n${inputs.command}\n${JSON.stringify(inputs.options)}\n`);
   for (const s of inputs.sources) hash.update(`${s.path}\0${s.hash}\0${JSON.stringify(s.problems)}\n`);
   hash.update(JSON.stringify(inputs.rest));
   return hash.digest('hex');

@@ -5,7 +5,9 @@
  * and filter, and nothing is requested from outside the file.
  */
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
-import { resolve } from 'node:path';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { analyze } from '../../src/analyze.js';
 import { loadConfig } from '../../src/cli/config.js';
 import type { Report } from '../../src/types.js';
@@ -16,15 +18,17 @@ const ROOT = resolve('examples/docs-site');
 
 let browser: ReportBrowser;
 let report: Report;
+const cacheDir = mkdtempSync(join(tmpdir(), 'lw-example-cache-'));
 
 beforeAll(async () => {
   const loaded = await loadConfig({ explicit: null, root: ROOT, cwd: process.cwd() });
-  report = await analyze({ ...(loaded.config as object), root: ROOT, command: 'suggest', configOrigin: loaded.origin });
+  report = await analyze({ ...(loaded.config as object), root: ROOT, command: 'suggest', configOrigin: loaded.origin, cache: { dir: cacheDir } });
   browser = await launchReportBrowser();
 });
 
 afterAll(async () => {
   await browser?.close();
+  rmSync(cacheDir, { recursive: true, force: true });
 });
 
 /** Pages a link reaches (a broken fragment still reaches its page); navigation links apart. */

@@ -1,6 +1,6 @@
 /**
- * Opening an HTML report in a real browser for the tests: Debian's chromium driven by
- * playwright-core (no browser download). The report is written to a temp folder and opened
+ * Opening an HTML report in a real browser for the tests: chromium (Debian's, or the registry
+ * package's binary, see `launch.ts`) driven by playwright-core (no browser download). The report is written to a temp folder and opened
  * from file://; every request, page error, console error and dialog is recorded.
  */
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
@@ -11,10 +11,9 @@ import { chromium } from 'playwright-core';
 import type { Page } from 'playwright-core';
 import { htmlFormatter } from '../../src/report/formatters/html.js';
 import type { Report } from '../../src/types.js';
+import { browserLaunch } from './launch.js';
+import type { BrowserSource } from './launch.js';
 
-/** Debian's chromium, started the way this machine allows (no background network). */
-export const CHROMIUM = '/usr/bin/chromium';
-export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
 
 /** An opened report. */
 export interface OpenedReport {
@@ -28,15 +27,21 @@ export interface OpenedReport {
 
 /** A browser that opens reports. */
 export interface ReportBrowser {
+  /** Where the running browser came from, and its executable. */
+  readonly source: BrowserSource;
+  readonly executablePath: string;
   open(report: Report, name: string, viewport?: { width: number; height: number }): Promise<OpenedReport>;
   close(): Promise<void>;
 }
 
 /** Start chromium and a temp folder for the report files. */
 export async function launchReportBrowser(): Promise<ReportBrowser> {
-  const browser = await chromium.launch({ executablePath: CHROMIUM, args: CHROMIUM_ARGS });
+  const launch = await browserLaunch();
+  const browser = await chromium.launch({ executablePath: launch.executablePath, args: [...launch.args] });
   const dir = await mkdtemp(join(tmpdir(), 'lw-html-'));
   return {
+    source: launch.source,
+    executablePath: launch.executablePath,
     async open(report, name, viewport = { width: 1280, height: 900 }) {
       const file = join(dir, `${name}.html`);
       await writeFile(file, htmlFormatter.format(report, { color: false }));

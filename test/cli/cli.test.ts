@@ -94,8 +94,8 @@ describe('linkweave (built command)', () => {
     const { cwd } = project(BROKEN);
     const r = cli(['check', 'docs'], cwd);
     expect(r.code).toBe(1);
-    expect(r.stdout).toContain('4:5');
-    expect(r.stdout).toContain('guide.md');
+    // The place as one clickable token: the file from the working folder, then line and column.
+    expect(r.stdout).toMatch(/(^|\s)docs\/guide\.md:4:5(\s|$)/m);
     expect(r.stdout).not.toMatch(/\x1b\[/); // NO_COLOR and no terminal: no colour codes
   });
 

@@ -2,6 +2,7 @@ import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { build } from 'rolldown';
 import { afterEach, describe, expect, it } from 'vitest';
 import { collectSources } from '../../src/collect/index.js';
 import { EngineError } from '../../src/errors.js';
@@ -24,6 +25,19 @@ function site(tree: Tree): string {
 
 async function collect(root: string, config: Config = {}, extra?: string[]) {
   return collectSources(resolveOptions(config, root), extra);
+}
+
+/** collect-main.ts bundled into one file and run as the user nobody (uid 65534) on `root`. */
+async function collectAsNobody(root: string): Promise<{ files: { path: string }[]; warnings: unknown[] }> {
+  const out = tempDir('linkweave-nobody-');
+  cleanups.push(out.cleanup);
+  const bundle = path.join(out.dir, 'collect.mjs');
+  await build({ input: path.join(import.meta.dirname, 'collect-main.ts'), platform: 'node', output: { file: bundle, format: 'esm' }, logLevel: 'silent' });
+  for (const dir of [out.dir, root]) fs.chmodSync(dir, 0o755);
+  const r = spawnSync(process.execPath, [bundle, root], { uid: 65534, gid: 65534, encoding: 'utf8' });
+  expect(r.stderr).toBe('');
+  const parsed = JSON.parse(r.stdout) as { files: string[]; warnings: unknown[] };
+  return { files: parsed.files.map((p) => ({ path: p })), warnings: parsed.warnings };
 }
 
 const sha256 = (s: string | Uint8Array) => createHash('sha256').update(s).digest('hex');
@@ -235,11 +249,12 @@ describe('collectSources', () => {
     expect(result.warnings).toEqual([]);
   });
 
-  // The superuser reads every file whatever its mode; read.test.ts covers the same path with a folder.
-  it.skipIf(process.getuid?.() === 0)('a file that cannot be read gives a warning and the run goes on', async () => {
+  // The superuser reads every file whatever its mode, and CI runs as root: the collector is then
+  // bundled into one file (rolldown) and run as the user "nobody", for whom the mode counts.
+  it('a file that cannot be read gives a warning and the run goes on', async () => {
     const root = site({ 'locked.md': 'x', 'open.md': 'y' });
     fs.chmodSync(path.join(root, 'locked.md'), 0o000);
-    const result = await collect(root);
+    const result = process.getuid?.() === 0 ? await collectAsNobody(root) : await collect(root);
     expect(result.files.map((f) => f.path)).toEqual(['open.md']);
     expect(result.warnings).toMatchObject([{ file: 'locked.md', code: 'unreadable' }]);
   });

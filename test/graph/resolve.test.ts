@@ -38,6 +38,15 @@ const RFC_NORMAL: [string, string, string][] = [
   ['../g', '/b/g', ''],
   ['../..', '/', ''],
   ['../../g', '/g', ''],
+  // The rest of section 5.4.1 (from memory, re-derived by hand from section 5.2's algorithm).
+  ['g?y#s', '/b/c/g', 's'], // RFC: http://a/b/c/g?y#s (query dropped)
+  [';x', '/b/c/;x', ''],
+  ['g;x', '/b/c/g;x', ''],
+  ['g;x?y#s', '/b/c/g;x', 's'], // RFC: http://a/b/c/g;x?y#s (query dropped)
+  ['', '/b/c/d;p', ''], // RFC: http://a/b/c/d;p?q, the base itself
+  ['./', '/b/c/', ''],
+  ['../', '/b/', ''],
+  ['../../', '/', ''],
 ];
 const RFC_ABNORMAL: [string, string, string][] = [
   ['../../../g', '/g', ''],
@@ -47,12 +56,27 @@ const RFC_ABNORMAL: [string, string, string][] = [
   ['./../g', '/b/g', ''],
   ['g/./h', '/b/c/g/h', ''],
   ['g/../h', '/b/c/h', ''],
+  // The rest of section 5.4.2 (from memory, re-derived by hand from section 5.2's algorithm).
+  ['../../../../g', '/g', ''],
+  ['.g', '/b/c/.g', ''],
+  ['g..', '/b/c/g..', ''],
+  ['..g', '/b/c/..g', ''],
+  ['./g/.', '/b/c/g/', ''],
+  ['g;x=1/./y', '/b/c/g;x=1/y', ''],
+  ['g;x=1/../y', '/b/c/y', ''],
+  ['g?y/./x', '/b/c/g', ''], // RFC: http://a/b/c/g?y/./x (dot segments in a query stay; query dropped)
+  ['g?y/../x', '/b/c/g', ''], // RFC: http://a/b/c/g?y/../x
+  ['g#s/./x', '/b/c/g', 's/./x'], // RFC: http://a/b/c/g#s/./x (dot segments in a fragment stay)
+  ['g#s/../x', '/b/c/g', 's/../x'],
 ];
-const RFC_TARGET_ROUTES = ['/b/c/g', '/b/c/g/', '/g', '/b/c/', '/b/', '/', '/b/g', '/b/c/g.', '/b/c/g/h', '/b/c/h'];
+const RFC_TARGET_ROUTES = [
+  '/b/c/g', '/b/c/g/', '/g', '/b/c/', '/b/', '/', '/b/g', '/b/c/g.', '/b/c/g/h', '/b/c/h',
+  '/b/c/;x', '/b/c/g;x', '/b/c/.g', '/b/c/g..', '/b/c/..g', '/b/c/g;x=1/y', '/b/c/y',
+];
 
 function rfcSite(withTargets: boolean): PageFacts[] {
   const base = page('b/c/d.md', RFC_BASE_ROUTE, { ids: ['s'], links: [...RFC_NORMAL, ...RFC_ABNORMAL].map(([ref], i) => link(ref, i + 1)) });
-  const targets = withTargets ? RFC_TARGET_ROUTES.map((r, i) => page(`t${i}.md`, r, { ids: ['s'] })) : [];
+  const targets = withTargets ? RFC_TARGET_ROUTES.map((r, i) => page(`t${i}.md`, r, { ids: ['s', 's/./x', 's/../x'] })) : [];
   return [base, ...targets];
 }
 
@@ -80,6 +104,14 @@ describe('RFC 3986 section 5.4 examples on the route resolver', () => {
     expect(l.kind).toBe('external');
     expect(l.status).toBe('external');
     expect(l.target).toBe('https://g/');
+  });
+
+  it('RFC 3986 5.4.1 "g:h" -> g:h and 5.4.2 "http:g" -> http:g (strict parsers): another scheme, never a page', () => {
+    const other = resolveOne('g:h', [page('b/c/d.md', RFC_BASE_ROUTE)]);
+    expect(other).toMatchObject({ kind: 'other', status: 'other', target: 'g:h', to: -1 });
+    // The site's origin is https, so http: is another scheme too (WHATWG URL gives http://g/).
+    const http = resolveOne('http:g', [page('b/c/d.md', RFC_BASE_ROUTE)]);
+    expect(http).toMatchObject({ kind: 'external', status: 'external', to: -1 });
   });
 });
 

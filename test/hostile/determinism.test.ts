@@ -1,9 +1,10 @@
 /**
  * Issue 7, "determinism": the same input gives byte-identical reports (JSON, Markdown, SARIF,
  * and the HTML and text writers too) across runs, across the order the file system lists
- * files in, and across the order the collector hands them on. The site is the example site
- * (navigation, redirects, link patterns, traffic, suggestions) plus files that make order
- * matter: two files with one route, a bad file, a symlink out of the root.
+ * files in (every listing reordered, see listing-order.ts), and across the order the collector
+ * hands them on. The site is the example site (navigation, redirects, link patterns, traffic,
+ * suggestions) plus files that make order matter: two files with one route, a bad file, a
+ * symlink out of the root.
  */
 import fs from 'node:fs';
 import path from 'node:path';
@@ -16,6 +17,7 @@ import { resolveOptions } from '../../src/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { Report } from '../../src/types.js';
 import { allFormats, cleanupAll, run, scratch } from './helpers.js';
+import { reversed, shuffled, withListingOrder } from './listing-order.js';
 
 const repo = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 const example = path.join(repo, 'examples', 'docs-site');
@@ -76,11 +78,22 @@ describe('byte-identical reports', () => {
     expect(outputs(await run(root, { ...config, command: 'suggest' }))).toEqual(reference);
   });
 
-  it('across file-system listing orders: the same files created in reverse order at the same path', async () => {
-    fs.rmSync(root, { recursive: true, force: true });
-    writeSite(root, siteFiles().reverse());
-    expect(outputs(await run(root, { ...config, command: 'suggest' }))).toEqual(reference);
-  });
+  for (const [name, reorder] of [['reversed', reversed], ['shuffled (seed 7)', shuffled(7)], ['shuffled (seed 8)', shuffled(8)]] as const) {
+    it(`across file-system listing orders: every directory listed ${name}`, async () => {
+      const { value, listings } = await withListingOrder(reorder, () => run(root, { ...config, command: 'suggest' }));
+      // The listing really came in another order: the content root and its guides/ folder were
+      // listed, and in each the names handed on differ in order from what the disk returned.
+      const under = (dir: string) => listings.find((l) => path.resolve(l.dir) === path.resolve(root, dir));
+      for (const dir of ['.', 'guides']) {
+        const l = under(dir);
+        expect(l, dir).toBeDefined();
+        expect(l!.disk.length).toBeGreaterThan(3);
+        expect([...l!.given].sort()).toEqual([...l!.disk].sort());
+        expect(l!.given).not.toEqual(l!.disk);
+      }
+      expect(outputs(value)).toEqual(reference);
+    });
+  }
 
   it('across the collector\'s order: the stages fed shuffled files, facts, assets and warnings (fast-check)', async () => {
     const options = resolveOptions({ ...config, workers: 1, cache: { enabled: false } }, root);

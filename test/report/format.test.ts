@@ -12,9 +12,19 @@ describe('formatReport', () => {
       const formatter = formatters[id]!;
       expect(formatter.id).toBe(id);
       expect(formatter.fileExtension).toMatch(/^\.[a-z]+$/);
-      expect(formatReport(report, id)).toBe(formatter.format(report, { color: false }));
     }
-    expect(FORMAT_IDS).toEqual(expect.arrayContaining(['text', 'json', 'markdown', 'sarif']));
+    expect([...FORMAT_IDS].sort()).toEqual(['html', 'json', 'markdown', 'sarif', 'text']);
+    // Each id gives its own kind of document, recognised without the formatters' code.
+    const out = Object.fromEntries(FORMAT_IDS.map((id) => [id, formatReport(report, id)])) as Record<FormatId, string>;
+    expect(JSON.parse(out.json)).toEqual(JSON.parse(JSON.stringify(report)));
+    const sarif = JSON.parse(out.sarif) as { version: string; runs: { results: { ruleId: string }[] }[] };
+    expect(sarif.version).toBe('2.1.0');
+    expect(sarif.runs[0]!.results.map((r) => r.ruleId)).toEqual(expect.arrayContaining(report.findings.map((f) => f.rule)));
+    expect(out.html.startsWith('<!doctype html>')).toBe(true);
+    expect(out.markdown).toMatch(/^#+ /);
+    expect(out.markdown).toContain('| `index.md:9:3` |');
+    expect(out.text).toMatch(/^index\.md:9:3 +error +broken-link$/m);
+    expect(out.text).not.toMatch(/^[{<#]/);
   });
 
   it('an unknown id is a usage error listing the known ones', () => {

@@ -36,14 +36,14 @@ describe('markdown formatter', () => {
   });
 
   it('a passing run says so first', () => {
-    const clean = fixtureReport({ spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }], pagerank: [0.5, 0.5] }, suggestions: [] });
+    const clean = fixtureReport({ spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] }, suggestions: [] });
     expect(formatReport(clean, 'markdown')).toBe(
       [
         '### linkweave: gate passed',
         '',
         'Nothing at or above `error` and no limit crossed.',
         '',
-        '2 pages · 2 links · 0 broken links · 0 broken fragments · 0 orphans · 0 unreachable · 0 dead ends · deepest page 1 click (limit 3) · PageRank 12 iterations.',
+        '2 pages · 2 links · 0 broken links · 0 broken fragments · 0 orphans · 0 unreachable · 0 dead ends · deepest page 1 click (limit 3) · PageRank 1 iteration.',
         '',
         '#### Findings: none',
         '',

@@ -44,14 +44,14 @@ describe('text formatter', () => {
 
   it('a clean site: no problems, gate passed', () => {
     const clean = fixtureReport({
-      spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }], pagerank: [0.5, 0.5] },
+      spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] },
       suggestions: [],
     });
     expect(formatReport(clean, 'text')).toBe(
       [
         'No problems found',
         '2 pages, 2 links, 0 broken links, 0 broken fragments, 0 orphans, 0 unreachable,',
-        '0 dead ends, deepest page 1 click (limit 3), PageRank 12 iterations',
+        '0 dead ends, deepest page 1 click (limit 3), PageRank 1 iteration',
         'Gate passed (fail on error)',
         '',
       ].join('\n'),

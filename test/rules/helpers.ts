@@ -1,25 +1,14 @@
 /**
  * Small hand-built sites for the rule and report tests: a compact description in, the
- * `SiteGraph`, `PageFacts[]` and `Ranking` the pipeline would hand the rules out.
- *
- * Links are resolved here by route only (the tests state targets as routes), edges and counts
- * follow DESIGN section 5, and click depth is a plain BFS; PageRank is uniform unless given.
+ * `SiteGraph`, `PageFacts[]` and `Ranking` out, made by the real stages (`buildGraph`,
+ * `rankGraph`) from facts as the parse stage gives them.
  */
+import { posix } from 'node:path';
 import { resolveOptions } from '../../src/options.js';
 import type { Config, ResolvedOptions } from '../../src/options.js';
-import type {
-  Csr,
-  LinkContext,
-  LinkKind,
-  LinkStatus,
-  PageFacts,
-  PageMeta,
-  PageNode,
-  Ranking,
-  ResolvedLink,
-  SiteGraph,
-  SourceProblem,
-} from '../../src/types.js';
+import { buildGraph } from '../../src/graph/index.js';
+import { rankGraph } from '../../src/rank/index.js';
+import type { LinkContext, PageFacts, PageMeta, RawLink, SourceProblem } from '../../src/types.js';
 import type { RuleContext, SourceWarning } from '../../src/rules/index.js';
 
 /**
@@ -55,12 +44,11 @@ export interface SiteSpec {
   readonly pages: readonly PageSpec[];
   /** Links of a navigation file (`_nav.md`), added as template edges from every page. */
   readonly navigation?: readonly (string | LinkSpec)[];
-  readonly duplicates?: SiteGraph['duplicates'];
+  /** Asset files of the site, paths from the root (`img/logo.png`). */
+  readonly assets?: readonly string[];
   readonly options?: Config;
   readonly warnings?: readonly SourceWarning[];
-  /** PageRank per page in route order; default uniform. */
-  readonly pagerank?: readonly number[];
-  /** Extra facts that are not pages (drafts, files that failed to parse). */
+  /** Extra facts (drafts, files that failed to parse, a second file of one route). */
   readonly extraFacts?: readonly PageFacts[];
 }
 
@@ -101,151 +89,47 @@ function linkOf(spec: string | LinkSpec): LinkSpec {
   return typeof spec === 'string' ? { to: spec } : spec;
 }
 
-function csr(n: number, edges: Map<string, { from: number; to: number; weight: number; flags: number }>, reverse: boolean): Csr {
-  const rows: { to: number; weight: number; flags: number }[][] = Array.from({ length: n }, () => []);
-  for (const e of edges.values()) {
-    const [a, b] = reverse ? [e.to, e.from] : [e.from, e.to];
-    rows[a]!.push({ to: b, weight: e.weight, flags: e.flags });
-  }
-  const offsets = new Int32Array(n + 1);
-  const all = rows.flatMap((r, i) => {
-    offsets[i + 1] = offsets[i]! + r.length;
-    return r.sort((x, y) => x.to - y.to);
-  });
+/** The link as the parse stage would hand it over: the href as written in file `file`. */
+function rawLink(spec: LinkSpec, file: string, context: LinkContext, origin: RawLink['origin']): RawLink {
   return {
-    offsets,
-    targets: Int32Array.from(all.map((e) => e.to)),
-    weights: Float32Array.from(all.map((e) => e.weight)),
-    flags: Uint8Array.from(all.map((e) => e.flags)),
+    href: hrefOf(spec, file),
+    text: spec.text ?? 'link',
+    line: spec.line ?? 1,
+    column: spec.column ?? 1,
+    context: spec.context ?? context,
+    nofollow: spec.nofollow ?? false,
+    origin,
   };
 }
 
-/** Build the rule context of a test site. */
+/** `href` when given; otherwise a route or URL as is, and a file path from the root made relative to `file`. */
+function hrefOf(spec: LinkSpec, file: string): string {
+  if (spec.href !== undefined) return spec.href;
+  if (spec.to.startsWith('/') || /^[a-z][a-z0-9+.-]*:/i.test(spec.to)) return spec.to;
+  return posix.relative(posix.dirname(`/${file}`), `/${spec.to}`);
+}
+
+/**
+ * Build the rule context of a test site through the real graph and rank stages: the facts as
+ * `parse` would give them (files in path order, as collect sorts them; links as written), then
+ * `buildGraph` (link resolution, template links, the navigation file) and `rankGraph`.
+ */
 export function buildSite(spec: SiteSpec): RuleContext {
   const options: ResolvedOptions = resolveOptions(
-    { ...(spec.navigation === undefined ? {} : { navigation: '_nav.md' }), ...spec.options },
+    { ...(spec.navigation === undefined ? {} : { navigation: NAVIGATION_FILE }), ...spec.options },
     '/site',
   );
-  const sorted = [...spec.pages].sort((a, b) => (a.route < b.route ? -1 : a.route > b.route ? 1 : 0));
-  // Facts in file order (as collect sorts), pages in route order: factsIndex maps between them.
-  const factsSpecs = [...spec.pages].sort((a, b) => {
-    const fa = a.file ?? fileOf(a.route);
-    const fb = b.file ?? fileOf(b.route);
-    return fa < fb ? -1 : fa > fb ? 1 : 0;
-  });
-  const facts = [...factsSpecs.map((s) => factsOf(s)), ...(spec.extraFacts ?? [])];
-  const pages: PageNode[] = sorted.map((s, id) => ({
-    id,
-    factsIndex: factsSpecs.indexOf(s),
-    route: s.route,
-    file: s.file ?? fileOf(s.route),
-    title: s.title ?? s.route,
-    meta: meta(s),
-  }));
-  const routeIndex = new Map(pages.map((p) => [p.route, p.id]));
-  const n = pages.length;
-  const links: ResolvedLink[] = [];
-  const edges = new Map<string, { from: number; to: number; weight: number; flags: number }>();
-  const addEdge = (from: number, to: number, context: LinkContext): void => {
-    if (from === to) return;
-    const key = `${from}>${to}`;
-    const e = edges.get(key) ?? { from, to, weight: 0, flags: 0 };
-    e.weight += context === 'content' ? 1 : options.templateWeight;
-    e.flags |= context === 'content' ? 1 : 2;
-    edges.set(key, e);
-  };
-  const resolve = (from: number, l: LinkSpec, defaultContext: LinkContext): ResolvedLink => {
-    const [path, fragment = ''] = l.to.split('#');
-    const external = /^[a-z]+:/.test(l.to);
-    const to = external ? -1 : (routeIndex.get(path!) ?? -1);
-    let status: LinkStatus = external ? 'external' : to < 0 ? 'broken' : 'ok';
-    if (to >= 0 && from === to && fragment === '') status = 'self';
-    if (to >= 0 && fragment !== '' && !facts[pages[to]!.factsIndex]!.ids.includes(fragment)) status = 'broken-fragment';
-    const asset = /\.[A-Za-z0-9]+$/.test(path!) && !/\.(md|markdown|mdx|html?)$/i.test(path!);
-    const kind: LinkKind = external ? 'external' : asset ? 'asset' : 'internal';
-    const context = l.context ?? defaultContext;
-    return {
-      from,
-      to,
-      target: external ? l.to : path!,
-      fragment,
-      kind,
-      status,
-      context,
-      raw: {
-        href: l.href ?? l.to,
-        text: l.text ?? 'link',
-        line: l.line ?? 1,
-        column: l.column ?? 1,
-        context,
-        nofollow: l.nofollow ?? false,
-        origin: from < 0 ? 'navigation' : 'markdown',
-      },
-    };
-  };
-  for (const page of pages) {
-    for (const l of sorted[page.id]!.links ?? []) {
-      const link = resolve(page.id, linkOf(l), 'content');
-      links.push(link);
-      if (link.to >= 0) addEdge(page.id, link.to, link.context);
-    }
-  }
-  for (const l of spec.navigation ?? []) {
-    const link = resolve(-1, linkOf(l), 'template');
-    links.push(link);
-    if (link.to >= 0) for (const page of pages) addEdge(page.id, link.to, 'template');
-  }
-  const forward = csr(n, edges, false);
-  const reverse = csr(n, edges, true);
-  const entries: number[] = [];
-  const missingEntries: string[] = [];
-  for (const route of options.entry) {
-    const id = routeIndex.get(route);
-    if (id === undefined) missingEntries.push(route);
-    else entries.push(id);
-  }
-  const graph: SiteGraph = {
-    pages,
-    routeIndex,
-    links,
-    forward,
-    reverse,
-    entries,
-    missingEntries,
-    duplicates: spec.duplicates ?? [],
-  };
-  return { graph, facts, ranking: rankOf(graph, options, spec.pagerank), options, warnings: spec.warnings ?? [] };
+  const facts = spec.pages
+    .map((s): PageFacts => ({ ...factsOf(s), links: (s.links ?? []).map((l) => rawLink(linkOf(l), s.file ?? fileOf(s.route), 'content', 'markdown')) }))
+    .concat(spec.extraFacts ?? [])
+    .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
+  const navigation =
+    spec.navigation === undefined
+      ? null
+      : { file: NAVIGATION_FILE, links: spec.navigation.map((l) => rawLink(linkOf(l), NAVIGATION_FILE, 'template', 'navigation')) };
+  const graph = buildGraph({ pages: facts, assets: [...(spec.assets ?? [])], navigation, redirects: [] }, options);
+  return { graph, facts, ranking: rankGraph(graph, options), options, warnings: spec.warnings ?? [] };
 }
 
-function rankOf(graph: SiteGraph, options: ResolvedOptions, pagerank?: readonly number[]): Ranking {
-  const n = graph.pages.length;
-  const { forward, reverse } = graph;
-  const count = (c: Csr, i: number, mask: number): number => {
-    let k = 0;
-    for (let e = c.offsets[i]!; e < c.offsets[i + 1]!; e++) if ((c.flags[e]! & mask) !== 0) k++;
-    return k;
-  };
-  const depth = new Int32Array(n).fill(-1);
-  const queue = [...graph.entries];
-  for (const e of queue) depth[e] = 0;
-  const mask = options.depthCountsTemplate ? 3 : 1;
-  for (let q = 0; q < queue.length; q++) {
-    const u = queue[q]!;
-    for (let e = forward.offsets[u]!; e < forward.offsets[u + 1]!; e++) {
-      const v = forward.targets[e]!;
-      if ((forward.flags[e]! & mask) !== 0 && depth[v] === -1) {
-        depth[v] = depth[u]! + 1;
-        queue.push(v);
-      }
-    }
-  }
-  return {
-    pagerank: pagerank === undefined ? new Float64Array(n).fill(1 / n) : Float64Array.from(pagerank),
-    depth,
-    inlinks: Int32Array.from({ length: n }, (_, i) => count(reverse, i, 3)),
-    contentInlinks: Int32Array.from({ length: n }, (_, i) => count(reverse, i, 1)),
-    outlinks: Int32Array.from({ length: n }, (_, i) => count(forward, i, 3)),
-    iterations: 12,
-    converged: true,
-  };
-}
+/** The navigation file of a test site that has one. */
+export const NAVIGATION_FILE = '_nav.md';
