@@ -17,7 +17,7 @@ import type { Csr, RelatedList, SiteGraph } from '../types.js';
 import { EDGE_CONTENT } from '../graph/csr.js';
 import type { MentionIndex } from './mentions.js';
 import type { Neighbours } from './proximity.js';
-import { graphNeighbourhood } from './proximity.js';
+import { graphNeighbourhood, neighbourhoodScratch } from './proximity.js';
 
 /** Mention candidates kept per target. */
 export const MENTION_LIMIT = 100;
@@ -107,16 +107,21 @@ export function candidatePool(input: PoolInput): (target: number) => number[] {
       if (mentions.phrases[m.phrase]!.names.some((r) => r.target === m.target)) fromLinkText[m.target]!.push(s);
     }
   });
+  // Most mentions first, at most MENTION_LIMIT, once for all calls.
+  const mentionedBest = mentioned.map((m) =>
+    m
+      .sort((a, b) => b.count - a.count || a.source - b.source)
+      .slice(0, MENTION_LIMIT)
+      .map((x) => x.source),
+  );
   const hubDegree = Math.max(HUB_DEGREE, Math.ceil(Math.sqrt(n)));
+  const scratch = neighbourhoodScratch(n);
   return (t: number): number[] => {
-    const set = new Set<number>();
-    const m = mentioned[t]!;
-    m.sort((a, b) => b.count - a.count || a.source - b.source);
-    for (let k = 0; k < m.length && k < MENTION_LIMIT; k++) set.add(m[k]!.source);
+    const set = new Set<number>(mentionedBest[t]!);
     for (const s of fromLinkText[t]!) set.add(s);
     for (const r of related[t]?.related ?? []) if (r.similarity >= minSimilarity) set.add(r.page);
     for (const r of by[t]!) if (r.similarity >= minSimilarity) set.add(r.page);
-    for (const s of graphNeighbourhood(neighbours, t, GRAPH_LIMIT, hubDegree)) set.add(s);
+    for (const s of graphNeighbourhood(neighbours, t, GRAPH_LIMIT, hubDegree, scratch)) set.add(s);
     const out: number[] = [];
     for (const s of set) if (s !== t && s >= 0 && s < n && !graph.pages[s]!.meta.exclude) out.push(s);
     return out.sort((a, b) => a - b);

@@ -12,7 +12,7 @@ import { termLeaders, topTerms } from '../text/tfidf.js';
 import { findAnchors, prepareSource } from './anchor.js';
 import type { AnchorMatch } from './anchor.js';
 import { candidatePool, hasContentLink } from './candidates.js';
-import { pairFeatures, withoutNames } from './features.js';
+import { contentOutlinks, pairFeatures, withoutNames } from './features.js';
 import type { FeatureContext } from './features.js';
 import { predictLogistic } from './logistic.js';
 import type { LogisticModel } from './logistic.js';
@@ -23,7 +23,7 @@ import { targetNames } from './names.js';
 import type { TargetNames } from './names.js';
 import { contentNeighbours } from './proximity.js';
 import { contributions } from './logistic.js';
-import { adamicAdar, sharedFolders, twoStepPaths } from './proximity.js';
+import { adamicAdar, routeFolders, sharedFolders, twoStepPaths } from './proximity.js';
 import type { Evidence } from './reason.js';
 import { chooseSuggestions } from './select.js';
 import type { Chosen, ScoredPair } from './select.js';
@@ -63,7 +63,7 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
   const neighbours = contentNeighbours(graph);
   const isEntry = new Uint8Array(n);
   for (const e of graph.entries) isEntry[e] = 1;
-  const ctx: FeatureContext = { graph, ranking, index, mentions, neighbours, rankPct, isEntry };
+  const ctx: FeatureContext = { graph, ranking, index, mentions, neighbours, rankPct, isEntry, outlinks: contentOutlinks(graph), folders: graph.pages.map((p) => routeFolders(p.route)) };
   const pool = candidatePool({ graph, related, mentions, neighbours, minSimilarity: settings.minSimilarity });
   const linked = (s: number, t: number): boolean => hasContentLink(graph.forward, s, t);
 
@@ -88,9 +88,8 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
       });
     }
   }
-  fallbackAnchors(input, scored, cache);
   const perSource = settings.perSource === 0 ? Number.POSITIVE_INFINITY : settings.perSource;
-  const chosen = chooseSuggestions(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore);
+  const chosen = fallbackAnchors(input, chooseSuggestions(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
     const shared = sharedFolders(graph.pages[s]!.route, graph.pages[t]!.route);
@@ -109,15 +108,24 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
 }
 
 /**
- * Pairs whose source mentions none of the target's names get the anchor search of `anchor.ts`
- * (part of the title, or a run of the target's key terms) instead; each source is tokenised once.
+ * Chosen pairs whose source mentions none of the target's names get the anchor search of
+ * `anchor.ts` instead (part of the title, or a run of the target's key terms), clear of the
+ * anchors already chosen in the same source; each source is tokenised once. Only chosen pairs
+ * are searched: without a mention the pair's score is the same with or without such a phrase.
  */
-function fallbackAnchors(input: SuggestInput, scored: ScoredPair[], cache: ReturnType<typeof createStemCache>): void {
+function fallbackAnchors(input: SuggestInput, chosen: Chosen[], cache: ReturnType<typeof createStemCache>): Chosen[] {
   const { graph, index } = input;
   const factsOf = factsByPage(input);
-  const need = scored.map((p, i) => i).filter((i) => scored[i]!.anchors.length === 0);
-  if (need.length === 0) return;
-  need.sort((a, b) => scored[a]!.source - scored[b]!.source || a - b);
+  const need = chosen.map((_, i) => i).filter((i) => chosen[i]!.anchor === null);
+  if (need.length === 0) return chosen;
+  need.sort((a, b) => chosen[a]!.pair.source - chosen[b]!.pair.source || a - b);
+  const taken = new Map<number, [number, number][]>();
+  for (const c of chosen) {
+    if (c.anchor === null) continue;
+    const list = taken.get(c.pair.source) ?? [];
+    list.push([c.anchor.offset, c.anchor.endOffset]);
+    taken.set(c.pair.source, list);
+  }
   const leaders = termLeaders(index, STRONG_LEADERS);
   const df = (stem: string): number => {
     let lo = 0;
@@ -147,14 +155,19 @@ function fallbackAnchors(input: SuggestInput, scored: ScoredPair[], cache: Retur
     }
     return v;
   };
+  const out = [...chosen];
   for (let k = 0; k < need.length; ) {
-    const source = scored[need[k]!]!.source;
+    const source = chosen[need[k]!]!.pair.source;
     const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source]!.title);
-    for (; k < need.length && scored[need[k]!]!.source === source; k++) {
+    const avoid = taken.get(source) ?? [];
+    for (; k < need.length && chosen[need[k]!]!.pair.source === source; k++) {
       const i = need[k]!;
-      const pair = scored[i]!;
-      const anchors: AnchorMatch[] = findAnchors(tokens, namesOf(pair.target));
-      if (anchors.length > 0) scored[i] = { ...pair, anchors };
+      const c = chosen[i]!;
+      const anchors: AnchorMatch[] = findAnchors(tokens, namesOf(c.pair.target), avoid);
+      if (anchors.length === 0) continue;
+      avoid.push([anchors[0]!.offset, anchors[0]!.endOffset]);
+      out[i] = { ...c, anchor: anchors[0]!, pair: { ...c.pair, anchors } };
     }
   }
+  return out;
 }

@@ -26,12 +26,13 @@
  * counts leave out the pair's own links, and the link counts and depth leave out the pair.
  */
 import type { Ranking, SiteGraph, TermIndex } from '../types.js';
+import { EDGE_CONTENT } from '../graph/csr.js';
 import { cosine } from '../text/tfidf.js';
 import { hasContentLink } from './candidates.js';
 import type { MentionIndex, NameKind } from './mentions.js';
 import { nameKindsFor } from './mentions.js';
 import type { Neighbours } from './proximity.js';
-import { adamicAdar, depthWithout, sharedFolders, twoStepPaths } from './proximity.js';
+import { adamicAdar, depthWithout, sharedSegments, twoStepPaths } from './proximity.js';
 
 /** Feature names, in the order of a feature vector. */
 export const FEATURES = [
@@ -85,7 +86,13 @@ export interface FeatureContext {
   readonly rankPct: ArrayLike<number>;
   /** 1 for entry pages. */
   readonly isEntry: Uint8Array;
+  /** Distinct pages each page links to in its content (`contentOutlinks`). */
+  readonly outlinks: Int32Array;
+  /** Each page's route folders (`routeFolders`). */
+  readonly folders: readonly (readonly string[])[];
 }
+
+const NONE: readonly number[] = [];
 
 /** The feature vector of the pair. */
 export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[] {
@@ -95,32 +102,31 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   x[F.similarity] = t < ctx.index.docOffsets.length - 1 && s < ctx.index.docOffsets.length - 1 ? cosine(ctx.index, s, t) : 0;
 
   // Name evidence: prose mentions, plus (for a linked pair) the pair's own link texts.
-  const phrases = new Map<number, number>(); // phrase -> mentions
   const hit = mentions.bySource[s]?.get(t);
-  let count = 0;
-  if (hit !== undefined) {
-    for (const p of hit.phrases) phrases.set(p, 0);
-    count = hit.count;
-  }
-  const ownExact = new Map<number, number>(); // phrase -> the pair's own links with exactly this text
+  let count = hit === undefined ? 0 : hit.count;
+  let phrases: readonly number[] = hit === undefined ? NONE : hit.phrases;
+  let ownExact: Map<number, number> | null = null; // phrase -> the pair's own links with exactly this text
   if (linked) {
+    const all = new Set(phrases);
+    ownExact = new Map();
     for (const m of mentions.linkMatches[s] ?? []) {
       if (m.target !== t) continue;
       if (m.exact) ownExact.set(m.phrase, (ownExact.get(m.phrase) ?? 0) + 1);
       if (!mentions.phrases[m.phrase]!.names.some((r) => r.target === t)) continue;
-      phrases.set(m.phrase, 0);
+      all.add(m.phrase);
       count++;
     }
+    phrases = [...all];
   }
   let validCount = 0;
-  for (const p of phrases.keys()) {
+  for (const p of phrases) {
     const phrase = mentions.phrases[p]!;
     const kinds = nameKindsFor(phrase, s, t);
     if (kinds.length === 0) continue;
     validCount++;
     for (const k of kinds) x[kindFeature(k)] = 1;
     x[F['name-words']] = Math.max(x[F['name-words']]!, phrase.stems.length);
-    const own = ownExact.get(p) ?? 0;
+    const own = ownExact?.get(p) ?? 0;
     const linkedOcc = phrase.linked - own;
     const total = phrase.prose + phrase.linked;
     if (total > 0) x[F['link-probability']] = Math.max(x[F['link-probability']]!, linkedOcc / total);
@@ -132,9 +138,9 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   const aa = adamicAdar(ctx.neighbours, s, t);
   x[F['adamic-adar']] = Math.log1p(aa.adamicAdar);
   x[F['two-step-paths']] = Math.log1p(twoStepPaths(graph, s, t));
-  x[F['shared-folders']] = sharedFolders(graph.pages[s]!.route, graph.pages[t]!.route);
+  x[F['shared-folders']] = sharedSegments(ctx.folders[s]!, ctx.folders[t]!);
   x[F['target-inlinks']] = Math.log1p(ranking.contentInlinks[t]! - (linked ? 1 : 0));
-  x[F['source-outlinks']] = Math.log1p(contentOutlinks(graph, s) - (linked ? 1 : 0));
+  x[F['source-outlinks']] = Math.log1p(ctx.outlinks[s]! - (linked ? 1 : 0));
   const pct = ctx.rankPct[s]!;
   x[F['source-rank']] = Number.isNaN(pct) ? 0 : pct;
   const d = linked ? depthWithout(graph, ranking, ctx.isEntry, s, t) : ranking.depth[t]!;
@@ -155,11 +161,14 @@ function kindFeature(kind: NameKind): number {
   }
 }
 
-/** Distinct pages the page links to with at least one content link. */
-export function contentOutlinks(graph: SiteGraph, s: number): number {
-  let count = 0;
-  for (let e = graph.forward.offsets[s]!; e < graph.forward.offsets[s + 1]!; e++) if ((graph.forward.flags[e]! & 1) !== 0) count++;
-  return count;
+/** Per page: the distinct pages it links to with at least one content link. */
+export function contentOutlinks(graph: SiteGraph): Int32Array {
+  const n = graph.pages.length;
+  const out = new Int32Array(n);
+  for (let s = 0; s < n; s++) {
+    for (let e = graph.forward.offsets[s]!; e < graph.forward.offsets[s + 1]!; e++) if ((graph.forward.flags[e]! & EDGE_CONTENT) !== 0) out[s]!++;
+  }
+  return out;
 }
 
 /** The vector with the name evidence zeroed: the pair as if the source did not mention the target. */

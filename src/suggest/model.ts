@@ -25,9 +25,9 @@ import type { LogisticModel } from './logistic.js';
 /** Training targets sampled at most. */
 export const TRAIN_TARGETS = 3000;
 /** Positive pairs used at most. */
-export const MAX_POSITIVES = 20000;
+export const MAX_POSITIVES = 10000;
 /** Negative pairs sampled per positive, at most. */
-export const NEGATIVES_PER_POSITIVE = 4;
+export const NEGATIVES_PER_POSITIVE = 3;
 /** Fewer positives (or negatives) than this: fixed weights. */
 export const MIN_POSITIVES = 20;
 /** L2 penalty on the standardised weights. */
@@ -103,7 +103,10 @@ export function trainingPairs(
   const positives: TrainingPair[] = [];
   const negatives: TrainingPair[] = [];
   for (const t of sample) {
-    for (const s of candidatesOf(t)) (isLinked(s, t) ? positives : negatives).push({ source: s, target: t, linked: isLinked(s, t) });
+    for (const s of candidatesOf(t)) {
+      const linked = isLinked(s, t);
+      (linked ? positives : negatives).push({ source: s, target: t, linked });
+    }
   }
   const pos = positives.length <= MAX_POSITIVES ? positives : shuffle(streamFor(seed, 11), positives).slice(0, MAX_POSITIVES);
   const wantNeg = Math.max(MIN_POSITIVES, pos.length * NEGATIVES_PER_POSITIVE);

@@ -120,23 +120,45 @@ export function depthWithout(graph: SiteGraph, ranking: Ranking, isEntry: Uint8A
   return best;
 }
 
-/** Leading route segments two routes share (`/a/b/c/` and `/a/b/d/` share 2). */
+/** Leading route folders two routes share (`/a/b/c/` and `/a/b/d/` share 2). */
 export function sharedFolders(a: string, b: string): number {
-  const x = a.split('/').filter((s) => s !== '');
-  const y = b.split('/').filter((s) => s !== '');
+  return sharedSegments(routeFolders(a), routeFolders(b));
+}
+
+/** The folders of a route: its segments but the last, which is the page itself. */
+export function routeFolders(route: string): string[] {
+  const segments = route.split('/').filter((s) => s !== '');
+  segments.pop();
+  return segments;
+}
+
+/** Leading entries two folder lists share. */
+export function sharedSegments(x: readonly string[], y: readonly string[]): number {
   let k = 0;
-  // The last segment is the page itself: folders are the segments before it.
-  while (k < x.length - 1 && k < y.length - 1 && x[k] === y[k]) k++;
+  while (k < x.length && k < y.length && x[k] === y[k]) k++;
   return k;
+}
+
+/** Reusable buffers for {@link graphNeighbourhood}: one score per page and the pages touched. */
+export interface NeighbourhoodScratch {
+  readonly score: Float64Array;
+  readonly touched: Int32Array;
+}
+
+/** Buffers for a site of `n` pages. */
+export function neighbourhoodScratch(n: number): NeighbourhoodScratch {
+  return { score: new Float64Array(n), touched: new Int32Array(n) };
 }
 
 /**
  * Pages near `t` in the content graph: every page sharing a neighbour with it, found through its
  * neighbours of degree at most `hubDegree` (a page linked with nearly everything brings nearly
  * everything and says little), best Adamic-Adar first, at most `limit`, ties by page id.
+ * Accumulates in `scratch` (left zeroed again), so a call costs the pages it touches, not n.
  */
-export function graphNeighbourhood(nb: Neighbours, t: number, limit: number, hubDegree: number): number[] {
-  const score = new Map<number, number>();
+export function graphNeighbourhood(nb: Neighbours, t: number, limit: number, hubDegree: number, scratch: NeighbourhoodScratch = neighbourhoodScratch(nb.offsets.length - 1)): number[] {
+  const { score, touched } = scratch;
+  let count = 0;
   for (let e = nb.offsets[t]!; e < nb.offsets[t + 1]!; e++) {
     const z = nb.targets[e]!;
     const dz = degree(nb, z);
@@ -144,11 +166,14 @@ export function graphNeighbourhood(nb: Neighbours, t: number, limit: number, hub
     const w = 1 / Math.log(dz);
     for (let f = nb.offsets[z]!; f < nb.offsets[z + 1]!; f++) {
       const s = nb.targets[f]!;
-      if (s !== t) score.set(s, (score.get(s) ?? 0) + w);
+      if (s === t) continue;
+      if (score[s] === 0) touched[count++] = s;
+      score[s] += w;
     }
   }
-  return [...score.entries()]
-    .sort((a, b) => b[1] - a[1] || a[0] - b[0])
-    .slice(0, limit)
-    .map(([s]) => s);
+  const ids = Array.from(touched.subarray(0, count));
+  ids.sort((a, b) => score[b]! - score[a]! || a - b);
+  const out = ids.slice(0, limit);
+  for (let k = 0; k < count; k++) score[touched[k]!] = 0;
+  return out;
 }

@@ -5,8 +5,8 @@
 import { describe, expect, it } from 'vitest';
 import { createStemCache } from '../../src/text/index.js';
 import { buildMentionIndex } from '../../src/suggest/mentions.js';
-import { F, pairFeatures } from '../../src/suggest/features.js';
-import { contentNeighbours } from '../../src/suggest/proximity.js';
+import { contentOutlinks, F, pairFeatures } from '../../src/suggest/features.js';
+import { contentNeighbours, routeFolders } from '../../src/suggest/proximity.js';
 import { pagerankPercentiles, suggestLinks } from '../../src/suggest/index.js';
 import { factsByPage } from '../../src/suggest/facts-of.js';
 import type { SuggestInput } from '../../src/suggest/index.js';
@@ -18,7 +18,7 @@ function features(input: SuggestInput, from: string, to: string): number[] {
   const mentions = buildMentionIndex(graph, factsByPage(input), createStemCache());
   const isEntry = new Uint8Array(graph.pages.length);
   for (const e of graph.entries) isEntry[e] = 1;
-  const ctx = { graph, ranking, index, mentions, neighbours: contentNeighbours(graph), rankPct: pagerankPercentiles(graph, ranking), isEntry };
+  const ctx = { graph, ranking, index, mentions, neighbours: contentNeighbours(graph), rankPct: pagerankPercentiles(graph, ranking), isEntry, outlinks: contentOutlinks(graph), folders: graph.pages.map((p) => routeFolders(p.route)) };
   return pairFeatures(ctx, id(from), id(to));
 }
 
