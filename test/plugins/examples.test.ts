@@ -81,7 +81,7 @@ describe('examples/api', () => {
       include: ['**/*.html'],
       exclude: ['linkweave-report.json'],
       maxDepth: 2,
-      gate: { maxOrphans: 0 },
+      limits: { orphans: 0 },
       cache: { enabled: false },
       root: outDir,
     });

@@ -68,7 +68,7 @@ describe('linkweave/rollup in a real Rolldown build', () => {
     };
     const failing = await bundle('broken', files);
     await expect(failing.close()).rejects.toThrowError(
-      `${path.join(failing.dir, 'index.html')}:6:4  error  Unexpected link to missing page /gone.html (written "gone.html"), expected an existing page  (broken-link)`,
+      `${path.join(failing.dir, 'index.html')}:6:4  error  Broken link: no page /gone.html (written "gone.html"); fix or remove the link  (broken-link)`,
     );
 
     const passing = await bundle('broken-passing', files, false);

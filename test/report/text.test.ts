@@ -29,7 +29,7 @@ describe('text formatter', () => {
     const at = lines.indexOf('index.md:9:3  error  broken-link');
     expect(at).toBeGreaterThanOrEqual(0);
     expect(lines[at + 1]).toBe(
-      '    Unexpected link to missing file guide/instal.md, expected an existing source file (did you mean guide/install.md?)',
+      '    Broken link: no source file guide/instal.md; did you mean guide/install.md?',
     );
     const s = lines.indexOf('reference/index.md:5:12  add link "tuning options" -> /guide/configure/advanced/tuning/');
     expect(s).toBeGreaterThanOrEqual(0);
