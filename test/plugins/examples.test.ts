@@ -39,7 +39,7 @@ describe('examples/api', () => {
     expect(stdout.split('\n').slice(0, 3)).toEqual([
       `${stats.pages} pages, ${stats.links} links, ${stats.brokenLinks} broken links, ${stats.orphans} orphans, deepest page ${stats.maxDepth} clicks`,
       `Top pages by PageRank: ${top.map((p) => p.route).join(', ')}`,
-      `${report.findings.length} findings, ${report.suggestions.length} suggested links; gate failed`,
+      `${report.findings.length} findings, ${report.suggestions.length} suggested links; the run fails`,
     ]);
     // The example site is built to fail its gate (examples/README.md): the example exits 1 as the CLI does.
     expect(report.gate.passed).toBe(false);
@@ -60,7 +60,7 @@ describe('examples/api', () => {
     }
     const errors = markdown.filter((f) => f.severity === 'error').length;
     expect(stdout).toContain(`${markdown.length} messages (✖ ${errors} errors, ⚠ ${markdown.length - errors} warnings)`);
-    expect(stdout.trim().split('\n').at(-1)).toBe(`${report.stats.pages} pages; gate failed`);
+    expect(stdout.trim().split('\n').at(-1)).toBe(`${report.stats.pages} pages; the run fails`);
   });
 
   it('vite.config.mjs: `vite build` in a project with linkweave installed checks the built pages', async () => {
@@ -75,7 +75,7 @@ describe('examples/api', () => {
     expect(status).toBe(0);
     const outDir = path.join(project, 'site/dist');
     expect(stdout).toContain('linkweave: 3 pages, 8 links, 0 broken links');
-    expect(stdout).toContain('gate passed.');
+    expect(stdout).toContain('The build passes: no errors, no limit crossed.');
     const written = JSON.parse(fs.readFileSync(path.join(outDir, 'linkweave-report.json'), 'utf8')) as Report;
     const direct = await analyze({
       include: ['**/*.html'],

@@ -57,7 +57,7 @@ describe('linkweave/rollup in a real Rolldown build', () => {
     const info = logs.filter((l) => l.level === 'info' && l.log.plugin === 'linkweave').map((l) => l.log.message);
     expect(info).toHaveLength(1);
     expect(info[0]).toContain(`linkweave: 3 pages, 4 links, 0 broken links`);
-    expect(info[0]).toContain('No problems found; gate passed.');
+    expect(info[0]).toContain('Findings: none. The build passes: no errors, no limit crossed.');
     expect(direct.gate.passed).toBe(true);
   });
 
