@@ -74,6 +74,6 @@ describe('linkweave/rollup in a real Rolldown build', () => {
     const passing = await bundle('broken-passing', files, false);
     await passing.close();
     const warnings = passing.logs.filter((l) => l.level === 'warn' && l.log.plugin === 'linkweave').map((l) => l.log.message);
-    expect(warnings.join('\n')).toContain(`${path.join(passing.dir, 'index.html')}:6:4  error  Unexpected link to missing page /gone.html`);
+    expect(warnings.join('\n')).toContain(`${path.join(passing.dir, 'index.html')}:6:4  error  Broken link: no page /gone.html`);
   });
 });

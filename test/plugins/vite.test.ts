@@ -104,7 +104,7 @@ describe('linkweave/vite in a real Vite build', () => {
     const offset = built.indexOf('<a href="syntax.html"');
     const line = built.slice(0, offset).split('\n').length;
     const column = offset - built.lastIndexOf('\n', offset - 1);
-    expect(error!.message).toContain(`${path.join(outDir, 'tags.html')}:${line}:${column}  error  Unexpected link to missing page`);
+    expect(error!.message).toContain(`${path.join(outDir, 'tags.html')}:${line}:${column}  error  Broken link: no page`);
     expect(error!.message).toContain('(broken-link)');
     expect(error!.message).toContain('The build fails: broken-link 1 error.');
     expect(error!.message).toContain('failBuild: false');

@@ -165,7 +165,7 @@ function suggestionLines(report: Report, ctx: FormatContext, c: Colors, width: n
     // No phrase of the source names the target: apply cannot write these, a writer adds a
     // sentence that links. Apart from the others, without a position.
     if (out.length > 0) out.push('');
-    out.push(c.bold(`Needs a sentence written by hand (${handWritten.length}): related pages, but no phrase in the source names the target`));
+    append(out, wrap('', 0, words(`Needs a sentence written by hand (${handWritten.length}): related pages, but no phrase in the source names the target`, c.bold, ''), width, 0));
     if (anchored.length === 0) append(out, note);
     out.push('');
     for (const s of handWritten.slice(0, limit)) {
@@ -179,7 +179,8 @@ function suggestionLines(report: Report, ctx: FormatContext, c: Colors, width: n
   if (repair !== null) append(out, ['', ...wrap('', 0, words(repair, plain, ''), width, 0)]);
   const command = applyCommand(report, ctx.cwd);
   if (command !== null) {
-    out.push('', `Apply the ${plural(anchored.length, 'suggested link')} (add --dry-run to see the diff first; pick ids to apply fewer):`);
+    out.push('');
+    append(out, wrap('', 0, words(`Apply the ${plural(anchored.length, 'suggested link')} (add --dry-run to see the diff first; pick ids to apply fewer):`, plain, ''), width, 0));
     out.push(`  ${c.bold(command)}`);
   }
   return out;
