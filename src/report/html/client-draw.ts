@@ -28,8 +28,9 @@ function sizeCanvas() {
 
 function font(px, weight) { ctx2d.font = (weight || 400) + ' ' + (px * unit) + 'px system-ui, sans-serif'; }
 
+/** Every page is drawn the same size: colour and shape carry its state, the rings its depth. */
 function nodeRadius(rank, scale) {
-  return Math.max(3, Math.min(18, (2.5 + 4.2 * Math.sqrt(rank)) * (scale || 1)));
+  return 5.5 * (scale || 1);
 }
 
 function shapePath(x, y, r, shape) {
@@ -49,7 +50,7 @@ function pageShape(i) {
 function drawPageNode(i, x, y, r, emphasis) {
   const p = PAGES[i];
   shapePath(x, y, r, pageShape(i));
-  ctx2d.fillStyle = depthColor(p.depth);
+  ctx2d.fillStyle = stateColor(pageState(i));
   ctx2d.fill();
   ctx2d.lineWidth = emphasis ? 2.5 * unit : 1 * unit;
   ctx2d.strokeStyle = emphasis ? COLORS.focus : '#ffffff';
@@ -214,6 +215,9 @@ function drawPagesOverview(o) {
   return PAGES.map(function (_, i) { return i; });
 }
 
+/** A folder's size: its number of pages. */
+function folderRadius(f) { return Math.max(5, Math.min(26, 3 + 2.2 * Math.sqrt(f.pages))); }
+
 function drawFoldersOverview(o) {
   drawRings(o.rings);
   const lost = o.folders.filter(function (f) { return f.minDepth === null; }).length;
@@ -238,9 +242,9 @@ function drawFoldersOverview(o) {
   order.sort(function (a, b) { return o.folders[a].pagerank - o.folders[b].pagerank || b - a; });
   for (const k of order) {
     const f = o.folders[k];
-    const r = Math.max(5, Math.min(30, 4 + 40 * Math.sqrt(f.pagerank))) * unit;
+    const r = folderRadius(f) * unit;
     shapePath(f.x, f.y, r, 'circle');
-    ctx2d.fillStyle = depthColor(f.minDepth);
+    ctx2d.fillStyle = f.minDepth === null ? COLORS.lost : COLORS.fine;
     ctx2d.fill();
     ctx2d.lineWidth = 1 * unit;
     ctx2d.strokeStyle = '#fff';
@@ -257,7 +261,7 @@ function drawFoldersOverview(o) {
   drawRingLabels(o.rings);
   for (const k of order.slice().reverse()) {
     const f = o.folders[k];
-    const r = Math.max(5, Math.min(30, 4 + 40 * Math.sqrt(f.pagerank))) * unit;
+    const r = folderRadius(f) * unit;
     const text = shortText(f.name, 22) + ' (' + f.pages + ')';
     if (f.minDepth === null) tryLabel(text, f.x, f.y + r + 9 * unit, 'center', 11);
     else nameNode(text, f.x, f.y, r, o.rings.cx, o.rings.cy, 11);
