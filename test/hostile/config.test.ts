@@ -83,7 +83,7 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
 
 describe('a wrong flag exits 2 with one line naming it and what it accepts', () => {
   it.each([
-    [['check', 'docs', '--styel'], /^linkweave: unknown flag "--styel" for "check"; accepted flags: --config, --format, --output, /],
+    [['check', 'docs', '--styel'], /^linkweave: unknown flag --styel for "check"; its flags: --config, --format, --output, /],
     [['check', 'docs', '-x'], /^linkweave: unknown flag "-x"; flags are written --name \(see --help\)$/],
     [['check', 'docs', '--fail-on', 'info'], /^linkweave: flag --fail-on: expected one of error, warning; got "info"$/],
     [['check', 'docs', '--max-depth', '-1'], /^linkweave: flag --max-depth: expected a whole number >= 0; got "-1"$/],
