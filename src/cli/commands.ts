@@ -123,11 +123,13 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
   // The text report shows paths relative to the working folder, wrapped to the terminal.
-  const terminal = { color, cwd: io.cwd, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
+  // The printed apply command reads the same configuration file as this run.
+  const config = typeof ctx.values.config === 'string' ? { applyArgs: ['--config', ctx.values.config] } : {};
+  const terminal = { color, cwd: io.cwd, ...config, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
   if (output === null) {
     for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);
   } else {
-    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd });
+    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd, ...config });
     await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
     if (!flags.quiet) {
       // The report went to a file: the terminal gets the summary alone (the site's counts, the

@@ -54,6 +54,9 @@ describe('text formatter', () => {
     expect(text).toContain('docs/reference/index.md:5:12  link');
     // The apply command names the root as seen from the working folder, so it runs as printed.
     expect(text).toContain('  linkweave apply docs --ids b7e1c2d4\n');
+    // A run with --config FILE prints an apply command that reads the same file.
+    const withConfig = formatReport(report, 'text', { cwd: '/work', width: 0, applyArgs: ['--config', 'ci/link weave.json'] });
+    expect(withConfig).toContain("  linkweave apply docs --config 'ci/link weave.json' --ids b7e1c2d4\n");
   });
 
   it('a clean site: no findings, the run passes', () => {

@@ -142,12 +142,12 @@ function shellWord(word: string): string {
  * printed from `cwd`: the root, and every id (or `--all` past `APPLY_IDS_LISTED`, which applies
  * the same set). Null when no suggestion has an anchor phrase.
  */
-export function applyCommand(report: Report, cwd: string | undefined): string | null {
+export function applyCommand(report: Report, cwd: string | undefined, extra: readonly string[] = []): string | null {
   const { anchored } = splitByAnchor(report.suggestions);
   if (anchored.length === 0) return null;
   const root = shellWord(displayRoot(report.root, cwd));
   const which = anchored.length > APPLY_IDS_LISTED ? '--all' : `--ids ${anchored.map((s) => s.id).join(',')}`;
-  return `linkweave apply ${root} ${which}`;
+  return ['linkweave', 'apply', root, ...extra.map(shellWord), which].join(' ');
 }
 
 /**

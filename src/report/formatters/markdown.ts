@@ -197,7 +197,7 @@ export const markdownFormatter: Formatter = {
         out.push('Related pages, but no phrase in the source names the target: `apply` cannot write these; add a sentence that links.', '');
         out.push(...collapse(handWritten, (part) => part.map(handWrittenItem), 'page'));
       }
-      const command = applyCommand(report, ctx.cwd);
+      const command = applyCommand(report, ctx.cwd, ctx.applyArgs);
       if (command !== null) {
         out.push('', 'Apply the suggested links from the repository (add `--dry-run` to see the diff first; pick ids to apply fewer):', '', '```sh', command, '```');
       }

@@ -177,7 +177,7 @@ function suggestionLines(report: Report, ctx: FormatContext, c: Colors, width: n
   }
   const repair = repairLine(report);
   if (repair !== null) append(out, ['', ...wrap('', 0, words(repair, plain, ''), width, 0)]);
-  const command = applyCommand(report, ctx.cwd);
+  const command = applyCommand(report, ctx.cwd, ctx.applyArgs);
   if (command !== null) {
     out.push('');
     append(out, wrap('', 0, words(`Apply the ${plural(anchored.length, 'suggested link')} (add --dry-run to see the diff first; pick ids to apply fewer):`, plain, ''), width, 0));
