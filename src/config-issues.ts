@@ -112,3 +112,65 @@ export function expectedGot(schema: z.ZodType, issue: z.core.$ZodIssue): string 
   const expected = node === null ? issue.message : describeAccepted(node);
   return `expected ${expected}, got ${'input' in issue ? shown(issue.input) : 'nothing'}`;
 }
+
+/** Old rule ids and their names now. */
+const RENAMED_CHECKS: Readonly<Record<string, string>> = { 'max-click-depth': 'click-depth' };
+
+/** Old `gate` keys and their names under `limits` now (`maxDepth` has none: see below). */
+const RENAMED_LIMITS: Readonly<Record<string, string>> = {
+  maxOrphans: 'orphans',
+  maxBrokenLinks: 'brokenLinks',
+  maxBrokenFragments: 'brokenFragments',
+  maxUnreachable: 'unreachable',
+  maxWarnings: 'warnings',
+  minInlinksForImportant: 'importantPageInlinks',
+};
+
+const OLD_LEVELS: Readonly<Record<string, string>> = { off: 'none', warn: 'warning', warning: 'warning', error: 'error' };
+
+const isRecord = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object' && !Array.isArray(v);
+
+/**
+ * The old rule-settings form (`"rules": { "id": "warn" | ["error", { ... }] }`) and the old
+ * `"gate"` limits, rewritten in today's form, as one line that says how to write them now; null
+ * when the configuration uses neither. The rewrite is computed from the user's own values, so
+ * the line can be pasted back.
+ */
+export function oldFormProblem(input: unknown): string | null {
+  if (!isRecord(input)) return null;
+  const parts: string[] = [];
+  if ('rules' in input) parts.push(oldRules(input.rules));
+  if ('gate' in input) parts.push(oldGate(input.gate));
+  return parts.length === 0 ? null : parts.join('; ');
+}
+
+function oldRules(rules: unknown): string {
+  if (!isRecord(rules)) return 'key "rules" is no longer read: write "checks": { "<check id>": { "level": "error", "warning" or "none" } }';
+  const checks: Record<string, Record<string, unknown>> = {};
+  let maxDepth: unknown;
+  for (const [id, setting] of Object.entries(rules)) {
+    const [level, options] = Array.isArray(setting) ? [setting[0], isRecord(setting[1]) ? setting[1] : {}] : [setting, {}];
+    const rest: Record<string, unknown> = { ...options };
+    if (id === 'max-click-depth' && 'max' in rest) {
+      if (rest.max !== null) maxDepth = rest.max;
+      delete rest.max;
+    }
+    checks[RENAMED_CHECKS[id] ?? id] = { level: typeof level === 'string' ? (OLD_LEVELS[level] ?? level) : level, ...rest };
+  }
+  const depth = maxDepth === undefined ? '' : ` and "maxDepth": ${JSON.stringify(maxDepth)} (the one depth limit)`;
+  return `key "rules" is the old form of check settings; write it now as "checks": ${JSON.stringify(checks)}${depth}`;
+}
+
+function oldGate(gate: unknown): string {
+  if (!isRecord(gate)) return 'key "gate" is now "limits"';
+  const limits: Record<string, unknown> = {};
+  let depth = '';
+  for (const [key, value] of Object.entries(gate)) {
+    if (key === 'maxDepth') {
+      if (value !== null) depth = `; "gate.maxDepth" is gone: the depth limit is "maxDepth", and "checks": {"click-depth":{"level":"error"}} fails the run on it`;
+    } else {
+      limits[RENAMED_LIMITS[key] ?? key] = value;
+    }
+  }
+  return `key "gate" is now "limits"; write it as "limits": ${JSON.stringify(limits)}${depth}`;
+}

@@ -6,8 +6,19 @@
  * the schema's input type, so the two cannot drift apart.
  */
 
-/** Severity of a rule as written: `warn` and `warning` mean the same. */
-export type SeverityInput = 'off' | 'warn' | 'warning' | 'error';
+/** How much a check's findings weigh (SARIF's levels); `none`: the check does not run. */
+export type Level = 'error' | 'warning' | 'none';
+
+/**
+ * One check's setting: its level and its own named options, e.g.
+ * `{ "level": "warning", "countTemplateLinks": false }` for `orphan-page`. Each check's options
+ * are listed in the README; an unknown option is an error naming the key.
+ */
+export interface CheckConfig {
+  /** @default the check's own level (README, "Checks") */
+  level?: Level | undefined;
+  [option: string]: unknown;
+}
 
 /** A shortcode or macro that produces a link. */
 export interface LinkPatternConfig {
@@ -55,22 +66,23 @@ export interface SuggestConfig {
   impactLimit?: number | undefined;
 }
 
-/** Gate limits: the gate fails when a count crosses its limit. `null` = no limit. */
-export interface GateConfig {
-  /** Deepest click depth of any reachable page. @default null */
-  maxDepth?: number | null | undefined;
-  /** Orphan pages (no inlinks). @default null */
-  maxOrphans?: number | null | undefined;
-  /** Broken links. @default null */
-  maxBrokenLinks?: number | null | undefined;
-  /** Links to a fragment the target page does not have. @default null */
-  maxBrokenFragments?: number | null | undefined;
-  /** Pages not reachable from the entry pages. @default null */
-  maxUnreachable?: number | null | undefined;
-  /** Findings of severity `warning`. @default null */
-  maxWarnings?: number | null | undefined;
+/**
+ * Limits on the whole site: the run fails (exit 1) when a count goes over its limit. `null` = no
+ * limit. The depth limit is `maxDepth` (set the `click-depth` check to `error` to fail on it).
+ */
+export interface LimitsConfig {
+  /** Most broken links allowed. @default null */
+  brokenLinks?: number | null | undefined;
+  /** Most links to a fragment the target page does not have. @default null */
+  brokenFragments?: number | null | undefined;
+  /** Most orphan pages (no inlinks). @default null */
+  orphans?: number | null | undefined;
+  /** Most pages not reachable from the entry pages. @default null */
+  unreachable?: number | null | undefined;
+  /** Most findings of level `warning`. @default null */
+  warnings?: number | null | undefined;
   /** Fewest content inlinks a page of high importance may have (a lower bound). @default null */
-  minInlinksForImportant?: number | null | undefined;
+  importantPageInlinks?: number | null | undefined;
 }
 
 /** The page-facts cache. */
@@ -111,15 +123,15 @@ export interface Config {
   pagerankIterations?: number | undefined;
   /** PageRank stops when the L1 change of one iteration falls below this. @default 1e-10 */
   pagerankTolerance?: number | undefined;
-  /** Deepest click depth allowed (the `max-click-depth` rule). @default 3 */
+  /** Deepest click depth allowed: the one depth limit (the `click-depth` check, the depth-repair plan, the reports). @default 3 */
   maxDepth?: number | undefined;
   /** Files larger than this many bytes are skipped with a finding. @default 10485760 (10 MiB) */
   maxFileBytes?: number | undefined;
   /** Links kept per page; more are dropped with a finding. @default 20000 */
   maxLinksPerPage?: number | undefined;
-  /** Severity (and options) per rule id: `'off' | 'warning' | 'error'` or `[severity, options]`. @default {} */
-  rules?: Record<string, SeverityInput | [SeverityInput, Record<string, unknown>]> | undefined;
-  /** The gate fails when any finding is at or above this severity. @default 'error' */
+  /** Level and options per check id, e.g. `{ "dead-end": { "level": "none" } }`. @default {} */
+  checks?: Record<string, CheckConfig> | undefined;
+  /** The run fails (exit 1) when any finding is at or above this level. @default 'error' */
   failOn?: 'error' | 'warning' | undefined;
   /** Globs (on file paths) or routes of the pages that matter most. @default [] */
   important?: string[] | undefined;
@@ -127,8 +139,8 @@ export interface Config {
   traffic?: string | null | undefined;
   /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minScore: 0.1, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
   suggest?: SuggestConfig | undefined;
-  /** Gate limits. @default every limit null (none) */
-  gate?: GateConfig | undefined;
+  /** Limits on the whole site. @default every limit null (none) */
+  limits?: LimitsConfig | undefined;
   /** The page-facts cache. @default { enabled: true, dir: 'node_modules/.cache/linkweave' } */
   cache?: CacheConfig | undefined;
   /** Worker threads for parsing: 0 = automatic (by file count and cores), 1 = main thread only. @default 0 */

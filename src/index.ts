@@ -15,6 +15,6 @@ export { EngineError, isEngineError } from './errors.js';
 export type { ErrorCode } from './errors.js';
 export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId, writeFileAtomic } from './report/index.js';
 export type { FormatContext, FormatId, Formatter, WriteOptions } from './report/index.js';
-export type { CacheConfig, GateConfig, LinkPatternConfig, RoutesConfig, SeverityInput, SuggestConfig } from './config.js';
+export type { CacheConfig, CheckConfig, Level, LimitsConfig, LinkPatternConfig, RoutesConfig, SuggestConfig } from './config.js';
 export { VERSION } from './version.js';
 export type * from './types.js';

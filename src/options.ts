@@ -4,16 +4,16 @@
  * `ResolvedOptions` with nothing optional.
  */
 import { z } from 'zod';
-import { describeIssue } from './config-issues.js';
+import { describeIssue, oldFormProblem } from './config-issues.js';
 import { EngineError } from './errors.js';
 
-const severity = z
-  .enum(['off', 'warn', 'warning', 'error'])
-  .transform((s) => (s === 'warn' ? 'warning' : s));
+/** How much a check's findings weigh: SARIF's levels (`none` = the check does not run). */
+export const LEVELS = ['error', 'warning', 'none'] as const;
 
-const ruleSetting = z
-  .union([severity, z.tuple([severity, z.record(z.string(), z.unknown())])])
-  .describe('a severity ("off", "warning" or "error"; "warn" means "warning"), or [severity, { rule options }]');
+/** A check's setting: its `level` and its own named options (checked against the check by the rules engine). */
+const checkSetting = z
+  .looseObject({ level: z.enum(LEVELS).optional() })
+  .describe('an object: { "level": "error", "warning" or "none", and the check\'s own options }');
 
 const linkPattern = z.strictObject({
   /** A regular expression (JavaScript syntax, `g` flag implied) matched against the page's raw text. */
@@ -61,15 +61,15 @@ const schema = z.strictObject({
   pagerankIterations: z.number().int().min(1).default(200),
   /** PageRank stops when the L1 change of one iteration falls below this. @default 1e-10 */
   pagerankTolerance: z.number().gt(0).default(1e-10),
-  /** Deepest click depth allowed. @default 3 */
+  /** Deepest click depth allowed: the `click-depth` check, the depth-repair plan and the reports read it. @default 3 */
   maxDepth: z.number().int().min(0).default(3),
   /** Files larger than this are skipped with a finding. @default 10485760 (10 MiB) */
   maxFileBytes: z.number().int().positive().default(10 * 1024 * 1024),
   /** Links kept per page; more are dropped with a finding. @default 20000 */
   maxLinksPerPage: z.number().int().positive().default(20000),
-  /** Severity (and options) per rule id: 'off' | 'warning' | 'error' | [severity, options]. @default {} */
-  rules: z.record(z.string(), ruleSetting).default({}),
-  /** The gate fails when any finding is at or above this severity. @default 'error' */
+  /** Level and options per check id: `{ "dead-end": { "level": "none" } }`. @default {} */
+  checks: z.record(z.string(), checkSetting).default({}),
+  /** The run fails (exit 1) when any finding is at or above this level. @default 'error' */
   failOn: z.enum(['error', 'warning']).default('error'),
   /** Globs (on file paths) or routes of pages that matter most. @default [] */
   important: z.array(z.string().min(1)).default([]),
@@ -110,16 +110,19 @@ const schema = z.strictObject({
       impactLimit: z.number().int().min(0).default(200),
     })
     .prefault({}),
-  /** Gate limits: the gate fails when a count exceeds its limit. null = no limit. */
-  gate: z
+  /**
+   * Limits on the whole site: the run fails (exit 1) when a count goes over its limit, or when a
+   * page of high importance has fewer content inlinks than `importantPageInlinks`. null = no limit.
+   * (The depth limit is `maxDepth`; set the `click-depth` check's level to `error` to fail on it.)
+   */
+  limits: z
     .strictObject({
-      maxDepth: z.number().int().min(0).nullable().default(null),
-      maxOrphans: z.number().int().min(0).nullable().default(null),
-      maxBrokenLinks: z.number().int().min(0).nullable().default(null),
-      maxBrokenFragments: z.number().int().min(0).nullable().default(null),
-      maxUnreachable: z.number().int().min(0).nullable().default(null),
-      maxWarnings: z.number().int().min(0).nullable().default(null),
-      minInlinksForImportant: z.number().int().min(0).nullable().default(null),
+      brokenLinks: z.number().int().min(0).nullable().default(null),
+      brokenFragments: z.number().int().min(0).nullable().default(null),
+      orphans: z.number().int().min(0).nullable().default(null),
+      unreachable: z.number().int().min(0).nullable().default(null),
+      warnings: z.number().int().min(0).nullable().default(null),
+      importantPageInlinks: z.number().int().min(0).nullable().default(null),
     })
     .prefault({}),
   cache: z
@@ -157,6 +160,8 @@ export const DEFAULT_OPTIONS: Omit<ResolvedOptions, 'root'> = schema.parse({});
  * @throws EngineError `E_CONFIG_INVALID` naming the key, the problem and the accepted values
  */
 export function resolveOptions(input: unknown, root: string, origin = 'configuration'): ResolvedOptions {
+  const old = oldFormProblem(input);
+  if (old !== null) throw new EngineError('E_CONFIG_INVALID', `${origin}: ${old}`);
   const result = schema.safeParse(input ?? {}, { reportInput: true });
   if (!result.success) {
     throw new EngineError('E_CONFIG_INVALID', `${origin}: ${describeIssue(schema, result.error.issues[0]!)}`);

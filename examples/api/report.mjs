@@ -14,7 +14,7 @@ try {
   console.log(`${stats.pages} pages, ${stats.links} links, ${stats.brokenLinks} broken links, ${stats.orphans} orphans, deepest page ${stats.maxDepth} clicks`);
   const top = [...report.pages].sort((a, b) => b.pagerank - a.pagerank).slice(0, 3);
   console.log(`Top pages by PageRank: ${top.map((p) => p.route).join(', ')}`);
-  console.log(`${report.findings.length} findings, ${report.suggestions.length} suggested links; gate ${report.gate.passed ? 'passed' : 'failed'}`);
+  console.log(`${report.findings.length} findings, ${report.suggestions.length} suggested links; the run ${report.gate.passed ? 'passes' : 'fails'}`);
   // Every writer is a pure function of the report: text, json, markdown, sarif, html.
   const comment = formatReport(report, 'markdown');
   console.log(`Markdown comment: ${comment.split('\n').length} lines`);

@@ -29,4 +29,4 @@ for (const path of (await glob('**/*.html', { cwd: root })).sort()) collector.ad
 const report = await collector.report(); // the same Report as analyze({ ...config, root })
 for (const file of files) collector.attach(file); // findings become vfile messages
 console.log(reporter(files, { quiet: true }));
-console.log(`${report.stats.pages} pages; gate ${report.gate.passed ? 'passed' : 'failed'}`);
+console.log(`${report.stats.pages} pages; the run ${report.gate.passed ? 'passes' : 'fails'}`);

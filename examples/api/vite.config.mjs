@@ -17,7 +17,7 @@ export default defineConfig({
   plugins: [
     linkweave({
       // The keys of linkweave.config.json; `include` defaults to the built HTML pages here.
-      config: { maxDepth: 2, gate: { maxOrphans: 0 } },
+      config: { maxDepth: 2, limits: { orphans: 0 } },
       // Written after the analysis (paths relative to Vite's root), also when the gate fails.
       reports: [{ format: 'json', file: 'dist/linkweave-report.json' }],
       // The build fails when the gate fails; `failBuild: false` only reports.

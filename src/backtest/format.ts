@@ -15,8 +15,8 @@ export const BACKTEST_SCHEMA = 'linkweave/backtest@1';
 
 const DECIMALS = 6;
 
-/** How the methods are named in the table. */
-export const METHOD_LABELS: Readonly<Record<MethodId, string>> = {
+/** How the methods are named in the table; a method without a label is shown by its id. */
+export const METHOD_LABELS: Readonly<Partial<Record<MethodId, string>>> = {
   linkweave: 'linkweave',
   tfidf: 'TF-IDF only',
   'title-phrase': 'title phrase',
@@ -98,51 +98,98 @@ function coverage(runs: BacktestResult['runs']): string {
   return xs.length === 0 ? '-' : `${(100 * mean(xs)).toFixed(1)}%`;
 }
 
+/** A method's name for people. */
+function methodLabel(method: MethodId): string {
+  return METHOD_LABELS[method] ?? method;
+}
+
 function modelLine(runs: BacktestResult['runs']): string {
   const fitted = runs.filter((x) => x.model.source === 'fitted').length;
   const aucs = runs.map((x) => x.model.auc).filter((x): x is number => x !== null);
   const pairs = count(mean(runs.map((x) => x.model.trainingPairs)));
-  const auc = aucs.length === 0 ? '' : `, AUC ${f3(mean(aucs))} on pairs kept out of the fit`;
-  return `fitted on ${pairs} pairs per run (${fitted} of ${runs.length} runs fitted, the rest fixed weights)${auc}`;
+  const auc = aucs.length === 0 ? '' : `; AUC ${f3(mean(aucs))} on training pairs kept out of the fit`;
+  const how = fitted === runs.length ? 'fitted in every run' : `fitted in ${fitted} of ${runs.length} runs, fixed weights in the rest (too few links)`;
+  return `${how}, on ${pairs} pairs of pages per run${auc}`;
 }
 
-/** The table for people, ending in a newline. */
+const pct = (x: number): string => `${(100 * x).toFixed(1)}%`;
+
+/**
+ * One sentence: linkweave's recall at k = 5 (the middle k) against the best baseline's, in
+ * percentage points; every other method in the result is a baseline.
+ */
+function verdict(result: BacktestResult): string {
+  const k = K_VALUES.length > 1 ? 1 : 0;
+  const ours = result.summary.find((s) => s.method === 'linkweave');
+  const baselines = result.summary.filter((s) => s.method !== 'linkweave' && s.recall[k]!.mean !== null);
+  if (ours === undefined || ours.recall[k]!.mean === null || baselines.length === 0) return 'Verdict: nothing to compare.';
+  const best = baselines.reduce((a, b) => (b.recall[k]!.mean! > a.recall[k]!.mean! ? b : a));
+  const mine = ours.recall[k]!.mean!;
+  const theirs = best.recall[k]!.mean!;
+  const points = Math.abs(100 * (mine - theirs));
+  const standing = points < 0.05 ? 'level with it' : `${points.toFixed(1)} points ${mine > theirs ? 'ahead' : 'behind'}`;
+  const over = result.settings.runs > 1 ? ` (means over ${result.settings.runs} runs)` : '';
+  return (
+    `Verdict: linkweave finds ${pct(mine)} of the held-out links among its first ${K_VALUES[k]} proposed sources; ` +
+    `the best baseline, ${methodLabel(best.method)}, finds ${pct(theirs)}: linkweave is ${standing}${over}.`
+  );
+}
+
+/** Lay out `text` in lines of at most `width` columns after a label column (`indent` wide). */
+function field(label: string, text: string, width = 100, indent = 16): string[] {
+  const lines: string[] = [];
+  let line = indent === 0 ? '' : `  ${label.padEnd(indent - 2)}`;
+  let empty = true;
+  for (const word of text.split(' ')) {
+    if (!empty && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = ' '.repeat(indent);
+      empty = true;
+    }
+    line += empty ? word : ` ${word}`;
+    empty = false;
+  }
+  lines.push(line);
+  return lines;
+}
+
+/** Plain words for a verdict line and a table, ending in a newline. */
 export function formatBacktestText(result: BacktestResult): string {
   const { settings, suggest, site, runs } = result;
   const score = scoreFormula(suggest.minSimilarity);
   const seeds = settings.runs === 1 ? `seed ${settings.seed}` : `seeds ${settings.seeds[0]}..${settings.seeds[settings.seeds.length - 1]} (${settings.runs} runs)`;
-  const changes = [
-    suggest.targets.configured === 'all' ? null : `suggest.targets ${suggest.targets.configured} -> all`,
-    suggest.perTarget.configured === suggest.perTarget.used ? null : `perTarget ${suggest.perTarget.configured} -> ${suggest.perTarget.used}`,
-    `perSource ${suggest.perSource.configured} -> no cap`,
-  ].filter((c): c is string => c !== null);
-  const field = (label: string, value: string) => `  ${label.padEnd(16)}${value}`;
   const perRun = (f: (x: BacktestResult['runs'][number]) => number) => count(mean(runs.map(f)));
-  const lines = [
-    `linkweave backtest: ${result.root}`,
-    '',
-    field('site', `${site.pages} pages; ${site.contentLinks} content links between ${site.contentPairs} page pairs, ${site.eligiblePairs} of which may be held out`),
-    field('held out', `${roundTo(settings.holdout * 100, 2)}% of those pairs per run, ${seeds}; every page keeps a content inlink`),
-    field('link words', settings.keepLinkText ? 'kept in the page as prose, where an anchor may go (--keep-link-text)' : 'removed with the link (--keep-link-text keeps them as prose)'),
-    field(settings.runs > 1 ? 'per run (mean)' : 'this run', `${perRun((x) => x.heldOutPairs)} pairs (${perRun((x) => x.heldOutLinks)} links) into ${perRun((x) => x.targets)} target pages`),
-    field('candidates', `${coverage(runs)} of the held-out sources are candidates of their target (names mentioned, TF-IDF neighbours, graph neighbourhood)`),
-    field('model', modelLine(runs)),
-    field('minSimilarity', `${suggest.minSimilarity} (relatedK ${suggest.relatedK})`),
-    field('score', score.formula),
-    field('k', `${K_VALUES.join(', ')} (ranked lists of ${LIST_LENGTH} sources per target)`),
-    field('backtest sets', changes.join(', ')),
-    '',
+  const perSource = suggest.perSource;
+  const eligible = site.eligiblePairs === site.contentPairs ? 'all may be held out' : `${site.eligiblePairs} may be held out`;
+  const pairs = site.contentLinks === site.contentPairs ? `${site.contentLinks} content links between pages` : `${site.contentLinks} content links between ${site.contentPairs} pairs of pages`;
+  const forTest = [
+    suggest.targets.configured === 'all' ? 'links proposed to every page' : 'links proposed to every page, not only the under-linked ones',
+    `up to ${suggest.perTarget.used} per target page${suggest.perTarget.configured === suggest.perTarget.used ? '' : ` (configured: ${suggest.perTarget.configured})`}`,
+    perSource.used === 0 ? `no cap per source page (configured: ${perSource.configured === 0 ? 'none' : perSource.configured})` : `up to ${perSource.used} per source page`,
   ];
+  const tested = [
+    ...field('site', `${site.pages} pages, ${pairs} (${eligible})`),
+    ...field('held out', `${roundTo(settings.holdout * 100, 2)}% of them, ${seeds}: ${settings.runs > 1 ? 'per run ' : ''}${perRun((x) => x.heldOutLinks)} links from ${perRun((x) => x.heldOutPairs)} pairs into ${perRun((x) => x.targets)} target pages; every page keeps a content link in`),
+    ...field('link words', settings.keepLinkText ? 'kept in the page as prose, where an anchor may go (--keep-link-text)' : 'removed with the link (--keep-link-text keeps them as prose)'),
+    ...field('within reach', `${coverage(runs)} of the held-out sources are among linkweave's candidates for their target (pages that mention its names, its ${suggest.relatedK} most related pages, its graph neighbourhood)`),
+    ...field('score', score.formula),
+    ...field('model', modelLine(runs)),
+    ...field('for the test', `${forTest.join('; ')}`),
+  ];
+  const lines = [`linkweave backtest: ${result.root}`, ''];
   if (result.summary.every((s) => s.mrr.mean === null)) {
     lines.push(
-      '  Nothing was held out: no page has content inlinks from two or more other pages, so any held-out',
-      '  link would leave a page without inlinks.',
+      'Nothing was held out: no page has content inlinks from two or more other pages, so any held-out',
+      'link would leave a page without inlinks.',
+      '',
+      ...tested,
     );
     return `${lines.join('\n')}\n`;
   }
+  lines.push(...field('', verdict(result), 100, 0), '');
   const header = ['method', ...K_VALUES.map((k) => `R@${k}`), ...K_VALUES.map((k) => `P@${k}`), 'MRR', 'anchor', 'line'];
   const rows = result.summary.map((s) => [
-    METHOD_LABELS[s.method],
+    methodLabel(s.method),
     ...s.recall.map((x) => cell(x, settings.runs)),
     ...s.precision.map((x) => cell(x, settings.runs)),
     cell(s.mrr, settings.runs),
@@ -161,6 +208,9 @@ export function formatBacktestText(result: BacktestResult): string {
     `  top ${LIST_LENGTH} (0 if none). anchor: share of the recovered links whose anchor shares a word stem`,
     `  with the original link text. line: share of the recovered links whose anchor is on the line of`,
     `  the original link.${place}`,
+    '',
+    'What was tested',
+    ...tested,
   );
   return `${lines.join('\n')}\n`;
 }

@@ -28,31 +28,47 @@ export const FORMAT_NAMES: readonly FormatId[] = FORMAT_IDS;
 /** A format as the `--format` flag names it. */
 export type FormatName = FormatId;
 
-/** Flags every command accepts. */
-export const COMMON_FLAGS: readonly FlagSpec[] = [
-  { name: 'config', kind: 'string', value: 'FILE', description: 'configuration file (.json, .mjs or .js)' },
-  {
+/** The flags shared by several commands, by name; each command lists the ones it takes. */
+export const FLAGS = {
+  config: { name: 'config', kind: 'string', value: 'FILE', description: 'configuration file (.json, .mjs or .js)' },
+  format: {
     name: 'format',
     kind: 'string',
     value: 'FORMAT',
     choices: FORMAT_NAMES,
     description: 'output format (default: from the --output extension, else text)',
   },
-  { name: 'output', kind: 'string', value: 'FILE', description: 'write the report to FILE (atomically) instead of stdout' },
-  { name: 'max-depth', kind: 'string', value: 'N', minInteger: 0, description: 'deepest click depth allowed (config maxDepth)' },
-  {
+  output: { name: 'output', kind: 'string', value: 'FILE', description: 'write the report to FILE (atomically); the terminal gets a short summary' },
+  maxDepth: { name: 'max-depth', kind: 'string', value: 'N', minInteger: 0, description: 'deepest click depth allowed (config maxDepth)' },
+  failOn: {
     name: 'fail-on',
     kind: 'string',
     value: 'LEVEL',
     choices: ['error', 'warning'],
-    description: 'fail the gate on findings at or above this severity (config failOn)',
+    description: 'fail the run (exit 1) on findings at or above this level (config failOn)',
   },
-  { name: 'quiet', kind: 'boolean', description: 'print nothing but the report (no summary, no progress)' },
-  { name: 'no-progress', kind: 'boolean', description: 'no progress display on stderr' },
-  { name: 'no-cache', kind: 'boolean', description: 'do not read or write the parse cache (config cache.enabled)' },
-  { name: 'help', kind: 'boolean', description: 'show this help' },
-  { name: 'version', kind: 'boolean', description: 'show the version' },
+  quiet: { name: 'quiet', kind: 'boolean', description: 'print nothing but the report (no summary, no progress)' },
+  noProgress: { name: 'no-progress', kind: 'boolean', description: 'no progress display on stderr' },
+  noCache: { name: 'no-cache', kind: 'boolean', description: 'do not read or write the parse cache (config cache.enabled)' },
+  help: { name: 'help', kind: 'boolean', description: 'show this help' },
+  version: { name: 'version', kind: 'boolean', description: 'show the version' },
+} as const satisfies Record<string, FlagSpec>;
+
+/** Flags of `suggest` beyond those of `check`. */
+export const SUGGEST_FLAGS: readonly FlagSpec[] = [
+  {
+    name: 'targets',
+    kind: 'string',
+    value: 'WHICH',
+    choices: ['underlinked', 'all'],
+    description: 'propose links to under-linked pages only, or to every page (config suggest.targets)',
+  },
+  { name: 'per-target', kind: 'string', value: 'N', minInteger: 1, description: 'most suggestions per target page (config suggest.perTarget)' },
+  { name: 'per-source', kind: 'string', value: 'N', minInteger: 0, description: 'most new links per source page, 0 = no cap (config suggest.perSource)' },
 ];
+
+/** `help` and `version`: taken by every command. */
+const ALWAYS: readonly FlagSpec[] = [FLAGS.help, FLAGS.version];
 
 /** Short forms. */
 const ALIASES: Readonly<Record<string, string>> = { '-h': 'help', '-v': 'version' };
@@ -62,8 +78,15 @@ export interface CommandInfo {
   readonly name: string;
   /** One line for the help. */
   readonly summary: string;
-  /** Flags this command takes beyond `COMMON_FLAGS`. */
-  readonly flags?: readonly FlagSpec[];
+  /** Every flag this command takes (besides --help and --version); any other flag is refused. */
+  readonly flags: readonly FlagSpec[];
+  /** The command's exit codes, one sentence for its help. */
+  readonly exitCodes: string;
+}
+
+/** The flags a command takes, --help and --version included. */
+export function flagsOf(command: CommandInfo): readonly FlagSpec[] {
+  return [...command.flags, ...ALWAYS];
 }
 
 /** Flag values by flag name: `true` for boolean flags, the checked string or number otherwise. */
@@ -118,12 +141,14 @@ export function parseArgs(argv: readonly string[], commands: readonly CommandInf
   const names = commands.map((c) => c.name).join(', ');
   if (commandName === null) return usage(`missing command; accepted commands: ${names} (see --help)`);
   if (command === null) return usage(`unknown command "${commandName}"; accepted commands: ${names}`);
-  const accepted = [...COMMON_FLAGS, ...(command.flags ?? [])];
+  const accepted = flagsOf(command);
   const flags: Record<string, string | number | true> = {};
   for (const { flag, value } of seen) {
     const spec = accepted.find((f) => f.name === flag);
     if (spec === undefined) {
-      usage(`unknown flag "--${flag}" for "${command.name}"; accepted flags: ${accepted.map((f) => `--${f.name}`).join(', ')}`);
+      const known = findFlag(flag, commands) !== undefined;
+      const list = accepted.map((f) => `--${f.name}`).join(', ');
+      usage(`${known ? `flag --${flag} is not taken by` : `unknown flag --${flag} for`} "${command.name}"; its flags: ${list}`);
     }
     flags[flag] = checkValue(spec!, value);
   }
@@ -134,7 +159,7 @@ export function parseArgs(argv: readonly string[], commands: readonly CommandInf
 }
 
 function findFlag(name: string, commands: readonly CommandInfo[]): FlagSpec | undefined {
-  return COMMON_FLAGS.find((f) => f.name === name) ?? commands.flatMap((c) => c.flags ?? []).find((f) => f.name === name);
+  return ALWAYS.find((f) => f.name === name) ?? commands.flatMap((c) => c.flags).find((f) => f.name === name);
 }
 
 function checkValue(spec: FlagSpec, value: string | null): string | number | true {
@@ -156,22 +181,33 @@ function checkValue(spec: FlagSpec, value: string | null): string | number | tru
 }
 
 /**
- * The help text: usage, commands, flags and exit codes; for one command when `command` is given.
+ * The help text: for one command its usage, its own flags only and its exit codes; without a
+ * command, the list of commands.
  */
 export function helpText(commands: readonly CommandInfo[], command: string | null, version: string): string {
   const cmd = command === null ? null : commands.find((c) => c.name === command);
-  const flags = [...COMMON_FLAGS, ...(cmd?.flags ?? [])];
+  const lines = [`linkweave ${version}: internal links, PageRank, click depth and link suggestions for documentation sources`, ''];
+  if (!cmd) {
+    const width = Math.max(...commands.map((c) => c.name.length)) + 2;
+    lines.push(
+      'Usage: linkweave <command> [root] [flags]',
+      '',
+      'Commands:',
+      ...commands.map((c) => `  ${c.name.padEnd(width)}${c.summary}`),
+      '',
+      'root: the content root (default: the working folder).',
+      'linkweave <command> --help lists the flags and exit codes of a command; --version shows the version.',
+    );
+    return `${lines.join('\n')}\n`;
+  }
+  const flags = flagsOf(cmd);
   const flagLabel = (f: FlagSpec) => `--${f.name}${f.value === undefined ? '' : ` ${f.value}`}`;
-  const width = Math.max(...flags.map((f) => flagLabel(f).length), ...commands.map((c) => c.name.length)) + 2;
-  const lines = [
-    `linkweave ${version}: internal links, PageRank, click depth and link suggestions for documentation sources`,
-    '',
-    cmd ? `Usage: linkweave ${cmd.name} [root] [flags]` : 'Usage: linkweave <command> [root] [flags]',
-    '',
-  ];
-  if (cmd) lines.push(`  ${cmd.summary}`, '');
-  else lines.push('Commands:', ...commands.map((c) => `  ${c.name.padEnd(width)}${c.summary}`), '');
+  const width = Math.max(...flags.map((f) => flagLabel(f).length)) + 2;
   lines.push(
+    `Usage: linkweave ${cmd.name} [root] [flags]`,
+    '',
+    `  ${cmd.summary}`,
+    '',
     'root: the content root (default: the working folder).',
     '',
     'Flags:',
@@ -182,7 +218,7 @@ export function helpText(commands: readonly CommandInfo[], command: string | nul
     'folder). Paths in it (navigation, redirects, traffic) are relative to the content root. Flags',
     'override the configuration.',
     '',
-    'Exit codes: 0 the gate passed; 1 the gate failed; 2 usage, configuration or I/O error.',
+    `Exit codes: ${cmd.exitCodes}`,
   );
   return `${lines.join('\n')}\n`;
 }

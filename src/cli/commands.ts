@@ -6,9 +6,10 @@ import { resolve } from 'node:path';
 import { analyze } from '../analyze.js';
 import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
 import type { Config } from '../options.js';
-import { formatReportPieces } from '../report/index.js';
+import { formatReportPieces, summaryLines } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
-import type { CommandInfo, FlagValues, FormatName } from './args.js';
+import { FLAGS, SUGGEST_FLAGS } from './args.js';
+import type { CommandInfo, FlagSpec, FlagValues, FormatName } from './args.js';
 import { colorEnabled } from './io.js';
 import type { CliIo } from './io.js';
 import { checkOutputPath, formatFromOutput } from './output.js';
@@ -43,28 +44,65 @@ export interface Command extends CommandInfo {
   run(ctx: CommandContext): Promise<number>;
 }
 
+/** The flags of `check`. */
+const CHECK_FLAGS: readonly FlagSpec[] = [
+  FLAGS.config,
+  FLAGS.format,
+  FLAGS.output,
+  FLAGS.maxDepth,
+  FLAGS.failOn,
+  ...REVIEW_FLAGS,
+  FLAGS.quiet,
+  FLAGS.noProgress,
+  FLAGS.noCache,
+];
+
+/** The report commands' exit codes. */
+const REPORT_EXIT =
+  '0 the run passes (no finding at or above --fail-on, no limit crossed); 1 it fails; 2 usage, configuration or I/O error.';
+
 /** The commands, in help order. */
 export const COMMANDS: readonly Command[] = [
   {
     name: 'check',
-    summary: 'build the link graph, run the rules, print the findings, apply the gate',
-    flags: REVIEW_FLAGS,
+    summary: 'build the link graph, run the checks, print the findings and the verdict',
+    flags: CHECK_FLAGS,
+    exitCodes: REPORT_EXIT,
     run: (ctx) => reportCommand(ctx, 'check'),
   },
   {
     name: 'suggest',
     summary: 'check, plus proposed new links (file, line, column, anchor, target, predicted impact)',
-    flags: REVIEW_FLAGS,
+    flags: [...CHECK_FLAGS.slice(0, 5), ...SUGGEST_FLAGS, ...CHECK_FLAGS.slice(5)],
+    exitCodes: REPORT_EXIT,
     run: (ctx) => reportCommand(ctx, 'suggest'),
   },
-  { name: 'apply', summary: APPLY_SUMMARY, flags: APPLY_FLAGS, run: runApplyCommand },
-  { name: 'backtest', summary: BACKTEST_SUMMARY, flags: BACKTEST_FLAGS, run: runBacktestCommand },
+  {
+    name: 'apply',
+    summary: APPLY_SUMMARY,
+    flags: [...APPLY_FLAGS, FLAGS.config, FLAGS.quiet, FLAGS.noCache],
+    exitCodes:
+      '0 every chosen link was written (with --dry-run: could be); 1 some were refused (the file changed, overlapping anchors, no anchor phrase); 2 usage, an unknown id, a bad --from report or a file that could not be written.',
+    run: runApplyCommand,
+  },
+  {
+    name: 'backtest',
+    summary: BACKTEST_SUMMARY,
+    flags: [
+      ...BACKTEST_FLAGS,
+      FLAGS.config,
+      { ...FLAGS.format, choices: ['text', 'json'], description: 'output format (default: json when --output ends in .json, else text)' },
+      FLAGS.output,
+      FLAGS.quiet,
+      FLAGS.noProgress,
+      FLAGS.noCache,
+    ],
+    exitCodes: '0 the backtest ran; 2 usage, configuration or I/O error.',
+    run: runBacktestCommand,
+  },
 ];
 
-/** Findings and suggestions listed in the terminal summary after a report file is written. */
-const SUMMARY_ITEMS = 20;
-
-/** analyze -> format -> stdout or --output; exit 0 when the gate passed, 1 when it failed. */
+/** analyze -> format -> stdout or --output; exit 0 when the run passes, 1 when it fails. */
 async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'): Promise<number> {
   const { io, flags } = ctx;
   const output = flags.output === null ? null : resolve(io.cwd, flags.output);
@@ -85,16 +123,18 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
   // The text report shows paths relative to the working folder, wrapped to the terminal.
-  const terminal = { color, cwd: io.cwd, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
+  // The printed apply command reads the same configuration file as this run.
+  const config = typeof ctx.values.config === 'string' ? { applyArgs: ['--config', ctx.values.config] } : {};
+  const terminal = { color, cwd: io.cwd, ...config, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
   if (output === null) {
     for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);
   } else {
-    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd });
+    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd, ...config });
     await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
     if (!flags.quiet) {
-      // After another format went to a file, the terminal gets a summary: the counts, the gate
-      // and the first findings and suggestions (a large site has a hundred thousand).
-      if (format !== 'text') for (const piece of formatReportPieces(report, 'text', { ...terminal, maxItems: SUMMARY_ITEMS })) io.stdout.write(piece);
+      // The report went to a file: the terminal gets the summary alone (the site's counts, the
+      // findings' count and the verdict), so a CI log does not carry the report twice.
+      io.stdout.write(`${summaryLines(report, terminal).join('\n')}\n`);
       io.stderr.write(`linkweave: report written to ${flags.output}\n`);
     }
   }

@@ -21,7 +21,7 @@ export const EXIT = { passed: 0, failed: 1, error: 2 } as const;
 /**
  * Run the command line.
  * @param argv arguments after the script path, e.g. `['check', 'docs', '--format', 'json']`
- * @returns 0 the gate passed, 1 the gate failed, 2 usage, configuration or I/O error
+ * @returns 0 the run passes, 1 it fails (or, for apply, some links were refused), 2 usage, configuration or I/O error
  */
 export async function run(argv: readonly string[], io: CliIo): Promise<number> {
   try {
@@ -53,10 +53,20 @@ export async function run(argv: readonly string[], io: CliIo): Promise<number> {
   }
 }
 
-/** Flags override configuration keys: --max-depth, --fail-on, --no-cache. */
+/**
+ * Flags override configuration keys: --max-depth (maxDepth), --fail-on (failOn), --no-cache
+ * (cache.enabled), --targets, --per-target and --per-source (suggest.targets, .perTarget,
+ * .perSource). The parser has already refused a flag the command does not take.
+ */
 export function withFlags(config: Config, values: FlagValues): Config {
   const merged: Config = { ...config };
   if (typeof values['max-depth'] === 'number') merged.maxDepth = values['max-depth'];
+  const suggest: Record<string, unknown> = {};
+  const targets = stringFlag(values, 'targets');
+  if (targets === 'underlinked' || targets === 'all') suggest.targets = targets;
+  if (typeof values['per-target'] === 'number') suggest.perTarget = values['per-target'];
+  if (typeof values['per-source'] === 'number') suggest.perSource = values['per-source'];
+  if (Object.keys(suggest).length > 0) merged.suggest = { ...config.suggest, ...suggest } as Config['suggest'];
   const failOn = stringFlag(values, 'fail-on');
   if (failOn === 'error' || failOn === 'warning') merged.failOn = failOn;
   if (values['no-cache'] === true) merged.cache = { ...config.cache, enabled: false };

@@ -4,18 +4,16 @@
  * Pure functions of the report.
  */
 import { isAbsolute, join, relative, sep } from 'node:path';
-import { describeFailure, problemsLine, summaryParts } from '../report/formatters/common.js';
+import { findingsLine, summaryParts, verdictReasons } from '../report/formatters/common.js';
 import type { Finding, Report } from '../types.js';
 
 /** Findings listed in a log message or an error; the rest are counted. */
 export const MAX_LISTED_FINDINGS = 20;
 
-/** "linkweave: 5 pages, 9 links, ... Gate passed." */
+/** "linkweave: 5 pages, 9 links, ... Findings: none. The build passes: no errors, no limit crossed." */
 export function summaryOf(report: Report, label: string): string {
-  const gate = report.gate.passed
-    ? 'gate passed'
-    : `gate failed: ${report.gate.failures.map((f) => describeFailure(f, report.gate.failOn)).join(', ')}`;
-  return `${label}: ${summaryParts(report).join(', ')}. ${problemsLine(report)}; ${gate}.`;
+  const verdict = report.gate.passed ? 'The build passes' : 'The build fails';
+  return `${label}: ${summaryParts(report).join(', ')}. ${findingsLine(report)}. ${verdict}: ${verdictReasons(report).join(', ')}.`;
 }
 
 /** The findings that fail the gate: those at or above `failOn`. */
@@ -41,7 +39,7 @@ export function gateErrorMessage(report: Report, label: string, cwd: string): st
   const failing = failingFindings(report);
   return [
     summaryOf(report, label),
-    ...(failing.length > 0 ? [`Findings that fail the gate (failOn: ${report.gate.failOn}):`, ...findingLines(report, failing, cwd)] : []),
+    ...(failing.length > 0 ? [`Findings that fail the build (failOn: ${report.gate.failOn}):`, ...findingLines(report, failing, cwd)] : []),
     'Fix them, raise the limits in the configuration, or pass failBuild: false to report without failing the build.',
   ].join('\n');
 }

@@ -1,27 +1,27 @@
 /**
- * The gate: whether the run passes, and every limit it crossed.
+ * The verdict of a run: whether it passes (exit 0) or fails (exit 1), and every reason.
  *
  * Two kinds of failure:
- * - severity: a rule has findings at or above `failOn` -> `{ rule: <rule id>, limit: 0,
- *   actual: <that rule's findings at or above failOn> }`;
- * - a `gate` limit is crossed -> `{ rule: 'gate.<key>', limit, actual }`: `maxDepth` (deepest
- *   reachable page), `maxOrphans`, `maxBrokenLinks`, `maxBrokenFragments`, `maxUnreachable`,
- *   `maxWarnings` (findings of severity warning) fail when the count is above the limit;
- *   `minInlinksForImportant` fails when a page of high importance has fewer content inlinks
- *   (`actual` is the fewest).
+ * - level: a check has findings at or above `failOn` -> `{ rule: <check id>, limit: 0,
+ *   actual: <that check's findings at or above failOn> }`;
+ * - a site limit (`limits`) is crossed -> `{ rule: 'limits.<key>', limit, actual }`:
+ *   `orphans`, `brokenLinks`, `brokenFragments`, `unreachable`, `warnings` (findings of level
+ *   warning) fail when the count is over the limit; `importantPageInlinks` fails when a page of
+ *   high importance has fewer content inlinks (`actual` is the fewest).
  *
- * Failures are sorted by `rule`.
+ * Failures are sorted by `rule`. The report keeps the result under its `gate` key (the report
+ * contract, DESIGN section 8).
  */
 import type { ResolvedOptions } from '../options.js';
 import type { Finding, GateFailure, Report } from '../types.js';
 import { compareText } from '../rules/structure.js';
 import type { GateStats } from './types.js';
 
-/** Decide the gate. `findings` are the ones that count (a baseline may have removed known ones). */
+/** Decide the verdict. `findings` are the ones that count (a baseline may have removed known ones). */
 export function evaluateGate(
   findings: readonly Finding[],
   stats: GateStats,
-  options: Pick<ResolvedOptions, 'failOn' | 'gate'>,
+  options: Pick<ResolvedOptions, 'failOn' | 'limits'>,
 ): Report['gate'] {
   const failures: GateFailure[] = [];
   const counts = new Map<string, number>();
@@ -30,20 +30,19 @@ export function evaluateGate(
   }
   for (const [rule, actual] of counts) failures.push({ rule, limit: 0, actual });
 
-  const { gate } = options;
-  const above = (key: keyof typeof gate, actual: number | null): void => {
-    const limit = gate[key];
-    if (limit !== null && actual !== null && actual > limit) failures.push({ rule: `gate.${key}`, limit, actual });
+  const { limits } = options;
+  const above = (key: Exclude<keyof typeof limits, 'importantPageInlinks'>, actual: number | null): void => {
+    const limit = limits[key];
+    if (limit !== null && actual !== null && actual > limit) failures.push({ rule: `limits.${key}`, limit, actual });
   };
-  above('maxDepth', stats.maxDepth);
-  above('maxOrphans', stats.orphans);
-  above('maxBrokenLinks', stats.brokenLinks);
-  above('maxBrokenFragments', stats.brokenFragments);
-  above('maxUnreachable', stats.unreachable);
-  above('maxWarnings', findings.filter((f) => f.severity === 'warning').length);
-  const min = gate.minInlinksForImportant;
+  above('orphans', stats.orphans);
+  above('brokenLinks', stats.brokenLinks);
+  above('brokenFragments', stats.brokenFragments);
+  above('unreachable', stats.unreachable);
+  above('warnings', findings.filter((f) => f.severity === 'warning').length);
+  const min = limits.importantPageInlinks;
   if (min !== null && stats.fewestImportantInlinks !== null && stats.fewestImportantInlinks < min) {
-    failures.push({ rule: 'gate.minInlinksForImportant', limit: min, actual: stats.fewestImportantInlinks });
+    failures.push({ rule: 'limits.importantPageInlinks', limit: min, actual: stats.fewestImportantInlinks });
   }
   failures.sort((a, b) => compareText(a.rule, b.rule));
   return { passed: failures.length === 0, failOn: options.failOn, failures };

@@ -4,7 +4,7 @@ export { evaluateGate } from './gate.js';
 export { computeStats } from './stats.js';
 export { PAGERANK_DECIMALS, RATIO_DECIMALS, roundTo } from './round.js';
 export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId } from './format.js';
-export { textFormatter } from './formatters/text.js';
+export { textFormatter, summaryLines } from './formatters/text.js';
 export { jsonFormatter } from './formatters/json.js';
 export { markdownFormatter, escapeMarkdown } from './formatters/markdown.js';
 export { sarifFormatter, toSarif, linkMarkup, SUGGESTION_RULE } from './formatters/sarif.js';

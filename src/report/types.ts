@@ -65,6 +65,11 @@ export interface FormatContext {
    * @default all
    */
   readonly maxItems?: number;
+  /**
+   * Words to add to the printed apply command so that it reads the same configuration as this
+   * run, e.g. `['--config', 'ci/linkweave.json']` (as the user typed them). @default none
+   */
+  readonly applyArgs?: readonly string[];
 }
 
 /** A report writer: pure, one file each under `report/formatters/`. */

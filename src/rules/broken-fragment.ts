@@ -10,7 +10,7 @@ import { nearest } from './nearest.js';
  * and the closest existing fragment of that page when one is close by edit distance.
  * `target` is `route#fragment`.
  *
- * Options: none. Default severity: `error`.
+ * Options: none. Default level: `error`.
  *
  * @example ok (`/guide/install/` has a heading "Set up")
  * ```md
@@ -20,8 +20,8 @@ import { nearest } from './nearest.js';
  * ```md
  * See [setting up](install.md#setup).
  * ```
- * `guide/index.md:1:5  error  Unexpected link to missing fragment #setup on /guide/install/,
- * expected a heading or id of that page (did you mean #set-up?)  broken-fragment`
+ * `guide/index.md:1:5  error  Broken fragment: /guide/install/ has no heading or id "setup";
+ * did you mean #set-up?`
  */
 export const brokenFragment: Rule = {
   id: 'broken-fragment',
@@ -36,12 +36,12 @@ export const brokenFragment: Rule = {
       const page = link.to >= 0 ? ctx.graph.pages[link.to] : undefined;
       const ids = page === undefined ? [] : (ctx.facts[page.factsIndex]?.ids ?? []);
       const guess = nearest(fragment, ids);
-      const hint = guess === null ? '' : ` (did you mean #${guess}?)`;
+      const todo = guess === null ? 'fix the fragment or add the heading' : `did you mean #${guess}?`;
       findings.push({
         ...linkSource(ctx, link),
         line: link.raw.line,
         column: link.raw.column,
-        message: `Unexpected link to missing fragment #${fragment} on ${link.target}, expected a heading or id of that page${hint}`,
+        message: `Broken fragment: ${link.target} has no heading or id "${fragment}"; ${todo}`,
         target: `${link.target}#${fragment}`,
       });
     }

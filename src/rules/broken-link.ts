@@ -12,7 +12,7 @@ import { nearest } from './nearest.js';
  * differs, and the closest existing route (or source file) by edit distance when one is close.
  * `target` is the resolved target.
  *
- * Options: none. Default severity: `error`.
+ * Options: none. Default level: `error`.
  *
  * @example ok (`guide/index.md`, the site has `guide/install.md`, route `/guide/install/`)
  * ```md
@@ -22,10 +22,9 @@ import { nearest } from './nearest.js';
  * ```md
  * Read [the install guide](instal.md) or [the install page](/guide/instal/).
  * ```
- * `guide/index.md:1:6  error  Unexpected link to missing file guide/instal.md (written
- * "instal.md"), expected an existing source file (did you mean guide/install.md?)  broken-link`
- * `guide/index.md:1:40  error  Unexpected link to missing page /guide/instal/, expected an
- * existing page (did you mean /guide/install/?)  broken-link`
+ * `guide/index.md:1:6  error  Broken link: no source file guide/instal.md (written "instal.md");
+ * did you mean guide/install.md?`
+ * `guide/index.md:1:40  error  Broken link: no page /guide/instal/; did you mean /guide/install/?`
  */
 export const brokenLink: Rule = {
   id: 'broken-link',
@@ -42,20 +41,19 @@ export const brokenLink: Rule = {
       // The graph gives a missing source file as its path from the root (no leading slash),
       // a missing asset or page as a route.
       const sourceFile = !link.target.startsWith('/');
-      const what = sourceFile ? 'file' : link.kind === 'asset' ? 'file' : 'page';
-      const expected = sourceFile ? 'an existing source file' : link.kind === 'asset' ? 'an existing file' : 'an existing page';
+      const what = sourceFile ? 'source file' : link.kind === 'asset' ? 'file' : 'page';
       let guess = guesses.get(link.target);
       if (guess === undefined) {
         guess = link.kind === 'asset' ? null : nearest(link.target, sourceFile ? files : routes);
         guesses.set(link.target, guess);
       }
       const written = link.raw.href !== link.target ? ` (written "${link.raw.href}")` : '';
-      const hint = guess === null ? '' : ` (did you mean ${guess}?)`;
+      const todo = guess !== null ? `did you mean ${guess}?` : link.kind === 'asset' ? 'add the file or fix the link' : 'fix or remove the link';
       findings.push({
         ...linkSource(ctx, link),
         line: link.raw.line,
         column: link.raw.column,
-        message: `Unexpected link to missing ${what} ${link.target}${written}, expected ${expected}${hint}`,
+        message: `Broken link: no ${what} ${link.target}${written}; ${todo}`,
         target: link.target,
       });
     }

@@ -20,12 +20,12 @@ export interface DeadEndOptions {
  * Links to external sites, files and the page itself do not count. A one-page site has no
  * dead ends. Reported at line 1, column 1 of the page's file.
  *
- * Options: `countTemplateLinks` (default `false`). Default severity: `warning`.
+ * Options: `countTemplateLinks` (default `false`). Default level: `warning`.
  *
  * @example ok: `/guide/install/` ends with "Next: [configure](configure.md)".
  * @example not ok: `/guide/faq/` links only to an external site:
- * `guide/faq.md:1:1  warning  Unexpected dead end /guide/faq/ with no links to other pages,
- * expected at least one link onward  dead-end`
+ * `guide/faq.md:1:1  warning  Dead end: /guide/faq/ has no content links to other pages; add a
+ * link onward`
  */
 /** Problems after which a page's links were never read. */
 const UNREAD: ReadonlySet<string> = new Set(['too-large', 'binary', 'unreadable']);
@@ -45,7 +45,7 @@ export const deadEnd: Rule<DeadEndOptions> = {
       if (ctx.facts[page.factsIndex]?.problems.some((p) => UNREAD.has(p.code))) continue;
       if (!isDeadEnd(ctx.graph, ctx.ranking, page.id, options.countTemplateLinks)) continue;
       findings.push(
-        pageFinding(page, `Unexpected dead end ${page.route} with no ${which} to other pages, expected at least one link onward`),
+        pageFinding(page, `Dead end: ${page.route} has no ${which} to other pages; add a link onward`),
       );
     }
     return findings;

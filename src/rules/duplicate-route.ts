@@ -7,12 +7,12 @@ import type { Rule, RuleFinding } from './types.js';
  * column 1, naming the kept file. `target` is the reported file, so two duplicates of one
  * route stay apart in a baseline.
  *
- * Options: none. Default severity: `error`.
+ * Options: none. Default level: `error`.
  *
  * @example ok: `guide.md` and `guide/index.md` with `slug: /guide-overview/`.
  * @example not ok: `guide.md` and `guide/index.md` both map to `/guide/`:
- * `guide/index.md:1:1  error  Unexpected second file for route /guide/, expected one file per
- * route (guide.md has it)  duplicate-route`
+ * `guide/index.md:1:1  error  Route /guide/ already belongs to guide.md; give this file another
+ * route (a slug) or remove it`
  */
 export const duplicateRoute: Rule = {
   id: 'duplicate-route',
@@ -27,7 +27,7 @@ export const duplicateRoute: Rule = {
         line: 1,
         column: 1,
         route: dup.route,
-        message: `Unexpected second file for route ${dup.route}, expected one file per route (${dup.keptFile} has it)`,
+        message: `Route ${dup.route} already belongs to ${dup.keptFile}; give this file another route (a slug) or remove it`,
         target: dup.file,
       });
     }

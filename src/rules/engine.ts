@@ -1,81 +1,78 @@
 /**
- * The rule engine: applies the configured severity and options to each rule, runs it and
+ * The rule engine: applies the configured level and options to each rule, runs it and
  * stamps its findings (as unified-lint-rule does for lint messages).
  */
 import { expectedGot } from '../config-issues.js';
 import { EngineError } from '../errors.js';
 import type { ResolvedOptions } from '../options.js';
+import type { Level } from '../config.js';
 import type { Finding, Severity } from '../types.js';
 import type { Rule, RuleContext, RuleFinding } from './types.js';
 import { rules as builtinRules } from './registry.js';
 import { compareText } from './structure.js';
 
-/** A rule with its severity and options from the configuration. */
+/** A rule with its level and options from the configuration. */
 export interface RuleSetting {
   readonly rule: Rule;
-  /** The configured severity, or `null` when the configuration does not set one. */
-  readonly severity: Severity | null;
+  /** The configured level, or `null` when the configuration does not set one. */
+  readonly level: Level | null;
   readonly options: object;
 }
 
 /**
- * Check `options.rules` against the known rules: every key a rule id, every rule's options
- * valid for that rule. Returns the setting of every rule (in id order).
+ * Check `options.checks` against the known rules: every key a check id, every check's options
+ * valid for that check. Returns the setting of every rule (in id order).
  * @param origin where the configuration came from, named in error messages
- * @throws EngineError `E_CONFIG_INVALID` naming the key (`rules.<id>` or `rules.<id>.<option>`)
+ * @throws EngineError `E_CONFIG_INVALID` naming the key (`checks.<id>` or `checks.<id>.<option>`)
  *   and listing what is accepted
  */
 export function validateRuleConfig(
-  options: Pick<ResolvedOptions, 'rules'>,
+  options: Pick<ResolvedOptions, 'checks'>,
   origin = 'configuration',
   known: readonly Rule[] = builtinRules,
 ): RuleSetting[] {
   const byId = new Map(known.map((r) => [r.id, r]));
-  for (const id of Object.keys(options.rules).sort(compareText)) {
+  for (const id of Object.keys(options.checks).sort(compareText)) {
     if (!byId.has(id)) {
-      const ids = known.map((r) => `"${r.id}"`).join(', ');
-      throw new EngineError('E_CONFIG_INVALID', `${origin}: key "rules.${id}": unknown rule, expected one of ${ids}`);
+      const ids = known.map((r) => r.id).join(', ');
+      throw new EngineError('E_CONFIG_INVALID', `${origin}: key "checks.${id}": no check has this id; the checks are ${ids}`);
     }
   }
-  return known.map((rule) => settingOf(rule, options.rules[rule.id], origin));
+  return known.map((rule) => settingOf(rule, options.checks[rule.id], origin));
 }
 
 function settingOf(
   rule: Rule,
-  configured: ResolvedOptions['rules'][string] | undefined,
+  configured: ResolvedOptions['checks'][string] | undefined,
   origin: string,
 ): RuleSetting {
-  if (configured === undefined) return { rule, severity: null, options: rule.defaultOptions };
-  if (typeof configured === 'string') return { rule, severity: configured, options: rule.defaultOptions };
-  const [severity, given] = configured;
+  if (configured === undefined) return { rule, level: null, options: rule.defaultOptions };
+  const { level = null, ...given } = configured;
   const merged = { ...rule.defaultOptions, ...given };
+  const keys = Object.keys(given).sort(compareText);
   if (rule.optionsSchema === undefined) {
-    const keys = Object.keys(given);
     if (keys.length > 0) {
-      throw new EngineError(
-        'E_CONFIG_INVALID',
-        `${origin}: key "rules.${rule.id}.${keys.sort(compareText)[0]}": the rule takes no options, expected "${severity}" alone`,
-      );
+      throw new EngineError('E_CONFIG_INVALID', `${origin}: key "checks.${rule.id}.${keys[0]}": this check takes only "level"`);
     }
-    return { rule, severity, options: merged };
+    return { rule, level, options: merged };
   }
   const parsed = rule.optionsSchema.safeParse(merged, { reportInput: true });
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     const path = [rule.id, ...issue.path.map(String)];
     if (issue.code === 'unrecognized_keys') path.push(issue.keys[0]!);
-    const accepted = Object.keys(rule.defaultOptions).map((k) => `"${k}"`).join(', ');
-    const problem = issue.code === 'unrecognized_keys' ? `unknown option, expected one of ${accepted}` : expectedGot(rule.optionsSchema, issue);
-    throw new EngineError('E_CONFIG_INVALID', `${origin}: key "rules.${path.join('.')}": ${problem}`);
+    const accepted = ['level', ...Object.keys(rule.defaultOptions)].map((k) => `"${k}"`).join(', ');
+    const problem = issue.code === 'unrecognized_keys' ? `unknown option; this check takes ${accepted}` : expectedGot(rule.optionsSchema, issue);
+    throw new EngineError('E_CONFIG_INVALID', `${origin}: key "checks.${path.join('.')}": ${problem}`);
   }
-  return { rule, severity, options: parsed.data as object };
+  return { rule, level, options: parsed.data as object };
 }
 
 /**
- * Run every rule that is not off and return their findings with rule id and severity,
+ * Run every rule whose level is not `none` and return their findings with rule id and severity,
  * sorted by file, line, column, rule and message. Findings on pages marked
  * `linkweave.exclude` are dropped.
- * @throws EngineError `E_CONFIG_INVALID` for a bad `rules` configuration (see `validateRuleConfig`)
+ * @throws EngineError `E_CONFIG_INVALID` for a bad `checks` configuration (see `validateRuleConfig`)
  */
 export function runRules(
   ctx: RuleContext,
@@ -84,11 +81,11 @@ export function runRules(
   const settings = validateRuleConfig(ctx.options, 'configuration', known);
   const excluded = new Set(ctx.facts.filter((f) => f.meta.exclude).map((f) => f.file));
   const findings: Finding[] = [];
-  for (const { rule, severity, options } of settings) {
-    if (severity === 'off') continue;
+  for (const { rule, level, options } of settings) {
+    if (level === 'none') continue;
     for (const found of rule.check(ctx, options) as RuleFinding[]) {
       if (excluded.has(found.file)) continue;
-      findings.push(stamp(rule.id, severity ?? found.severity ?? rule.defaultSeverity, found));
+      findings.push(stamp(rule.id, level ?? found.severity ?? rule.defaultSeverity, found));
     }
   }
   return findings.sort(compareFindings);

@@ -8,12 +8,12 @@ import { nearest } from './nearest.js';
  * (`file` is `''`, line 1, column 1); `route` and `target` are the entry route, and the message
  * offers the closest existing route.
  *
- * Options: none. Default severity: `error`.
+ * Options: none. Default level: `error`.
  *
  * @example ok: `entry: ["/"]` and the site has `index.md`.
  * @example not ok: `entry: ["/start/"]` on a site without such a page:
- * `1:1  error  Unexpected entry route /start/ that matches no page, expected the route of an
- * existing page in "entry" (did you mean /stars/?)  missing-entry`
+ * `1:1  error  No page has the entry route /start/; correct "entry" in the configuration (did
+ * you mean /stars/?)`
  */
 export const missingEntry: Rule = {
   id: 'missing-entry',
@@ -31,7 +31,7 @@ export const missingEntry: Rule = {
         line: 1,
         column: 1,
         route,
-        message: `Unexpected entry route ${route} that matches no page, expected the route of an existing page in "entry"${hint}`,
+        message: `No page has the entry route ${route}; correct "entry" in the configuration${hint}`,
         target: route,
       });
     }

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Rule, RuleFinding } from './types.js';
-import { pageFinding } from './place.js';
+import { pageFinding, parentPage } from './place.js';
 import { entrySet, isOrphan } from './structure.js';
 
 /** Options of `orphan-page`. */
@@ -16,15 +16,16 @@ export interface OrphanPageOptions {
 /**
  * `orphan-page`: every page has at least one inlink from another page.
  *
- * Entry pages are exempt. Reported at line 1, column 1 of the page's file.
+ * Entry pages are exempt. Reported at line 1, column 1 of the page's file. The message names
+ * the nearest reachable page up the route (`/guide/` for `/guide/old/`) as the place to link
+ * it from, when there is one.
  *
- * Options: `countTemplateLinks` (default `true`). Default severity: `error`: nothing leads a
+ * Options: `countTemplateLinks` (default `true`). Default level: `error`: nothing leads a
  * reader to an orphan page, so it is unreachable too.
  *
  * @example ok: `index.md` links to `about.md`, so `/about/` is no orphan.
  * @example not ok: nothing links to `old/notes.md`:
- * `old/notes.md:1:1  error  Unexpected orphan page /old/notes/, expected a link to it from
- * at least one other page  orphan-page`
+ * `old/notes.md:1:1  error  No page links to /old/notes/; link it from /`
  */
 export const orphanPage: Rule<OrphanPageOptions> = {
   id: 'orphan-page',
@@ -37,10 +38,9 @@ export const orphanPage: Rule<OrphanPageOptions> = {
     const findings: RuleFinding[] = [];
     for (const page of ctx.graph.pages) {
       if (!isOrphan(ctx.graph, ctx.ranking, entries, page.id, options.countTemplateLinks)) continue;
-      const which = options.countTemplateLinks ? 'a link' : 'a content link';
-      findings.push(
-        pageFinding(page, `Unexpected orphan page ${page.route}, expected ${which} to it from at least one other page`),
-      );
+      const which = options.countTemplateLinks ? 'No page links' : 'No content link leads';
+      const parent = parentPage(ctx, page.id);
+      findings.push(pageFinding(page, `${which} to ${page.route}; link it from ${parent ?? 'a related page'}`));
     }
     return findings;
   },

@@ -28,3 +28,18 @@ export function listRoutes(routes: readonly string[]): string {
   if (routes.length <= 3) return routes.join(', ');
   return `${routes.slice(0, 3).join(', ')} and ${routes.length - 3} more`;
 }
+
+/**
+ * The nearest page up a page's route that a reader can reach (`/guide/` for `/guide/old/`, then
+ * `/`), as a place to link the page from; null when there is none.
+ */
+export function parentPage(ctx: RuleContext, page: number): string | null {
+  const route = ctx.graph.pages[page]!.route;
+  const parts = route.split('/').filter((p) => p !== '');
+  for (let n = parts.length - 1; n >= 0; n--) {
+    const up = n === 0 ? '/' : `/${parts.slice(0, n).join('/')}/`;
+    const id = ctx.graph.routeIndex.get(up) ?? ctx.graph.routeIndex.get(up.toLowerCase());
+    if (id !== undefined && id !== page && ctx.ranking.depth[id]! >= 0) return ctx.graph.pages[id]!.route;
+  }
+  return null;
+}

@@ -7,7 +7,7 @@ import { brokenLink } from './broken-link.js';
 import { brokenFragment } from './broken-fragment.js';
 import { orphanPage } from './orphan-page.js';
 import { unreachablePage } from './unreachable-page.js';
-import { maxClickDepth } from './max-click-depth.js';
+import { clickDepth } from './click-depth.js';
 import { deadEnd } from './dead-end.js';
 import { sourceProblem } from './source-problem.js';
 import { duplicateRoute } from './duplicate-route.js';
@@ -17,9 +17,9 @@ import { missingEntry } from './missing-entry.js';
 export const rules: readonly Rule[] = [
   brokenFragment,
   brokenLink,
+  clickDepth,
   deadEnd,
   duplicateRoute,
-  maxClickDepth,
   missingEntry,
   orphanPage,
   sourceProblem,

@@ -43,20 +43,23 @@ export interface RuleFinding {
   readonly column: number;
   /** Route of the page concerned; `''` for files that are not pages. */
   readonly route: string;
-  /** "Unexpected X, expected Y" (STYLE section 1). */
+  /**
+   * A plain statement of what is wrong and what to do, one terminal line where possible:
+   * "No page links to /guide/old/; link it from /guide/" (STYLE section 2.13).
+   */
   readonly message: string;
   /** What the finding is about beyond its page (a link target, a fragment); baselines key on it. */
   readonly target?: string;
   /**
    * The finding's own severity, for rules whose findings differ in weight (`source-problem`).
-   * Used only when the configuration does not set the rule's severity.
+   * Used only when the configuration does not set the check's level.
    */
   readonly severity?: Exclude<Severity, 'off'>;
 }
 
 /** A rule: metadata plus a pure check. */
 export interface Rule<O extends object = object> {
-  /** Kebab-case id, the key under `rules` in the configuration. */
+  /** Kebab-case id, the key under `checks` in the configuration. */
   readonly id: string;
   /** One sentence: what the rule asks of the site. */
   readonly description: string;

@@ -13,12 +13,12 @@ import { entrySet, isOrphan, isUnreachable } from './structure.js';
  * is silent: `missing-entry` reports the cause once instead of every page.
  * Reported at line 1, column 1 of the page's file.
  *
- * Options: none. Default severity: `error`.
+ * Options: none. Default level: `error`.
  *
  * @example ok: `/` links to `/guide/`, which links to `/guide/install/`.
  * @example not ok: `/archive/` and `/archive/2019/` link to each other, nothing else links in:
- * `archive/index.md:1:1  error  Unexpected unreachable page /archive/, expected a path of
- * links to it from an entry page (/)  unreachable-page`
+ * `archive/index.md:1:1  error  /archive/ cannot be reached from /: only /archive/2019/ links to it;
+ * link it from a reachable page`
  */
 export const unreachablePage: Rule = {
   id: 'unreachable-page',
@@ -40,8 +40,8 @@ export const unreachablePage: Rule = {
       findings.push(
         pageFinding(
           page,
-          `Unexpected unreachable page ${page.route}, expected a path of links to it from an entry page (${entries}); ` +
-            `linked only from ${listRoutes(from)}`,
+          `${page.route} cannot be reached from ${entries}: only ${listRoutes(from)} ${from.length === 1 ? 'links' : 'link'} to it; ` +
+            'link it from a reachable page',
         ),
       );
     }

@@ -30,7 +30,7 @@ export function parseTraffic(_file: string, text: string): TrafficResult {
     if (raw.trim() === '' || raw.trimStart().startsWith('#')) continue;
     const fields = splitCsvLine(raw);
     if (fields === null) {
-      problems.push({ line, message: 'Unexpected unterminated quoted field in traffic row, expected a closing `"`' });
+      problems.push({ line, message: 'Traffic row has a quoted field that is never closed; add the closing `"`' });
       seenRow = true;
       continue;
     }
@@ -40,16 +40,16 @@ export function parseTraffic(_file: string, text: string): TrafficResult {
       if (fields.length === 2 && !NUMBER.test(second) && !first.startsWith('/') && !/^https?:\/\//i.test(first)) continue; // header
     }
     if (fields.length !== 2) {
-      problems.push({ line, message: `Unexpected ${fields.length} field${fields.length === 1 ? '' : 's'} in traffic row, expected 2 ("route,views")` });
+      problems.push({ line, message: `Traffic row has ${fields.length} field${fields.length === 1 ? '' : 's'}; write two: "route,views"` });
       continue;
     }
     const route = routeOf(first);
     if (route === null) {
-      problems.push({ line, message: `Unexpected route "${first}" in traffic row, expected a path starting with "/" or an http(s) URL` });
+      problems.push({ line, message: `Traffic row route "${first}" is not a route; start it with "/" or give an http(s) URL` });
       continue;
     }
     if (!NUMBER.test(second)) {
-      problems.push({ line, message: `Unexpected views "${second}" in traffic row, expected a non-negative number` });
+      problems.push({ line, message: `Traffic row views "${second}" is not a count; write a number of 0 or more` });
       continue;
     }
     views.set(route, (views.get(route) ?? 0) + Number(second));

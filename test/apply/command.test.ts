@@ -153,7 +153,7 @@ describe('apply on the pr-base site', () => {
       [['apply', 'docs'], /"apply" needs --ids ID,ID \(from the suggest output\) or --all/],
       [['apply', 'docs', '--ids', 'a', '--all'], /give one of them, not both/],
       [['apply', 'docs', '--from', 'missing.json', '--all'], /flag --from: cannot read "missing\.json": no such file/],
-      [['apply', 'docs', '--all', '--format', 'json'], /flag --format is not used by "apply"/],
+      [['apply', 'docs', '--all', '--format', 'json'], /^linkweave: flag --format is not taken by "apply"; its flags: /],
       [['apply', 'docs', '--all', '--link-style', 'fancy'], /flag --link-style: expected one of relative, absolute, route-relative; got "fancy"/],
     ];
     for (const [argv, message] of cases) {

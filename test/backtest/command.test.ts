@@ -48,9 +48,9 @@ describe('backtest flags', () => {
     [['--seed', 'x'], '--seed', 'whole number'],
     [['--runs', '0'], '--runs', 'from 1 to 50'],
     [['--runs', '51'], '--runs', 'from 1 to 50'],
-    [['--format', 'markdown'], '--format', 'text or json'],
+    [['--format', 'markdown'], '--format', 'one of text, json'],
     [['--output', 'docs/out.md'], '--output', 'inside the content root'],
-    [['--per-target', '3'], '--per-target', 'accepted flags'],
+    [['--per-target', '3'], '--per-target', 'is not taken by "backtest"; its flags:'],
   ])('rejects %j with exit 2 and a line naming %s', async (flags, name, accepted) => {
     const cwd = project();
     const r = await cli(['backtest', 'docs', '--no-cache', ...flags], cwd);
@@ -81,7 +81,10 @@ describe('backtest outputs', () => {
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('seeds 3..4 (2 runs)');
-    expect(r.stdout).toMatch(/minSimilarity\s+0\.1/);
+    expect(r.stdout).toContain("linkweave's candidates for their target");
+    // Plain labels, no configuration keys; a one-sentence verdict against the best baseline.
+    expect(r.stdout).not.toMatch(/suggest\.targets|maxNewLinksPerPage|perTarget|minSimilarity/);
+    expect(r.stdout.replace(/\n(?=\S)/g, " ")).toMatch(/Verdict: linkweave finds \d+\.\d% of the held-out links among its first 5 proposed sources; the best baseline, [^,]+, finds \d+\.\d%: linkweave is /);
     expect(r.stdout).toContain("the link model's probability, refitted on each run's remaining links");
     const rows = r.stdout.split('\n').filter((l) => /^ {2}(method|linkweave|TF-IDF only|title phrase|random related|random page) /.test(l));
     expect(rows.map((l) => l.trim().split(/\s{2,}/)[0])).toEqual(['method', 'linkweave', 'TF-IDF only', 'title phrase', 'random related', 'random page']);

@@ -45,7 +45,7 @@ describe('review flags', () => {
 
     const same = await cli(cwd, 'check', 'base', '--baseline', 'ci/baseline.json');
     expect(same.code).toBe(0);
-    expect(same.stdout).toContain('Gate passed');
+    expect(same.stdout).toContain('This run passes (exit 0)');
 
     const head = await cli(cwd, 'check', 'head', '--baseline', 'ci/baseline.json', '--format', 'json');
     expect(head.code).toBe(1);

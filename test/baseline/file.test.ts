@@ -6,7 +6,7 @@ const FINDINGS: Finding[] = [
   { rule: 'orphan-page', severity: 'error', file: 'notes/old.md', line: 1, column: 1, route: '/notes/old/', message: 'orphan' },
   { rule: 'broken-link', severity: 'error', file: 'index.md', line: 9, column: 3, route: '/', message: 'missing b', target: 'b.md' },
   { rule: 'broken-link', severity: 'error', file: 'index.md', line: 4, column: 3, route: '/', message: 'missing a', target: 'a.md' },
-  { rule: 'max-click-depth', severity: 'warning', file: 'deep.md', line: 1, column: 1, route: '/deep/', message: 'deep' },
+  { rule: 'click-depth', severity: 'warning', file: 'deep.md', line: 1, column: 1, route: '/deep/', message: 'deep' },
 ];
 
 describe('baseline file', () => {
@@ -18,7 +18,7 @@ describe('baseline file', () => {
     expect(parsed.findings.map((f) => `${f.rule} ${f.route} ${f.target ?? ''}`)).toEqual([
       'broken-link / a.md',
       'broken-link / b.md',
-      'max-click-depth /deep/ ',
+      'click-depth /deep/ ',
       'orphan-page /notes/old/ ',
     ]);
     expect(Object.keys(parsed.findings[0]!)).toEqual(['rule', 'route', 'target', 'severity', 'file', 'line', 'column', 'message']);

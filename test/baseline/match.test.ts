@@ -9,7 +9,7 @@ const broken = (line: number, over: Partial<Finding> = {}): Finding => ({
   line,
   column: 5,
   route: '/guide/',
-  message: 'Unexpected link to missing file guide/old.md, expected an existing source file',
+  message: 'Broken link: no source file guide/old.md; fix or remove the link',
   target: 'guide/old.md',
   ...over,
 });
@@ -21,7 +21,7 @@ const orphan = (route: string): Finding => ({
   line: 1,
   column: 1,
   route,
-  message: `Unexpected orphan page ${route}, expected a link to it from at least one other page`,
+  message: `No page links to ${route}; link it from /`,
 });
 
 describe('findingKey', () => {

@@ -45,21 +45,24 @@ describe('--baseline on two versions of a site', () => {
     expect(same.baseline).toEqual({ known: plain.findings.length, new: [], fixed: [] });
   });
 
-  it('numeric gate limits read the whole site, baseline or not; maxWarnings counts new findings', async () => {
-    const plain = await analyze({ root: head, ...noCache, gate: { maxBrokenLinks: 1, maxOrphans: 0 } });
-    const limits = plain.gate.failures.filter((f) => f.rule.startsWith('gate.'));
+  it('site limits read the whole site, baseline or not; limits.warnings counts new findings', async () => {
+    const plain = await analyze({ root: head, ...noCache, limits: { brokenLinks: 1, orphans: 0 } });
+    const limits = plain.gate.failures.filter((f) => f.rule.startsWith('limits.'));
     expect(limits).toEqual([
-      { rule: 'gate.maxBrokenLinks', limit: 1, actual: 2 },
-      { rule: 'gate.maxOrphans', limit: 0, actual: 1 },
+      { rule: 'limits.brokenLinks', limit: 1, actual: 2 },
+      { rule: 'limits.orphans', limit: 0, actual: 1 },
     ]);
-    const withBaseline = await analyze({ root: head, ...noCache, gate: { maxBrokenLinks: 1, maxOrphans: 0 }, baseline: { findings: plain.findings } });
+    const withBaseline = await analyze({ root: head, ...noCache, limits: { brokenLinks: 1, orphans: 0 }, baseline: { findings: plain.findings } });
     expect(withBaseline.gate.failures).toEqual(limits);
 
-    // Findings as warnings: maxWarnings 0 fails on all of them, and on none under a baseline that has them.
-    const warnings = { rules: { 'broken-link': 'warning', 'broken-fragment': 'warning', 'orphan-page': 'warning' }, gate: { maxWarnings: 0 } } as const;
+    // Findings as warnings: limits.warnings 0 fails on all of them, and on none under a baseline that has them.
+    const warnings = {
+      checks: { 'broken-link': { level: 'warning' }, 'broken-fragment': { level: 'warning' }, 'orphan-page': { level: 'warning' } },
+      limits: { warnings: 0 },
+    } as const;
     const warned = await analyze({ root: head, ...noCache, ...warnings });
-    expect(warned.gate.failures).toEqual([{ rule: 'gate.maxWarnings', limit: 0, actual: warned.findings.length }]);
+    expect(warned.gate.failures).toEqual([{ rule: 'limits.warnings', limit: 0, actual: warned.findings.length }]);
     const known = await analyze({ root: head, ...noCache, ...warnings, baseline: { findings: warned.findings.slice(1) } });
-    expect(known.gate.failures).toEqual([{ rule: 'gate.maxWarnings', limit: 0, actual: 1 }]);
+    expect(known.gate.failures).toEqual([{ rule: 'limits.warnings', limit: 0, actual: 1 }]);
   });
 });

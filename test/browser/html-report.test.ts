@@ -192,7 +192,7 @@ describe('HTML report in chromium', () => {
     };
     const o = await open(empty, 'empty');
     try {
-      expect(await o.page.textContent('#lw-gate')).toContain('Gate passed');
+      expect(await o.page.textContent('#lw-gate')).toContain('This run passes (exit 0)');
       expect(await o.page.textContent('#lw-findings-table tbody')).toContain('No findings');
       expect(o.errors).toEqual([]);
     } finally {

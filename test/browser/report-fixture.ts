@@ -262,13 +262,13 @@ function makeFindings(pages: ReportPage[], links: ReportLink[], maxDepth: number
   const byRoute = new Map(pages.map((p) => [p.route, p]));
   const out: Finding[] = [];
   for (const l of links) {
-    if (l.status === 'broken') out.push({ rule: 'broken-link', severity: 'error', file: l.file, line: l.line, column: l.column, route: l.from, message: `Unexpected link to missing page ${l.to}, expected an existing page`, target: l.to });
-    if (l.status === 'broken-fragment') out.push({ rule: 'broken-fragment', severity: 'error', file: l.file, line: l.line, column: l.column, route: l.from, message: `Unexpected fragment #${l.to.split('#')[1]} on ${l.to.split('#')[0]}, expected a heading or id of that page`, target: l.to });
+    if (l.status === 'broken') out.push({ rule: 'broken-link', severity: 'error', file: l.file, line: l.line, column: l.column, route: l.from, message: `Broken link: no page ${l.to}; fix or remove the link`, target: l.to });
+    if (l.status === 'broken-fragment') out.push({ rule: 'broken-fragment', severity: 'error', file: l.file, line: l.line, column: l.column, route: l.from, message: `Broken fragment: ${l.to.split('#')[0]} has no heading or id "${l.to.split('#')[1]}"; fix the fragment or add the heading`, target: l.to });
   }
   for (const p of pages) {
-    if (p.inlinks === 0 && p.depth !== 0) out.push({ rule: 'orphan-page', severity: 'warning', file: p.file, line: 1, column: 1, route: p.route, message: `Unexpected orphan page ${p.route}, expected at least one link to it` });
-    if (p.depth === null) out.push({ rule: 'unreachable-page', severity: 'error', file: p.file, line: 1, column: 1, route: p.route, message: `Unexpected unreachable page ${p.route}, expected a path of links from /` });
-    else if (p.depth > maxDepth) out.push({ rule: 'max-click-depth', severity: 'warning', file: p.file, line: 1, column: 1, route: p.route, message: `Unexpected click depth ${p.depth} for ${p.route}, expected at most ${maxDepth}` });
+    if (p.inlinks === 0 && p.depth !== 0) out.push({ rule: 'orphan-page', severity: 'warning', file: p.file, line: 1, column: 1, route: p.route, message: `No page links to ${p.route}; link it from a related page` });
+    if (p.depth === null) out.push({ rule: 'unreachable-page', severity: 'error', file: p.file, line: 1, column: 1, route: p.route, message: `${p.route} cannot be reached from /; link it from a reachable page` });
+    else if (p.depth > maxDepth) out.push({ rule: 'click-depth', severity: 'warning', file: p.file, line: 1, column: 1, route: p.route, message: `${p.route} is ${p.depth} clicks from an entry page, over the limit of ${maxDepth}; link it from a page nearer the top` });
   }
   void byRoute;
   return out.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.line - b.line || a.column - b.column || (a.rule < b.rule ? -1 : a.rule > b.rule ? 1 : 0)));

@@ -133,7 +133,7 @@ describe('invalidation by parse option', () => {
 
   it('options applied after parsing do not invalidate', async () => {
     await run(optionsOf());
-    const r = await run(optionsOf({ ...CONFIG, routes: { caseInsensitive: true }, entry: ['/guide/'], templateWeight: 0.5, maxDepth: 1, exclude: ['nothing/**'], rules: { 'dead-end': 'off' } }));
+    const r = await run(optionsOf({ ...CONFIG, routes: { caseInsensitive: true }, entry: ['/guide/'], templateWeight: 0.5, maxDepth: 1, exclude: ['nothing/**'], checks: { 'dead-end': { level: 'none' } } }));
     expect(r.stats).toMatchObject({ hits: FILES, parsed: 0, written: 0 });
   });
 

@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { COMMON_FLAGS, helpText, parseArgs } from '../../src/cli/args.js';
+import { FLAGS, helpText, parseArgs } from '../../src/cli/args.js';
 import type { CommandInfo } from '../../src/cli/args.js';
 
+const shared = [FLAGS.config, FLAGS.format, FLAGS.output, FLAGS.maxDepth, FLAGS.failOn, FLAGS.quiet, FLAGS.noProgress, FLAGS.noCache];
 const commands: CommandInfo[] = [
-  { name: 'check', summary: 'check the site' },
-  { name: 'suggest', summary: 'suggest links' },
-  { name: 'apply', summary: 'apply links', flags: [{ name: 'dry-run', kind: 'boolean', description: 'show a diff' }] },
+  { name: 'check', summary: 'check the site', flags: shared, exitCodes: '0 passes; 1 fails; 2 usage.' },
+  { name: 'suggest', summary: 'suggest links', flags: shared, exitCodes: '0 passes; 1 fails; 2 usage.' },
+  { name: 'apply', summary: 'apply links', flags: [{ name: 'dry-run', kind: 'boolean', description: 'show a diff' }, FLAGS.config], exitCodes: '0 applied; 2 usage.' },
 ];
 
 const usageError = (argv: string[]) => {
@@ -43,7 +44,8 @@ describe('parseArgs', () => {
 
   it('a command-specific flag works only for its command', () => {
     expect(parseArgs(['apply', '--dry-run'], commands)).toMatchObject({ command: 'apply', flags: { 'dry-run': true } });
-    expect(usageError(['check', '--dry-run'])).toMatch(/^unknown flag "--dry-run" for "check"; accepted flags: --config, --format/);
+    expect(usageError(['check', '--dry-run'])).toMatch(/^flag --dry-run is not taken by "check"; its flags: --config, --format/);
+    expect(usageError(['apply', '--format', 'json'])).toBe('flag --format is not taken by "apply"; its flags: --dry-run, --config, --help, --version');
   });
 
   it('--help and --version win over everything else', () => {
@@ -54,7 +56,7 @@ describe('parseArgs', () => {
   });
 
   it.each([
-    [['check', '--frobnicate'], /^unknown flag "--frobnicate" for "check"; accepted flags: .*--max-depth.*--version$/],
+    [['check', '--frobnicate'], /^unknown flag --frobnicate for "check"; its flags: .*--max-depth.*--version$/],
     [['check', '-x'], /^unknown flag "-x"/],
     [['check', '--format', 'xml'], /^flag --format: expected one of text, json, markdown, sarif, html; got "xml"$/],
     [['check', '--format'], /^flag --format needs a value: one of text, json, markdown, sarif, html$/],
@@ -78,18 +80,19 @@ describe('parseArgs', () => {
 });
 
 describe('helpText', () => {
-  it('lists every command and every common flag, and the exit codes', () => {
+  it('without a command: every command and how to get its flags', () => {
     const text = helpText(commands, null, '9.9.9');
     expect(text).toContain('linkweave 9.9.9');
     for (const c of commands) expect(text).toMatch(new RegExp(`^  ${c.name} +${c.summary}$`, 'm'));
-    for (const f of COMMON_FLAGS) expect(text).toContain(`--${f.name}`);
-    expect(text).toContain('Exit codes: 0 the gate passed; 1 the gate failed; 2 usage, configuration or I/O error.');
+    expect(text).toContain('linkweave <command> --help lists the flags and exit codes of a command');
     expect(text).not.toContain('--dry-run');
   });
 
-  it('a command help shows its own flags', () => {
+  it('a command help shows its own flags only, and its exit codes', () => {
     const text = helpText(commands, 'apply', '1.0.0');
     expect(text).toContain('Usage: linkweave apply [root] [flags]');
-    expect(text).toContain('--dry-run');
+    const flags = [...text.matchAll(/^  (--[a-z-]+)/gm)].map((m) => m[1]);
+    expect(flags).toEqual(['--dry-run', '--config', '--help', '--version']);
+    expect(text).toContain('Exit codes: 0 applied; 2 usage.');
   });
 });

@@ -106,7 +106,7 @@ describe('linkweave (built command)', () => {
     expect(JSON.parse(r.stdout).stats.pages).toBe(3);
   });
 
-  it('--output writes the same JSON as stdout, prints the terminal summary, and --quiet silences it', () => {
+  it('--output writes the same JSON as stdout, prints only the short summary, and --quiet silences it', () => {
     const { cwd } = project(BROKEN);
     const toStdout = cli(['check', 'docs', '--format', 'json'], cwd);
     const r = cli(['check', 'docs', '--output', 'out/report.json'], cwd);
@@ -114,7 +114,14 @@ describe('linkweave (built command)', () => {
     const written = fs.readFileSync(path.join(cwd, 'out/report.json'), 'utf8');
     // Format inferred from the extension; byte-identical to the stdout report (deterministic).
     expect(written).toBe(toStdout.stdout);
-    expect(r.stdout).toContain('guide.md');
+    // The summary alone: the site's counts, the findings' count and the verdict, no finding listed.
+    expect(r.stdout).not.toContain('guide.md');
+    expect(lines(r.stdout)).toEqual([
+      expect.stringMatching(/^Site: 3 pages, /),
+      expect.stringMatching(/^  /),
+      'Findings: 1 error and 0 warnings from 1 check',
+      'This run fails (exit 1): broken-link 1 error',
+    ]);
     expect(r.stderr).toBe('linkweave: report written to out/report.json\n');
     expect(fs.readdirSync(path.join(cwd, 'out'))).toEqual(['report.json']);
 
@@ -135,7 +142,7 @@ describe('linkweave (built command)', () => {
     expect(cli(['check', 'docs', '--fail-on', 'warning'], cwd).code).toBe(0);
     const r = cli(['check', 'docs', '--format', 'json', '--max-depth', '1', '--fail-on', 'warning'], cwd);
     expect(r.code).toBe(1);
-    expect(JSON.parse(r.stdout).findings).toMatchObject([{ rule: 'max-click-depth', file: 'two.md' }]);
+    expect(JSON.parse(r.stdout).findings).toMatchObject([{ rule: 'click-depth', file: 'two.md' }]);
   });
 
   it.each([
@@ -160,7 +167,8 @@ describe('linkweave (built command)', () => {
   });
 
   it.each([
-    [['check', 'docs', '--frobnicate'], /^linkweave: unknown flag "--frobnicate" for "check"; accepted flags: --config, /],
+    [['check', 'docs', '--frobnicate'], /^linkweave: unknown flag --frobnicate for "check"; its flags: --config, /],
+    [['backtest', 'docs', '--fail-on', 'warning'], /^linkweave: flag --fail-on is not taken by "backtest"; its flags: --holdout, /],
     [['check', 'docs', '--format', 'xml'], /^linkweave: flag --format: expected one of text, json, markdown, sarif, html; got "xml"$/],
     [['check', 'docs', '--max-depth', 'deep'], /^linkweave: flag --max-depth: expected a whole number >= 0; got "deep"$/],
     [['publish'], /^linkweave: unknown command "publish"; accepted commands: check, suggest, apply, backtest$/],

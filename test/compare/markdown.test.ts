@@ -21,20 +21,20 @@ describe('markdown comment with a base report', () => {
     const md = formatReport(report, 'markdown');
     await expect(md).toMatchFileSnapshot('__snapshots__/pr-review.md');
     // The order a reviewer reads in.
-    const order = ['### linkweave: gate failed', '#### New findings', '#### Fixed findings', '<summary>All', '#### Structure changes', '#### Suggested links'];
+    const order = ['### linkweave: this run fails', '#### New findings', '#### Fixed findings', '<summary>All', '#### Structure changes', '#### Suggested links'];
     const at = order.map((h) => md.indexOf(h));
     expect(at.every((i) => i >= 0)).toBe(true);
     expect(at).toEqual([...at].sort((a, b) => a - b));
   });
 
-  it('with a baseline only: new and fixed against the baseline, and the gate says how many were known', async () => {
+  it('with a baseline only: new and fixed against the baseline, and the verdict says how many were known', async () => {
     const base = await analyze({ root: path.join(fixtures, 'pr-base'), ...noCache });
     const head = await analyze({ root: path.join(fixtures, 'pr-head'), ...noCache, baseline: { findings: base.findings } });
     const md = formatReport(head, 'markdown');
     expect(md).toContain('3 findings known from the baseline do not count; 1 new.');
     expect(md).toContain('#### New findings (1, not in the baseline)');
     expect(md).toContain('#### Fixed findings (1, in the baseline, gone now)');
-    expect(md).toContain('| error | `notes/legacy.md:1:1` | Unexpected orphan page /notes/legacy/');
+    expect(md).toContain('| error | `notes/legacy.md:1:1` | No page links to /notes/legacy/');
     expect(md).not.toContain('#### Structure changes');
   });
 });

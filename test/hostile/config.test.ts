@@ -36,7 +36,7 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
     ['two unknown keys', { a: 1, b: 2 }, `key "a": unknown key \\(also unknown: "b"\\); accepted keys: ${TOP_KEYS},`],
     ['unknown nested key', { routes: { styel: 'html' } }, 'key "routes.styel": unknown key; accepted keys of "routes": style, basePath, indexNames, caseInsensitive$'],
     ['unknown key in a list item', { linkPatterns: [{ pattern: 'x', route: 'y', flags: 'i' }] }, 'key "linkPatterns.0.flags": unknown key; accepted keys of "linkPatterns.0": pattern, route$'],
-    ['unknown gate key', { gate: { maxOrphan: 1 } }, 'key "gate.maxOrphan": unknown key; accepted keys of "gate": maxDepth, maxOrphans, '],
+    ['unknown limits key', { limits: { orphan: 1 } }, 'key "limits.orphan": unknown key; accepted keys of "limits": brokenLinks, brokenFragments, orphans, '],
     ['enum value', { routes: { style: 'htm' } }, 'key "routes.style": expected one of "directory", "html", got "htm"$'],
     ['enum value', { failOn: 'info' }, 'key "failOn": expected one of "error", "warning", got "info"$'],
     ['whole number range', { maxDepth: -1 }, 'key "maxDepth": expected a whole number >= 0, got -1$'],
@@ -46,7 +46,7 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
     ['open range', { damping: 1 }, 'key "damping": expected a number > 0 and < 1, got 1$'],
     ['half-open range', { templateShare: 0 }, 'key "templateShare": expected a number > 0 and <= 1, got 0$'],
     ['positive', { maxFileBytes: 0 }, 'key "maxFileBytes": expected a whole number > 0, got 0$'],
-    ['nullable number', { gate: { maxOrphans: -1 } }, 'key "gate.maxOrphans": expected a whole number >= 0, or null, got -1$'],
+    ['nullable number', { limits: { orphans: -1 } }, 'key "limits.orphans": expected a whole number >= 0, or null, got -1$'],
     ['boolean', { cache: { enabled: 'yes' } }, 'key "cache.enabled": expected true or false, got "yes"$'],
     ['list', { include: '**/*.md' }, 'key "include": expected a list of non-empty strings, got "\\*\\*/\\*\\.md"$'],
     ['empty list', { entry: [] }, 'key "entry": expected a list of non-empty strings \\(at least 1\\), got an empty list$'],
@@ -54,10 +54,21 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
     ['missing key in a list item', { linkPatterns: [{ pattern: 'x' }] }, 'key "linkPatterns.0.route": expected a non-empty string, got nothing$'],
     ['bad regular expression', { linkPatterns: [{ pattern: '(', route: 'x' }] }, 'key "linkPatterns.0.pattern": not a valid regular expression'],
     ['nullable path', { navigation: 3 }, 'key "navigation": expected a non-empty string, or null, got 3$'],
-    ['rule severity', { rules: { 'broken-link': 'fatal' } }, 'key "rules.broken-link": expected a severity \\("off", "warning" or "error"; "warn" means "warning"\\), or \\[severity, \\{ rule options \\}\\], got "fatal"$'],
-    ['unknown rule', { rules: { 'broken-links': 'error' } }, 'key "rules.broken-links": unknown rule, expected one of "broken-fragment", "broken-link", '],
-    ['rule option type', { rules: { 'dead-end': ['warning', { countTemplateLinks: 1 }] } }, 'key "rules.dead-end.countTemplateLinks": expected true or false, got 1$'],
-    ['unknown rule option', { rules: { 'dead-end': ['warning', { bogus: 1 }] } }, 'key "rules.dead-end.bogus": unknown option, expected one of "countTemplateLinks"$'],
+    ['check level', { checks: { 'broken-link': { level: 'fatal' } } }, 'key "checks.broken-link.level": expected one of "error", "warning", "none", got "fatal"$'],
+    ['check setting not an object', { checks: { 'broken-link': 'error' } }, 'key "checks.broken-link": expected an object: \\{ "level": "error", "warning" or "none", and the check\'s own options \\}, got "error"$'],
+    ['unknown check', { checks: { 'broken-links': { level: 'error' } } }, 'key "checks.broken-links": no check has this id; the checks are broken-fragment, broken-link, '],
+    ['check option type', { checks: { 'dead-end': { countTemplateLinks: 1 } } }, 'key "checks.dead-end.countTemplateLinks": expected true or false, got 1$'],
+    ['unknown check option', { checks: { 'dead-end': { bogus: 1 } } }, 'key "checks.dead-end.bogus": unknown option; this check takes "level", "countTemplateLinks"$'],
+    [
+      'the old rule settings, rewritten in the new form',
+      { rules: { 'orphan-page': 'off', 'dead-end': ['warn', { countTemplateLinks: true }], 'max-click-depth': ['error', { max: 4 }] } },
+      'key "rules" is the old form of check settings; write it now as "checks": \\{"orphan-page":\\{"level":"none"\\},"dead-end":\\{"level":"warning","countTemplateLinks":true\\},"click-depth":\\{"level":"error"\\}\\} and "maxDepth": 4 \\(the one depth limit\\)$',
+    ],
+    [
+      'the old gate, rewritten as limits',
+      { gate: { maxDepth: 3, maxBrokenLinks: 6, minInlinksForImportant: 2 } },
+      'key "gate" is now "limits"; write it as "limits": \\{"brokenLinks":6,"importantPageInlinks":2\\}; "gate.maxDepth" is gone: the depth limit is "maxDepth", and "checks": \\{"click-depth":\\{"level":"error"\\}\\} fails the run on it$',
+    ],
     ['not an object', [1, 2], 'the configuration must be an object of keys, got a list of 2$'],
     ['base path', { routes: { basePath: 'docs' } }, 'key "routes.basePath": must start with "/", got "docs"$'],
   ])('%s: %j', async (_name, config, message) => {
@@ -72,7 +83,7 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
 
 describe('a wrong flag exits 2 with one line naming it and what it accepts', () => {
   it.each([
-    [['check', 'docs', '--styel'], /^linkweave: unknown flag "--styel" for "check"; accepted flags: --config, --format, --output, /],
+    [['check', 'docs', '--styel'], /^linkweave: unknown flag --styel for "check"; its flags: --config, --format, --output, /],
     [['check', 'docs', '-x'], /^linkweave: unknown flag "-x"; flags are written --name \(see --help\)$/],
     [['check', 'docs', '--fail-on', 'info'], /^linkweave: flag --fail-on: expected one of error, warning; got "info"$/],
     [['check', 'docs', '--max-depth', '-1'], /^linkweave: flag --max-depth: expected a whole number >= 0; got "-1"$/],

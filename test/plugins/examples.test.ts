@@ -43,16 +43,16 @@ const PLANTED_MARKDOWN: readonly [string, string, string][] = [
   ['getting-started/first-week-checklist.md', '1:1', 'orphan-page'],
   ['guides/tide-prediction.md', '1:1', 'orphan-page'],
   ['hardware/solar-panel-sizing.md', '1:1', 'orphan-page'],
-  ['troubleshooting/sd-card-recovery.md', '1:1', 'max-click-depth'],
-  ['troubleshooting/log-repair.md', '1:1', 'max-click-depth'],
+  ['troubleshooting/sd-card-recovery.md', '1:1', 'click-depth'],
+  ['troubleshooting/log-repair.md', '1:1', 'click-depth'],
   ['concepts/glossary.md', '1:1', 'dead-end'],
 ];
 
 describe('examples/api', () => {
-  it('the command: linkweave check on the example site fails its gate with exit code 1', () => {
+  it('the command: linkweave check on the example site fails with exit code 1', () => {
     const { status, stdout } = run([path.join(repo, 'dist/cli/bin.js'), 'check', docsSite]);
     expect(status).toBe(1);
-    expect(stdout).toMatch(/Gate failed \(fail on error\)/);
+    expect(stdout).toMatch(/^This run fails \(exit 1\): broken-fragment 3 errors, /m);
   });
 
   it('report.mjs: analyze() and formatReport() through the package name print the report summary', () => {
@@ -67,7 +67,7 @@ describe('examples/api', () => {
     expect(top).toHaveLength(3);
     for (const route of top) expect(NAV_ROUTES).toContain(route);
     // 17 planted findings (orphans are not also reported as unreachable, DEVELOPERS.md); the gate fails.
-    expect(lines[2]).toMatch(/^17 findings, \d+ suggested links; gate failed$/);
+    expect(lines[2]).toMatch(/^17 findings, \d+ suggested links; the run fails$/);
     expect(Number(/(\d+) suggested/.exec(lines[2]!)![1])).toBeGreaterThanOrEqual(PLANTED_SUGGESTIONS);
     // The example site is built to fail its gate (examples/README.md): the example exits 1 as the CLI does.
     expect(status).toBe(1);
@@ -84,9 +84,9 @@ describe('examples/api', () => {
       expect(block, file).toBeDefined();
       expect(block).toMatch(new RegExp(`\\n${place}\\s+(error|warning)\\s[^\\n]*${rule}\\s+linkweave`));
     }
-    const errors = PLANTED_MARKDOWN.filter(([, , rule]) => !['max-click-depth', 'dead-end'].includes(rule)).length;
-    expect(stdout).toContain(`${PLANTED_MARKDOWN.length} messages (✖ ${errors} errors, ⚠ ${PLANTED_MARKDOWN.length - errors} warnings)`);
-    expect(stdout.trim().split('\n').at(-1)).toBe('51 pages; gate failed');
+    const errors = PLANTED_MARKDOWN.filter(([, , rule]) => rule !== 'dead-end').length;
+    expect(stdout).toContain(`${PLANTED_MARKDOWN.length} messages (✖ ${errors} errors, ⚠ ${PLANTED_MARKDOWN.length - errors} warning${PLANTED_MARKDOWN.length - errors === 1 ? '' : 's'})`);
+    expect(stdout.trim().split('\n').at(-1)).toBe('51 pages; the run fails');
   });
 
   it('vite.config.mjs: `vite build` in a project with linkweave installed checks the built pages', async () => {
@@ -101,13 +101,13 @@ describe('examples/api', () => {
     expect(status).toBe(0);
     const outDir = path.join(project, 'site/dist');
     expect(stdout).toContain('linkweave: 3 pages, 8 links, 0 broken links');
-    expect(stdout).toContain('gate passed.');
+    expect(stdout).toContain('The build passes: no errors, no limit crossed.');
     const written = JSON.parse(fs.readFileSync(path.join(outDir, 'linkweave-report.json'), 'utf8')) as Report;
     const direct = await analyze({
       include: ['**/*.html'],
       exclude: ['linkweave-report.json'],
       maxDepth: 2,
-      gate: { maxOrphans: 0 },
+      limits: { orphans: 0 },
       cache: { enabled: false },
       root: outDir,
     });

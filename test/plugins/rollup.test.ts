@@ -57,7 +57,7 @@ describe('linkweave/rollup in a real Rolldown build', () => {
     const info = logs.filter((l) => l.level === 'info' && l.log.plugin === 'linkweave').map((l) => l.log.message);
     expect(info).toHaveLength(1);
     expect(info[0]).toContain(`linkweave: 3 pages, 4 links, 0 broken links`);
-    expect(info[0]).toContain('No problems found; gate passed.');
+    expect(info[0]).toContain('Findings: none. The build passes: no errors, no limit crossed.');
     expect(direct.gate.passed).toBe(true);
   });
 
@@ -68,12 +68,12 @@ describe('linkweave/rollup in a real Rolldown build', () => {
     };
     const failing = await bundle('broken', files);
     await expect(failing.close()).rejects.toThrowError(
-      `${path.join(failing.dir, 'index.html')}:6:4  error  Unexpected link to missing page /gone.html (written "gone.html"), expected an existing page  (broken-link)`,
+      `${path.join(failing.dir, 'index.html')}:6:4  error  Broken link: no page /gone.html (written "gone.html"); fix or remove the link  (broken-link)`,
     );
 
     const passing = await bundle('broken-passing', files, false);
     await passing.close();
     const warnings = passing.logs.filter((l) => l.level === 'warn' && l.log.plugin === 'linkweave').map((l) => l.log.message);
-    expect(warnings.join('\n')).toContain(`${path.join(passing.dir, 'index.html')}:6:4  error  Unexpected link to missing page /gone.html`);
+    expect(warnings.join('\n')).toContain(`${path.join(passing.dir, 'index.html')}:6:4  error  Broken link: no page /gone.html`);
   });
 });

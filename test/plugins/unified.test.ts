@@ -95,8 +95,8 @@ describe('linkweave/unified', () => {
 
     // vfile-reporter prints them like any lint rule's messages: place, severity, reason, rule.
     const printed = reporter(files, { quiet: true, color: false });
-    expect(printed).toMatch(/first-starter\.md\n5:31\s+error\s+Unexpected link to missing file reference\/flour-types\.md[^\n]*broken-link\s+linkweave/);
-    expect(printed).toMatch(/hydration\.md\n(?:.*\n)*?1:1\s+(?:warning|error)\s+Unexpected orphan page[^\n]*orphan-page\s+linkweave/);
+    expect(printed).toMatch(/first-starter\.md\n5:31\s+error\s+Broken link: no source file reference\/flour-types\.md[^\n]*broken-link\s+linkweave/);
+    expect(printed).toMatch(/hydration\.md\n(?:.*\n)*?1:1\s+(?:warning|error)\s+No page links to [^\n]*orphan-page\s+linkweave/);
   });
 
   it('runs the report pass as a second unified plugin (linkweaveReport)', async () => {

@@ -44,55 +44,56 @@ describe('evaluateGate: severity', () => {
 });
 
 describe('evaluateGate: limits (a count above its limit fails; at the limit passes)', () => {
-  const cases: [keyof NonNullable<Config['gate']>, Partial<GateStats>, number, number][] = [
-    ['maxDepth', { maxDepth: 5 }, 3, 5],
-    ['maxOrphans', { orphans: 2 }, 1, 2],
-    ['maxBrokenLinks', { brokenLinks: 4 }, 0, 4],
-    ['maxBrokenFragments', { brokenFragments: 3 }, 2, 3],
-    ['maxUnreachable', { unreachable: 1 }, 0, 1],
+  const cases: [Exclude<keyof NonNullable<Config['limits']>, 'importantPageInlinks' | 'warnings'>, Partial<GateStats>, number, number][] = [
+    ['orphans', { orphans: 2 }, 1, 2],
+    ['brokenLinks', { brokenLinks: 4 }, 0, 4],
+    ['brokenFragments', { brokenFragments: 3 }, 2, 3],
+    ['unreachable', { unreachable: 1 }, 0, 1],
   ];
   for (const [key, stats, limit, actual] of cases) {
-    it(`gate.${key}`, () => {
-      const crossed = evaluateGate([], { ...calm, ...stats }, gate({ gate: { [key]: limit } }));
-      expect(crossed).toEqual({ passed: false, failOn: 'error', failures: [{ rule: `gate.${key}`, limit, actual }] });
-      expect(evaluateGate([], { ...calm, ...stats }, gate({ gate: { [key]: actual } })).passed).toBe(true);
+    it(`limits.${key}`, () => {
+      const crossed = evaluateGate([], { ...calm, ...stats }, gate({ limits: { [key]: limit } }));
+      expect(crossed).toEqual({ passed: false, failOn: 'error', failures: [{ rule: `limits.${key}`, limit, actual }] });
+      expect(evaluateGate([], { ...calm, ...stats }, gate({ limits: { [key]: actual } })).passed).toBe(true);
       expect(evaluateGate([], { ...calm, ...stats }, gate({})).passed).toBe(true);
     });
   }
 
-  it('gate.maxWarnings counts warning findings only', () => {
+  it('limits.warnings counts warning findings only', () => {
     const findings = [finding('dead-end', 'warning'), finding('orphan-page', 'warning'), finding('dead-end', 'warning')];
-    expect(evaluateGate(findings, calm, gate({ gate: { maxWarnings: 2 } })).failures).toEqual([{ rule: 'gate.maxWarnings', limit: 2, actual: 3 }]);
-    expect(evaluateGate(findings, calm, gate({ gate: { maxWarnings: 3 } })).passed).toBe(true);
+    expect(evaluateGate(findings, calm, gate({ limits: { warnings: 2 } })).failures).toEqual([{ rule: 'limits.warnings', limit: 2, actual: 3 }]);
+    expect(evaluateGate(findings, calm, gate({ limits: { warnings: 3 } })).passed).toBe(true);
   });
 
-  it('gate.minInlinksForImportant fails below the limit, with the fewest as actual; no important page: passes', () => {
-    const config = gate({ gate: { minInlinksForImportant: 2 } });
+  it('limits.importantPageInlinks fails below the limit, with the fewest as actual; no important page: passes', () => {
+    const config = gate({ limits: { importantPageInlinks: 2 } });
     expect(evaluateGate([], { ...calm, fewestImportantInlinks: 1 }, config).failures).toEqual([
-      { rule: 'gate.minInlinksForImportant', limit: 2, actual: 1 },
+      { rule: 'limits.importantPageInlinks', limit: 2, actual: 1 },
     ]);
     expect(evaluateGate([], { ...calm, fewestImportantInlinks: 2 }, config).passed).toBe(true);
     expect(evaluateGate([], { ...calm, fewestImportantInlinks: null }, config).passed).toBe(true);
   });
 
-  it('maxDepth with no reachable page does not fail (unreachable pages have their own limit)', () => {
-    expect(evaluateGate([], { ...calm, maxDepth: null }, gate({ gate: { maxDepth: 0 } })).passed).toBe(true);
-  });
-
-  it('severity and limit failures together, sorted by rule', () => {
-    const result = evaluateGate([finding('unreachable-page', 'error')], { ...calm, orphans: 3, maxDepth: 6 }, gate({ gate: { maxOrphans: 0, maxDepth: 3 } }));
-    expect(result.failures.map((f) => f.rule)).toEqual(['gate.maxDepth', 'gate.maxOrphans', 'unreachable-page']);
+  it('level and limit failures together, sorted by rule', () => {
+    const result = evaluateGate([finding('unreachable-page', 'error')], { ...calm, orphans: 3 }, gate({ limits: { orphans: 0 } }));
+    expect(result.failures.map((f) => f.rule)).toEqual(['limits.orphans', 'unreachable-page']);
   });
 });
 
-describe('the gate in a built report reads the report\'s own counts', () => {
-  it('fixture: deepest page 5 over maxDepth 4; the tuning page (high importance) has 1 content inlink', () => {
+describe('the verdict in a built report reads the report\'s own counts', () => {
+  it('fixture: deepest page 5 over maxDepth 4 fails through click-depth at level error; the tuning page (high importance) has 1 content inlink', () => {
     const report = fixtureReport({
-      spec: { options: { rules: { 'broken-link': 'warning', 'broken-fragment': 'off', 'orphan-page': 'off' }, gate: { maxDepth: 4, minInlinksForImportant: 2 } } },
+      spec: {
+        options: {
+          maxDepth: 4,
+          checks: { 'broken-link': { level: 'warning' }, 'broken-fragment': { level: 'none' }, 'orphan-page': { level: 'none' }, 'click-depth': { level: 'error' } },
+          limits: { importantPageInlinks: 2 },
+        },
+      },
     });
     expect(report.gate.failures).toEqual([
-      { rule: 'gate.maxDepth', limit: 4, actual: 5 },
-      { rule: 'gate.minInlinksForImportant', limit: 2, actual: 1 },
+      { rule: 'click-depth', limit: 0, actual: 1 },
+      { rule: 'limits.importantPageInlinks', limit: 2, actual: 1 },
     ]);
   });
 });

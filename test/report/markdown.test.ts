@@ -4,16 +4,16 @@ import type { Suggestion } from '../../src/types.js';
 import { fixtureReport, SUGGESTIONS } from './fixture.js';
 
 describe('markdown formatter', () => {
-  it('matches the reviewed snapshot (gate first, findings table, suggestion checklist)', async () => {
+  it('matches the reviewed snapshot (verdict first, findings table, suggestion checklist, hand-written list, apply command)', async () => {
     await expect(formatReport(fixtureReport(), 'markdown')).toMatchFileSnapshot('__snapshots__/fixture.md');
   });
 
-  it('starts with the gate result and lists the limits crossed', () => {
-    const md = formatReport(fixtureReport({ spec: { options: { gate: { maxOrphans: 0, minInlinksForImportant: 3 } } } }), 'markdown');
+  it('starts with the verdict and lists the limits crossed', () => {
+    const md = formatReport(fixtureReport({ spec: { options: { limits: { orphans: 0, importantPageInlinks: 3 } } } }), 'markdown');
     const lines = md.split('\n');
-    expect(lines[0]).toBe('### linkweave: gate failed');
-    expect(lines).toContain('| `gate.maxOrphans` | 1 | at most 0 |');
-    expect(lines).toContain('| `gate.minInlinksForImportant` | 1 | at least 3 |');
+    expect(lines[0]).toBe('### linkweave: this run fails');
+    expect(lines).toContain('| `limits.orphans` | 1 | at most 0 |');
+    expect(lines).toContain('| `limits.importantPageInlinks` | 1 | at least 3 |');
     expect(lines).toContain('| `broken-link` | 1 error | none |');
   });
 
@@ -39,11 +39,11 @@ describe('markdown formatter', () => {
     const clean = fixtureReport({ spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] }, suggestions: [] });
     expect(formatReport(clean, 'markdown')).toBe(
       [
-        '### linkweave: gate passed',
+        '### linkweave: this run passes',
         '',
-        'Nothing at or above `error` and no limit crossed.',
+        'No finding at or above `error` and no limit crossed.',
         '',
-        '2 pages · 2 links · 0 broken links · 0 broken fragments · 0 orphans · 0 unreachable · 0 dead ends · deepest page 1 click (limit 3) · PageRank 1 iteration.',
+        '2 pages · 2 links · 0 broken links · 0 broken fragments · 0 orphan pages · 0 unreachable · 0 dead ends · deepest page 1 click (limit 3).',
         '',
         '#### Findings: none',
         '',

@@ -74,7 +74,7 @@ describe('sarif formatter', () => {
     const s = results.find((r) => r.properties?.['suggestionId'] === 'b7e1c2d4')!;
     expect(s.level).toBe('note');
     expect(s.message.text).toBe(
-      'Add a link to /guide/configure/advanced/tuning/ on "tuning options" (similarity 0.42, target rank 0.56 -> 1.32, depth 5 -> 2). Why: too deep: 5 clicks, limit 3.',
+      'Add a link to /guide/configure/advanced/tuning/ on "tuning options" (42% similar; target rank 0.56 -> 1.32; 2 clicks instead of 5). Why: too deep: 5 clicks, limit 3.',
     );
     expect(s.fixes).toEqual([
       {
@@ -99,7 +99,7 @@ describe('sarif formatter', () => {
     const s: Result = results.find((r) => r.properties?.['suggestionId'] === '0f3a9e71')!;
     expect(s.fixes).toBeUndefined();
     expect(s.locations![0]!.physicalLocation!.region).toEqual({ startLine: 3, startColumn: 1 });
-    expect(s.message.text).toContain('no anchor phrase found');
+    expect(s.message.text).toContain('needs a sentence written by hand');
   });
 
   it('a finding that belongs to no file (missing entry) has no location and still validates', () => {

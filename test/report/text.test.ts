@@ -12,10 +12,22 @@ describe('text formatter', () => {
     await expect(formatReport(report, 'text')).toMatchFileSnapshot('__snapshots__/fixture.txt');
   });
 
-  it('fits an 80-column terminal and has no colour codes without colour', () => {
+  it('fits 100 columns by default and the width given, and has no colour codes without colour', () => {
     const text = formatReport(report, 'text');
     expect(text).not.toMatch(ANSI);
-    for (const line of text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+    const command = (l: string) => l.startsWith('  linkweave apply ');
+    for (const line of text.split('\n')) if (!command(line)) expect(line.length).toBeLessThanOrEqual(100);
+    for (const line of formatReport(report, 'text', { width: 60 }).split('\n')) if (!command(line)) expect(line.length).toBeLessThanOrEqual(60);
+  });
+
+  it('never breaks a line inside a quoted phrase, a route or the apply command', () => {
+    const long = { ...report.suggestions.find((s) => s.anchor !== null)!, anchor: 'a rather long anchor phrase that must stay whole' };
+    const text = formatReport({ ...report, suggestions: [long] }, 'text', { width: 50 });
+    expect(text).toContain('"a rather long anchor phrase that must stay whole"');
+    expect(text).toContain('/guide/configure/advanced/tuning/');
+    expect(text).toContain(`  linkweave apply /work/docs --ids ${long.id}\n`);
+    const quoted = formatReport(report, 'text', { width: 40 });
+    expect(quoted).toContain('"setup";');
   });
 
   it('colours severities only when asked', () => {
@@ -29,30 +41,35 @@ describe('text formatter', () => {
     const at = lines.indexOf('index.md:9:3  error  broken-link');
     expect(at).toBeGreaterThanOrEqual(0);
     expect(lines[at + 1]).toBe(
-      '    Unexpected link to missing file guide/instal.md, expected an existing source file (did you mean guide/install.md?)',
+      '    Broken link: no source file guide/instal.md; did you mean guide/install.md?',
     );
-    const s = lines.indexOf('reference/index.md:5:12  add link "tuning options" -> /guide/configure/advanced/tuning/');
+    const s = lines.indexOf('reference/index.md:5:12  link "tuning options" -> /guide/configure/advanced/tuning/');
     expect(s).toBeGreaterThanOrEqual(0);
-    expect(lines[s + 1]).toBe('    similarity 0.42, target rank 0.56 -> 1.32, depth 5 -> 2  id b7e1c2d4');
+    expect(lines[s + 1]).toBe('    42% similar; rank 0.56 -> 1.32; 2 clicks instead of 5; id b7e1c2d4');
   });
 
   it('shows paths relative to the working folder when given one', () => {
     const text = formatReport(report, 'text', { cwd: '/work', width: 0 });
     expect(text).toContain('docs/index.md:9:3  error');
-    expect(text).toContain('docs/reference/index.md:5:12  add link');
+    expect(text).toContain('docs/reference/index.md:5:12  link');
+    // The apply command names the root as seen from the working folder, so it runs as printed.
+    expect(text).toContain('  linkweave apply docs --ids b7e1c2d4\n');
+    // A run with --config FILE prints an apply command that reads the same file.
+    const withConfig = formatReport(report, 'text', { cwd: '/work', width: 0, applyArgs: ['--config', 'ci/link weave.json'] });
+    expect(withConfig).toContain("  linkweave apply docs --config 'ci/link weave.json' --ids b7e1c2d4\n");
   });
 
-  it('a clean site: no problems, gate passed', () => {
+  it('a clean site: no findings, the run passes', () => {
     const clean = fixtureReport({
       spec: { pages: [{ route: '/', links: ['/a/'] }, { route: '/a/', links: ['/'] }] },
       suggestions: [],
     });
     expect(formatReport(clean, 'text')).toBe(
       [
-        'No problems found',
-        '2 pages, 2 links, 0 broken links, 0 broken fragments, 0 orphans, 0 unreachable,',
-        '0 dead ends, deepest page 1 click (limit 3), PageRank 1 iteration',
-        'Gate passed (fail on error)',
+        'Site: 2 pages, 2 links, 0 broken links, 0 broken fragments, 0 orphan pages, 0 unreachable,',
+        '  0 dead ends, deepest page 1 click (limit 3)',
+        'Findings: none',
+        'This run passes (exit 0): no errors, no limit crossed',
         '',
       ].join('\n'),
     );
@@ -64,12 +81,12 @@ describe('text formatter safety', () => {
     const report = fixtureReport();
     const hostile = {
       ...report,
-      findings: [{ ...report.findings[0]!, file: 'a\u001b[2Jb.md', message: 'Unexpected \u001b]0;title\u0007 text' }],
+      findings: [{ ...report.findings[0]!, file: 'a\u001b[2Jb.md', message: 'Odd \u001b]0;title\u0007 text' }],
       suggestions: [],
     };
     const text = formatReport(hostile, 'text', { width: 0 });
     expect(text).not.toMatch(/[\u0000-\u0008\u000b-\u001f]/);
-    expect(text).toContain('a\uFFFD[2Jb.md:1:1  warning  max-click-depth\n    Unexpected \uFFFD]0;title\uFFFD text');
+    expect(text).toContain('a\uFFFD[2Jb.md:1:1  warning  click-depth\n    Odd \uFFFD]0;title\uFFFD text');
   });
 });
 

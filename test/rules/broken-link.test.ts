@@ -35,7 +35,7 @@ ruleTable(brokenLink, {
           route: '/guide/',
           target: 'guide/instal.md',
           message:
-            'Unexpected link to missing file guide/instal.md (written "instal.md"), expected an existing source file (did you mean guide/install.md?)',
+            'Broken link: no source file guide/instal.md (written "instal.md"); did you mean guide/install.md?',
         },
         {
           file: 'guide/index.md',
@@ -43,7 +43,7 @@ ruleTable(brokenLink, {
           column: 42,
           route: '/guide/',
           target: '/guide/instal/',
-          message: 'Unexpected link to missing page /guide/instal/, expected an existing page (did you mean /guide/install/?)',
+          message: 'Broken link: no page /guide/instal/; did you mean /guide/install/?',
         },
       ],
     },
@@ -51,7 +51,7 @@ ruleTable(brokenLink, {
       name: 'no hint when no route is close; the written form is left out when it equals the target',
       site: { pages: [{ route: '/', links: [{ to: '/reference/cli/', line: 7, column: 3 }] }, { route: '/guide/' }] },
       findings: [
-        { file: 'index.md', line: 7, column: 3, message: 'Unexpected link to missing page /reference/cli/, expected an existing page' },
+        { file: 'index.md', line: 7, column: 3, message: 'Broken link: no page /reference/cli/; fix or remove the link' },
       ],
     },
     {
@@ -62,7 +62,7 @@ ruleTable(brokenLink, {
           file: 'index.md',
           line: 2,
           column: 1,
-          message: 'Unexpected link to missing file /files/manual.pdf, expected an existing file',
+          message: 'Broken link: no file /files/manual.pdf; add the file or fix the link',
         },
       ],
     },
@@ -75,9 +75,9 @@ ruleTable(brokenLink, {
         ],
       },
       findings: [
-        { file: 'a.md', line: 10, column: 1, message: 'Unexpected link to missing page /gone/, expected an existing page' },
-        { file: 'b.md', line: 3, column: 2, message: 'Unexpected link to missing page /nope/, expected an existing page' },
-        { file: 'b.md', line: 3, column: 9, message: 'Unexpected link to missing page /nope/, expected an existing page' },
+        { file: 'a.md', line: 10, column: 1, message: 'Broken link: no page /gone/; fix or remove the link' },
+        { file: 'b.md', line: 3, column: 2, message: 'Broken link: no page /nope/; fix or remove the link' },
+        { file: 'b.md', line: 3, column: 9, message: 'Broken link: no page /nope/; fix or remove the link' },
       ],
     },
     {
@@ -92,7 +92,7 @@ ruleTable(brokenLink, {
           line: 4,
           column: 3,
           route: '',
-          message: 'Unexpected link to missing file set-up.md, expected an existing source file (did you mean setup.md?)',
+          message: 'Broken link: no source file set-up.md; did you mean setup.md?',
         },
       ],
     },
@@ -104,7 +104,7 @@ ruleTable(brokenLink, {
           { route: '/draft-notes/', exclude: true, links: [{ to: '/gone/', line: 2, column: 1 }] },
         ],
       },
-      findings: [{ file: 'index.md', line: 5, column: 1, message: 'Unexpected link to missing page /gone/, expected an existing page' }],
+      findings: [{ file: 'index.md', line: 5, column: 1, message: 'Broken link: no page /gone/; fix or remove the link' }],
     },
   ],
 });

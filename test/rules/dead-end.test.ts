@@ -2,7 +2,7 @@ import { deadEnd } from '../../src/rules/index.js';
 import { ruleTable } from './table.js';
 
 const message = (route: string, which = 'content links'): string =>
-  `Unexpected dead end ${route} with no ${which} to other pages, expected at least one link onward`;
+  `Dead end: ${route} has no ${which} to other pages; add a link onward`;
 
 ruleTable(deadEnd, {
   valid: [
@@ -19,7 +19,7 @@ ruleTable(deadEnd, {
       site: {
         pages: [{ route: '/' }, { route: '/a/' }],
         navigation: ['/', '/a/'],
-        options: { rules: { 'dead-end': ['warning', { countTemplateLinks: true }] } },
+        options: { checks: { 'dead-end': { level: 'warning', countTemplateLinks: true } } },
       },
     },
   ],

@@ -17,7 +17,7 @@ ruleTable(duplicateRoute, {
           column: 1,
           route: '/guide/',
           target: 'guide/index.md',
-          message: 'Unexpected second file for route /guide/, expected one file per route (guide.md has it)',
+          message: 'Route /guide/ already belongs to guide.md; give this file another route (a slug) or remove it',
         },
       ],
     },

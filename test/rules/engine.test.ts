@@ -20,15 +20,18 @@ describe('runRules', () => {
   it('runs every rule and sorts by file, line, column, rule', () => {
     const found = runRules(buildSite(site));
     expect(found.map((f) => `${f.file}:${f.line}:${f.column} ${f.severity} ${f.rule}`)).toEqual([
-      'a/b/c/d.md:1:1 warning max-click-depth',
+      'a/b/c/d.md:1:1 warning click-depth',
       'index.md:4:2 error broken-link',
       'lost.md:1:1 error orphan-page',
     ]);
   });
 
-  it('skips rules that are off and applies [severity, options]', () => {
+  it('skips checks at level none and applies the configured level and options', () => {
     const found = runRules(
-      buildSite({ ...site, options: { rules: { 'orphan-page': 'off', 'unreachable-page': 'warn', 'max-click-depth': ['error', { max: 4 }] } } }),
+      buildSite({
+        ...site,
+        options: { maxDepth: 4, checks: { 'orphan-page': { level: 'none' }, 'unreachable-page': { level: 'warning' }, 'click-depth': { level: 'error' } } },
+      }),
     );
     // /lost/ is an orphan: unreachable-page leaves orphans to orphan-page, which is off here.
     expect(found.map((f) => `${f.rule} ${f.severity}`)).toEqual(['broken-link error']);
@@ -49,37 +52,38 @@ describe('runRules', () => {
 });
 
 describe('validateRuleConfig', () => {
-  const check = (rulesConfig: unknown) => () => validateRuleConfig(resolveOptions({ rules: rulesConfig }, '/site'), 'linkweave.config.json');
+  const check = (checks: unknown) => () => validateRuleConfig(resolveOptions({ checks }, '/site'), 'linkweave.config.json');
 
-  it('names an unknown rule id and lists the known ones', () => {
-    expect(check({ 'broken-links': 'error' })).toThrow(EngineError);
-    expect(check({ 'broken-links': 'error' })).toThrow(
-      `linkweave.config.json: key "rules.broken-links": unknown rule, expected one of ${rules.map((r) => `"${r.id}"`).join(', ')}`,
+  it('names an unknown check id and lists the known ones', () => {
+    expect(check({ 'broken-links': { level: 'error' } })).toThrow(EngineError);
+    expect(check({ 'broken-links': { level: 'error' } })).toThrow(
+      `linkweave.config.json: key "checks.broken-links": no check has this id; the checks are ${rules.map((r) => r.id).join(', ')}`,
     );
   });
 
   it('names an unknown option and lists the accepted ones', () => {
-    expect(check({ 'max-click-depth': ['error', { maximum: 2 }] })).toThrow(
-      'linkweave.config.json: key "rules.max-click-depth.maximum": unknown option, expected one of "max"',
+    expect(check({ 'orphan-page': { level: 'error', countTemplate: false } })).toThrow(
+      'linkweave.config.json: key "checks.orphan-page.countTemplate": unknown option; this check takes "level", "countTemplateLinks"',
     );
   });
 
   it('names an option of the wrong type', () => {
-    expect(check({ 'orphan-page': ['warning', { countTemplateLinks: 'no' }] })).toThrow(/key "rules\.orphan-page\.countTemplateLinks": /);
+    expect(check({ 'orphan-page': { level: 'warning', countTemplateLinks: 'no' } })).toThrow(/key "checks\.orphan-page\.countTemplateLinks": /);
   });
 
-  it('refuses options for a rule that takes none', () => {
-    expect(check({ 'broken-link': ['error', { ignore: [] }] })).toThrow(
-      'linkweave.config.json: key "rules.broken-link.ignore": the rule takes no options, expected "error" alone',
+  it('refuses options for a check that takes none (the depth limit is maxDepth, not a click-depth option)', () => {
+    expect(check({ 'broken-link': { level: 'error', ignore: [] } })).toThrow(
+      'linkweave.config.json: key "checks.broken-link.ignore": this check takes only "level"',
     );
+    expect(check({ 'click-depth': { limit: 2 } })).toThrow('key "checks.click-depth.limit": this check takes only "level"');
   });
 
-  it('returns each rule with its configured severity (null when unset) and merged options', () => {
-    const settings = validateRuleConfig(resolveOptions({ rules: { 'max-click-depth': ['error', { max: 2 }], 'dead-end': 'off' } }, '/site'));
-    const byId = Object.fromEntries(settings.map((s) => [s.rule.id, { severity: s.severity, options: s.options }]));
-    expect(byId['max-click-depth']).toEqual({ severity: 'error', options: { max: 2 } });
-    expect(byId['dead-end']).toEqual({ severity: 'off', options: { countTemplateLinks: false } });
-    expect(byId['orphan-page']).toEqual({ severity: null, options: { countTemplateLinks: true } });
+  it('returns each rule with its configured level (null when unset) and merged options', () => {
+    const settings = validateRuleConfig(resolveOptions({ checks: { 'orphan-page': { countTemplateLinks: false }, 'dead-end': { level: 'none' } } }, '/site'));
+    const byId = Object.fromEntries(settings.map((s) => [s.rule.id, { level: s.level, options: s.options }]));
+    expect(byId['dead-end']).toEqual({ level: 'none', options: { countTemplateLinks: false } });
+    expect(byId['orphan-page']).toEqual({ level: null, options: { countTemplateLinks: false } });
+    expect(byId['click-depth']).toEqual({ level: null, options: {} });
   });
 });
 
@@ -94,9 +98,9 @@ describe('rule metadata', () => {
     expect(ids).toEqual([
       'broken-fragment',
       'broken-link',
+      'click-depth',
       'dead-end',
       'duplicate-route',
-      'max-click-depth',
       'missing-entry',
       'orphan-page',
       'source-problem',

@@ -14,7 +14,7 @@ import {
   brokenLink,
   deadEnd,
   duplicateRoute,
-  maxClickDepth,
+  clickDepth,
   missingEntry,
   orphanPage,
   runRules,
@@ -46,8 +46,8 @@ describe('rule documentation examples', () => {
     };
     expect(check(brokenLink, { ...site, 'guide/index.md': 'Read [the install guide](install.md) or [the install page](/guide/install/).\n' })).toEqual([]);
     expect(check(brokenLink, { ...site, 'guide/index.md': 'Read [the install guide](instal.md) or [the install page](/guide/instal/).\n' })).toEqual([
-      'guide/index.md:1:6  error  Unexpected link to missing file guide/instal.md (written "instal.md"), expected an existing source file (did you mean guide/install.md?)',
-      'guide/index.md:1:40  error  Unexpected link to missing page /guide/instal/, expected an existing page (did you mean /guide/install/?)',
+      'guide/index.md:1:6  error  Broken link: no source file guide/instal.md (written "instal.md"); did you mean guide/install.md?',
+      'guide/index.md:1:40  error  Broken link: no page /guide/instal/; did you mean /guide/install/?',
     ]);
   });
 
@@ -55,14 +55,14 @@ describe('rule documentation examples', () => {
     const site = { 'guide/install.md': '# Install\n\n## Set up\n' };
     expect(check(brokenFragment, { ...site, 'guide/index.md': 'See [setting up](install.md#set-up).\n' })).toEqual([]);
     expect(check(brokenFragment, { ...site, 'guide/index.md': 'See [setting up](install.md#setup).\n' })).toEqual([
-      'guide/index.md:1:5  error  Unexpected link to missing fragment #setup on /guide/install/, expected a heading or id of that page (did you mean #set-up?)',
+      'guide/index.md:1:5  error  Broken fragment: /guide/install/ has no heading or id "setup"; did you mean #set-up?',
     ]);
   });
 
   it('orphan-page', () => {
     expect(check(orphanPage, { 'index.md': '[About](about.md)\n', 'about.md': '# About\n' })).toEqual([]);
     expect(check(orphanPage, { 'index.md': '[Guide](guide.md)\n', 'guide.md': '# Guide\n', 'old/notes.md': '# Notes\n' })).toEqual([
-      'old/notes.md:1:1  error  Unexpected orphan page /old/notes/, expected a link to it from at least one other page',
+      'old/notes.md:1:1  error  No page links to /old/notes/; link it from /',
     ]);
   });
 
@@ -72,18 +72,18 @@ describe('rule documentation examples', () => {
     expect(
       check(unreachablePage, { ...chain, 'archive/index.md': '[2019](2019.md)\n', 'archive/2019.md': '[Archive](index.md)\n' }),
     ).toEqual([
-      'archive/2019.md:1:1  error  Unexpected unreachable page /archive/2019/, expected a path of links to it from an entry page (/); linked only from /archive/',
-      'archive/index.md:1:1  error  Unexpected unreachable page /archive/, expected a path of links to it from an entry page (/); linked only from /archive/2019/',
+      'archive/2019.md:1:1  error  /archive/2019/ cannot be reached from /: only /archive/ links to it; link it from a reachable page',
+      'archive/index.md:1:1  error  /archive/ cannot be reached from /: only /archive/2019/ links to it; link it from a reachable page',
     ]);
   });
 
-  it('max-click-depth', () => {
+  it('click-depth', () => {
     const chain = { 'index.md': '[A](a.md)\n', 'a.md': '[B](a/b.md)\n', 'a/b.md': '[C](b/c.md)\n', 'a/b/c.md': '# C\n' };
     // Depth 3 is allowed; the chain really reaches a/b/c.md (with max 2 it is reported).
-    expect(check(maxClickDepth, chain)).toEqual([]);
-    expect(check(maxClickDepth, chain, { maxDepth: 2 })).toHaveLength(1);
-    expect(check(maxClickDepth, { ...chain, 'a/b/c.md': '[D](c/d.md)\n', 'a/b/c/d.md': '# D\n' })).toEqual([
-      'a/b/c/d.md:1:1  warning  Unexpected click depth 4 for /a/b/c/d/, expected at most 3 clicks from an entry page',
+    expect(check(clickDepth, chain)).toEqual([]);
+    expect(check(clickDepth, chain, { maxDepth: 2 })).toHaveLength(1);
+    expect(check(clickDepth, { ...chain, 'a/b/c.md': '[D](c/d.md)\n', 'a/b/c/d.md': '# D\n' })).toEqual([
+      'a/b/c/d.md:1:1  warning  /a/b/c/d/ is 4 clicks from an entry page, over the limit of 3; link it from a page nearer the top',
     ]);
   });
 
@@ -91,7 +91,7 @@ describe('rule documentation examples', () => {
     const index = { 'index.md': '[Install](guide/install.md) [FAQ](guide/faq.md)\n' };
     expect(check(deadEnd, { ...index, 'guide/install.md': 'Next: [configure](configure.md)\n', 'guide/configure.md': '[Home](../index.md)\n', 'guide/faq.md': '[Start again](../index.md)\n' })).toEqual([]);
     expect(check(deadEnd, { ...index, 'guide/install.md': '[Home](../index.md)\n', 'guide/faq.md': 'Ask on [the forum](https://forum.example.org/).\n' })).toEqual([
-      'guide/faq.md:1:1  warning  Unexpected dead end /guide/faq/ with no content links to other pages, expected at least one link onward',
+      'guide/faq.md:1:1  warning  Dead end: /guide/faq/ has no content links to other pages; add a link onward',
     ]);
   });
 
@@ -107,14 +107,14 @@ describe('rule documentation examples', () => {
   it('duplicate-route', () => {
     expect(check(duplicateRoute, { 'guide.md': '# Guide\n', 'guide/index.md': '---\nslug: /guide-overview/\n---\n# Overview\n' })).toEqual([]);
     expect(check(duplicateRoute, { 'guide.md': '# Guide\n', 'guide/index.md': '# Overview\n' })).toEqual([
-      'guide/index.md:1:1  error  Unexpected second file for route /guide/, expected one file per route (guide.md has it)',
+      'guide/index.md:1:1  error  Route /guide/ already belongs to guide.md; give this file another route (a slug) or remove it',
     ]);
   });
 
   it('missing-entry', () => {
     expect(check(missingEntry, { 'index.md': '# Home\n' })).toEqual([]);
     expect(check(missingEntry, { 'index.md': '# Home\n', 'stars.md': '# Stars\n' }, { entry: ['/', '/start/'] })).toEqual([
-      ':1:1  error  Unexpected entry route /start/ that matches no page, expected the route of an existing page in "entry" (did you mean /stars/?)',
+      ':1:1  error  No page has the entry route /start/; correct "entry" in the configuration (did you mean /stars/?)',
     ]);
   });
 });

@@ -17,14 +17,14 @@ ruleTable(missingEntry, {
           column: 1,
           route: '/start/',
           target: '/start/',
-          message: 'Unexpected entry route /start/ that matches no page, expected the route of an existing page in "entry" (did you mean /stars/?)',
+          message: 'No page has the entry route /start/; correct "entry" in the configuration (did you mean /stars/?)',
         },
       ],
     },
     {
       name: 'no close route: no hint',
       site: { pages: [{ route: '/getting-started/' }] },
-      findings: [{ file: '', line: 1, column: 1, message: 'Unexpected entry route / that matches no page, expected the route of an existing page in "entry"' }],
+      findings: [{ file: '', line: 1, column: 1, message: 'No page has the entry route /; correct "entry" in the configuration' }],
     },
   ],
 });

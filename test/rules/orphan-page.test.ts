@@ -1,8 +1,7 @@
 import { orphanPage } from '../../src/rules/index.js';
 import { ruleTable } from './table.js';
 
-const orphanMessage = (route: string, which = 'a link'): string =>
-  `Unexpected orphan page ${route}, expected ${which} to it from at least one other page`;
+const orphanMessage = (route: string, from = '/', which = 'No page links'): string => `${which} to ${route}; link it from ${from}`;
 
 ruleTable(orphanPage, {
   valid: [
@@ -33,14 +32,22 @@ ruleTable(orphanPage, {
       site: {
         pages: [{ route: '/', links: ['/a/'] }, { route: '/a/' }, { route: '/b/' }],
         navigation: ['/a/', '/b/'],
-        options: { rules: { 'orphan-page': ['warning', { countTemplateLinks: false }] } },
+        options: { checks: { 'orphan-page': { level: 'warning', countTemplateLinks: false } } },
       },
-      findings: [{ file: 'b.md', line: 1, column: 1, severity: 'warning', message: orphanMessage('/b/', 'a content link') }],
+      findings: [{ file: 'b.md', line: 1, column: 1, severity: 'warning', message: orphanMessage('/b/', '/', 'No content link leads') }],
     },
     {
-      name: 'the configured severity replaces the default',
-      site: { pages: [{ route: '/' }, { route: '/lost/' }], options: { rules: { 'orphan-page': 'error' } } },
-      findings: [{ file: 'lost.md', line: 1, column: 1, severity: 'error', message: orphanMessage('/lost/') }],
+      name: 'the configured level replaces the default',
+      site: { pages: [{ route: '/' }, { route: '/lost/' }], options: { checks: { 'orphan-page': { level: 'warning' } } } },
+      findings: [{ file: 'lost.md', line: 1, column: 1, severity: 'warning', message: orphanMessage('/lost/') }],
+    },
+    {
+      name: 'the message names the nearest reachable page up the route; none reachable: a related page',
+      site: { pages: [{ route: '/', links: ['/guide/'] }, { route: '/guide/' }, { route: '/guide/old/tips/' }, { route: '/lone/', links: ['/lone/x/'] }, { route: '/lone/x/' }] },
+      findings: [
+        { file: 'guide/old/tips.md', line: 1, column: 1, message: orphanMessage('/guide/old/tips/', '/guide/') },
+        { file: 'lone.md', line: 1, column: 1, message: orphanMessage('/lone/') },
+      ],
     },
   ],
 });

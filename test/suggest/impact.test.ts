@@ -196,6 +196,6 @@ describe('impact budget', () => {
 
   it('says "not computed" where the PageRank after was not computed', () => {
     const s = { targetRankBefore: 0.8, targetRankAfter: null, depthBefore: 5, depthAfter: 2 } as unknown as Suggestion;
-    expect(impactOf(s, 'target rank')).toBe('target rank 0.80 -> not computed, depth 5 -> 2');
+    expect(impactOf(s)).toBe('rank 0.80 -> not computed; 2 clicks instead of 5');
   });
 });

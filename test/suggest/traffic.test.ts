@@ -25,11 +25,11 @@ describe('parseTraffic', () => {
     const { views, problems } = parseTraffic('t.csv', text);
     expect([...views]).toEqual([['/ok/', 3]]);
     expect(problems.map((p) => p.line)).toEqual([3, 4, 5, 6, 7, 8]);
-    expect(problems[0]!.message).toBe('Unexpected route "guide" in traffic row, expected a path starting with "/" or an http(s) URL');
-    expect(problems[1]!.message).toBe('Unexpected views "many" in traffic row, expected a non-negative number');
-    expect(problems[3]!.message).toBe('Unexpected 1 field in traffic row, expected 2 ("route,views")');
-    expect(problems[4]!.message).toBe('Unexpected 3 fields in traffic row, expected 2 ("route,views")');
-    expect(problems[5]!.message).toMatch(/unterminated quoted field/);
+    expect(problems[0]!.message).toBe('Traffic row route "guide" is not a route; start it with "/" or give an http(s) URL');
+    expect(problems[1]!.message).toBe('Traffic row views "many" is not a count; write a number of 0 or more');
+    expect(problems[3]!.message).toBe('Traffic row has 1 field; write two: "route,views"');
+    expect(problems[4]!.message).toBe('Traffic row has 3 fields; write two: "route,views"');
+    expect(problems[5]!.message).toMatch(/quoted field that is never closed/);
   });
 
   it('treats a first row with numeric views as data, not as a header', () => {

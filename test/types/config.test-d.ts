@@ -13,11 +13,11 @@ type Same = Expect<Equal<Config, SchemaInput>>;
 type Keys = Expect<Equal<keyof Config, keyof SchemaInput>>;
 type Routes = Expect<Equal<NonNullable<Config['routes']>, NonNullable<SchemaInput['routes']>>>;
 type Suggest = Expect<Equal<NonNullable<Config['suggest']>, NonNullable<SchemaInput['suggest']>>>;
-type Gate = Expect<Equal<NonNullable<Config['gate']>, NonNullable<SchemaInput['gate']>>>;
+type Limits = Expect<Equal<NonNullable<Config['limits']>, NonNullable<SchemaInput['limits']>>>;
 type Cache = Expect<Equal<NonNullable<Config['cache']>, NonNullable<SchemaInput['cache']>>>;
-type Rules = Expect<Equal<NonNullable<Config['rules']>, NonNullable<SchemaInput['rules']>>>;
+type Checks = Expect<Equal<NonNullable<Config['checks']>, NonNullable<SchemaInput['checks']>>>;
 type Patterns = Expect<Equal<NonNullable<Config['linkPatterns']>, NonNullable<SchemaInput['linkPatterns']>>>;
 type Whole = Expect<Equal<Required<{ [K in keyof Config]: NonNullable<Config[K]> }>, Required<{ [K in keyof SchemaInput]: NonNullable<SchemaInput[K]> }>>>;
 type BothWays = Expect<Equal<[Config] extends [SchemaInput] ? ([SchemaInput] extends [Config] ? true : false) : false, true>>;
 
-export type ConfigTypeChecks = [Same, Keys, Routes, Suggest, Gate, Cache, Rules, Patterns, Whole, BothWays];
+export type ConfigTypeChecks = [Same, Keys, Routes, Suggest, Limits, Cache, Checks, Patterns, Whole, BothWays];

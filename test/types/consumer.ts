@@ -28,8 +28,8 @@ export async function consumer(file: VFile): Promise<void> {
   const config: Config = {
     maxDepth: 4,
     routes: { style: 'html', basePath: '/docs/' },
-    rules: { 'orphan-page': 'off', 'dead-end': ['warn', {}] },
-    gate: { maxBrokenLinks: 0, maxOrphans: null },
+    checks: { 'orphan-page': { level: 'none' }, 'dead-end': { level: 'warning', countTemplateLinks: true } },
+    limits: { brokenLinks: 0, orphans: null },
     suggest: { perTarget: 3 },
   };
   const report: Report = await analyze({ ...config, root: 'docs', command: 'suggest' });

@@ -1,6 +1,6 @@
 /**
  * The HTML report: one self-contained page (styles, script and data inline; nothing loaded
- * from the network, works from `file://`) showing the site's structure as pictures: the gate
+ * from the network, works from `file://`) showing the site's structure as pictures: the verdict
  * and headline numbers, the click-depth histogram, the PageRank distribution, an interactive
  * link graph and sortable, filterable tables of findings and suggested links.
  *
@@ -27,6 +27,7 @@ import { embedData } from '../html/embed.js';
 import { jsonForScript } from '../html/escape.js';
 import { STYLES } from '../html/styles.js';
 import { renderPage } from '../html/template.js';
+import { displayRoot } from './common.js';
 
 /** The page's script: the parts in one function scope, run once the document is parsed. */
 export const CLIENT_SCRIPT = `(function () {${CLIENT_CORE}${CLIENT_DRAW}${CLIENT_FOCUS}${CLIENT_TABLES}${CLIENT_GRAPH}})();`;
@@ -38,10 +39,12 @@ function cspHash(text: string): string {
 /**
  * Render the HTML report.
  * @param report the report
+ * @param cwd the working folder: the page names the content root relative to it, as typed
+ *   (absent: the report's own root)
  * @returns the whole HTML document
  */
-export function formatHtml(report: Report): string {
-  const data = buildHtmlData(report);
+export function formatHtml(report: Report, cwd?: string): string {
+  const data = { ...buildHtmlData(report), root: displayRoot(report.root, cwd) };
   return renderPage(data, {
     styles: STYLES,
     script: CLIENT_SCRIPT,
@@ -55,7 +58,7 @@ export function formatHtml(report: Report): string {
 export const htmlFormatter: Formatter = {
   id: 'html',
   fileExtension: '.html',
-  format(report: Report, _ctx: FormatContext): string {
-    return formatHtml(report);
+  format(report: Report, ctx: FormatContext): string {
+    return formatHtml(report, ctx.cwd);
   },
 };

@@ -1,8 +1,9 @@
 /**
- * The Markdown writer: a pull-request comment. Gate result first (with the limits crossed),
+ * The Markdown writer: a pull-request comment. The verdict first (with what made the run fail),
  * then the counts, the findings (a table, errors first; past the first few, collapsed in
  * `<details>`), then the suggested links as a checklist a reviewer can tick, each with its id
- * for `apply`, the most useful (highest score) first.
+ * for `apply`, the most useful (highest score) first, the related pages that need a sentence
+ * written by hand (no checkbox: apply cannot write them), and the apply command to copy.
  *
  * With a base report (`--compare`) or a baseline (`--baseline`), the findings part becomes the
  * new findings, then the fixed ones, with every finding collapsed below; with a base report a
@@ -11,7 +12,19 @@
  */
 import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { Formatter } from '../types.js';
-import { failureParts, formatDepth, formatRank, formatSimilarity, impactOf, plural, repairLine, summaryParts } from './common.js';
+import {
+  SCALE_NOTE,
+  applyCommand,
+  failureParts,
+  formatDepth,
+  formatRank,
+  formatSimilarity,
+  impactOf,
+  plural,
+  repairLine,
+  splitByAnchor,
+  summaryParts,
+} from './common.js';
 
 /** Rows shown before the rest is collapsed. */
 const SHOWN = 10;
@@ -35,7 +48,7 @@ function location(f: { file: string; line: number; column?: number }, withColumn
 
 function findingsTable(findings: readonly Finding[]): string[] {
   return [
-    '| Severity | Location | Finding | Rule |',
+    '| Level | Location | Finding | Check |',
     '| --- | --- | --- | --- |',
     ...findings.map((f) => `| ${f.severity} | ${code(location(f))} | ${escapeMarkdown(f.message)} | ${code(f.rule)} |`),
   ];
@@ -70,27 +83,30 @@ function collapse<T>(items: readonly T[], render: (part: readonly T[]) => string
 }
 
 function suggestionItem(s: Suggestion): string {
-  const what = s.anchor === null ? `a link (no anchor phrase found) in ${code(`${s.file}:${s.line}`)}` : `"${escapeMarkdown(s.anchor)}" in ${code(`${s.file}:${s.line}`)}`;
-  return `- [ ] ${what} -> ${code(s.target)} (${impactOf(s)}; similarity ${formatSimilarity(s.similarity)}) id ${code(s.id)}`;
+  return `- [ ] "${escapeMarkdown(s.anchor ?? '')}" in ${code(`${s.file}:${s.line}`)} -> ${code(s.target)} (${formatSimilarity(s.similarity)} similar; ${impactOf(s)}) id ${code(s.id)}`;
 }
 
-function gateSection(report: Report): string[] {
+function handWrittenItem(s: Suggestion): string {
+  return `- ${code(s.file)} -> ${code(s.target)} (${formatSimilarity(s.similarity)} similar; ${impactOf(s)}) id ${code(s.id)}`;
+}
+
+function verdictSection(report: Report): string[] {
   const { gate } = report;
   const known =
     report.baseline === undefined
       ? []
       : ['', `${plural(report.baseline.known, 'finding')} known from the baseline ${report.baseline.known === 1 ? 'does' : 'do'} not count; ${report.baseline.new.length} new.`];
-  if (gate.passed) return [`### linkweave: gate passed`, '', `Nothing at or above ${code(gate.failOn)} and no limit crossed.`, ...known];
+  if (gate.passed) return [`### linkweave: this run passes`, '', `No finding at or above ${code(gate.failOn)} and no limit crossed.`, ...known];
   const rows = gate.failures.map((f) => {
     const { check, found, allowed } = failureParts(f, gate.failOn);
     return `| ${code(check)} | ${found} | ${allowed} |`;
   });
   return [
-    `### linkweave: gate failed`,
+    `### linkweave: this run fails`,
     '',
-    `The gate fails on findings at or above ${code(gate.failOn)} and on the configured limits.`,
+    `A run fails on findings at or above ${code(gate.failOn)} and on the configured ${code('limits')}.`,
     '',
-    '| Check | Found | Allowed |',
+    '| Reason | Found | Allowed |',
     '| --- | --- | --- |',
     ...rows,
     ...known,
@@ -151,8 +167,8 @@ function structureSection(report: Report, c: Comparison): string[] {
 export const markdownFormatter: Formatter = {
   id: 'markdown',
   fileExtension: '.md',
-  format(report) {
-    const out = [...gateSection(report), '', `${summaryParts(report).join(' · ')}.`];
+  format(report, ctx) {
+    const out = [...verdictSection(report), '', `${summaryParts(report).join(' · ')}.`];
     const { error, warning } = report.stats.findings;
     const counts = error + warning === 0 ? 'none' : `${plural(error, 'error')}, ${plural(warning, 'warning')}`;
     const { comparison, baseline } = report;
@@ -166,13 +182,25 @@ export const markdownFormatter: Formatter = {
     }
     if (comparison !== undefined) out.push(...structureSection(report, comparison));
     if (report.suggestions.length > 0) {
-      const suggestions = [...report.suggestions].sort((a, b) => b.score - a.score || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
-      out.push('', `#### Suggested links (${suggestions.length})`, '');
+      const byScore = [...report.suggestions].sort((a, b) => b.score - a.score || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+      const { anchored, handWritten } = splitByAnchor(byScore);
       const repair = repairLine(report, code);
-      if (repair !== null) out.push(repair, '');
-      out.push(...collapse(suggestions, (part) => part.map(suggestionItem), 'suggestion'));
-      const ids = suggestions.slice(0, 2).map((s) => s.id).join(',');
-      out.push('', `Accept links by id: ${code(`linkweave apply --ids ${ids}`)}`);
+      if (anchored.length > 0) {
+        out.push('', `#### Suggested links (${anchored.length})`, '');
+        if (repair !== null) out.push(repair, '');
+        out.push(`${SCALE_NOTE}.`, '');
+        out.push(...collapse(anchored, (part) => part.map(suggestionItem), 'suggestion'));
+      }
+      if (handWritten.length > 0) {
+        out.push('', `#### Needs a sentence written by hand (${handWritten.length})`, '');
+        if (anchored.length === 0 && repair !== null) out.push(repair, '');
+        out.push('Related pages, but no phrase in the source names the target: `apply` cannot write these; add a sentence that links.', '');
+        out.push(...collapse(handWritten, (part) => part.map(handWrittenItem), 'page'));
+      }
+      const command = applyCommand(report, ctx.cwd, ctx.applyArgs);
+      if (command !== null) {
+        out.push('', 'Apply the suggested links from the repository (add `--dry-run` to see the diff first; pick ids to apply fewer):', '', '```sh', command, '```');
+      }
     }
     return `${out.join('\n')}\n`;
   },

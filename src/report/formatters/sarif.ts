@@ -92,10 +92,10 @@ function filesByRoute(report: Report): Map<string, string> {
 
 function suggestionResult(files: ReadonlyMap<string, string>, s: Suggestion, ruleIndex: number): Result {
   const region = { startLine: s.line, startColumn: s.column };
-  const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
+  const impact = `${formatSimilarity(s.similarity)} similar; target ${impactOf(s)}`;
   const what =
     s.anchor === null
-      ? `Add a link to ${s.target} near here (no anchor phrase found; ${impact}).`
+      ? `Add a link to ${s.target} near here; needs a sentence written by hand, no phrase here names the target (${impact}).`
       : `Add a link to ${s.target} on "${s.anchor}" (${impact}).`;
   const text = s.reason === '' ? what : `${what} Why: ${s.reason}.`;
   const fixes: Fix[] =

@@ -1,26 +1,37 @@
 /**
- * The terminal writer: findings grouped by file, each as `file:line:column  severity  rule-id`
- * with its message wrapped on the lines below (the location stays whole, so editors and CI logs
- * can link it), suggested links grouped by source file the same way, then (with `--baseline` or
- * `--compare`) the new and fixed findings and the structure changes, then the counts and the
- * gate result last, where a CI log ends.
- * Colour through picocolors, only when `ctx.color`.
+ * The terminal writer: findings grouped by file, each as `file:line:column  level  check-id`
+ * with its message on the lines below (the location stays whole, so editors and CI logs can
+ * link it), the suggested links grouped by source file the same way, the related pages that
+ * need a sentence written by hand, the depth-repair plan and the apply command (one line, to
+ * copy as it is), then (with `--baseline` or `--compare`) the new and fixed findings and the
+ * structure changes, then the summary last, where a CI log ends: the site's counts, the
+ * findings' count and the run's verdict with its exit code.
+ *
+ * Lines wrap at `ctx.width` (default 100) between words, never inside a quoted phrase, a route
+ * or a command. Colour through picocolors, only when `ctx.color`.
  */
 import pc from 'picocolors';
 import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { FormatContext, Formatter } from '../types.js';
 import {
-  describeFailure,
+  SCALE_NOTE,
+  applyCommand,
   displayPath,
+  findingsLine,
   formatDepth,
   formatRank,
   formatSimilarity,
   impactOf,
   plural,
-  problemsLine,
   repairLine,
+  splitByAnchor,
   summaryParts,
+  verdictHead,
+  verdictReasons,
 } from './common.js';
+
+/** Width when the caller gives none (a file, a pipe, a CI log). */
+export const DEFAULT_WIDTH = 100;
 
 type Paint = (s: string) => string;
 
@@ -65,11 +76,13 @@ function clean(text: string): string {
   return text.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g, '\uFFFD');
 }
 
+/**
+ * The words of `text` for wrapping: split at spaces, except inside a quoted phrase ("...",
+ * with what follows it up to the next space), which stays one word.
+ */
 function words(text: string, paint: Paint, firstSep = ' '): Word[] {
-  return clean(text)
-    .split(/\s+/)
-    .filter((t) => t !== '')
-    .map((t, i) => ({ text: t, sep: i === 0 ? firstSep : ' ', paint }));
+  const tokens = clean(text).match(/(?:"[^"]*"|[^\s"]+|")+/g) ?? [];
+  return tokens.map((t, i) => ({ text: t, sep: i === 0 ? firstSep : ' ', paint }));
 }
 
 /** Phrases kept whole when wrapping, each but the last followed by `punct`. */
@@ -91,7 +104,9 @@ function groupByFile<T extends { readonly file: string }>(items: readonly T[]): 
 /** Message lines sit under their location, indented by this much. */
 const BODY_INDENT = 4;
 
-function findingLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+type Colors = ReturnType<typeof pc.createColors>;
+
+function findingLines(report: Report, ctx: FormatContext, c: Colors, width: number): string[] {
   const loc = (f: Finding): string => `${clean(displayPath(f.file, report.root, ctx.cwd)) || '(site)'}:${f.line}:${f.column}`;
   const out: string[] = [];
   const shown = report.findings.slice(0, ctx.maxItems ?? report.findings.length);
@@ -99,9 +114,9 @@ function findingLines(report: Report, ctx: FormatContext, c: ReturnType<typeof p
     if (out.length > 0) out.push('');
     for (const f of group) {
       const location = loc(f);
-      const paintSev = f.severity === 'error' ? c.red : c.yellow;
+      const paintLevel = f.severity === 'error' ? (x: string) => c.bold(c.magenta(x)) : c.cyan;
       const cut = location.lastIndexOf(':', location.lastIndexOf(':') - 1);
-      out.push(`${location.slice(0, cut)}${c.dim(location.slice(cut))}  ${paintSev(f.severity)}  ${c.dim(f.rule)}`);
+      out.push(`${location.slice(0, cut)}${c.dim(location.slice(cut))}  ${paintLevel(f.severity)}  ${c.dim(f.rule)}`);
       append(out, wrap(' '.repeat(BODY_INDENT), BODY_INDENT, words(f.message, (s) => s), width, BODY_INDENT));
     }
   }
@@ -114,62 +129,65 @@ function moreLine(count: number, noun: string): string {
   return `... and ${plural(count, `more ${noun}`)}, in the full report`;
 }
 
-function suggestionHead(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
-  const plain = (x: string): string => x;
-  return [
-    ...words(s.anchor === null ? 'add a link' : 'add link', c.green),
-    ...(s.anchor === null ? [] : words(`"${s.anchor}"`, plain)),
-    { text: '->', sep: ' ', paint: plain },
-    { text: clean(s.target), sep: ' ', paint: c.cyan },
-  ];
+/** "22% similar; rank 0.15 -> 0.39; becomes reachable at 3 clicks; id 32de213704c4", as words. */
+function suggestionDetail(s: Suggestion, c: Colors): Word[] {
+  const impact = `${formatSimilarity(s.similarity)} similar; ${impactOf(s)};`;
+  return [...words(impact, c.dim, ''), { text: `id ${s.id}`, sep: ' ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` }];
 }
 
-function suggestionDetail(s: Suggestion, c: ReturnType<typeof pc.createColors>): Word[] {
-  const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
-  return [...words(impact, c.dim, ''), { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` }];
-}
-
-function suggestionLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+function suggestionLines(report: Report, ctx: FormatContext, c: Colors, width: number): string[] {
   const where = (s: Suggestion): string => clean(displayPath(s.file, report.root, ctx.cwd));
-  const anchored = report.suggestions.filter((s) => s.anchor !== null);
-  const loose = report.suggestions.filter((s) => s.anchor === null);
+  const { anchored, handWritten } = splitByAnchor(report.suggestions);
   const limit = ctx.maxItems ?? report.suggestions.length;
-  const out = [c.bold(`Suggested links (${anchored.length})`)];
-  for (const group of groupByFile(anchored.slice(0, limit))) {
+  const plain = (x: string): string => x;
+  const out: string[] = [];
+  const note = wrap('', 0, words(SCALE_NOTE, c.dim, ''), width, 0);
+  if (anchored.length > 0) {
+    out.push(c.bold(`Suggested links (${anchored.length})`));
+    append(out, note);
+    for (const group of groupByFile(anchored.slice(0, limit))) {
+      out.push('');
+      for (const s of group) {
+        const location = `${where(s)}:${s.line}:${s.column}`;
+        const head: Word[] = [
+          { text: 'link', sep: '', paint: c.green },
+          { text: `"${clean(s.anchor!)}"`, sep: ' ', paint: plain },
+          { text: '->', sep: ' ', paint: plain },
+          { text: clean(s.target), sep: ' ', paint: c.cyan },
+        ];
+        append(out, wrap(`${location}  `, location.length + 2, head, width, BODY_INDENT));
+        append(out, wrap(' '.repeat(BODY_INDENT), BODY_INDENT, suggestionDetail(s, c), width, BODY_INDENT));
+      }
+    }
+    if (anchored.length > limit) out.push('', c.dim(moreLine(anchored.length - limit, 'suggested link')));
+  }
+  if (handWritten.length > 0) {
+    // No phrase of the source names the target: apply cannot write these, a writer adds a
+    // sentence that links. Apart from the others, without a position.
+    if (out.length > 0) out.push('');
+    append(out, wrap('', 0, words(`Needs a sentence written by hand (${handWritten.length}): related pages, but no phrase in the source names the target`, c.bold, ''), width, 0));
+    if (anchored.length === 0) append(out, note);
     out.push('');
-    for (const s of group) {
-      const location = `${where(s)}:${s.line}:${s.column}`;
-      append(out, wrap(`${location}  `, location.length + 2, suggestionHead(s, c), width, BODY_INDENT));
+    for (const s of handWritten.slice(0, limit)) {
+      const head = `${where(s)} -> `;
+      append(out, wrap(head, head.length, [{ text: clean(s.target), sep: '', paint: c.cyan }], width, BODY_INDENT));
       append(out, wrap(' '.repeat(BODY_INDENT), BODY_INDENT, suggestionDetail(s, c), width, BODY_INDENT));
     }
+    if (handWritten.length > limit) out.push('', c.dim(moreLine(handWritten.length - limit, 'related page')));
   }
-  if (anchored.length > limit) out.push('', c.dim(moreLine(anchored.length - limit, 'suggested link')));
-  if (loose.length > 0) {
-    // No phrase of the source names the target: a writer has to add a sentence, so these come
-    // last, one line each, without a position.
-    out.push('', c.bold(`Related pages with no anchor phrase (${loose.length}): a sentence that links would help`), '');
-    for (const s of loose.slice(0, limit)) {
-      const head = `${where(s)} -> `;
-      append(
-        out,
-        wrap(head, head.length, [
-          { text: clean(s.target), sep: '', paint: c.cyan },
-          ...words(`(similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')})`, c.dim, '  '),
-          { text: `id ${s.id}`, sep: '  ', paint: () => `${c.dim('id')} ${c.bold(s.id)}` },
-        ], width, BODY_INDENT),
-      );
-    }
-  }
-  if (loose.length > limit) out.push('', c.dim(moreLine(loose.length - limit, 'related page')));
   const repair = repairLine(report);
-  if (repair !== null) append(out, ['', ...wrap('', 0, words(repair, c.bold, ''), width, 0)]);
-  const ids = (anchored.length > 0 ? anchored : loose).slice(0, 2).map((s) => s.id).join(',');
-  out.push('', c.dim(`Apply chosen links with: linkweave apply --ids ${ids}${report.suggestions.length > 2 ? ',...' : ''}`));
+  if (repair !== null) append(out, ['', ...wrap('', 0, words(repair, plain, ''), width, 0)]);
+  const command = applyCommand(report, ctx.cwd, ctx.applyArgs);
+  if (command !== null) {
+    out.push('');
+    append(out, wrap('', 0, words(`Apply the ${plural(anchored.length, 'suggested link')} (add --dry-run to see the diff first; pick ids to apply fewer):`, plain, ''), width, 0));
+    out.push(`  ${c.bold(command)}`);
+  }
   return out;
 }
 
 /** New and fixed findings, one line each: `file:line:column  rule  message`. */
-function changedFindings(title: string, list: readonly Finding[], report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+function changedFindings(title: string, list: readonly Finding[], report: Report, ctx: FormatContext, c: Colors, width: number): string[] {
   if (list.length === 0) return [];
   const out = [`${title} (${list.length}):`];
   for (const f of list) {
@@ -187,7 +205,7 @@ function pageChangeLine(p: PageChange): string {
 }
 
 /** The baseline's and the base report's new and fixed findings, and the structure changes. */
-function reviewLines(report: Report, ctx: FormatContext, c: ReturnType<typeof pc.createColors>, width: number): string[] {
+function reviewLines(report: Report, ctx: FormatContext, c: Colors, width: number): string[] {
   const out: string[] = [];
   const { baseline, comparison } = report;
   if (baseline !== undefined) {
@@ -225,32 +243,33 @@ function append(out: string[], lines: readonly string[], ...extra: string[]): vo
   for (const line of extra) out.push(line);
 }
 
+/**
+ * The summary that ends every terminal report, and that the command line prints alone after
+ * writing a report file: the site's counts, the findings' count and the verdict.
+ */
+export function summaryLines(report: Report, ctx: FormatContext): string[] {
+  const c = pc.createColors(ctx.color);
+  const width = ctx.width ?? DEFAULT_WIDTH;
+  const out: string[] = [];
+  append(out, wrap(`${c.bold('Site:')} `, 6, phrases(summaryParts(report), ','), width, 2));
+  out.push(findingsLine(report).replace(/^Findings:/, c.bold('Findings:')));
+  const head = `${verdictHead(report)}:`;
+  append(out, wrap(`${c.bold(head)} `, head.length + 1, phrases(verdictReasons(report), ','), width, 2));
+  return out;
+}
+
 /** The terminal formatter. */
 export const textFormatter: Formatter = {
   id: 'text',
   fileExtension: '.txt',
   format(report, ctx) {
     const c = pc.createColors(ctx.color);
-    const width = ctx.width ?? 80;
+    const width = ctx.width ?? DEFAULT_WIDTH;
     const out: string[] = [];
     if (report.findings.length > 0) append(out, findingLines(report, ctx, c, width), '');
     if (report.suggestions.length > 0) append(out, suggestionLines(report, ctx, c, width), '');
     if (report.baseline !== undefined || report.comparison !== undefined) append(out, reviewLines(report, ctx, c, width), '');
-
-    const { error, warning } = report.stats.findings;
-    const problems = problemsLine(report);
-    out.push(error > 0 ? c.red(c.bold(problems)) : warning > 0 ? c.yellow(c.bold(problems)) : c.green(problems));
-    const parts = summaryParts(report);
-    out.push(...wrap('', 0, phrases(parts, ','), width, 0));
-
-    const { gate } = report;
-    if (gate.passed) {
-      out.push(c.green(`Gate passed (fail on ${gate.failOn})`));
-    } else {
-      const failures = gate.failures.map((f) => describeFailure(f, gate.failOn));
-      const head = `Gate failed (fail on ${gate.failOn}):`;
-      out.push(...wrap(`${c.red(c.bold(head))} `, head.length + 1, phrases(failures, ','), width, 2));
-    }
+    append(out, summaryLines(report, ctx));
     return `${out.join('\n')}\n`;
   },
 };

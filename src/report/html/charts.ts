@@ -105,12 +105,13 @@ function axisTicks(max: number): number[] {
 
 /**
  * The PageRank distribution: pages sorted by PageRank, highest first, on a log scale of
- * `rank` (PageRank x pages, so 1 is an average page), with the top pages named.
+ * `rank` (PageRank x pages, so 1 is an average page), with the highest, the middle and the
+ * lowest page named above their points.
  * @param pages the report's pages
- * @param top page ids of the top pages, highest first
- * @param named how many of them to label on the chart
+ * @param top page ids of the top pages, highest first (for the chart's description)
+ * @param named how many pages to name on the chart (at most 3)
  */
-export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], named = 5): string {
+export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], named = 3): string {
   const left = 48;
   const right = 16;
   const topM = 16;
@@ -160,17 +161,25 @@ export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], 
       `<text class="lw-average-label" x="${W - right - 4}" y="${n1(y(1) - 5)}" text-anchor="end">average page = 1</text>`,
     );
   }
-  top.slice(0, named).forEach((id, k) => {
-    const p = pages[id]!;
+  // Three pages named along the curve, spread across the chart: the highest, the middle one
+  // and the lowest, each above its own point (the list below the chart names the top ten).
+  const order = pages.map((_, i) => i).filter((i) => pages[i]!.rank > 0);
+  order.sort((a, b) => pages[b]!.rank - pages[a]!.rank || a - b);
+  const marks = [...new Set([0, Math.floor((order.length - 1) / 2), order.length - 1])].slice(0, named);
+  const what = ['highest', 'middle', 'lowest'];
+  marks.forEach((k, m) => {
+    const p = pages[order[k]!]!;
     const px = x(k);
     const py = y(p.rank);
-    const lx = left + plotW * 0.16;
-    const ly = topM + 14 + k * 17;
+    const anchor = k === 0 ? 'start' : k === order.length - 1 ? 'end' : 'middle';
+    const ly = Math.max(topM + 10, py - 26);
+    const lx = anchor === 'start' ? px + 4 : anchor === 'end' ? px - 4 : px;
+    const name = `${marks.length > 1 ? `${what[m === 0 ? 0 : m === marks.length - 1 ? 2 : 1]}: ` : ''}${shorten(p.title || p.route, 30)} (${formatNumber(p.rank)})`;
     out.push(
       `<g class="lw-top-mark" data-route="${escapeHtml(p.route)}">`,
       `<circle class="lw-top-dot" cx="${n1(px)}" cy="${n1(py)}" r="3.5"/>`,
-      `<line class="lw-leader" x1="${n1(px)}" y1="${n1(py)}" x2="${n1(lx - 4)}" y2="${n1(ly - 4)}"/>`,
-      `<text class="lw-top-label" x="${n1(lx)}" y="${n1(ly)}">${k + 1}. ${escapeHtml(shorten(p.title || p.route, 38))} (${formatNumber(p.rank)})</text>`,
+      `<line class="lw-leader" x1="${n1(px)}" y1="${n1(py - 4)}" x2="${n1(px)}" y2="${n1(ly + 4)}"/>`,
+      `<text class="lw-top-label" x="${n1(lx)}" y="${n1(ly)}" text-anchor="${anchor}">${escapeHtml(name)}</text>`,
       '</g>',
     );
   });

@@ -104,13 +104,18 @@ const COLORS = {
   depth: [cssVar('--lw-d0'), cssVar('--lw-d1'), cssVar('--lw-d2'), cssVar('--lw-d3'), cssVar('--lw-d4')],
   over: cssVar('--lw-over'), none: cssVar('--lw-none'), ink: cssVar('--lw-ink'), muted: cssVar('--lw-muted'),
   fail: cssVar('--lw-fail'), accent: cssVar('--lw-accent'), focus: cssVar('--lw-focus'),
+  fine: cssVar('--lw-fine'), orphan: cssVar('--lw-orphan'), lost: cssVar('--lw-lost'),
 };
 
-function depthColor(d) {
-  if (d === null || d === undefined) return COLORS.none;
-  if (d > MAX_DEPTH) return COLORS.over;
-  return COLORS.depth[Math.min(d, 4)];
+/** A page's problem state, the graph's colour: fine, deeper than the limit, orphan, or unreachable (but linked). */
+function pageState(i) {
+  const p = PAGES[i];
+  if (p.orphan) return 'orphan';
+  if (p.depth === null) return 'lost';
+  return p.depth > MAX_DEPTH ? 'over' : 'fine';
 }
+
+function stateColor(state) { return COLORS[state]; }
 
 /** BFS parent of a page: the in-neighbour one click closer with the highest PageRank. */
 function bfsParent(i) {

@@ -28,8 +28,9 @@ function sizeCanvas() {
 
 function font(px, weight) { ctx2d.font = (weight || 400) + ' ' + (px * unit) + 'px system-ui, sans-serif'; }
 
+/** Every page is drawn the same size: colour and shape carry its state, the rings its depth. */
 function nodeRadius(rank, scale) {
-  return Math.max(3, Math.min(18, (2.5 + 4.2 * Math.sqrt(rank)) * (scale || 1)));
+  return 5.5 * (scale || 1);
 }
 
 function shapePath(x, y, r, shape) {
@@ -49,7 +50,7 @@ function pageShape(i) {
 function drawPageNode(i, x, y, r, emphasis) {
   const p = PAGES[i];
   shapePath(x, y, r, pageShape(i));
-  ctx2d.fillStyle = depthColor(p.depth);
+  ctx2d.fillStyle = stateColor(pageState(i));
   ctx2d.fill();
   ctx2d.lineWidth = emphasis ? 2.5 * unit : 1 * unit;
   ctx2d.strokeStyle = emphasis ? COLORS.focus : '#ffffff';
@@ -70,8 +71,13 @@ function labelBox(text, x, y, align, px) {
   return { x: left - 2 * unit, y: y - h / 2, w: w + 4 * unit, h: h };
 }
 
+/** Whether a label box would cover another label or a drawn node, or leave the canvas. */
 function overlaps(b) {
   for (const o of placed) if (b.x < o.x + o.w && o.x < b.x + b.w && b.y < o.y + o.h && o.y < b.y + b.h) return true;
+  for (const h of hits) {
+    const nx = Math.max(b.x, Math.min(h.x, b.x + b.w)), ny = Math.max(b.y, Math.min(h.y, b.y + b.h));
+    if ((nx - h.x) * (nx - h.x) + (ny - h.y) * (ny - h.y) < (h.r + 1 * unit) * (h.r + 1 * unit)) return true;
+  }
   return b.x < 0 || b.x + b.w > VW || b.y < 0 || b.y + b.h > VH;
 }
 
@@ -81,6 +87,26 @@ function tryLabel(text, x, y, align, px, weight) {
   const b = labelBox(text, x, y, align, px);
   if (overlaps(b)) return false;
   label(text, x, y, align, px, weight);
+  return true;
+}
+
+/** A name in at most two lines of about max characters, broken between words. */
+function twoLines(text, max) {
+  if (Array.from(text).length <= max) return [text];
+  const words = text.split(' ');
+  let first = '';
+  while (words.length > 0 && Array.from(first + ' ' + words[0]).length <= max + 1) first = (first ? first + ' ' : '') + words.shift();
+  if (first === '') return [shortText(text, max)];
+  return [first, shortText(words.join(' '), max)];
+}
+
+/** Lines stacked from y (downwards, or upwards with dir -1), drawn only when every one fits. */
+function tryLines(lines, x, y, dir) {
+  font(11);
+  const step = 13 * unit;
+  const ys = lines.map(function (_, k) { return dir > 0 ? y + k * step : y - (lines.length - 1 - k) * step; });
+  for (let k = 0; k < lines.length; k++) if (overlaps(labelBox(lines[k], x, ys[k], 'center', 11))) return false;
+  for (let k = 0; k < lines.length; k++) label(lines[k], x, ys[k], 'center', 11);
   return true;
 }
 
@@ -160,11 +186,24 @@ function drawRings(rings) {
   ctx2d.setLineDash([]);
 }
 
-/** Ring names, drawn over the nodes (with a halo) so that they stay readable. */
+/**
+ * Ring names on their rings where they cover no node and no other name: the top of the ring
+ * first, then other places round it; the limit's name low on the right.
+ */
 function drawRingLabels(rings) {
-  for (let d = 1; d < rings.radii.length; d++) label(plural(d, 'click', 'clicks'), rings.cx, rings.cy - rings.radii[d], 'center', 10.5);
-  const a = Math.PI * 0.25;
-  label('limit: ' + plural(MAX_DEPTH, 'click', 'clicks'), rings.cx + Math.cos(a) * rings.limit + 4 * unit, rings.cy + Math.sin(a) * rings.limit, 'left', 11, 650);
+  const spots = [-0.5, -0.62, -0.38, -0.75, -0.25, 0.5, 0.62, 0.38, 1, 0];
+  const onRing = function (text, radius, px, weight, order) {
+    font(px, weight);
+    for (const t of order) {
+      const a = Math.PI * t;
+      const x = rings.cx + Math.cos(a) * radius, y = rings.cy + Math.sin(a) * radius;
+      if (tryLabel(text, x, y, 'center', px, weight)) return;
+    }
+    const a = Math.PI * order[0];
+    label(text, rings.cx + Math.cos(a) * radius, rings.cy + Math.sin(a) * radius, 'center', px, weight);
+  };
+  onRing('limit: ' + plural(MAX_DEPTH, 'click', 'clicks'), rings.limit, 11, 650, [0.25, 0.3, 0.2, 0.35, 0.15, 0.4, 0.1]);
+  for (let d = 1; d < rings.radii.length; d++) onRing(plural(d, 'click', 'clicks'), rings.radii[d], 10.5, 400, spots);
 }
 
 function drawBox(box, caption) {
@@ -200,19 +239,33 @@ function drawPagesOverview(o) {
   order.sort(function (a, b) { return PAGES[a].pagerank - PAGES[b].pagerank || b - a; });
   const radius = function (i) { return (PAGES[i].depth === null ? Math.max(6, nodeRadius(PAGES[i].rank)) : nodeRadius(PAGES[i].rank)) * unit; };
   for (const i of order) drawPageNode(i, pos[2 * i], pos[2 * i + 1], radius(i), false);
-  drawRingLabels(o.rings);
   // Names where they fit: unreachable pages first (they are few and need reading), then the
-  // entry pages, then the others by PageRank; a name that would overlap another is left out.
+  // entry pages, then the pages deeper than the limit, then the others by PageRank; a name that would overlap another is left out.
   const named = PAGES.map(function (_, i) { return i; });
-  const prio = function (i) { return PAGES[i].depth === null ? 0 : PAGES[i].depth === 0 ? 1 : 2; };
+  const prio = function (i) { const d = PAGES[i].depth; return d === null ? 0 : d === 0 ? 1 : d > MAX_DEPTH ? 2 : 3; };
   named.sort(function (a, b) { return prio(a) - prio(b) || PAGES[b].pagerank - PAGES[a].pagerank || a - b; });
+  let ringsNamed = false;
   for (const i of named) {
+    // The ring names go in after the names of the pages with a problem, before the others.
+    if (!ringsNamed && prio(i) > 2) { drawRingLabels(o.rings); ringsNamed = true; }
     const r = radius(i);
-    if (PAGES[i].depth === null) tryLabel(shortText(pageName(i), 22), pos[2 * i], pos[2 * i + 1] + r + 9 * unit, 'center', 11);
+    if (PAGES[i].depth === null) {
+      const lines = twoLines(pageName(i), 19);
+      const x = pos[2 * i], y = pos[2 * i + 1];
+      if (!tryLines(lines, x, y + r + 9 * unit, 1)) tryLines(lines, x, y - r - 9 * unit, -1);
+    } else if (PAGES[i].depth === 0) {
+      if (!nameNode(shortText(pageName(i), 24), pos[2 * i], pos[2 * i + 1], r, o.rings.cx, o.rings.cy, 11)) {
+        label(shortText(pageName(i), 24), pos[2 * i], pos[2 * i + 1] + r + 9 * unit, 'center', 11);
+      }
+    }
     else nameNode(shortText(pageName(i), 24), pos[2 * i], pos[2 * i + 1], r, o.rings.cx, o.rings.cy, 11);
   }
+  if (!ringsNamed) drawRingLabels(o.rings);
   return PAGES.map(function (_, i) { return i; });
 }
+
+/** A folder's size: its number of pages. */
+function folderRadius(f) { return Math.max(5, Math.min(26, 3 + 2.2 * Math.sqrt(f.pages))); }
 
 function drawFoldersOverview(o) {
   drawRings(o.rings);
@@ -238,9 +291,9 @@ function drawFoldersOverview(o) {
   order.sort(function (a, b) { return o.folders[a].pagerank - o.folders[b].pagerank || b - a; });
   for (const k of order) {
     const f = o.folders[k];
-    const r = Math.max(5, Math.min(30, 4 + 40 * Math.sqrt(f.pagerank))) * unit;
+    const r = folderRadius(f) * unit;
     shapePath(f.x, f.y, r, 'circle');
-    ctx2d.fillStyle = depthColor(f.minDepth);
+    ctx2d.fillStyle = f.minDepth === null ? COLORS.lost : COLORS.fine;
     ctx2d.fill();
     ctx2d.lineWidth = 1 * unit;
     ctx2d.strokeStyle = '#fff';
@@ -257,7 +310,7 @@ function drawFoldersOverview(o) {
   drawRingLabels(o.rings);
   for (const k of order.slice().reverse()) {
     const f = o.folders[k];
-    const r = Math.max(5, Math.min(30, 4 + 40 * Math.sqrt(f.pagerank))) * unit;
+    const r = folderRadius(f) * unit;
     const text = shortText(f.name, 22) + ' (' + f.pages + ')';
     if (f.minDepth === null) tryLabel(text, f.x, f.y + r + 9 * unit, 'center', 11);
     else nameNode(text, f.x, f.y, r, o.rings.cx, o.rings.cy, 11);

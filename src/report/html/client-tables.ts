@@ -138,18 +138,18 @@ function depthChange(r) {
 }
 
 makeTable({
-  id: 'findings', rows: DATA.findings, empty: 'No findings: every rule passed.',
+  id: 'findings', rows: DATA.findings, empty: 'No findings: every check passed.',
   defaultKey: 'severity', defaultDir: 'asc',
   filters: [
-    { key: 'rule', label: 'Rule', all: 'all rules', value: function (r) { return r.rule; } },
+    { key: 'rule', label: 'Check', all: 'all checks', value: function (r) { return r.rule; } },
     { key: 'folder', label: 'Folder', all: 'all folders', value: function (r) { return r.folder; } },
-    { key: 'severity', label: 'Severity', all: 'all severities', value: function (r) { return r.severity; } },
+    { key: 'severity', label: 'Level', all: 'all levels', value: function (r) { return r.severity; } },
   ],
   text: function (r) { return [r.rule, r.severity, placeOf(r), r.route, r.message].join(' '); },
   columns: [
-    { key: 'severity', label: 'Severity', sort: function (r) { return r.severity === 'error' ? 0 : 1; },
-      render: function (r) { return el('span', { cls: 'lw-sev lw-sev-' + r.severity, text: (r.severity === 'error' ? '\u2716 ' : '\u25B2 ') + r.severity }); } },
-    { key: 'rule', label: 'Rule', cls: 'lw-nowrap', sort: function (r) { return r.rule; }, render: function (r) { return code(r.rule); } },
+    { key: 'severity', label: 'Level', sort: function (r) { return r.severity === 'error' ? 0 : 1; },
+      render: function (r) { return el('span', { cls: 'lw-sev lw-sev-' + r.severity, text: (r.severity === 'error' ? '\u25A0 ' : '\u25B2 ') + r.severity }); } },
+    { key: 'rule', label: 'Check', cls: 'lw-nowrap', sort: function (r) { return r.rule; }, render: function (r) { return code(r.rule); } },
     { key: 'location', label: 'File:line', sort: function (r) { return r.file + '\u0000' + String(r.line).padStart(8, '0') + ':' + String(r.column).padStart(6, '0'); },
       render: function (r) { return code(placeOf(r)); } },
     { key: 'route', label: 'Page', sort: function (r) { return r.route; }, render: function (r) { return r.route; } },
@@ -161,13 +161,14 @@ makeTable({
   id: 'suggestions', rows: DATA.suggestions, empty: 'No suggestions in this report (the suggest command adds them).',
   filters: [
     { key: 'folder', label: 'Folder (where the link goes)', all: 'all folders', value: function (r) { return r.folder; } },
+    { key: 'kind', label: 'Anchor', all: 'all suggestions', value: function (r) { return r.anchor === null ? 'needs a sentence written by hand' : 'has an anchor phrase (apply writes it)'; } },
   ],
-  text: function (r) { return [placeOf(r), r.source, r.anchor || '', r.target, r.targetTitle, r.reason].join(' '); },
+  text: function (r) { return [placeOf(r), r.source, r.anchor || 'needs a sentence written by hand', r.target, r.targetTitle, r.reason].join(' '); },
   columns: [
     { key: 'location', label: 'Write it in', sort: function (r) { return r.file + '\u0000' + String(r.line).padStart(8, '0') + ':' + String(r.column).padStart(6, '0'); },
       render: function (r) { return el('span', null, [code(placeOf(r)), el('span', { cls: 'lw-route', text: r.source })]); } },
     { key: 'anchor', label: 'Anchor text', sort: function (r) { return r.anchor; },
-      render: function (r) { return r.anchor === null ? el('em', { text: 'no anchor phrase' }) : '\u201C' + r.anchor + '\u201D'; } },
+      render: function (r) { return r.anchor === null ? el('em', { text: 'none: needs a sentence written by hand' }) : '\u201C' + r.anchor + '\u201D'; } },
     { key: 'target', label: 'Link to', sort: function (r) { return r.target; },
       render: function (r) { return el('span', null, [r.targetTitle, el('span', { cls: 'lw-route', text: r.target })]); } },
     { key: 'similarity', label: 'Similarity', numeric: true, firstDir: 'desc', sort: function (r) { return r.similarity; }, render: function (r) { return r.similarity.toFixed(2); } },

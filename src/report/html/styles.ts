@@ -11,6 +11,7 @@ export const STYLES = `
   --lw-accent: #2f5597; --lw-focus: #c2410c;
   --lw-d0: #1b2a57; --lw-d1: #2f5597; --lw-d2: #3f7fc1; --lw-d3: #6fa9d8; --lw-d4: #a9cdea;
   --lw-over: #e07b39; --lw-none: #8a8f98;
+  --lw-fine: #7b8aa3; --lw-orphan: #7e3fa8; --lw-lost: #b8324a;
   --lw-pass: #1f7a4d; --lw-fail: #b42318;
   font: 14px/1.45 system-ui, -apple-system, "Segoe UI", Roboto, "Helvetica Neue", Arial, sans-serif;
 }
@@ -113,6 +114,7 @@ button:hover { background: #eef2f8; }
 .lw-sw-d0 { fill: var(--lw-d0); } .lw-sw-d1 { fill: var(--lw-d1); } .lw-sw-d2 { fill: var(--lw-d2); }
 .lw-sw-d3 { fill: var(--lw-d3); } .lw-sw-d4 { fill: var(--lw-d4); } .lw-sw-over { fill: var(--lw-over); }
 .lw-sw-none { fill: var(--lw-none); }
+.lw-sw-fine { fill: var(--lw-fine); } .lw-sw-orphan { fill: var(--lw-orphan); } .lw-sw-lost { fill: var(--lw-lost); }
 .lw-sw-line { fill: none; stroke: var(--lw-ink); stroke-width: 1.5; }
 .lw-sw-arc { fill: none; stroke: var(--lw-over); stroke-width: 3; }
 .lw-table-wrap { overflow-x: auto; }

@@ -1,5 +1,5 @@
 /**
- * The HTML report's markup: header with the gate result and headline numbers, the two charts,
+ * The HTML report's markup: header with the run's verdict and headline numbers, the two charts,
  * the link-graph section and the table sections. The tables and the graph are filled in by the
  * page's script from the embedded data; everything written here from the report is escaped.
  */
@@ -49,10 +49,10 @@ export function renderPage(data: HtmlData, parts: PageParts): string {
     '</div>',
     graphSection(data),
     tableSection('findings', 'Findings', data.findings.length,
-      'What the rules found, with the place in the source. Filter by rule, folder or severity; select a column header to sort.'),
+      'What the checks found, with the place in the source. Filter by check, folder or level; select a column header to sort.'),
     tableSection('suggestions', 'Suggested links', data.suggestions.length,
       'New links that would help pages that lack them: where to write the link, its anchor text and what it is predicted to change.'),
-    `<footer class="lw-footer">linkweave ${escapeHtml(data.version)} \u00b7 report schema linkweave/report@1 \u00b7 ${data.stats.iterations} PageRank iterations${data.stats.converged ? '' : ' (not converged)'}</footer>`,
+    `<footer class="lw-footer">linkweave ${escapeHtml(data.version)} \u00b7 report schema linkweave/report@1${data.stats.converged ? '' : ` \u00b7 PageRank did not settle in ${data.stats.iterations} rounds`}</footer>`,
     '</main>',
     `<script type="application/json" id="lw-data">${parts.json}</script>`,
     `<script>${parts.script}</script>`,
@@ -71,9 +71,7 @@ function header(data: HtmlData): string {
     const count = gate.failOn === 'warning' ? errors + warnings : errors;
     failures.push(`<li>${count} finding${count === 1 ? '' : 's'} at or above <strong>${gate.failOn}</strong></li>`);
   }
-  const verdict = gate.passed
-    ? '<strong>\u2714 Gate passed</strong>'
-    : '<strong>\u2718 Gate failed</strong>';
+  const verdict = `<strong>${gate.passed ? 'This run passes (exit 0)' : 'This run fails (exit 1)'}</strong>`;
   return [
     '<header class="lw-header">',
     '<div>',
@@ -82,7 +80,7 @@ function header(data: HtmlData): string {
     '</div>',
     `<div class="lw-gate ${gate.passed ? 'lw-gate-pass' : 'lw-gate-fail'}" id="lw-gate" data-passed="${gate.passed}" role="status">`,
     verdict,
-    ` <span>(fails on ${gate.failOn}; ${errors} error${errors === 1 ? '' : 's'}, ${warnings} warning${warnings === 1 ? '' : 's'})</span>`,
+    ` <span>(a run fails on findings at or above ${gate.failOn} and on the limits; ${errors} error${errors === 1 ? '' : 's'}, ${warnings} warning${warnings === 1 ? '' : 's'})</span>`,
     failures.length > 0 ? `<ul>${failures.join('')}</ul>` : '',
     '</div>',
     '</header>',
@@ -106,13 +104,13 @@ function stats(data: HtmlData): string {
   const deepest = data.deepestPage >= 0 ? data.pages[data.deepestPage]! : null;
   const deepCount = deepest === null ? 0 : data.histogram.counts[deepest.depth!]!;
   const card = (id: string, label: string, value: string, sub: string, bad: boolean): string =>
-    `<div class="lw-stat ${bad ? 'lw-stat-bad' : 'lw-stat-ok'}" id="lw-stat-${id}"><dt>${label}</dt><dd>${value}<span class="lw-sub">${sub}</span><span class="lw-badge">needs work</span></dd></div>`;
+    `<div class="lw-stat ${bad ? 'lw-stat-bad' : 'lw-stat-ok'}" id="lw-stat-${id}"><dt>${label}</dt><dd>${value}<span class="lw-sub">${sub}</span><span class="lw-badge">to fix</span></dd></div>`;
   const deepSub = deepest === null
     ? 'no page is reachable'
     : `${escapeHtml(shorten(deepest.title || deepest.route, 60))}${deepCount > 1 ? ` and ${deepCount - 1} more` : ''}; limit ${data.maxDepth}`;
   return [
     '<dl class="lw-stats" aria-label="Headline numbers">',
-    card('pages', 'Pages', String(s.pages), `from ${s.files} source file${s.files === 1 ? '' : 's'}`, false),
+    card('pages', 'Pages', String(s.pages), pagesSub(s.pages, s.files), false),
     card('links', 'Links', String(s.links), `${s.internalLinks} internal`, false),
     card('broken', 'Broken links', String(s.brokenLinks), `${s.brokenFragments} broken fragment${s.brokenFragments === 1 ? '' : 's'}`, s.brokenLinks + s.brokenFragments > 0),
     card('orphans', 'Orphan pages', String(s.orphans), 'no page links to them', s.orphans > 0),
@@ -136,16 +134,41 @@ function depthSection(data: HtmlData): string {
   ].join('\n');
 }
 
-/** The deepest reachable pages (deepest first, then by route), and how many are unreachable. */
+/** "from 52 source files; 1 is no page (a draft, a second file for a route, or unreadable)". */
+function pagesSub(pages: number, files: number): string {
+  const from = `from ${files} source file${files === 1 ? '' : 's'}`;
+  const other = files - pages;
+  if (other <= 0) return from;
+  return `${from}; ${other} ${other === 1 ? 'is no page' : 'are no pages'} (a draft, a second file for a route, or unreadable)`;
+}
+
+/**
+ * The pages a reader cannot reach, then the pages deeper than the limit (deepest first, then by
+ * route), at most ten; when every page is within the limit, the deepest few, said so.
+ */
 function deepestList(data: HtmlData): string {
-  const ids = data.pages.map((_, i) => i).filter((i) => data.pages[i]!.depth !== null && data.pages[i]!.depth! > 0);
-  ids.sort((a, b) => data.pages[b]!.depth! - data.pages[a]!.depth! || a - b);
-  if (ids.length === 0) return '';
-  const items = ids.slice(0, 10).map((i) => {
+  const all = data.pages.map((_, i) => i);
+  const lost = all.filter((i) => data.pages[i]!.depth === null);
+  const over = all.filter((i) => data.pages[i]!.depth !== null && data.pages[i]!.depth! > data.maxDepth);
+  over.sort((a, b) => data.pages[b]!.depth! - data.pages[a]!.depth! || a - b);
+  const item = (i: number): string => {
     const p = data.pages[i]!;
-    return `<li><span class="lw-depth-tag">${p.depth} click${p.depth === 1 ? '' : 's'}</span> ${escapeHtml(shorten(p.title || p.route, 48))} <span class="lw-route lw-mono">${escapeHtml(p.route)}</span></li>`;
-  });
-  return ['<h3>Deepest pages</h3>', `<ul class="lw-deep" id="lw-deepest-pages">${items.join('')}</ul>`].join('\n');
+    const tag = p.depth === null ? 'unreachable' : `${p.depth} click${p.depth === 1 ? '' : 's'}`;
+    return `<li><span class="lw-depth-tag">${tag}</span> ${escapeHtml(shorten(p.title || p.route, 48))} <span class="lw-route lw-mono">${escapeHtml(p.route)}</span></li>`;
+  };
+  const problems = [...lost, ...over];
+  if (problems.length > 0) {
+    const more = problems.length > 10 ? `<p class="lw-hint">and ${problems.length - 10} more in the findings below</p>` : '';
+    return [
+      `<h3>Unreachable or deeper than ${data.maxDepth} click${data.maxDepth === 1 ? '' : 's'}</h3>`,
+      `<ul class="lw-deep" id="lw-deepest-pages">${problems.slice(0, 10).map(item).join('')}</ul>`,
+      more,
+    ].join('\n');
+  }
+  const deepest = all.filter((i) => (data.pages[i]!.depth ?? 0) > 0);
+  deepest.sort((a, b) => data.pages[b]!.depth! - data.pages[a]!.depth! || a - b);
+  if (deepest.length === 0) return '';
+  return ['<h3>Deepest pages (all within the limit)</h3>', `<ul class="lw-deep" id="lw-deepest-pages">${deepest.slice(0, 5).map(item).join('')}</ul>`].join('\n');
 }
 
 function rankSection(data: HtmlData): string {
@@ -197,21 +220,18 @@ function graphSection(data: HtmlData): string {
 /** Legend swatches: colour and shape together, each with its words. */
 function legend(maxDepth: number, kind: 'pages' | 'folders'): string {
   const circle = (cls: string): string => `<svg viewBox="0 0 18 18" aria-hidden="true"><circle cx="9" cy="9" r="6.5" class="${cls}"/></svg>`;
-  const items: string[] = [];
-  for (let d = 0; d <= Math.min(maxDepth, 4); d++) {
-    const label = d === Math.min(maxDepth, 4) && maxDepth > 4 ? `depth ${d}\u2013${maxDepth}` : `depth ${d}`;
-    items.push(`<li>${circle(`lw-sw-d${d}`)}${label}</li>`);
-  }
-  items.push(`<li>${circle('lw-sw-over')}deeper than ${maxDepth} (outside the dashed ring)</li>`);
-  items.push(
-    '<li><svg viewBox="0 0 18 18" aria-hidden="true"><rect x="3" y="3" width="12" height="12" class="lw-sw-none"/></svg>square: orphan (no links in)</li>',
-    '<li><svg viewBox="0 0 18 18" aria-hidden="true"><path d="M9 2L16 15H2Z" class="lw-sw-none"/></svg>triangle: unreachable, but linked from unreachable pages</li>',
-    '<li><svg viewBox="0 0 18 18" aria-hidden="true"><circle cx="9" cy="9" r="4.5" class="lw-sw-d0"/><circle cx="9" cy="9" r="7.5" class="lw-sw-line"/></svg>ringed: entry page</li>',
-    '<li>size: PageRank</li>',
-  );
+  const clicks = `${maxDepth} click${maxDepth === 1 ? '' : 's'}`;
+  const items = [
+    `<li>${circle('lw-sw-fine')}within ${clicks} of the entry page</li>`,
+    `<li>${circle('lw-sw-over')}deeper than ${clicks} (outside the dashed ring)</li>`,
+    '<li><svg viewBox="0 0 18 18" aria-hidden="true"><rect x="3" y="3" width="12" height="12" class="lw-sw-orphan"/></svg>square: orphan, no page links to it</li>',
+    '<li><svg viewBox="0 0 18 18" aria-hidden="true"><path d="M9 2L16 15H2Z" class="lw-sw-lost"/></svg>triangle: unreachable, linked only from unreachable pages</li>',
+    '<li><svg viewBox="0 0 18 18" aria-hidden="true"><circle cx="9" cy="9" r="4.5" class="lw-sw-fine"/><circle cx="9" cy="9" r="7.5" class="lw-sw-line"/></svg>ringed: entry page</li>',
+    '<li>rings: click depth</li>',
+  ];
   if (kind === 'folders') {
     items.push(
-      '<li><svg viewBox="0 0 18 18" aria-hidden="true"><circle cx="9" cy="9" r="5" class="lw-sw-none"/><path d="M9 1.5A7.5 7.5 0 0 1 16.5 9" class="lw-sw-arc"/></svg>folder overview: outer arc = share of its pages too deep or unreachable; size = its pages\u2019 PageRank</li>',
+      '<li><svg viewBox="0 0 18 18" aria-hidden="true"><circle cx="9" cy="9" r="5" class="lw-sw-fine"/><path d="M9 1.5A7.5 7.5 0 0 1 16.5 9" class="lw-sw-arc"/></svg>folder overview: outer arc = share of its pages too deep or unreachable; size = its number of pages</li>',
     );
   }
   return `<ul class="lw-legend" aria-label="Legend">${items.join('')}</ul>`;

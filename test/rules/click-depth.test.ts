@@ -1,4 +1,4 @@
-import { maxClickDepth } from '../../src/rules/index.js';
+import { clickDepth } from '../../src/rules/index.js';
 import type { PageSpec } from './helpers.js';
 import { ruleTable } from './table.js';
 
@@ -9,7 +9,7 @@ function chain(n: number): PageSpec[] {
   return routes.map((route, i) => ({ route, ...(i + 1 < routes.length ? { links: [routes[i + 1]!] } : {}) }));
 }
 
-ruleTable(maxClickDepth, {
+ruleTable(clickDepth, {
   valid: [
     { name: 'the doc example: depth 3 with the default limit 3', site: { pages: chain(3) } },
     { name: 'unreachable pages are left to unreachable-page', site: { pages: [{ route: '/' }, { route: '/far/' }] } },
@@ -25,23 +25,23 @@ ruleTable(maxClickDepth, {
           line: 1,
           column: 1,
           route: '/a/b/c/d/',
-          message: 'Unexpected click depth 4 for /a/b/c/d/, expected at most 3 clicks from an entry page',
+          message: '/a/b/c/d/ is 4 clicks from an entry page, over the limit of 3; link it from a page nearer the top',
         },
       ],
     },
     {
-      name: 'the rule option max wins over the top-level maxDepth',
-      site: { pages: chain(2), options: { maxDepth: 5, rules: { 'max-click-depth': ['error', { max: 1 }] } } },
+      name: 'the configured level applies; the limit is maxDepth',
+      site: { pages: chain(2), options: { maxDepth: 1, checks: { 'click-depth': { level: 'error' } } } },
       findings: [
-        { file: 'a/b.md', line: 1, column: 1, severity: 'error', message: 'Unexpected click depth 2 for /a/b/, expected at most 1 click from an entry page' },
+        { file: 'a/b.md', line: 1, column: 1, severity: 'error', message: '/a/b/ is 2 clicks from an entry page, over the limit of 1; link it from a page nearer the top' },
       ],
     },
     {
       name: 'the top-level maxDepth lowers the limit',
       site: { pages: chain(2), options: { maxDepth: 0 } },
       findings: [
-        { file: 'a.md', line: 1, column: 1, message: 'Unexpected click depth 1 for /a/, expected at most 0 clicks from an entry page' },
-        { file: 'a/b.md', line: 1, column: 1, message: 'Unexpected click depth 2 for /a/b/, expected at most 0 clicks from an entry page' },
+        { file: 'a.md', line: 1, column: 1, message: '/a/ is 1 clicks from an entry page, over the limit of 0; link it from a page nearer the top' },
+        { file: 'a/b.md', line: 1, column: 1, message: '/a/b/ is 2 clicks from an entry page, over the limit of 0; link it from a page nearer the top' },
       ],
     },
   ],

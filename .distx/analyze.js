@@ -1,0 +1,185 @@
+/**
+ * The Node API entry point: `analyze(config) -> Promise<Report>`.
+ *
+ * This file only wires the stages together (DESIGN section 2); each stage is a pure function of
+ * its inputs except `collect` (reads the sources) and the cache.
+ */
+import { availableParallelism } from 'node:os';
+import { resolve } from 'node:path';
+import { parseWithCache, readResult, resultKey, writeResult } from './cache/index.js';
+import { collectSources, readAuxFile } from './collect/index.js';
+import { parseNavigation, parseRedirects } from './parse/index.js';
+import { parseFiles } from './parallel/index.js';
+import { buildGraph } from './graph/index.js';
+import { rankGraph } from './rank/index.js';
+import { buildTermIndex, createStemCache, relatedPages, contentCentrality } from './text/index.js';
+import { suggestLinks, parseTraffic } from './suggest/index.js';
+import { runRules, validateRuleConfig } from './rules/index.js';
+import { buildReport } from './report/index.js';
+import { resolveOptions } from './options.js';
+import { VERSION } from './version.js';
+/**
+ * Analyse a site: collect its sources, build the link graph, rank it, run the rules (and, for
+ * `command: 'suggest'`, propose links) and return the report.
+ * @throws EngineError with code `E_CONFIG_INVALID` (bad configuration) or `E_IO` (unreadable root
+ *   or auxiliary file). A bad source file is a finding, never a throw.
+ */
+export async function analyze(input, hooks = {}) {
+    const { root, command = 'check', configOrigin = 'configuration', baseline, ...config } = input;
+    const options = resolveOptions(config, resolve(root), configOrigin);
+    validateRuleConfig(options, configOrigin);
+    const stage = stageTimer(hooks);
+    const collected = await stage('collect', () => collectInputs(options));
+    // Nothing changed since the last run with the cache on: its report is this run's report.
+    const cacheDir = options.cache.enabled ? resolve(options.cache.dir) : null;
+    const key = cacheDir === null ? '' : resultKey(reportInputs(options, command, collected, baseline));
+    const cached = cacheDir === null ? null : readResult(cacheDir, command, key);
+    if (cached !== null)
+        return cached;
+    // The facts are handed over without a binding here, so `finish` can let their texts go.
+    const report = await finish({
+        options,
+        command,
+        facts: await stage('parse', () => parseAll(collected.sources, options, hooks)),
+        collected,
+        hooks,
+        ...(baseline === undefined ? {} : { baseline }),
+    });
+    if (cacheDir !== null)
+        writeResult(cacheDir, command, key, report);
+    return report;
+}
+/** What a report depends on, for the whole-report cache key. */
+function reportInputs(options, command, collected, baseline) {
+    const { sources, navigation, redirects, traffic, auxProblems } = collected;
+    return {
+        version: VERSION,
+        command,
+        options,
+        sources: sources.files.map((f) => ({ path: f.path, hash: f.hash, problems: f.problems })),
+        rest: {
+            assets: sources.assets,
+            warnings: sources.warnings,
+            navigation,
+            redirects,
+            traffic: traffic === null ? null : [...traffic],
+            auxProblems,
+            baseline: baseline?.findings ?? null,
+        },
+    };
+}
+/** Read everything `analyze` reads before parsing: the sources, navigation, redirects and traffic files. */
+export async function collectInputs(options) {
+    const aux = [options.navigation, options.redirects, options.traffic].filter((p) => p !== null);
+    const [sources, navText, redirectsText, trafficText] = await Promise.all([
+        collectSources(options, aux),
+        options.navigation === null ? null : readAuxFile(options, 'navigation', options.navigation),
+        options.redirects === null ? null : readAuxFile(options, 'redirects', options.redirects),
+        options.traffic === null ? null : readAuxFile(options, 'traffic', options.traffic),
+    ]);
+    const auxProblems = [];
+    const navigation = navText === null ? null : { file: navText.file, links: parseNavigation(navText.file, navText.text) };
+    let redirects = [];
+    if (redirectsText !== null) {
+        const parsed = parseRedirects(redirectsText.file, redirectsText.text);
+        redirects = parsed.redirects;
+        for (const p of parsed.problems)
+            auxProblems.push({ file: redirectsText.file, line: p.line, message: p.message });
+    }
+    let traffic = null;
+    if (trafficText !== null) {
+        const parsed = parseTraffic(trafficText.file, trafficText.text);
+        traffic = parsed.views;
+        for (const p of parsed.problems)
+            auxProblems.push({ file: trafficText.file, line: p.line, message: p.message });
+    }
+    return { sources, navigation, redirects, traffic, auxProblems };
+}
+/**
+ * The parse stage: facts from the cache where they are current, the rest parsed on the main
+ * thread or in worker threads (`options.workers`), the cache saved. Cache problems never fail
+ * the run; they are in the stats given to `hooks.onParseStats`.
+ */
+export async function parseAll(sources, options, hooks) {
+    const cores = availableParallelism();
+    let workers = { threads: 1, batches: 0, fallback: null };
+    const { facts, stats } = await parseWithCache(sources.files, options, {
+        // `cache.dir` is relative to the working folder of this run.
+        dir: options.cache.enabled ? resolve(options.cache.dir) : null,
+        version: VERSION,
+        parseMisses: async (files, onParsed) => {
+            const parsed = await parseFiles(files, options, { cores, onParsed });
+            workers = parsed.stats;
+            return parsed.facts;
+        },
+        onProgress: (done, total) => hooks.onProgress?.('parse', done, total),
+    });
+    hooks.onParseStats?.({ cache: stats, workers });
+    return facts;
+}
+/** The stages after parsing; shared by `analyze` and the unified plugin's collector. */
+export async function finishAnalysis(input) {
+    return finish({ ...input });
+}
+/**
+ * {@link finishAnalysis} on an input object of its own: the facts are taken out of it, and once
+ * the term index is built (at once for `check`) they are replaced by copies without their body
+ * text, which nothing later reads. On a large site the bodies are a fifth of the memory held;
+ * letting them go before the suggest, rules and report stages lowers the run's peak. The caller's
+ * own facts are never changed.
+ */
+async function finish(input) {
+    const { options, command, collected, hooks, baseline } = input;
+    let facts = input.facts;
+    input.facts = [];
+    const stage = stageTimer(hooks);
+    if (command === 'check')
+        facts = withoutBodies(facts);
+    const graph = await stage('graph', () => buildGraph({ pages: facts, assets: collected.sources.assets, navigation: collected.navigation, redirects: collected.redirects }, options));
+    const ranking = await stage('rank', () => rankGraph(graph, options));
+    let suggestions = [];
+    let importance;
+    let repair;
+    let model;
+    if (command === 'suggest') {
+        const text = await stage('text', () => {
+            const stems = createStemCache();
+            const index = buildTermIndex(graph.pages.map((p) => facts[p.factsIndex].text), stems);
+            const related = relatedPages(index, options.suggest.relatedK);
+            return { index, related, centrality: contentCentrality(related, graph.pages.length), stems };
+        });
+        facts = withoutBodies(facts);
+        const ordered = graph.pages.map((p) => facts[p.factsIndex]);
+        const result = await stage('suggest', () => suggestLinks({ graph, facts: ordered, ranking, ...text, traffic: collected.traffic }, options));
+        suggestions = result.suggestions;
+        importance = result.importance;
+        repair = result.plan;
+        model = result.model;
+    }
+    const findings = await stage('rules', () => runRules({ graph, facts, ranking, options, warnings: collected.sources.warnings, auxProblems: collected.auxProblems }));
+    return stage('report', () => buildReport({
+        options,
+        graph,
+        ranking,
+        findings,
+        suggestions,
+        files: collected.sources.files.length,
+        version: VERSION,
+        ...(importance === undefined ? {} : { importance }),
+        ...(repair === undefined ? {} : { repair }),
+        ...(model === undefined ? {} : { model }),
+        ...(baseline === undefined ? {} : { baseline }),
+    }));
+}
+/** Copies of the facts with an empty `text.body` (title and headings kept). */
+function withoutBodies(facts) {
+    return facts.map((f) => (f.text.body === '' ? f : { ...f, text: { title: f.text.title, headings: f.text.headings, body: '' } }));
+}
+function stageTimer(hooks) {
+    return async (name, fn) => {
+        hooks.onStage?.(name, 'start');
+        const value = await fn();
+        hooks.onStage?.(name, 'end');
+        return value;
+    };
+}

@@ -1,0 +1,61 @@
+/** Types of the apply stage: link styles, and what planning one file's edits gives. */
+import type { FileKind } from '../types.js';
+/**
+ * How a new link names its target:
+ * - `relative`: the target's source file relative to the source file (`../guides/calibration.md`),
+ *   how authors link Markdown files; in an HTML source, the target's route relative to the page
+ *   (`../guides/calibration/`);
+ * - `absolute`: the site-absolute route (`/guides/calibration/`);
+ * - `route-relative`: the target's route relative to the page's route, as a browser resolves it
+ *   (`../calibration/`); the same as `relative` in HTML.
+ */
+export type LinkStyle = 'relative' | 'absolute' | 'route-relative';
+/** The link styles, for the `--link-style` flag. */
+export declare const LINK_STYLES: readonly LinkStyle[];
+/** Internal links of each style, counted in one file or a whole site. */
+export type StyleCounts = Readonly<Record<LinkStyle, number>>;
+/** The page a link goes to. */
+export interface LinkTarget {
+    readonly route: string;
+    readonly file: string;
+}
+/** The page a link is written in. */
+export interface LinkSource {
+    readonly file: string;
+    readonly kind: FileKind;
+    readonly route: string;
+    /** HTML `<base href>`: relative links would resolve against it, so links are written absolute. */
+    readonly baseHref?: string;
+}
+/** A link `planFile` inserted. */
+export interface AppliedLink {
+    readonly id: string;
+    readonly file: string;
+    /** Position of the new link's first character in the edited file (1-based). */
+    readonly line: number;
+    readonly column: number;
+    readonly anchor: string;
+    readonly target: string;
+    readonly href: string;
+    /** The inserted markup before and after the anchor (`[` and `](href)`). */
+    readonly open: string;
+    readonly close: string;
+    /** UTF-16 offset of `open` in the edited text. */
+    readonly offset: number;
+}
+/** A suggestion not applied, and why. */
+export interface NotApplied {
+    readonly id: string;
+    readonly file: string;
+    readonly reason: string;
+}
+/** One source file's edits. */
+export interface FilePlan {
+    readonly file: string;
+    /** Text before and after (decoded, as `SourceFile.text`). Equal when nothing was applied. */
+    readonly before: string;
+    readonly after: string;
+    readonly style: LinkStyle;
+    readonly applied: readonly AppliedLink[];
+    readonly refused: readonly NotApplied[];
+}

@@ -1,0 +1,49 @@
+/**
+ * `linkweave backtest [root] --holdout 0.1 --seed 42 [--runs 5] [--format text|json] [--output FILE]`:
+ * the command behind the CLI's table entry. Flags checked, the site read like `analyze` reads
+ * it, the backtest run, the table or JSON printed or written atomically. Exit 0 on success;
+ * bad flags throw `E_USAGE` (the CLI turns that into exit 2).
+ */
+import { resolve } from 'node:path';
+import { checkOutputPath } from '../cli/output.js';
+import { progressHooks } from '../cli/progress.js';
+import { resolveOptions } from '../options.js';
+import { writeFileAtomic } from '../report/write.js';
+import { backtest } from './backtest.js';
+import { formatBacktestJson, formatBacktestText } from './format.js';
+import { loadSite } from './load.js';
+import { backtestFormat, parseBacktestFlags } from './settings.js';
+/** Summary line of the command in the help. */
+export const BACKTEST_SUMMARY = 'hold out a share of the existing content links, suggest, and score how many come back (recall, precision, MRR)';
+/** Run the backtest command. @returns 0 (usage errors are thrown as `E_USAGE`) */
+export async function runBacktestCommand(ctx) {
+    const { io, flags } = ctx;
+    const settings = parseBacktestFlags(ctx.values);
+    const output = flags.output === null ? null : resolve(io.cwd, flags.output);
+    const format = backtestFormat(flags.format, flags.output);
+    if (output !== null)
+        checkOutputPath(output, ctx.root, flags.output);
+    const options = resolveOptions(ctx.config, ctx.root, ctx.configOrigin);
+    const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
+    let result;
+    try {
+        const site = await loadSite(options, progress?.hooks ?? {});
+        progress?.hooks.onStage?.('suggest', 'start');
+        result = backtest({ options, facts: site.facts, collected: site.collected }, settings, (done, total) => progress?.hooks.onProgress?.('suggest', done, total));
+    }
+    finally {
+        progress?.done();
+    }
+    const text = format === 'json' ? formatBacktestJson(result) : formatBacktestText(result);
+    if (output === null) {
+        io.stdout.write(text);
+        return 0;
+    }
+    await writeFileAtomic(output, text, io.tempFiles === undefined ? {} : { tracker: io.tempFiles });
+    if (!flags.quiet) {
+        if (format === 'json')
+            io.stdout.write(formatBacktestText(result));
+        io.stderr.write(`linkweave: backtest written to ${flags.output}\n`);
+    }
+    return 0;
+}

@@ -1,0 +1,22 @@
+/** The backtest (issue 8): hold out existing content links, suggest, score recall/precision/MRR against two baselines. */
+export { backtest, METHODS } from './backtest.js';
+export type { BacktestInput } from './backtest.js';
+export { holdOut, removePairs, contentPairs, eligiblePairs } from './holdout.js';
+export type { ContentPair, Holdout, HoldoutInput } from './holdout.js';
+export { runOnce, backtestOptions, textStage } from './score.js';
+export type { RunBase, TextResults } from './score.js';
+export { scoreMethod, heldOutByTarget, spread, K_VALUES, LIST_LENGTH } from './metrics.js';
+export type { RankedSource } from './metrics.js';
+export { suggestionLists, similarityLists, randomLists } from './methods.js';
+export { formatBacktestJson, formatBacktestText, scoreFormula, BACKTEST_SCHEMA, METHOD_LABELS } from './format.js';
+export { parseBacktestFlags, backtestFormat, BACKTEST_FLAGS, BACKTEST_DEFAULTS, MAX_HOLDOUT, MAX_RUNS } from './settings.js';
+export type { BacktestFormat } from './settings.js';
+export { loadSite } from './load.js';
+export type { LoadedSite } from './load.js';
+export { runBacktestCommand, BACKTEST_SUMMARY } from './command.js';
+export { lineStarts, positionOf, linkTextRange, withSpans, withoutWords, removeOnce } from './unlink.js';
+export { mulberry32, streamFor, shuffle } from './prng.js';
+export type { Random } from './prng.js';
+export type * from './types.js';
+export { chooseLikeSuggest } from './choose.js';
+export { randomPageLists } from './methods.js';

@@ -1,0 +1,91 @@
+/**
+ * One backtest run (one seed): hold links out, rebuild the graph and ranking from what remains,
+ * run the suggestion stage's choice with every page as a target (choose.ts), and score the three methods' ranked
+ * lists against the held-out pairs (metrics.ts has the definitions).
+ *
+ * The text stage (term index, related pages, content centrality) is run again on what remains
+ * when the held-out links' words leave the pages; with `keepLinkText` the words stay, and the
+ * site's own text stage results (computed once, backtest.ts) are used.
+ */
+import { EngineError } from '../errors.js';
+import { buildGraph } from '../graph/index.js';
+import { rankGraph } from '../rank/index.js';
+import { findCandidates, hasContentLink } from '../suggest/index.js';
+import { buildTermIndex, contentCentrality, createStemCache, relatedPages } from '../text/index.js';
+import { chooseLikeSuggest } from './choose.js';
+import { holdOut } from './holdout.js';
+import { randomLists, randomPageLists, similarityLists, suggestionLists, titlePhraseLists } from './methods.js';
+import { heldOutByTarget, LIST_LENGTH, scoreMethod } from './metrics.js';
+/**
+ * The suggestion options of a backtest: every page a target (`suggest.targets: 'all'`), ten
+ * suggestions per target (the longest list scored) and no per-source cap (`perSource: 0`), so a
+ * source that suits many targets is not hidden from some of them by the cap, and no least score
+ * (`minScore: 0`: the lists are ranked to their tenth place). Everything else as configured.
+ */
+export function backtestOptions(options, _pages) {
+    return {
+        ...options,
+        suggest: { ...options.suggest, targets: 'all', perTarget: LIST_LENGTH, perSource: 0, minScore: 0 },
+    };
+}
+const NO_ANCHORS = { overlap: false, inPlace: false };
+const TITLE_ANCHORS = { overlap: true, inPlace: false };
+/** The text stage as `analyze` runs it, over the facts in page order. */
+export function textStage(ordered, options) {
+    const index = buildTermIndex(ordered.map((f) => f.text));
+    const related = relatedPages(index, options.suggest.relatedK);
+    return { index, related, centrality: contentCentrality(related, ordered.length) };
+}
+/** Run the backtest once with `seed` (`keepLinkText`: see `BacktestSettings`). */
+export function runOnce(base, share, seed, keepLinkText = false) {
+    const { graph, options } = base;
+    const n = graph.pages.length;
+    const { facts, heldOut } = holdOut({ graph, facts: base.facts, sourceText: base.sourceText, pairs: base.pairs, keepLinkText }, share, seed);
+    const reduced = buildGraph({ ...base.aux, pages: facts }, options);
+    checkReduced(graph, reduced, heldOut);
+    const ranking = rankGraph(reduced, options);
+    const ordered = reduced.pages.map((p) => facts[p.factsIndex]);
+    const text = keepLinkText && base.text !== null ? base.text : textStage(ordered, options);
+    const cache = createStemCache();
+    const choice = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic, stems: cache }, options);
+    const truth = heldOutByTarget(heldOut);
+    const targets = [...truth.keys()];
+    const candidates = findCandidates(reduced, text.related, targets, options.suggest.minSimilarity);
+    const covered = heldOut.filter((p) => choice.candidatesOf(p.target).includes(p.source)).length;
+    const methods = targets.length === 0
+        ? []
+        : [
+            scoreMethod('linkweave', suggestionLists(choice.chosen), truth, { overlap: true, inPlace: keepLinkText }, cache),
+            scoreMethod('tfidf', similarityLists(candidates), truth, NO_ANCHORS, cache),
+            scoreMethod('title-phrase', titlePhraseLists(reduced, ordered, text.index, targets, cache), truth, { ...TITLE_ANCHORS, inPlace: keepLinkText }, cache),
+            scoreMethod('random', randomLists(candidates, seed), truth, NO_ANCHORS, cache),
+            scoreMethod('random-page', randomPageLists(reduced, targets, seed), truth, NO_ANCHORS, cache),
+        ];
+    return {
+        seed,
+        heldOutPairs: heldOut.length,
+        heldOutLinks: heldOut.reduce((a, p) => a + p.links.length, 0),
+        targets: targets.length,
+        candidateCoverage: heldOut.length === 0 ? null : covered / heldOut.length,
+        model: {
+            source: choice.modelReport.source,
+            trainingPairs: choice.modelReport.trainingPairs.linked + choice.modelReport.trainingPairs.notLinked,
+            auc: choice.modelReport.auc,
+        },
+        methods,
+    };
+}
+/**
+ * The reduced site must have the same pages in the same order (page ids are compared) and no
+ * content link left between a held-out pair; anything else is a bug, not a user error.
+ */
+function checkReduced(graph, reduced, heldOut) {
+    const same = reduced.pages.length === graph.pages.length && reduced.pages.every((p, i) => p.route === graph.pages[i].route);
+    if (!same)
+        throw new EngineError('E_INTERNAL', 'backtest: holding links out changed the set of pages');
+    for (const p of heldOut) {
+        if (hasContentLink(reduced.forward, p.source, p.target)) {
+            throw new EngineError('E_INTERNAL', `backtest: the held-out link ${graph.pages[p.source].route} -> ${graph.pages[p.target].route} is still in the graph`);
+        }
+    }
+}

@@ -1,0 +1,100 @@
+/** UTF-16 offset of the start of each line (`\n`, `\r\n` and lone `\r` end a line). */
+export function lineStarts(text) {
+    const starts = [0];
+    for (let i = 0; i < text.length; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 10)
+            starts.push(i + 1);
+        else if (c === 13) {
+            if (text.charCodeAt(i + 1) === 10)
+                i++;
+            starts.push(i + 1);
+        }
+    }
+    return starts;
+}
+/** 1-based line and column (UTF-16 code units) of an offset. */
+export function positionOf(starts, offset) {
+    let lo = 0;
+    let hi = starts.length - 1;
+    while (lo < hi) {
+        const mid = (lo + hi + 1) >> 1;
+        if (starts[mid] <= offset)
+            lo = mid;
+        else
+            hi = mid - 1;
+    }
+    return { line: lo + 1, column: offset - starts[lo] + 1 };
+}
+/**
+ * Where a link's visible text is in the source: right after the `[` of a Markdown link, or after
+ * the opening tag of an `<a>` element (HTML pages, raw HTML in Markdown). The text must be there
+ * exactly as `raw.text` says (so a span made from it keeps `text === source.slice(...)`); links
+ * whose text carries markup (`[**x**](y)`), link patterns and empty texts give null.
+ */
+export function linkTextRange(source, starts, raw, kind) {
+    if (raw.origin === 'pattern' || raw.origin === 'navigation' || raw.text.trim() === '')
+        return null;
+    if (raw.line < 1 || raw.line > starts.length || raw.column < 1)
+        return null;
+    const at = starts[raw.line - 1] + raw.column - 1;
+    if (at >= source.length)
+        return null;
+    let start = -1;
+    if (source[at] === '[' && kind === 'markdown')
+        start = at + 1;
+    else if (/^<a[\s>]/i.test(source.slice(at, at + 3))) {
+        const close = source.indexOf('>', at);
+        if (close >= 0)
+            start = close + 1;
+    }
+    if (start < 0 || !source.startsWith(raw.text, start))
+        return null;
+    return { start, end: start + raw.text.length };
+}
+/**
+ * `spans` with a span for each range added, in offset order. A range that overlaps an existing
+ * span is left out (the parse stage never puts link text in a span, so this is only a guard).
+ */
+export function withSpans(spans, source, starts, ranges) {
+    const out = [...spans];
+    for (const r of ranges) {
+        const overlaps = out.some((s) => r.start < s.offset + s.text.length && s.offset < r.end);
+        if (overlaps)
+            continue;
+        const { line, column } = positionOf(starts, r.start);
+        out.push({ text: source.slice(r.start, r.end), offset: r.start, line, column });
+    }
+    return out.sort((a, b) => a.offset - b.offset);
+}
+const WORD_CHAR = /[\p{L}\p{N}]/u;
+/**
+ * `text` with one whole-word occurrence of `phrase` blanked out, or `text` itself when there is
+ * none. Which occurrence does not matter to TF-IDF: the index counts words, not places.
+ */
+export function removeOnce(text, phrase) {
+    if (phrase.trim() === '')
+        return text;
+    for (let at = text.indexOf(phrase); at >= 0; at = text.indexOf(phrase, at + 1)) {
+        const before = at > 0 ? text[at - 1] : ' ';
+        const after = at + phrase.length < text.length ? text[at + phrase.length] : ' ';
+        if (!WORD_CHAR.test(before) && !WORD_CHAR.test(after))
+            return `${text.slice(0, at)} ${text.slice(at + phrase.length)}`;
+    }
+    return text;
+}
+/**
+ * The page's text without the words of the given links: each link text taken once out of the
+ * body, else out of the headings (a link in a heading); the title is left alone.
+ */
+export function withoutWords(text, linkTexts) {
+    let { body, headings } = text;
+    for (const phrase of linkTexts) {
+        const b = removeOnce(body, phrase);
+        if (b !== body)
+            body = b;
+        else
+            headings = removeOnce(headings, phrase);
+    }
+    return { title: text.title, headings, body };
+}

@@ -1,0 +1,21 @@
+/** The one list of configuration keys that change what `parseSource` extracts from a file. */
+import type { ResolvedOptions } from '../options.js';
+/**
+ * Every option `src/parse/` reads (a test records the reads of `parseSource` and checks it
+ * against this list):
+ * - `routes.style`, `routes.basePath`, `routes.indexNames`: the route and title of a page;
+ * - `linkPatterns`: links found by the configured patterns;
+ * - `maxLinksPerPage`: links kept per page (more are dropped with a problem).
+ *
+ * Not here, on purpose: `routes.caseInsensitive` is applied by the graph stage (parse keeps the
+ * case of routes); `maxFileBytes` is applied by `collect` (a file over the limit arrives with no
+ * text and a `too-large` problem, and such files are never cached, see `isCacheable`);
+ * `include`/`exclude` choose which files are parsed, not what a file yields; every later stage's
+ * option (entry, template*, rules...) is applied after parsing.
+ */
+export declare const PARSE_OPTION_KEYS: readonly ['routes.style', 'routes.basePath', 'routes.indexNames', 'linkPatterns', 'maxLinksPerPage'];
+/**
+ * A stable string of the values of `PARSE_OPTION_KEYS`. Cached facts are reused only under the
+ * same fingerprint (and the same tool version and content hash).
+ */
+export declare function parseFingerprint(options: ResolvedOptions): string;

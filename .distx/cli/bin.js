@@ -1,0 +1,38 @@
+#!/usr/bin/env node
+/**
+ * The `linkweave` executable: hands the process to `run` and sets `process.exitCode`.
+ * The only file that exits the process, and only on a signal, after removing the temp files of
+ * atomic writes still in flight.
+ */
+import { removeTempFilesSync } from '../report/write.js';
+import { run } from './run.js';
+const tempFiles = new Set();
+function onSignal(signal, code) {
+    process.once(signal, () => {
+        removeTempFilesSync(tempFiles);
+        process.stderr.write(`\nlinkweave: interrupted (${signal})\n`);
+        process.exit(code);
+    });
+}
+onSignal('SIGINT', 130);
+onSignal('SIGTERM', 143);
+// A closed pipe (`linkweave check | head`) is not an error of the run.
+process.stdout.on('error', (error) => {
+    if (error.code !== 'EPIPE')
+        throw error;
+});
+run(process.argv.slice(2), {
+    stdout: process.stdout,
+    stderr: process.stderr,
+    cwd: process.cwd(),
+    env: process.env,
+    isTTY: process.stdout.isTTY === true,
+    ...(process.stdout.columns === undefined ? {} : { columns: process.stdout.columns }),
+    stderrIsTTY: process.stderr.isTTY === true,
+    tempFiles,
+}).then((code) => {
+    process.exitCode = code;
+}, (error) => {
+    process.stderr.write(`linkweave: internal error: ${error instanceof Error ? error.message : String(error)}\n`);
+    process.exitCode = 2;
+});

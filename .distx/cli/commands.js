@@ -1,0 +1,73 @@
+/**
+ * The command table. Adding a command is one entry here: its name, a help line, its own
+ * flags and the function that runs it.
+ */
+import { resolve } from 'node:path';
+import { analyze } from '../analyze.js';
+import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
+import { formatReportPieces } from '../report/index.js';
+import { writeFileAtomic } from '../report/write.js';
+import { colorEnabled } from './io.js';
+import { checkOutputPath, formatFromOutput } from './output.js';
+import { progressHooks } from './progress.js';
+import { APPLY_FLAGS, APPLY_SUMMARY, runApplyCommand } from './apply.js';
+import { readReviewInputs, withComparison, writeBaselineIfAsked, REVIEW_FLAGS } from './review.js';
+/** The commands, in help order. */
+export const COMMANDS = [
+    {
+        name: 'check',
+        summary: 'build the link graph, run the rules, print the findings, apply the gate',
+        flags: REVIEW_FLAGS,
+        run: (ctx) => reportCommand(ctx, 'check'),
+    },
+    {
+        name: 'suggest',
+        summary: 'check, plus proposed new links (file, line, column, anchor, target, predicted impact)',
+        flags: REVIEW_FLAGS,
+        run: (ctx) => reportCommand(ctx, 'suggest'),
+    },
+    { name: 'apply', summary: APPLY_SUMMARY, flags: APPLY_FLAGS, run: runApplyCommand },
+    { name: 'backtest', summary: BACKTEST_SUMMARY, flags: BACKTEST_FLAGS, run: runBacktestCommand },
+];
+/** Findings and suggestions listed in the terminal summary after a report file is written. */
+const SUMMARY_ITEMS = 20;
+/** analyze -> format -> stdout or --output; exit 0 when the gate passed, 1 when it failed. */
+async function reportCommand(ctx, command) {
+    const { io, flags } = ctx;
+    const output = flags.output === null ? null : resolve(io.cwd, flags.output);
+    if (output !== null)
+        checkOutputPath(output, ctx.root, flags.output);
+    const format = flags.format ?? (output === null ? 'text' : formatFromOutput(output));
+    const color = colorEnabled(io);
+    const review = readReviewInputs(ctx.values, io, ctx.root);
+    const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
+    let report;
+    try {
+        const baseline = review.baseline === null ? {} : { baseline: review.baseline };
+        report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, progress?.hooks ?? {});
+    }
+    finally {
+        progress?.done();
+    }
+    report = withComparison(report, review);
+    await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
+    // The text report shows paths relative to the working folder, wrapped to the terminal.
+    const terminal = { color, cwd: io.cwd, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
+    if (output === null) {
+        for (const piece of formatReportPieces(report, format, terminal))
+            io.stdout.write(piece);
+    }
+    else {
+        const text = formatReportPieces(report, format, { color: false, cwd: io.cwd });
+        await writeFileAtomic(output, text, { label: flags.output, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
+        if (!flags.quiet) {
+            // After another format went to a file, the terminal gets a summary: the counts, the gate
+            // and the first findings and suggestions (a large site has a hundred thousand).
+            if (format !== 'text')
+                for (const piece of formatReportPieces(report, 'text', { ...terminal, maxItems: SUMMARY_ITEMS }))
+                    io.stdout.write(piece);
+            io.stderr.write(`linkweave: report written to ${flags.output}\n`);
+        }
+    }
+    return report.gate.passed ? 0 : 1;
+}

@@ -1,0 +1,94 @@
+/**
+ * The CLI as a function: arguments and a process description in, an exit code out. Never
+ * exits the process and never reads `process` itself (bin.ts passes everything in).
+ */
+import { resolve } from 'node:path';
+import { isEngineError } from '../errors.js';
+import { DEFAULT_OPTIONS, resolveOptions } from '../options.js';
+import { VERSION } from '../version.js';
+import { helpText, parseArgs } from './args.js';
+import { COMMANDS } from './commands.js';
+import { loadConfig } from './config.js';
+import { debugEnabled } from './io.js';
+/** Exit codes (DESIGN section 9). */
+export const EXIT = { passed: 0, failed: 1, error: 2 };
+/**
+ * Run the command line.
+ * @param argv arguments after the script path, e.g. `['check', 'docs', '--format', 'json']`
+ * @returns 0 the gate passed, 1 the gate failed, 2 usage, configuration or I/O error
+ */
+export async function run(argv, io) {
+    try {
+        const parsed = parseArgs(argv, COMMANDS);
+        if (parsed.kind === 'help') {
+            io.stdout.write(helpText(COMMANDS, parsed.command, VERSION));
+            return EXIT.passed;
+        }
+        if (parsed.kind === 'version') {
+            io.stdout.write(`${VERSION}\n`);
+            return EXIT.passed;
+        }
+        const command = COMMANDS.find((c) => c.name === parsed.command);
+        const root = resolve(io.cwd, parsed.root ?? '.');
+        const values = parsed.flags;
+        const loaded = await loadConfig({ explicit: stringFlag(values, 'config'), root, cwd: io.cwd });
+        // Validate the file on its own first, so a bad key is reported against the file.
+        resolveOptions(loaded.config, root, loaded.origin);
+        return await command.run({
+            io,
+            root,
+            config: withCacheDir(withFlags(loaded.config, values), io.cwd),
+            configOrigin: loaded.origin,
+            flags: commonFlags(values),
+            values,
+        });
+    }
+    catch (error) {
+        return reportError(error, io);
+    }
+}
+/** Flags override configuration keys: --max-depth, --fail-on, --no-cache. */
+export function withFlags(config, values) {
+    const merged = { ...config };
+    if (typeof values['max-depth'] === 'number')
+        merged.maxDepth = values['max-depth'];
+    const failOn = stringFlag(values, 'fail-on');
+    if (failOn === 'error' || failOn === 'warning')
+        merged.failOn = failOn;
+    if (values['no-cache'] === true)
+        merged.cache = { ...config.cache, enabled: false };
+    return merged;
+}
+/** The cache folder is relative to the working folder: make it absolute against `io.cwd`. */
+function withCacheDir(config, cwd) {
+    return { ...config, cache: { ...config.cache, dir: resolve(cwd, config.cache?.dir ?? DEFAULT_OPTIONS.cache.dir) } };
+}
+function commonFlags(values) {
+    return {
+        format: stringFlag(values, 'format'),
+        output: stringFlag(values, 'output'),
+        quiet: values.quiet === true,
+        progress: values['no-progress'] !== true,
+    };
+}
+function stringFlag(values, name) {
+    const v = values[name];
+    return typeof v === 'string' ? v : null;
+}
+/** One line on stderr (`linkweave: <message>`), the stack only with DEBUG=linkweave. */
+function reportError(error, io) {
+    const debug = debugEnabled(io.env);
+    if (isEngineError(error)) {
+        io.stderr.write(`linkweave: ${oneLine(error.message)}\n`);
+    }
+    else {
+        const message = error instanceof Error ? error.message : String(error);
+        io.stderr.write(`linkweave: internal error: ${oneLine(message)}${debug ? '' : ' (set DEBUG=linkweave for details)'}\n`);
+    }
+    if (debug && error instanceof Error && error.stack !== undefined)
+        io.stderr.write(`${error.stack}\n`);
+    return EXIT.error;
+}
+function oneLine(text) {
+    return text.replace(/\s*\n\s*/g, ' ');
+}

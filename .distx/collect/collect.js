@@ -1,0 +1,93 @@
+/** `collectSources`: find and read the site's source files (the only stage reading sources). */
+import fs from 'node:fs';
+import { isAbsolute, join, normalize, resolve } from 'node:path';
+import { EngineError } from '../errors.js';
+import { compare, isInside, listFiles, toRelative, WarningLog } from './list.js';
+import { describeIoError, kindOfPath, readSource } from './read.js';
+/** Files read between two turns of the event loop (reads are synchronous; see read.ts). */
+export const READ_BATCH = 64;
+/**
+ * Find the source files under `options.root` (include/exclude globs; node_modules, dot-folders
+ * and dot-files always left out), read and decode them, and list the other files as assets.
+ * Symlinks are followed only inside the root; loops are not re-entered.
+ * @param extraExclude more globs or paths relative to the root to leave out (e.g. the
+ *   navigation file or the report); absolute paths inside the root are made relative
+ * @throws EngineError `E_NO_ROOT` when the root is not a readable folder, `E_CONFIG_INVALID`
+ *   when a glob climbs out of the root
+ */
+export async function collectSources(options, extraExclude = []) {
+    const realRoot = await realRootOf(options.root);
+    checkPatterns('include', options.include);
+    checkPatterns('exclude', options.exclude);
+    const extra = extraExclude
+        .map((p) => relativeGlob([realRoot, resolve(options.root)], p))
+        .filter((p) => p !== null);
+    const ignore = [...options.exclude, ...extra];
+    const warnings = new WarningLog();
+    const [matched, all] = await Promise.all([
+        listFiles(realRoot, options.include, ignore, warnings),
+        listFiles(realRoot, ['**/*'], ignore, warnings),
+    ]);
+    const sources = [];
+    const sourceSet = new Set();
+    for (const rel of matched) {
+        const kind = kindOfPath(rel);
+        // A file matched by `include` without a source extension is an asset, not a page.
+        if (kind === null)
+            continue;
+        sources.push({ rel, kind });
+        sourceSet.add(rel);
+    }
+    const assets = all.filter((rel) => !sourceSet.has(rel));
+    const ctx = { realRoot, maxFileBytes: options.maxFileBytes };
+    const files = [];
+    for (let i = 0; i < sources.length; i++) {
+        const { rel, kind } = sources[i];
+        const outcome = readSource(join(realRoot, rel), rel, kind, ctx);
+        if ('file' in outcome)
+            files.push(outcome.file);
+        else
+            warnings.add(outcome.warning);
+        // Let signals, timers and progress displays run.
+        if (i % READ_BATCH === READ_BATCH - 1)
+            await new Promise((r) => setImmediate(r));
+    }
+    return {
+        files: files.sort((a, b) => compare(a.path, b.path)),
+        assets: assets.sort(compare),
+        warnings: warnings.sorted(),
+    };
+}
+/** Real path of the content root. @throws EngineError `E_NO_ROOT` */
+export async function realRootOf(root) {
+    let real;
+    try {
+        real = await fs.promises.realpath(root);
+    }
+    catch (error) {
+        throw new EngineError('E_NO_ROOT', `content root "${root}" cannot be opened: ${describeIoError(error)}`);
+    }
+    const stat = await fs.promises.stat(real);
+    if (!stat.isDirectory())
+        throw new EngineError('E_NO_ROOT', `content root "${root}" is not a folder`);
+    return real;
+}
+/** Globs are relative to the root and may not climb out of it. */
+function checkPatterns(key, patterns) {
+    for (const [i, p] of patterns.entries()) {
+        const unslashed = p.startsWith('!') ? p.slice(1) : p;
+        if (isAbsolute(unslashed) || unslashed.split('/').includes('..')) {
+            throw new EngineError('E_CONFIG_INVALID', `key "${key}.${i}": glob "${p}" leaves the content root; globs are relative to the root and may not start with "/" or contain ".."`);
+        }
+    }
+}
+/** An extra exclusion as a glob relative to the root, or null when it lies outside the root. */
+function relativeGlob(roots, p) {
+    if (!isAbsolute(p)) {
+        const rel = normalize(p).split('\\').join('/');
+        return rel === '..' || rel.startsWith('../') ? null : rel.replace(/^\.\//, '');
+    }
+    const abs = normalize(p);
+    const root = roots.find((r) => isInside(r, abs));
+    return root === undefined ? null : toRelative(root, abs);
+}

@@ -1,0 +1,129 @@
+/**
+ * The configuration as a user writes it, documented key by key. One type for every entry
+ * point: the CLI's `linkweave.config.json`, `analyze()`, the unified collector and the
+ * Vite/Rollup plugin. The defaults are applied by `resolveOptions` (src/options.ts, the only
+ * place that holds them); `test/types/config.test-d.ts` checks that this interface is exactly
+ * the schema's input type, so the two cannot drift apart.
+ */
+/** Severity of a rule as written: `warn` and `warning` mean the same. */
+export type SeverityInput = 'off' | 'warn' | 'warning' | 'error';
+/** A shortcode or macro that produces a link. */
+export interface LinkPatternConfig {
+    /** A regular expression (JavaScript syntax, `g` flag implied) matched against the page's raw text outside code. */
+    pattern: string;
+    /** Route template; `$1`..`$9` are the capture groups. Ends in a source extension (`.md`, `.html`...): resolves like a file link. */
+    route: string;
+}
+/** How file paths become routes (URL paths). */
+export interface RoutesConfig {
+    /** `directory`: `a/b.md` -> `/a/b/`; `html`: `a/b.md` -> `/a/b.html`. HTML files keep their own path. @default 'directory' */
+    style?: 'directory' | 'html' | undefined;
+    /** URL prefix of the site; starts with `/`. @default '/' */
+    basePath?: string | undefined;
+    /** File names (without extension) that stand for their folder. @default ['index', 'README', '_index'] */
+    indexNames?: string[] | undefined;
+    /** Match routes without regard to case. @default false */
+    caseInsensitive?: boolean | undefined;
+}
+/** Link suggestions (`linkweave suggest`, `command: 'suggest'`). */
+export interface SuggestConfig {
+    /** Propose links to under-linked pages only, or to every page. @default 'underlinked' */
+    targets?: 'underlinked' | 'all' | undefined;
+    /** Suggestions per target page. @default 5 */
+    perTarget?: number | undefined;
+    /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
+    perSource?: number | undefined;
+    /** Least score (0..1, the link model's probability that an author would write the link) a suggestion needs. @default 0.1 */
+    minScore?: number | undefined;
+    /** Least cosine similarity (0..1) for a TF-IDF neighbour to be a candidate source. @default 0.1 */
+    minSimilarity?: number | undefined;
+    /** TF-IDF neighbours per page: related pages kept, and candidate sources of each target. @default 10 */
+    relatedK?: number | undefined;
+    /** Important pages with fewer content inlinks than this are under-linked. @default 2 */
+    minInlinks?: number | undefined;
+    /** Under-linked when importance percentile minus PageRank percentile exceeds this (0..1). @default 0.5 */
+    rankGap?: number | undefined;
+    /**
+     * Suggestions whose PageRank after is computed: the best this many by score, plus the first
+     * this many of the depth-repair plan; 0 = all. The others report `targetRankAfter: null`
+     * (each prediction is a power iteration over the whole graph). @default 200
+     */
+    impactLimit?: number | undefined;
+}
+/** Gate limits: the gate fails when a count crosses its limit. `null` = no limit. */
+export interface GateConfig {
+    /** Deepest click depth of any reachable page. @default null */
+    maxDepth?: number | null | undefined;
+    /** Orphan pages (no inlinks). @default null */
+    maxOrphans?: number | null | undefined;
+    /** Broken links. @default null */
+    maxBrokenLinks?: number | null | undefined;
+    /** Links to a fragment the target page does not have. @default null */
+    maxBrokenFragments?: number | null | undefined;
+    /** Pages not reachable from the entry pages. @default null */
+    maxUnreachable?: number | null | undefined;
+    /** Findings of severity `warning`. @default null */
+    maxWarnings?: number | null | undefined;
+    /** Fewest content inlinks a page of high importance may have (a lower bound). @default null */
+    minInlinksForImportant?: number | null | undefined;
+}
+/** The page-facts cache. */
+export interface CacheConfig {
+    /** Keep parsed page facts between runs. @default true */
+    enabled?: boolean | undefined;
+    /** Cache folder, relative to the working folder. @default 'node_modules/.cache/linkweave' */
+    dir?: string | undefined;
+}
+/** linkweave's configuration, every key optional. Unknown keys are an error (`E_CONFIG_INVALID`). */
+export interface Config {
+    /** Globs (relative to the content root) of the source files. @default ['**\/*.{md,markdown,mdx,html,htm}'] */
+    include?: string[] | undefined;
+    /** Extra globs to leave out (node_modules, dot-folders and the output file are always left out). @default [] */
+    exclude?: string[] | undefined;
+    /** How file paths become routes. @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false } */
+    routes?: RoutesConfig | undefined;
+    /** Entry pages (routes) for click depth and for `teleport: 'entry'`. @default ['/'] */
+    entry?: string[] | undefined;
+    /** A table-of-contents file (Markdown or YAML list of links), relative to the root, shown on every page. @default null */
+    navigation?: string | null | undefined;
+    /** A redirects file (`from to` per line), relative to the root. @default null */
+    redirects?: string | null | undefined;
+    /** Shortcodes or macros that produce links. @default [] */
+    linkPatterns?: LinkPatternConfig[] | undefined;
+    /** Weight of a template link relative to a content link (0..1). @default 0.2 */
+    templateWeight?: number | undefined;
+    /** A link repeated on at least this share of pages (0..1] is a template link. @default 0.5 */
+    templateShare?: number | undefined;
+    /** Click depth follows template links too. @default true */
+    depthCountsTemplate?: boolean | undefined;
+    /** PageRank teleport vector: every page alike, or the entry pages only. @default 'uniform' */
+    teleport?: 'uniform' | 'entry' | undefined;
+    /** PageRank damping factor, between 0 and 1. @default 0.85 */
+    damping?: number | undefined;
+    /** PageRank stops after this many power iterations (and reports it did not converge). @default 200 */
+    pagerankIterations?: number | undefined;
+    /** PageRank stops when the L1 change of one iteration falls below this. @default 1e-10 */
+    pagerankTolerance?: number | undefined;
+    /** Deepest click depth allowed (the `max-click-depth` rule). @default 3 */
+    maxDepth?: number | undefined;
+    /** Files larger than this many bytes are skipped with a finding. @default 10485760 (10 MiB) */
+    maxFileBytes?: number | undefined;
+    /** Links kept per page; more are dropped with a finding. @default 20000 */
+    maxLinksPerPage?: number | undefined;
+    /** Severity (and options) per rule id: `'off' | 'warning' | 'error'` or `[severity, options]`. @default {} */
+    rules?: Record<string, SeverityInput | [SeverityInput, Record<string, unknown>]> | undefined;
+    /** The gate fails when any finding is at or above this severity. @default 'error' */
+    failOn?: 'error' | 'warning' | undefined;
+    /** Globs (on file paths) or routes of the pages that matter most. @default [] */
+    important?: string[] | undefined;
+    /** A CSV of `route,views` (relative to the root) used as importance. @default null */
+    traffic?: string | null | undefined;
+    /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minScore: 0.1, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
+    suggest?: SuggestConfig | undefined;
+    /** Gate limits. @default every limit null (none) */
+    gate?: GateConfig | undefined;
+    /** The page-facts cache. @default { enabled: true, dir: 'node_modules/.cache/linkweave' } */
+    cache?: CacheConfig | undefined;
+    /** Worker threads for parsing: 0 = automatic (by file count and cores), 1 = main thread only. @default 0 */
+    workers?: number | undefined;
+}

@@ -1,0 +1,132 @@
+import { createEdgeList, pushEdge, buildCsr, EDGE_CONTENT, EDGE_TEMPLATE } from './csr.js';
+import { extensionOf, isSourceExtension, lookupKey, normalizedBasePath, routeKeyOf } from './normalize.js';
+import { selectPages } from './pages.js';
+import { resolveLink } from './resolve.js';
+import { navigationSource, pageSource } from './source.js';
+import { buildRouteIndex, resolveRouteValue } from './routes.js';
+import { markTemplateLinks } from './template.js';
+/** Pages with more ids than this get a Set for fragment checks; smaller ones are scanned. */
+const ID_SET_THRESHOLD = 16;
+/**
+ * Build the link graph: pages sorted by route (drafts left out; one page per route, the first
+ * file by path wins), the route index (routes, aliases, redirects), every link resolved
+ * (sorted by page, line, column; navigation links first with `from: -1`), template links
+ * marked, forward and reverse CSR, and the entry pages.
+ */
+export function buildGraph(input, options) {
+    const routes = options.routes;
+    const basePath = normalizedBasePath(routes);
+    const { pages, duplicates, fileToPage } = selectPages(input.pages, routes);
+    const facts = pages.map((p) => input.pages[p.factsIndex]);
+    const n = pages.length;
+    const { routeIndex, redirectEnds } = buildRouteIndex(pages.map((p) => ({ route: p.route, aliases: p.meta.aliases })), input.redirects, routes, basePath);
+    const fold = routes.caseInsensitive ? (s) => s.toLowerCase() : (s) => s;
+    const fileIndex = new Map();
+    for (const [file, id] of fileToPage)
+        if (!fileIndex.has(fold(file)))
+            fileIndex.set(fold(file), id);
+    const assets = new Set(input.assets.map(fold));
+    const idSets = new Array(n);
+    const ctx = {
+        routes,
+        basePath,
+        routeIndex,
+        redirectEnds,
+        fileIndex,
+        assets,
+        pageRoutes: pages.map((p) => p.route),
+        hasId(page, id) {
+            const ids = facts[page].ids;
+            if (ids.length <= ID_SET_THRESHOLD)
+                return ids.includes(id);
+            let set = idSets[page];
+            if (set === undefined)
+                idSets[page] = set = new Set(ids);
+            return set.has(id);
+        },
+    };
+    const resolved = [];
+    const navTargets = [];
+    if (input.navigation !== null) {
+        const src = navigationSource(input.navigation.file, basePath);
+        const navLinks = input.navigation.links.map((raw) => resolveLink(raw, src, ctx)).map((l) => withContext(l, 'template'));
+        sortByPosition(navLinks);
+        for (const l of navLinks) {
+            resolved.push(l);
+            if (l.to >= 0)
+                navTargets.push(l.to);
+        }
+    }
+    const navCount = resolved.length;
+    for (let id = 0; id < n; id++) {
+        const f = facts[id];
+        const src = pageSource(id, f.kind, f.file, pages[id].route, f.baseHref);
+        const start = resolved.length;
+        for (const raw of f.links)
+            resolved.push(resolveLink(raw, src, ctx));
+        if (resolved.length - start > 1)
+            sortRange(resolved, start);
+    }
+    const links = resolved.slice(0, navCount).concat(markTemplateLinks(resolved.slice(navCount), n, options.templateShare));
+    const uniqueNav = [...new Set(navTargets)].sort((a, b) => a - b);
+    const edges = createEdgeList(links.length + uniqueNav.length * n);
+    for (const l of links) {
+        if (l.from < 0 || l.to < 0 || l.to === l.from)
+            continue;
+        if (l.context === 'template')
+            pushEdge(edges, l.from, l.to, options.templateWeight, EDGE_TEMPLATE);
+        else
+            pushEdge(edges, l.from, l.to, 1, EDGE_CONTENT);
+    }
+    // The navigation file is the sidebar of every page: a template edge from each page to each target.
+    for (const t of uniqueNav)
+        for (let p = 0; p < n; p++)
+            if (p !== t)
+                pushEdge(edges, p, t, options.templateWeight, EDGE_TEMPLATE);
+    const { forward, reverse } = buildCsr(edges, n);
+    const { entries, missingEntries } = resolveEntries(options.entry, basePath, ctx);
+    return { pages, routeIndex, links, forward, reverse, entries, missingEntries, duplicates };
+}
+/** Entry routes (or source file paths) -> page ids; the ones that match no page, as written. */
+function resolveEntries(written, basePath, ctx) {
+    const ids = new Set();
+    const missingEntries = [];
+    for (const entry of written) {
+        let id;
+        if (isSourceExtension(extensionOf(entry))) {
+            const file = entry.replace(/^\/+/, '');
+            id = ctx.fileIndex.get(ctx.routes.caseInsensitive ? file.toLowerCase() : file);
+        }
+        if (id === undefined) {
+            const value = resolveRouteValue(entry, basePath);
+            if (value !== null && value.kind === 'path')
+                id = lookupKey(ctx.routeIndex, routeKeyOf(value.path, ctx.routes), ctx.routes);
+        }
+        if (id === undefined)
+            missingEntries.push(entry);
+        else
+            ids.add(id);
+    }
+    return { entries: [...ids].sort((a, b) => a - b), missingEntries };
+}
+function withContext(link, context) {
+    return link.context === context ? link : { ...link, context };
+}
+function comparePosition(a, b) {
+    return a.raw.line - b.raw.line || a.raw.column - b.raw.column;
+}
+function sortByPosition(links) {
+    links.sort(comparePosition);
+}
+/** Sort `links[start..]` by position in place (stable), skipping the copy when already sorted. */
+function sortRange(links, start) {
+    let sorted = true;
+    for (let i = start + 1; i < links.length && sorted; i++)
+        if (comparePosition(links[i - 1], links[i]) > 0)
+            sorted = false;
+    if (sorted)
+        return;
+    const part = links.slice(start).sort(comparePosition);
+    for (let i = 0; i < part.length; i++)
+        links[start + i] = part[i];
+}

@@ -1,0 +1,144 @@
+/** A `%` to decode, or a character `encodeRouteSegment` encodes. */
+const NEEDS_CODING = /[%\\?#\u0000-\u001f\u007f]/;
+const SOURCE_EXTENSIONS = new Set(['.md', '.markdown', '.mdx', '.html', '.htm']);
+const MARKDOWN_EXTENSIONS = new Set(['.md', '.markdown', '.mdx']);
+/**
+ * Encode one decoded path segment into its canonical form: only `%`, `/`, `\`, `?`, `#`, C0
+ * controls and DEL are percent-encoded. Use it to turn a file or folder name into a route
+ * segment (`100%.md` -> `100%25`).
+ */
+export function encodeRouteSegment(segment) {
+    let out = '';
+    let start = 0;
+    for (let i = 0; i < segment.length; i++) {
+        const c = segment.charCodeAt(i);
+        if (c < 0x20 || c === 0x7f || c === 0x25 || c === 0x2f || c === 0x5c || c === 0x3f || c === 0x23) {
+            out += segment.slice(start, i) + '%' + (c < 16 ? '0' : '') + c.toString(16).toUpperCase();
+            start = i + 1;
+        }
+    }
+    return start === 0 ? segment : out + segment.slice(start);
+}
+/**
+ * Percent-decode one path segment. Returns null when it does not decode (a stray `%`, invalid
+ * UTF-8) or holds a NUL.
+ */
+export function decodeRouteSegment(segment) {
+    if (segment.indexOf('%') < 0)
+        return segment.indexOf('\0') < 0 ? segment : null;
+    let decoded;
+    try {
+        decoded = decodeURIComponent(segment);
+    }
+    catch {
+        return null;
+    }
+    return decoded.indexOf('\0') < 0 ? decoded : null;
+}
+/**
+ * Split a URL path into decoded segments (the leading `/` gives no segment; a trailing `/`
+ * gives a last empty segment). Null when a segment does not decode.
+ */
+export function decodePathSegments(path) {
+    const parts = path.split('/');
+    if (parts[0] === '')
+        parts.shift();
+    for (let i = 0; i < parts.length; i++) {
+        const d = decodeRouteSegment(parts[i]);
+        if (d === null)
+            return null;
+        parts[i] = d;
+    }
+    return parts;
+}
+/**
+ * Canonical form of a URL path (rules 1 and 2 above; no case folding). A path without a
+ * leading `/` gets one. Null when the path does not decode.
+ */
+export function canonicalPath(path) {
+    if (!NEEDS_CODING.test(path)) {
+        // Nothing to decode or encode (the common case): only the leading slash and index files.
+        const p = path.charCodeAt(0) === 0x2f ? path : '/' + path;
+        if (p.endsWith('/index.html'))
+            return p.slice(0, -10);
+        if (p.endsWith('/index.htm'))
+            return p.slice(0, -9);
+        return p;
+    }
+    const segments = decodePathSegments(path);
+    if (segments === null)
+        return null;
+    const last = segments.length - 1;
+    if (last >= 0 && (segments[last] === 'index.html' || segments[last] === 'index.htm'))
+        segments[last] = '';
+    return '/' + segments.map(encodeRouteSegment).join('/');
+}
+/** The lookup key of a canonical path: case-folded when routes are case-insensitive. */
+export function routeKeyOf(canonical, routes) {
+    return routes.caseInsensitive ? canonical.toLowerCase() : canonical;
+}
+/**
+ * The lookup key of any URL path (rules 1 to 3). Null when the path does not decode.
+ * Parse and graph agree on routes when both pass them through this function.
+ */
+export function normalizeRoute(path, routes) {
+    const canonical = canonicalPath(path);
+    return canonical === null ? null : routeKeyOf(canonical, routes);
+}
+/** `routes.basePath` with exactly one trailing slash (`/docs` -> `/docs/`). */
+export function normalizedBasePath(routes) {
+    const base = routes.basePath.startsWith('/') ? routes.basePath : '/' + routes.basePath;
+    return base.endsWith('/') ? base : base + '/';
+}
+/**
+ * A site-absolute path taken against `basePath`: returned as is when it already starts with
+ * the base path (or is the base path without its slash), else prefixed with it.
+ */
+export function withBasePath(path, basePath) {
+    if (basePath === '/' || path.startsWith(basePath) || path === basePath.slice(0, -1))
+        return path;
+    return basePath + path.slice(1);
+}
+/**
+ * Look a URL path up in a route index (keys made by `normalizeRoute`). Tries the exact key,
+ * then the key with a trailing slash added (a static server answers `/a/b` with the folder
+ * `/a/b/`: common practice, no source), then for route style `html` the key with `.html`
+ * added to an extension-less last segment (hosts serve `/a/b` from `a/b.html`: common
+ * practice, no source).
+ * @returns the indexed value, or undefined (also when the path does not decode)
+ */
+export function lookupRoute(index, path, routes) {
+    const key = normalizeRoute(path, routes);
+    return key === null ? undefined : lookupKey(index, key, routes);
+}
+/** `lookupRoute` for a key that is already normalised. */
+export function lookupKey(index, key, routes) {
+    const exact = index.get(key);
+    if (exact !== undefined || key.endsWith('/'))
+        return exact;
+    const folder = index.get(key + '/');
+    if (folder !== undefined)
+        return folder;
+    if (routes.style === 'html' && extensionOf(key) === '')
+        return index.get(key + '.html');
+    return undefined;
+}
+/**
+ * Extension of the last segment of a path, lower-cased, with its dot (`/a/b.PNG` -> `.png`);
+ * '' when the last segment has none (or ends in a dot, or starts with its only dot).
+ */
+export function extensionOf(path) {
+    const slash = path.lastIndexOf('/');
+    const dot = path.lastIndexOf('.');
+    if (dot <= slash + 1 || dot === path.length - 1)
+        return '';
+    return path.slice(dot).toLowerCase();
+}
+/** True for `.md`, `.markdown`, `.mdx`, `.html`, `.htm` (any case). */
+export function isSourceExtension(ext) {
+    return SOURCE_EXTENSIONS.has(ext);
+}
+/** True for `.md`, `.markdown`, `.mdx` (any case). */
+export function isMarkdownExtension(ext) {
+    return MARKDOWN_EXTENSIONS.has(ext);
+}

@@ -1,0 +1,20 @@
+/**
+ * linkweave's Node API.
+ *
+ * ```ts
+ * import { analyze, formatReport } from 'linkweave';
+ * const report = await analyze({ root: 'docs', command: 'suggest' });
+ * console.log(formatReport(report, 'markdown'));
+ * ```
+ */
+export { analyze, finishAnalysis } from './analyze.js';
+export type { AnalyzeHooks, AnalyzeInput, StageName, CollectedInputs } from './analyze.js';
+export { resolveOptions, DEFAULT_OPTIONS } from './options.js';
+export type { Config, ResolvedOptions } from './options.js';
+export { EngineError, isEngineError } from './errors.js';
+export type { ErrorCode } from './errors.js';
+export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId, writeFileAtomic } from './report/index.js';
+export type { FormatContext, FormatId, Formatter, WriteOptions } from './report/index.js';
+export type { CacheConfig, GateConfig, LinkPatternConfig, RoutesConfig, SeverityInput, SuggestConfig } from './config.js';
+export { VERSION } from './version.js';
+export type * from './types.js';

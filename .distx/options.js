@@ -1,0 +1,159 @@
+/**
+ * The one place that holds defaults and validates configuration (STYLE section 2.5).
+ * Every entry point (CLI, Node API, plugins) goes through `resolveOptions`; later code gets
+ * `ResolvedOptions` with nothing optional.
+ */
+import { z } from 'zod';
+import { describeIssue } from './config-issues.js';
+import { EngineError } from './errors.js';
+const severity = z
+    .enum(['off', 'warn', 'warning', 'error'])
+    .transform((s) => (s === 'warn' ? 'warning' : s));
+const ruleSetting = z
+    .union([severity, z.tuple([severity, z.record(z.string(), z.unknown())])])
+    .describe('a severity ("off", "warning" or "error"; "warn" means "warning"), or [severity, { rule options }]');
+const linkPattern = z.strictObject({
+    /** A regular expression (JavaScript syntax, `g` flag implied) matched against the page's raw text. */
+    pattern: z.string().min(1),
+    /** Route template; `$1`..`$9` are the capture groups. Ends in a source extension: resolves like a file link. */
+    route: z.string().min(1),
+});
+const schema = z.strictObject({
+    /** @default ['**\/*.{md,markdown,mdx,html,htm}'] */
+    include: z.array(z.string().min(1)).default(['**/*.{md,markdown,mdx,html,htm}']),
+    /** Extra globs to leave out (node_modules, dot-folders and the output file are always left out). @default [] */
+    exclude: z.array(z.string().min(1)).default([]),
+    routes: z
+        .strictObject({
+        /** `directory`: a/b.md -> /a/b/; `html`: a/b.md -> /a/b.html. @default 'directory' */
+        style: z.enum(['directory', 'html']).default('directory'),
+        /** URL prefix of the site. @default '/' */
+        basePath: z.string().default('/'),
+        /** File names (without extension) that stand for their folder. @default ['index','README','_index'] */
+        indexNames: z.array(z.string().min(1)).default(['index', 'README', '_index']),
+        /** Match routes without regard to case. @default false */
+        caseInsensitive: z.boolean().default(false),
+    })
+        .prefault({}),
+    /** Entry pages for click depth (and for `teleport: 'entry'`). @default ['/'] */
+    entry: z.array(z.string().min(1)).min(1).default(['/']),
+    /** A table-of-contents file (Markdown or YAML list of links) shown on every page. @default null */
+    navigation: z.string().min(1).nullable().default(null),
+    /** A redirects file, `from to` per line. @default null */
+    redirects: z.string().min(1).nullable().default(null),
+    /** Shortcodes or macros that produce links. @default [] */
+    linkPatterns: z.array(linkPattern).default([]),
+    /** Weight of a template link relative to a content link. @default 0.2 */
+    templateWeight: z.number().min(0).max(1).default(0.2),
+    /** A link repeated on at least this share of pages is a template link. @default 0.5 */
+    templateShare: z.number().gt(0).max(1).default(0.5),
+    /** Click depth follows template links too. @default true */
+    depthCountsTemplate: z.boolean().default(true),
+    /** PageRank teleport vector. @default 'uniform' */
+    teleport: z.enum(['uniform', 'entry']).default('uniform'),
+    /** PageRank damping factor. @default 0.85 */
+    damping: z.number().gt(0).lt(1).default(0.85),
+    /** PageRank stops after this many power iterations (and reports it did not converge). @default 200 */
+    pagerankIterations: z.number().int().min(1).default(200),
+    /** PageRank stops when the L1 change of one iteration falls below this. @default 1e-10 */
+    pagerankTolerance: z.number().gt(0).default(1e-10),
+    /** Deepest click depth allowed. @default 3 */
+    maxDepth: z.number().int().min(0).default(3),
+    /** Files larger than this are skipped with a finding. @default 10485760 (10 MiB) */
+    maxFileBytes: z.number().int().positive().default(10 * 1024 * 1024),
+    /** Links kept per page; more are dropped with a finding. @default 20000 */
+    maxLinksPerPage: z.number().int().positive().default(20000),
+    /** Severity (and options) per rule id: 'off' | 'warning' | 'error' | [severity, options]. @default {} */
+    rules: z.record(z.string(), ruleSetting).default({}),
+    /** The gate fails when any finding is at or above this severity. @default 'error' */
+    failOn: z.enum(['error', 'warning']).default('error'),
+    /** Globs (on file paths) or routes of pages that matter most. @default [] */
+    important: z.array(z.string().min(1)).default([]),
+    /** A CSV of `route,views` used as importance. @default null */
+    traffic: z.string().min(1).nullable().default(null),
+    suggest: z
+        .strictObject({
+        /** Propose links to under-linked pages only, or to every page. @default 'underlinked' */
+        targets: z.enum(['underlinked', 'all']).default('underlinked'),
+        /** Suggestions per target page. @default 5 */
+        perTarget: z.number().int().positive().default(5),
+        /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
+        perSource: z.number().int().min(0).default(3),
+        /**
+         * Least score (the link model's probability that an author would write the link) a
+         * suggestion needs; 0 = every candidate. @default 0.1
+         */
+        minScore: z.number().min(0).max(1).default(0.1),
+        /** Least cosine similarity for a TF-IDF neighbour to be a candidate source. @default 0.1 */
+        minSimilarity: z.number().min(0).max(1).default(0.1),
+        /** TF-IDF neighbours per page: related pages kept, and candidate sources of each target. @default 10 */
+        relatedK: z.number().int().positive().default(10),
+        /** Important pages with fewer content inlinks than this are under-linked. @default 2 */
+        minInlinks: z.number().int().min(0).default(2),
+        /** Under-linked when importance percentile - PageRank percentile exceeds this. @default 0.5 */
+        rankGap: z.number().min(0).max(1).default(0.5),
+        /**
+         * Suggestions whose PageRank after is computed: the best this many by score, plus the first
+         * this many of the depth-repair plan (the links that fix the most pages); 0 = all. The
+         * others report `targetRankAfter: null` ("not computed"); depth after is always computed.
+         * Why a budget: PageRank after one added link is the fixed point of the whole changed graph
+         * (the link changes the share of every out-link of its source, and the change flows around
+         * every cycle through it), so each exact prediction is a power iteration over every edge.
+         * No exact shortcut stays local: even the rank-one update formula needs entries of the
+         * inverse of the whole graph's matrix, one whole-graph solve per page involved.
+         * @default 200
+         */
+        impactLimit: z.number().int().min(0).default(200),
+    })
+        .prefault({}),
+    /** Gate limits: the gate fails when a count exceeds its limit. null = no limit. */
+    gate: z
+        .strictObject({
+        maxDepth: z.number().int().min(0).nullable().default(null),
+        maxOrphans: z.number().int().min(0).nullable().default(null),
+        maxBrokenLinks: z.number().int().min(0).nullable().default(null),
+        maxBrokenFragments: z.number().int().min(0).nullable().default(null),
+        maxUnreachable: z.number().int().min(0).nullable().default(null),
+        maxWarnings: z.number().int().min(0).nullable().default(null),
+        minInlinksForImportant: z.number().int().min(0).nullable().default(null),
+    })
+        .prefault({}),
+    cache: z
+        .strictObject({
+        /** @default true */
+        enabled: z.boolean().default(true),
+        /** Relative to the working folder. @default 'node_modules/.cache/linkweave' */
+        dir: z.string().min(1).default('node_modules/.cache/linkweave'),
+    })
+        .prefault({}),
+    /** Worker threads for parsing: 0 = automatic (by file count and cores), 1 = main thread only. @default 0 */
+    workers: z.number().int().min(0).default(0),
+});
+/** The defaults, as a resolved object (root: the working folder). */
+export const DEFAULT_OPTIONS = schema.parse({});
+/**
+ * Validate a user configuration and fill in defaults.
+ * @param input configuration as written (from a file, the API or flags merged over a file)
+ * @param root absolute path of the content root
+ * @param origin where the configuration came from, named in error messages
+ * @throws EngineError `E_CONFIG_INVALID` naming the key, the problem and the accepted values
+ */
+export function resolveOptions(input, root, origin = 'configuration') {
+    const result = schema.safeParse(input ?? {}, { reportInput: true });
+    if (!result.success) {
+        throw new EngineError('E_CONFIG_INVALID', `${origin}: ${describeIssue(schema, result.error.issues[0])}`);
+    }
+    const options = { ...result.data, root };
+    for (const [i, p] of options.linkPatterns.entries()) {
+        try {
+            new RegExp(p.pattern, 'g');
+        }
+        catch (error) {
+            throw new EngineError('E_CONFIG_INVALID', `${origin}: key "linkPatterns.${i}.pattern": not a valid regular expression (${error.message})`);
+        }
+    }
+    if (!options.routes.basePath.startsWith('/')) {
+        throw new EngineError('E_CONFIG_INVALID', `${origin}: key "routes.basePath": must start with "/", got "${options.routes.basePath}"`);
+    }
+    return options;
+}

@@ -1,0 +1,39 @@
+/** How many worker threads to parse with, and how to cut the files into batches. Pure. */
+import type { SourceFile } from '../types.js';
+/**
+ * Least number of files to parse (after cache hits) before `workers: 0` (automatic) starts a
+ * pool. Starting threads and loading the parser in each costs about 0.2-0.3 s, and copying
+ * facts back to the main thread costs a share of what the workers save, so small runs stay on
+ * the main thread.
+ */
+export declare const AUTO_MIN_FILES = 2000;
+/**
+ * Least cores for `workers: 0` to start a pool. Measured on a 2-core machine (4,000 pages of
+ * 5 KB, shared with other work): two workers used 28% more CPU time than the main thread alone
+ * (each thread loads and warms up its own parser; facts are copied back) and finished no
+ * sooner (0.8-0.9x); the issue's own note saw about 1.1x at best, since V8's helper threads
+ * already keep a second core busy. So on two cores the automatic choice is the main thread.
+ */
+export declare const AUTO_MIN_CORES = 3;
+/** Most threads `workers: 0` starts. */
+export declare const AUTO_MAX_THREADS = 8;
+/**
+ * Worker threads to use; 1 means parse on the main thread.
+ * @param setting `options.workers`: 0 automatic, 1 main thread only, N exactly N workers
+ * @param files number of files to parse
+ * @param cores `os.availableParallelism()` of this machine
+ * @returns for `setting` 0: 1 below `AUTO_MIN_FILES` files or `AUTO_MIN_CORES` cores, else one
+ *   worker per core but one (the main thread receives the results), at most `AUTO_MAX_THREADS`
+ */
+export declare function chooseThreads(setting: number, files: number, cores: number): number;
+/** A run of consecutive files `[start, end)` sent to a worker in one message. */
+export interface Batch {
+    readonly start: number;
+    readonly end: number;
+}
+/**
+ * Cut `files` into consecutive batches of about equal text size: at least `BATCHES_PER_THREAD`
+ * per thread (for balance), at most 1 MiB of text or 256 files each (so results come back in
+ * steady steps), at least 32 KiB (so a message carries real work).
+ */
+export declare function makeBatches(files: readonly SourceFile[], threads: number): Batch[];

@@ -1,0 +1,273 @@
+import { lineOf, lineStart } from './lines.js';
+import { closesTag, inlineOpenTag, readRawHtml } from './markdown-html.js';
+import { parseMarkdownTree } from './processors.js';
+import { findLiteralLinks, mayHoldLiteralLink } from './literal-links.js';
+import { addMarkdownTextSpans, collapseSpace, cutSpans, looksLikeUrl } from './spans.js';
+const IN_LINK = 1;
+const NO_SPAN = 2;
+const NO_BODY = 4;
+const TEMPLATE = 8;
+const PHRASING_PARENTS = new Set(['paragraph', 'heading', 'emphasis', 'strong', 'delete', 'link', 'linkReference', 'tableCell']);
+const BLOCK_TEMPLATE_OPEN = /^<(nav|header|footer|aside)(?=[\s>])/i;
+const CUSTOM_ID = /\s*\{#([A-Za-z0-9_][\w\-:.]*)\}$/;
+/**
+ * Parse Markdown and add its links, headings, ids, body text, spans and code ranges to `draft`.
+ * @param src the source text (spans are checked against it)
+ * @param parsed the text to parse (`src`, or `src` with some lines emptied) and its offset map
+ * @param lines line table of `src`
+ * @param draft the page being collected
+ * @param slugger the page's slugger
+ * @returns the frontmatter block, if any
+ */
+export function readMarkdown(src, parsed, lines, draft, slugger) {
+    const tree = parseMarkdownTree(parsed.text);
+    const w = { src, map: parsed.toSource, lines, draft, slugger, definitions: new Map(), references: [] };
+    let frontmatter = null;
+    const first = tree.children[0];
+    if (first !== undefined && first.type === 'yaml') {
+        const start = startOf(w, first);
+        frontmatter = { value: first.value, contentStart: lineStart(lines, lineOf(lines, start) + 1) };
+        draft.code.push(start, endOf(w, first));
+    }
+    walkChildren(w, tree, 0);
+    for (const { link, id } of w.references) {
+        const url = w.definitions.get(id);
+        if (url === undefined)
+            continue;
+        link.href = url;
+        draft.links.push(link);
+    }
+    return frontmatter;
+}
+function walkChildren(w, parent, flags) {
+    const children = parent.children;
+    const phrasing = PHRASING_PARENTS.has(parent.type);
+    for (let i = 0; i < children.length; i++) {
+        const child = children[i];
+        if (child.type === 'html')
+            i = html(w, children, i, flags, phrasing);
+        else
+            visit(w, child, flags);
+    }
+}
+function visit(w, node, flags) {
+    const draft = w.draft;
+    switch (node.type) {
+        case 'text': {
+            const literal = (flags & IN_LINK) === 0 && mayHoldLiteralLink(node.value) ? findLiteralLinks(node.value) : [];
+            if (literal.length > 0) {
+                textWithLiteralLinks(w, node, flags, literal);
+                return;
+            }
+            if ((flags & NO_BODY) === 0)
+                draft.body.push(node.value);
+            if ((flags & NO_SPAN) === 0)
+                addMarkdownTextSpans(draft, w.src, w.lines, node.value, startOf(w, node), endOf(w, node));
+            return;
+        }
+        case 'heading':
+            heading(w, node, flags);
+            return;
+        case 'paragraph':
+        case 'tableCell':
+            walkChildren(w, node, flags);
+            if ((flags & NO_BODY) === 0)
+                draft.body.push('\n');
+            return;
+        case 'link':
+        case 'linkReference': {
+            const text = collapseSpace(plainText(node, true));
+            const link = {
+                offset: startOf(w, node),
+                href: node.type === 'link' ? node.url : '',
+                text,
+                context: (flags & TEMPLATE) !== 0 ? 'template' : 'content',
+                nofollow: false,
+                origin: 'markdown',
+            };
+            if (node.type === 'link')
+                draft.links.push(link);
+            else
+                w.references.push({ link, id: node.identifier });
+            let f = flags | IN_LINK | NO_SPAN;
+            if (node.type === 'link' && looksLikeUrl(text, node.url))
+                f |= NO_BODY;
+            walkChildren(w, node, f);
+            return;
+        }
+        case 'definition':
+            if (!w.definitions.has(node.identifier))
+                w.definitions.set(node.identifier, node.url);
+            return;
+        case 'code':
+        case 'inlineCode':
+            draft.code.push(startOf(w, node), endOf(w, node));
+            return;
+        case 'html':
+            readRawHtml(node, startOf(w, node), endOf(w, node), w.src, w.lines, draft, (flags & TEMPLATE) !== 0);
+            return;
+        case 'table':
+            node.children.forEach((row, i) => walkChildren(w, row, i === 0 ? flags | NO_SPAN : flags));
+            return;
+        case 'delete':
+            walkChildren(w, node, flags | NO_SPAN);
+            return;
+        case 'break':
+            if ((flags & NO_BODY) === 0)
+                draft.body.push('\n');
+            return;
+        case 'image':
+        case 'imageReference':
+        case 'footnoteReference':
+        case 'yaml':
+        case 'thematicBreak':
+            return;
+        default:
+            if ('children' in node)
+                walkChildren(w, node, flags);
+    }
+}
+/**
+ * A text node holding literal autolinks: each is a link (its text, an address, is no prose), and
+ * the text around them is body text and spans as usual.
+ */
+function textWithLiteralLinks(w, node, flags, literal) {
+    const { draft, src } = w;
+    const start = startOf(w, node);
+    const end = endOf(w, node);
+    const exact = end - start === node.value.length && src.startsWith(node.value, start);
+    const cuts = [];
+    let searchFrom = start;
+    let at = 0;
+    for (const l of literal) {
+        // Where the value is not the source slice (inside containers), find the address in the source.
+        let offset = exact ? start + l.index : src.indexOf(l.text, searchFrom);
+        if (offset === -1 || offset + l.text.length > end)
+            offset = -1;
+        draft.links.push({
+            offset: offset === -1 ? start : offset,
+            href: l.href,
+            text: l.text,
+            context: (flags & TEMPLATE) !== 0 ? 'template' : 'content',
+            nofollow: false,
+            origin: 'markdown',
+        });
+        if (offset !== -1) {
+            cuts.push(offset, offset + l.text.length);
+            searchFrom = offset + l.text.length;
+        }
+        if ((flags & NO_BODY) === 0)
+            draft.body.push(node.value.slice(at, l.index));
+        at = l.index + l.text.length;
+    }
+    if ((flags & NO_BODY) === 0)
+        draft.body.push(node.value.slice(at));
+    if ((flags & NO_SPAN) !== 0)
+        return;
+    const first = draft.spans.length;
+    addMarkdownTextSpans(draft, src, w.lines, node.value, start, end);
+    cutSpans(draft, first, cuts);
+}
+function heading(w, node, flags) {
+    const raw = plainText(node, false).trim();
+    const custom = CUSTOM_ID.exec(raw);
+    const slugText = custom === null ? raw : raw.slice(0, custom.index);
+    const text = collapseSpace(slugText);
+    const slug = custom === null ? w.slugger.slug(slugText) : custom[1];
+    w.draft.headings.push({ depth: node.depth, text, slug, offset: startOf(w, node) });
+    if (node.depth === 1 && w.draft.firstH1 === undefined && text !== '')
+        w.draft.firstH1 = text;
+    walkChildren(w, node, flags | NO_SPAN | NO_BODY);
+}
+/**
+ * An html node among its siblings. Inline opening tags (`<a href>`, `<code>`, `<nav>`) change
+ * how the siblings up to the closing tag are read; block `<nav>`-like openers without their
+ * closing tag make the following blocks a template region up to it.
+ * @returns the index of the last sibling consumed
+ */
+function html(w, children, i, flags, phrasing) {
+    const node = children[i];
+    const added = readRawHtml(node, startOf(w, node), endOf(w, node), w.src, w.lines, w.draft, (flags & TEMPLATE) !== 0);
+    const open = phrasing ? inlineOpenTag(node.value) : blockTemplateOpen(node.value);
+    if (open === null)
+        return i;
+    let j = i + 1;
+    while (j < children.length && !isClosing(children[j], open.tag, phrasing))
+        j++;
+    let f = flags;
+    if (open.link)
+        f |= IN_LINK | NO_SPAN;
+    if (open.code)
+        f |= NO_SPAN | NO_BODY;
+    if (open.template)
+        f |= TEMPLATE | NO_SPAN | NO_BODY;
+    if (/^h[1-6]$/.test(open.tag))
+        f |= NO_SPAN;
+    if (open.code && j > i + 1)
+        w.draft.code.push(endOf(w, node), endOf(w, children[j - 1]));
+    if (open.link && added > 0) {
+        let text = '';
+        for (let k = i + 1; k < j; k++)
+            text += plainText(children[k], true);
+        const link = w.draft.links[w.draft.links.length - 1];
+        if (link.text === '')
+            link.text = collapseSpace(text);
+        if (looksLikeUrl(link.text, link.href))
+            f |= NO_BODY;
+    }
+    for (let k = i + 1; k < j; k++) {
+        const child = children[k];
+        if (child.type === 'html')
+            readRawHtml(child, startOf(w, child), endOf(w, child), w.src, w.lines, w.draft, (f & TEMPLATE) !== 0);
+        else
+            visit(w, child, f);
+    }
+    return Math.min(j, children.length - 1);
+}
+function blockTemplateOpen(value) {
+    const m = BLOCK_TEMPLATE_OPEN.exec(value);
+    if (m === null)
+        return null;
+    const tag = m[1].toLowerCase();
+    if (new RegExp(`</${tag}\\s*>`, 'i').test(value))
+        return null;
+    return { tag, link: false, code: false, template: true };
+}
+function isClosing(node, tag, phrasing) {
+    if (node.type !== 'html')
+        return false;
+    return phrasing ? closesTag(node.value, tag) : new RegExp(`</${tag}\\s*>`, 'i').test(node.value);
+}
+/**
+ * Plain text of an mdast node: text and inline code, with image alt text when `alt` is true
+ * (link text) and without it for headings (GitHub slugs ignore images). Raw HTML is left out.
+ */
+function plainText(node, alt) {
+    switch (node.type) {
+        case 'text':
+        case 'inlineCode':
+            return node.value;
+        case 'image':
+        case 'imageReference':
+            return alt ? (node.alt ?? '') : '';
+        case 'break':
+            return ' ';
+        case 'html':
+            return '';
+        default: {
+            if (!('children' in node))
+                return '';
+            let out = '';
+            for (const child of node.children)
+                out += plainText(child, alt);
+            return out;
+        }
+    }
+}
+function startOf(w, node) {
+    return w.map(node.position?.start.offset ?? 0);
+}
+function endOf(w, node) {
+    const end = node.position?.end.offset;
+    return end === undefined ? startOf(w, node) : w.map(end);
+}

@@ -1,0 +1,79 @@
+/**
+ * Routes (URL paths) of source files, DESIGN section 3.
+ *
+ * Routes come out in the canonical form of `src/graph/normalize.ts` (the one normalisation the
+ * parse and graph stages share, kept dependency-free there for this use): segments decoded, with
+ * only `%`, `/`, `\`, `?`, `#` and control characters percent-encoded, so `/caf%C3%A9/` and
+ * `/café/` are one route, shown `/café/`, and a file `a b.md` has the route `/a b/`. Case is
+ * kept; with `routes.caseInsensitive` the graph folds case in its lookup keys (`normalizeRoute`,
+ * re-exported here, gives that key).
+ */
+import { canonicalPath, encodeRouteSegment, normalizedBasePath } from '../graph/normalize.js';
+import { removeDotSegments } from '../graph/paths.js';
+export { normalizeRoute } from '../graph/normalize.js';
+const MARKDOWN_EXT = /\.(?:md|markdown|mdx)$/i;
+const HTML_EXT = /\.html?$/i;
+/**
+ * The route of a source file (its URL path), in canonical form.
+ *
+ * `a/b.md` -> `/a/b/` (style `directory`) or `/a/b.html` (style `html`); index names
+ * (`routes.indexNames`, compared without regard to case) stand for their folder; `.html`/`.htm`
+ * files keep their own path and `index.html` stands for its folder; frontmatter `permalink`
+ * (site-absolute) wins over `slug` (site-absolute when it starts with `/`, else relative to
+ * `basePath`); a slug or permalink without a trailing slash or `.html` ending gets the route
+ * style's ending; everything else is prefixed with `basePath`.
+ * @param path file path relative to the content root, `/`-separated
+ * @param meta the page's frontmatter (only `slug` and `permalink` are read)
+ * @param routes route options
+ */
+export function routeOfFile(path, meta, routes) {
+    const base = canonicalUrlPath(normalizedBasePath(routes));
+    if (meta.permalink !== undefined) {
+        const p = meta.permalink.trim();
+        return canonicalUrlPath(completeRoute(p.startsWith('/') ? p : `/${p}`, routes.style));
+    }
+    if (meta.slug !== undefined) {
+        const slug = meta.slug.trim();
+        return canonicalUrlPath(completeRoute(slug.startsWith('/') ? slug : base + slug, routes.style));
+    }
+    return base + fileRoutePath(path, routes);
+}
+/** The route of a file below `basePath`, without a leading slash (`a/b/`, `a/b.html`, ``), encoded. */
+function fileRoutePath(path, routes) {
+    const segments = path.replace(/^(?:\.?\/)+/, '').split('/');
+    const name = segments.pop();
+    const folder = segments.map((s) => `${encodeRouteSegment(s)}/`).join('');
+    if (HTML_EXT.test(name)) {
+        return name.replace(HTML_EXT, '').toLowerCase() === 'index' ? folder : folder + encodeRouteSegment(name);
+    }
+    const stem = name.replace(MARKDOWN_EXT, '');
+    const lower = stem.toLowerCase();
+    if (routes.indexNames.some((n) => n.toLowerCase() === lower))
+        return folder;
+    return folder + encodeRouteSegment(stem) + (routes.style === 'html' ? '.html' : '/');
+}
+/** A slug or permalink without an `.html`/`.htm` ending or a trailing slash gets the style's ending. */
+function completeRoute(route, style) {
+    if (route.endsWith('/') || HTML_EXT.test(route))
+        return route;
+    return style === 'html' ? `${route}.html` : `${route}/`;
+}
+/**
+ * Canonical form of a URL path as written (frontmatter, options); a path that does not decode
+ * (a stray `%`) is taken literally, its segments encoded. Dot segments (`.`, `..`, also written
+ * `%2e`) are removed as a browser removes them (RFC 3986 section 5.2.4), so a slug such as
+ * `../../x` gives `/x/`, never a route with `..` in it.
+ */
+function canonicalUrlPath(path) {
+    return removeDotSegments(canonicalPath(path) ?? canonicalPath(path.split('/').map(encodeRouteSegment).join('/')) ?? path);
+}
+/**
+ * True when a path names a source file by its extension (`.md`, `.markdown`, `.mdx`, `.html`,
+ * `.htm`), ignoring any query or fragment.
+ * @param href a link destination or route
+ */
+export function hasSourceExtension(href) {
+    const cut = href.search(/[?#]/);
+    const path = cut >= 0 ? href.slice(0, cut) : href;
+    return MARKDOWN_EXT.test(path) || HTML_EXT.test(path);
+}

@@ -1,0 +1,120 @@
+import { describeError } from './failure.js';
+import { EMPTY_META } from './frontmatter.js';
+import { readHtmlPage } from './html.js';
+import { buildLineIndex, positionOf } from './lines.js';
+import { readMarkdownPage } from './markdown-page.js';
+import { addPatternLinks } from './patterns.js';
+import { routeOfFile } from './routes.js';
+import { newDraft } from './types.js';
+/**
+ * Parse one source file: route, title, frontmatter, headings and ids, links with positions,
+ * text for the term index, and spans where links may be inserted.
+ * @param file the file as `collect` read it (text decoded, BOM removed; a leading BOM that is
+ *   still there is skipped, and offsets still index `file.text`)
+ * @param options resolved options (`routes`, `linkPatterns`, `maxLinksPerPage` are read)
+ */
+export function parseSource(file, options) {
+    const bom = file.text.charCodeAt(0) === 0xfeff ? 1 : 0;
+    const src = bom === 1 ? file.text.slice(1) : file.text;
+    let lines = null;
+    try {
+        lines = buildLineIndex(src);
+        const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines, /\.mdx$/i.test(file.path));
+        addPatternLinks(src, options.linkPatterns, read.draft);
+        return assemble(file, options, bom, lines, read);
+    }
+    catch (error) {
+        return failedFacts(file, options, bom, lines, error);
+    }
+}
+/** The page with no links or text, and the failure as a problem. */
+function failedFacts(file, options, bom, lines, error) {
+    const message = `Unexpected failure while parsing (${describeError(error)}); the page is kept without links or text`;
+    const draft = newDraft();
+    draft.problems.push({ code: 'parse-failed', message });
+    try {
+        return assemble(file, options, bom, lines ?? buildLineIndex(''), { draft, meta: EMPTY_META });
+    }
+    catch {
+        let route;
+        try {
+            route = routeOfFile(file.path, EMPTY_META, options.routes);
+        }
+        catch {
+            route = `/${file.path}`;
+        }
+        const title = file.path;
+        return {
+            file: file.path, kind: file.kind, hash: file.hash, route, title, meta: EMPTY_META, headings: [], ids: [], links: [],
+            text: { title, headings: '', body: '' }, spans: [], problems: [...file.problems, { code: 'parse-failed', message }],
+        };
+    }
+}
+function assemble(file, options, bom, lines, read) {
+    const { draft, meta } = read;
+    const problems = [...file.problems];
+    const links = draft.links.slice().sort((a, b) => a.offset - b.offset);
+    if (links.length > options.maxLinksPerPage) {
+        const first = positionOf(lines, links[options.maxLinksPerPage].offset);
+        draft.problems.push({
+            code: 'too-many-links',
+            message: `Unexpected ${links.length} links on one page, expected at most ${options.maxLinksPerPage} (maxLinksPerPage); links from line ${first.line} on are dropped`,
+            offset: links[options.maxLinksPerPage].offset,
+        });
+        links.length = options.maxLinksPerPage;
+    }
+    const drafted = draft.problems.map((p) => {
+        if (p.offset === undefined)
+            return { code: p.code, message: p.message };
+        const at = positionOf(lines, p.offset);
+        return { code: p.code, message: p.message, line: at.line, column: at.column };
+    });
+    drafted.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+    problems.push(...drafted);
+    const rawLinks = links.map((l) => {
+        const at = positionOf(lines, l.offset);
+        const link = { href: l.href, text: l.text, line: at.line, column: at.column, context: l.context, nofollow: l.nofollow, origin: l.origin };
+        return l.fileRelative === undefined ? link : { ...link, fileRelative: l.fileRelative };
+    });
+    const headings = draft.headings
+        .slice()
+        .sort((a, b) => a.offset - b.offset)
+        .map((h) => ({ depth: h.depth, text: h.text, slug: h.slug, ...positionOf(lines, h.offset) }));
+    const ids = new Set(draft.ids);
+    for (const h of headings)
+        if (h.slug !== '')
+            ids.add(h.slug);
+    const spans = draft.spans
+        .slice()
+        .sort((a, b) => a.offset - b.offset)
+        .map((s) => ({ text: s.text, offset: s.offset + bom, ...positionOf(lines, s.offset) }));
+    const title = pickTitle(read.title, draft, file.path, options);
+    const facts = {
+        file: file.path,
+        kind: file.kind,
+        hash: file.hash,
+        route: routeOfFile(file.path, meta, options.routes),
+        title,
+        meta,
+        headings,
+        ids: [...ids].sort(),
+        links: rawLinks,
+        text: { title, headings: headings.map((h) => h.text).join('\n'), body: draft.body.join('') },
+        spans,
+        problems,
+    };
+    return draft.baseHref === undefined ? facts : { ...facts, baseHref: draft.baseHref };
+}
+function pickTitle(fromFrontmatter, draft, path, options) {
+    const t = fromFrontmatter?.trim();
+    if (t !== undefined && t !== '')
+        return t;
+    if (draft.firstH1 !== undefined)
+        return draft.firstH1;
+    if (draft.htmlTitle !== undefined && draft.htmlTitle !== '')
+        return draft.htmlTitle;
+    const parts = path.split('/');
+    const stem = parts[parts.length - 1].replace(/\.[^.]+$/, '');
+    const isIndex = stem.toLowerCase() === 'index' || options.routes.indexNames.some((n) => n.toLowerCase() === stem.toLowerCase());
+    return isIndex && parts.length > 1 ? parts[parts.length - 2] : stem;
+}

@@ -1,0 +1,136 @@
+import { lineContentEnd, lineOf, lineStart } from './lines.js';
+const LINE_BREAK = /\r\n|\r|\n/;
+const WORDY = /[\p{L}\p{N}]/u;
+/**
+ * Add the lines of a piece of source text as spans (trimmed; lines without a letter or digit
+ * are left out).
+ * @param draft the page being collected
+ * @param text a run of source text, equal to the source at `start`
+ * @param start its offset in the source
+ */
+export function addSourceSpans(draft, text, start) {
+    let lineBegin = 0;
+    const n = text.length;
+    for (let i = 0; i <= n; i++) {
+        const c = i < n ? text.charCodeAt(i) : 10;
+        if (c !== 10 && c !== 13)
+            continue;
+        pushTrimmed(draft, text, lineBegin, i, start);
+        if (c === 13 && i + 1 < n && text.charCodeAt(i + 1) === 10)
+            i++;
+        lineBegin = i + 1;
+    }
+}
+function pushTrimmed(draft, text, from, to, base) {
+    while (from < to && isSpace(text.charCodeAt(from)))
+        from++;
+    while (to > from && isSpace(text.charCodeAt(to - 1)))
+        to--;
+    if (to <= from)
+        return;
+    const piece = text.slice(from, to);
+    if (WORDY.test(piece))
+        draft.spans.push({ text: piece, offset: base + from });
+}
+function isSpace(c) {
+    return c === 32 || c === 9 || c === 10 || c === 13 || c === 12 || c === 0xa0;
+}
+/**
+ * Spans of a Markdown text node. The node's value equals its source slice in plain paragraphs;
+ * inside block quotes and lists the container prefixes (`> `, indentation) of continuation
+ * lines are missing from the value, so each line of the value is matched against the end of its
+ * own source line instead, and lines that do not match exactly (escapes, references) are skipped.
+ * @param draft the page being collected
+ * @param src the source text
+ * @param lines its line table
+ * @param value the text node's value
+ * @param start the node's start offset
+ * @param end the node's end offset
+ */
+export function addMarkdownTextSpans(draft, src, lines, value, start, end) {
+    if (end - start === value.length && src.startsWith(value, start)) {
+        addSourceSpans(draft, value, start);
+        return;
+    }
+    const parts = value.split(LINE_BREAK);
+    const first = parts[0];
+    if (src.startsWith(first, start))
+        addSourceSpans(draft, first, start);
+    if (parts.length === 1)
+        return;
+    const firstLine = lineOf(lines, start);
+    for (let k = 1; k < parts.length; k++) {
+        const part = parts[k];
+        if (part === '')
+            continue;
+        let at;
+        if (k === parts.length - 1) {
+            at = end - part.length;
+        }
+        else {
+            const line = firstLine + k;
+            let lineEnd = lineContentEnd(lines, src, line);
+            at = lineEnd - part.length;
+            if (!src.startsWith(part, at)) {
+                const begin = lineStart(lines, line);
+                while (lineEnd > begin && isSpace(src.charCodeAt(lineEnd - 1)))
+                    lineEnd--;
+                at = lineEnd - part.length;
+            }
+        }
+        if (at >= 0 && src.startsWith(part, at))
+            addSourceSpans(draft, part, at);
+    }
+}
+/**
+ * Take source ranges out of the spans added since `first` (a span overlapping a range keeps the
+ * trimmed pieces around it that still hold a letter or digit).
+ * @param draft the page being collected
+ * @param first index of the first span to look at
+ * @param cuts ranges `[start, end)` as pairs, in offset order
+ */
+export function cutSpans(draft, first, cuts) {
+    if (cuts.length === 0)
+        return;
+    const added = draft.spans.splice(first);
+    for (const span of added) {
+        const spanEnd = span.offset + span.text.length;
+        let from = span.offset;
+        for (let c = 0; c < cuts.length; c += 2) {
+            const cutStart = cuts[c];
+            const cutEnd = cuts[c + 1];
+            if (cutEnd <= from || cutStart >= spanEnd)
+                continue;
+            if (cutStart > from)
+                pushTrimmed(draft, span.text, from - span.offset, cutStart - span.offset, span.offset);
+            from = Math.max(from, cutEnd);
+        }
+        if (from < spanEnd)
+            pushTrimmed(draft, span.text, from - span.offset, spanEnd - span.offset, span.offset);
+    }
+}
+/**
+ * Spans of an HTML text node: parse5 turns `\r\n` and `\r` into `\n` in text values, so the
+ * source slice is compared with its line endings normalised, and the spans come from the source.
+ * @param draft the page being collected
+ * @param src the source text
+ * @param value the text node's value
+ * @param start the node's start offset
+ * @param end the node's end offset
+ */
+export function addHtmlTextSpans(draft, src, value, start, end) {
+    const slice = src.slice(start, end);
+    if (slice === value || slice.replace(/\r\n?/g, '\n') === value)
+        addSourceSpans(draft, slice, start);
+}
+/** Collapse white space runs to one space and trim. */
+export function collapseSpace(text) {
+    return text.replace(/\s+/g, ' ').trim();
+}
+/** True when a link's visible text is its own address (an autolink): such text is no prose. */
+export function looksLikeUrl(text, href) {
+    const t = text.trim();
+    if (t === '')
+        return false;
+    return t === href || href === `mailto:${t}` || href === `http://${t}` || /^(?:https?:\/\/|www\.|mailto:)/i.test(t);
+}

@@ -1,0 +1,4 @@
+/** A fresh, empty draft. */
+export function newDraft() {
+    return { links: [], headings: [], ids: [], spans: [], body: [], code: [], problems: [] };
+}

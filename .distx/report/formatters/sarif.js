@@ -1,0 +1,176 @@
+/**
+ * The SARIF writer: SARIF 2.1.0 (OASIS), one run. Every rule is a rule descriptor (from the
+ * rule metadata) plus `link-suggestion` for the suggested links; findings are results at their
+ * file, line and column relative to `SRCROOT` (the content root); suggestions are results of
+ * level `note` whose `fixes` entry replaces the anchor phrase with the link markup. With a
+ * baseline or a base report, each finding has a `baselineState` (`new` or `unchanged`).
+ */
+import { pathToFileURL } from 'node:url';
+import { rules } from '../../rules/registry.js';
+import { jsonTextPieces } from './json.js';
+import { formatSimilarity, impactOf } from './common.js';
+/** Rule id of suggestion results. */
+export const SUGGESTION_RULE = 'link-suggestion';
+const SCHEMA = 'https://json.schemastore.org/sarif-2.1.0.json';
+function descriptors() {
+    return [
+        ...rules.map((r) => ({
+            id: r.id,
+            shortDescription: { text: r.description },
+            defaultConfiguration: { level: r.defaultSeverity },
+        })),
+        {
+            id: SUGGESTION_RULE,
+            shortDescription: { text: 'A new link from a related page would help readers reach this page.' },
+            defaultConfiguration: { level: 'note' },
+        },
+    ];
+}
+/** A relative posix path as a URI reference (each segment percent-encoded). */
+function uriOf(file) {
+    return file.split('/').map(encodeURIComponent).join('/');
+}
+function artifact(file) {
+    return { uri: uriOf(file), uriBaseId: 'SRCROOT' };
+}
+/** `ruleIndex` is absent for a rule the descriptors do not know (a plugin's own). */
+function findingResult(f, ruleIndex, baselineState) {
+    return {
+        ruleId: f.rule,
+        ...(ruleIndex === undefined ? {} : { ruleIndex }),
+        level: f.severity,
+        ...(baselineState === undefined ? {} : { baselineState }),
+        message: { text: f.message },
+        ...(f.file === ''
+            ? {}
+            : { locations: [{ physicalLocation: { artifactLocation: artifact(f.file), region: { startLine: f.line, startColumn: f.column } } }] }),
+        partialFingerprints: { 'linkweaveFinding/v1': `${f.rule}|${f.route}|${f.target ?? ''}` },
+        ...(f.route === '' ? {} : { properties: { route: f.route } }),
+    };
+}
+/** Lines and the column after the last character of `text` starting at line:column. */
+function endOf(line, column, text) {
+    const parts = text.split(/\r\n|\r|\n/);
+    if (parts.length === 1)
+        return { endLine: line, endColumn: column + text.length };
+    return { endLine: line + parts.length - 1, endColumn: parts[parts.length - 1].length + 1 };
+}
+/** Relative path from the folder of `from` to `to` (both relative to the root). */
+function relativePath(from, to) {
+    const a = from.split('/').slice(0, -1);
+    const b = to.split('/');
+    let i = 0;
+    while (i < a.length && i < b.length - 1 && a[i] === b[i])
+        i++;
+    return [...a.slice(i).map(() => '..'), ...b.slice(i)].join('/');
+}
+/**
+ * The link the fix inserts around the anchor: in Markdown a link to the target's source file
+ * relative to the source (how authors link Markdown files), else to the target route; in HTML
+ * an `<a href>` to the route.
+ */
+export function linkMarkup(s, targetFile) {
+    if (/\.html?$/i.test(s.file))
+        return `<a href="${s.target}">${s.anchor}</a>`;
+    const href = targetFile !== undefined && /\.(md|markdown|mdx)$/i.test(targetFile) ? relativePath(s.file, targetFile) : s.target;
+    return `[${s.anchor}](${encodeURI(href)})`;
+}
+/** Source file by route (looked up per suggestion; a search of the pages each time was quadratic). */
+function filesByRoute(report) {
+    return new Map(report.pages.map((p) => [p.route, p.file]));
+}
+function suggestionResult(files, s, ruleIndex) {
+    const region = { startLine: s.line, startColumn: s.column };
+    const impact = `similarity ${formatSimilarity(s.similarity)}, ${impactOf(s, 'target rank')}`;
+    const what = s.anchor === null
+        ? `Add a link to ${s.target} near here (no anchor phrase found; ${impact}).`
+        : `Add a link to ${s.target} on "${s.anchor}" (${impact}).`;
+    const text = s.reason === '' ? what : `${what} Why: ${s.reason}.`;
+    const fixes = s.anchor === null
+        ? []
+        : [
+            {
+                description: { text: `Link "${s.anchor}" to ${s.target}` },
+                artifactChanges: [
+                    {
+                        artifactLocation: artifact(s.file),
+                        replacements: [
+                            {
+                                deletedRegion: { ...region, ...endOf(s.line, s.column, s.anchor) },
+                                insertedContent: { text: linkMarkup({ ...s, anchor: s.anchor }, files.get(s.target)) },
+                            },
+                        ],
+                    },
+                ],
+            },
+        ];
+    return {
+        ruleId: SUGGESTION_RULE,
+        ruleIndex,
+        level: 'note',
+        message: { text },
+        locations: [{ physicalLocation: { artifactLocation: artifact(s.file), region } }],
+        partialFingerprints: { 'linkweaveSuggestion/v1': s.id },
+        properties: { suggestionId: s.id, source: s.source, target: s.target, sourceHash: s.sourceHash },
+        ...(fixes.length === 0 ? {} : { fixes }),
+    };
+}
+/**
+ * `baselineState` of each finding when the report was compared with a base report (preferred)
+ * or a baseline: `new` for the findings that run did not have, else `unchanged`. Without
+ * either, no state.
+ */
+function baselineStates(report) {
+    const fresh = report.comparison?.newFindings ?? report.baseline?.new;
+    if (fresh === undefined)
+        return () => undefined;
+    const identity = (f) => JSON.stringify([f.rule, f.file, f.line, f.column, f.route, f.message, f.target ?? null]);
+    const left = new Map();
+    for (const f of fresh)
+        left.set(identity(f), (left.get(identity(f)) ?? 0) + 1);
+    return (f) => {
+        const key = identity(f);
+        const n = left.get(key) ?? 0;
+        if (n === 0)
+            return 'unchanged';
+        left.set(key, n - 1);
+        return 'new';
+    };
+}
+/** The SARIF log of a report, as an object (the formatter stringifies it). */
+export function toSarif(report) {
+    const driverRules = descriptors();
+    const index = new Map(driverRules.map((r, i) => [r.id, i]));
+    const state = baselineStates(report);
+    const files = filesByRoute(report);
+    const results = [
+        ...report.findings.map((f) => findingResult(f, index.get(f.rule), state(f))),
+        ...report.suggestions.map((s) => suggestionResult(files, s, index.get(SUGGESTION_RULE))),
+    ];
+    const root = pathToFileURL(report.root).href;
+    return {
+        $schema: SCHEMA,
+        version: '2.1.0',
+        runs: [
+            {
+                tool: { driver: { name: 'linkweave', version: report.tool.version, rules: driverRules } },
+                originalUriBaseIds: { SRCROOT: { uri: root.endsWith('/') ? root : `${root}/` } },
+                columnKind: 'utf16CodeUnits',
+                results,
+            },
+        ],
+    };
+}
+/** The SARIF formatter. */
+export const sarifFormatter = {
+    id: 'sarif',
+    fileExtension: '.sarif',
+    format(report) {
+        return `${JSON.stringify(toSarif(report), null, 2)}\n`;
+    },
+    // The log, runs, one run, results: each result stringified alone (a large site's log is
+    // longer than one string can be).
+    pieces(report) {
+        return jsonTextPieces(toSarif(report), 4);
+    },
+};

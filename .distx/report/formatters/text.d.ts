@@ -1,0 +1,3 @@
+import type { Formatter } from '../types.js';
+/** The terminal formatter. */
+export declare const textFormatter: Formatter;

@@ -1,0 +1,12 @@
+/** The report stage: the report object, the gate and the writers. */
+export { buildReport } from './build.js';
+export { evaluateGate } from './gate.js';
+export { computeStats } from './stats.js';
+export { PAGERANK_DECIMALS, RATIO_DECIMALS, roundTo } from './round.js';
+export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId } from './format.js';
+export { textFormatter } from './formatters/text.js';
+export { jsonFormatter } from './formatters/json.js';
+export { markdownFormatter, escapeMarkdown } from './formatters/markdown.js';
+export { sarifFormatter, toSarif, linkMarkup, SUGGESTION_RULE } from './formatters/sarif.js';
+export { htmlFormatter, formatHtml } from './formatters/html.js';
+export { writeFileAtomic, removeTempFilesSync, TEMP_PREFIX } from './write.js';

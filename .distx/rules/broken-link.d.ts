@@ -1,0 +1,27 @@
+import type { Rule } from './types.js';
+/**
+ * `broken-link`: every internal link leads to an existing page, alias, redirect or file.
+ *
+ * Reported at the link's own line and column, once per link (a broken link in a template
+ * region is reported on every page that carries it). The message names the resolved target
+ * (a route; for a link to a source file that does not exist, the file's path from the content
+ * root; for a missing image or download, its path), the destination as written when it
+ * differs, and the closest existing route (or source file) by edit distance when one is close.
+ * `target` is the resolved target.
+ *
+ * Options: none. Default severity: `error`.
+ *
+ * @example ok (`guide/index.md`, the site has `guide/install.md`, route `/guide/install/`)
+ * ```md
+ * Read [the install guide](install.md) or [the install page](/guide/install/).
+ * ```
+ * @example not ok
+ * ```md
+ * Read [the install guide](instal.md) or [the install page](/guide/instal/).
+ * ```
+ * `guide/index.md:1:6  error  Unexpected link to missing file guide/instal.md (written
+ * "instal.md"), expected an existing source file (did you mean guide/install.md?)  broken-link`
+ * `guide/index.md:1:40  error  Unexpected link to missing page /guide/instal/, expected an
+ * existing page (did you mean /guide/install/?)  broken-link`
+ */
+export declare const brokenLink: Rule;

@@ -1,0 +1,38 @@
+import { nearest } from './nearest.js';
+/**
+ * `missing-entry`: every configured entry route (option `entry`) is a page of the site.
+ *
+ * Without its entry pages click depth has nowhere to start. The finding belongs to no file
+ * (`file` is `''`, line 1, column 1); `route` and `target` are the entry route, and the message
+ * offers the closest existing route.
+ *
+ * Options: none. Default severity: `error`.
+ *
+ * @example ok: `entry: ["/"]` and the site has `index.md`.
+ * @example not ok: `entry: ["/start/"]` on a site without such a page:
+ * `1:1  error  Unexpected entry route /start/ that matches no page, expected the route of an
+ * existing page in "entry" (did you mean /stars/?)  missing-entry`
+ */
+export const missingEntry = {
+    id: 'missing-entry',
+    description: 'Every entry route is a page of the site.',
+    defaultSeverity: 'error',
+    defaultOptions: {},
+    check(ctx) {
+        const routes = ctx.graph.pages.map((p) => p.route);
+        const findings = [];
+        for (const route of ctx.graph.missingEntries) {
+            const guess = nearest(route, routes);
+            const hint = guess === null ? '' : ` (did you mean ${guess}?)`;
+            findings.push({
+                file: '',
+                line: 1,
+                column: 1,
+                route,
+                message: `Unexpected entry route ${route} that matches no page, expected the route of an existing page in "entry"${hint}`,
+                target: route,
+            });
+        }
+        return findings;
+    },
+};

@@ -1,0 +1,147 @@
+import { createStemCache } from '../text/tokenize.js';
+import { termLeaders, topTerms } from '../text/tfidf.js';
+import { findAnchors, prepareSource } from './anchor.js';
+import { candidatePool, hasContentLink } from './candidates.js';
+import { contentOutlinks, pairFeatures, withoutNames } from './features.js';
+import { predictLogistic } from './logistic.js';
+import { buildMentionIndex } from './mentions.js';
+import { fitLinkModel, trainingPairs } from './model.js';
+import { targetNames } from './names.js';
+import { contentNeighbours } from './proximity.js';
+import { contributions } from './logistic.js';
+import { adamicAdar, routeFolders, sharedFolders, twoStepPaths } from './proximity.js';
+import { chooseSuggestions } from './select.js';
+import { factsByPage } from './facts-of.js';
+/** Key terms of a target that an anchor may match: its heaviest TF-IDF terms. */
+export const KEY_TERMS = 5;
+/** A key term is strong for a target among the pages it weighs most in (this many). */
+export const STRONG_LEADERS = 3;
+/**
+ * The suggestions chosen for `targets`.
+ * @param rankPct PageRank percentile per page id
+ */
+export function chooseForTargets(input, options, targets, rankPct) {
+    const { graph, ranking, index, related } = input;
+    const n = graph.pages.length;
+    const factsOf = factsByPage(input);
+    const settings = options.suggest;
+    const cache = input.stems ?? createStemCache();
+    const mentions = buildMentionIndex(graph, factsOf, cache);
+    const neighbours = contentNeighbours(graph);
+    const isEntry = new Uint8Array(n);
+    for (const e of graph.entries)
+        isEntry[e] = 1;
+    const ctx = { graph, ranking, index, mentions, neighbours, rankPct, isEntry, outlinks: contentOutlinks(graph), folders: graph.pages.map((p) => routeFolders(p.route)) };
+    const pool = candidatePool({ graph, related, mentions, neighbours, minSimilarity: settings.minSimilarity });
+    const linked = (s, t) => hasContentLink(graph.forward, s, t);
+    const eligible = graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id);
+    const fitted = fitLinkModel(trainingPairs(eligible, pool, linked), (s, t) => pairFeatures(ctx, s, t));
+    const model = fitted.model;
+    const scored = [];
+    for (const t of targets) {
+        for (const s of pool(t)) {
+            if (linked(s, t))
+                continue;
+            const features = pairFeatures(ctx, s, t);
+            const hit = mentions.bySource[s].get(t);
+            scored.push({
+                source: s,
+                target: t,
+                similarity: features[0],
+                score: predictLogistic(model, features),
+                scoreWithoutAnchor: predictLogistic(model, withoutNames(features)),
+                anchors: hit === undefined ? [] : hit.anchors,
+                features,
+            });
+        }
+    }
+    const perSource = settings.perSource === 0 ? Number.POSITIVE_INFINITY : settings.perSource;
+    const chosen = fallbackAnchors(input, chooseSuggestions(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
+    const evidenceOf = (c) => {
+        const { source: s, target: t } = c.pair;
+        const shared = sharedFolders(graph.pages[s].route, graph.pages[t].route);
+        const segments = graph.pages[t].route.split('/').filter((x) => x !== '');
+        return {
+            features: c.pair.features,
+            contributions: contributions(model, [...c.pair.features]),
+            above: c.pair.features.map((v, j) => v > model.means[j]),
+            anchor: c.anchor,
+            commonNeighbours: adamicAdar(neighbours, s, t).common,
+            twoStep: twoStepPaths(graph, s, t),
+            folder: shared === 0 ? '' : `/${segments.slice(0, shared).join('/')}/`,
+        };
+    };
+    return { chosen, model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };
+}
+/**
+ * Chosen pairs whose source mentions none of the target's names get the anchor search of
+ * `anchor.ts` instead (part of the title, or a run of the target's key terms), clear of the
+ * anchors already chosen in the same source; each source is tokenised once. Only chosen pairs
+ * are searched: without a mention the pair's score is the same with or without such a phrase.
+ */
+function fallbackAnchors(input, chosen, cache) {
+    const { graph, index } = input;
+    const factsOf = factsByPage(input);
+    const need = chosen.map((_, i) => i).filter((i) => chosen[i].anchor === null);
+    if (need.length === 0)
+        return chosen;
+    need.sort((a, b) => chosen[a].pair.source - chosen[b].pair.source || a - b);
+    const taken = new Map();
+    for (const c of chosen) {
+        if (c.anchor === null)
+            continue;
+        const list = taken.get(c.pair.source) ?? [];
+        list.push([c.anchor.offset, c.anchor.endOffset]);
+        taken.set(c.pair.source, list);
+    }
+    const leaders = termLeaders(index, STRONG_LEADERS);
+    const df = (stem) => {
+        let lo = 0;
+        let hi = index.terms.length - 1;
+        while (lo <= hi) {
+            const mid = (lo + hi) >> 1;
+            const t = index.terms[mid];
+            if (t === stem)
+                return index.df[mid];
+            if (t < stem)
+                lo = mid + 1;
+            else
+                hi = mid - 1;
+        }
+        return 0;
+    };
+    const names = new Map();
+    const namesOf = (t) => {
+        let v = names.get(t);
+        if (v === undefined) {
+            const page = graph.pages[t];
+            const ids = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS) : [];
+            const leads = (id) => {
+                for (let k = 0; k < STRONG_LEADERS; k++)
+                    if (leaders[id * STRONG_LEADERS + k] === t)
+                        return true;
+                return false;
+            };
+            const keys = { all: ids.map((id) => index.terms[id]), strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]) };
+            v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache, df);
+            names.set(t, v);
+        }
+        return v;
+    };
+    const out = [...chosen];
+    for (let k = 0; k < need.length;) {
+        const source = chosen[need[k]].pair.source;
+        const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source].title);
+        const avoid = taken.get(source) ?? [];
+        for (; k < need.length && chosen[need[k]].pair.source === source; k++) {
+            const i = need[k];
+            const c = chosen[i];
+            const anchors = findAnchors(tokens, namesOf(c.pair.target), avoid);
+            if (anchors.length === 0)
+                continue;
+            avoid.push([anchors[0].offset, anchors[0].endOffset]);
+            out[i] = { ...c, anchor: anchors[0], pair: { ...c.pair, anchors } };
+        }
+    }
+    return out;
+}

@@ -1,0 +1,128 @@
+import { EDGE_CONTENT } from '../graph/csr.js';
+import { cosine } from '../text/tfidf.js';
+import { hasContentLink } from './candidates.js';
+import { nameKindsFor } from './mentions.js';
+import { adamicAdar, depthWithout, sharedSegments, twoStepPaths } from './proximity.js';
+/** Feature names, in the order of a feature vector. */
+export const FEATURES = [
+    'similarity',
+    'title-mention',
+    'anchor-text-mention',
+    'label-mention',
+    'alias-mention',
+    'mentions',
+    'name-words',
+    'link-probability',
+    'commonness',
+    'adamic-adar',
+    'two-step-paths',
+    'shared-folders',
+    'target-inlinks',
+    'source-outlinks',
+    'source-rank',
+    'target-depth',
+];
+/** Index of each feature in a vector. */
+export const F = Object.fromEntries(FEATURES.map((f, i) => [f, i]));
+/** The name evidence features (zeroed to score a pair as if its source did not mention the target). */
+export const NAME_FEATURES = [
+    F['title-mention'],
+    F['anchor-text-mention'],
+    F['label-mention'],
+    F['alias-mention'],
+    F.mentions,
+    F['name-words'],
+    F['link-probability'],
+    F.commonness,
+];
+/** Depth given to an unreachable target, and the cap of every depth. */
+export const DEPTH_CAP = 10;
+const NONE = [];
+/** The feature vector of the pair. */
+export function pairFeatures(ctx, s, t) {
+    const { graph, ranking, mentions } = ctx;
+    const x = new Array(FEATURES.length).fill(0);
+    const linked = hasContentLink(graph.forward, s, t);
+    x[F.similarity] = t < ctx.index.docOffsets.length - 1 && s < ctx.index.docOffsets.length - 1 ? cosine(ctx.index, s, t) : 0;
+    // Name evidence: prose mentions, plus (for a linked pair) the pair's own link texts.
+    const hit = mentions.bySource[s]?.get(t);
+    let count = hit === undefined ? 0 : hit.count;
+    let phrases = hit === undefined ? NONE : hit.phrases;
+    let ownExact = null; // phrase -> the pair's own links with exactly this text
+    if (linked) {
+        const all = new Set(phrases);
+        ownExact = new Map();
+        for (const m of mentions.linkMatches[s] ?? []) {
+            if (m.target !== t)
+                continue;
+            if (m.exact)
+                ownExact.set(m.phrase, (ownExact.get(m.phrase) ?? 0) + 1);
+            if (!mentions.phrases[m.phrase].names.some((r) => r.target === t))
+                continue;
+            all.add(m.phrase);
+            count++;
+        }
+        phrases = [...all];
+    }
+    let validCount = 0;
+    for (const p of phrases) {
+        const phrase = mentions.phrases[p];
+        const kinds = nameKindsFor(phrase, s, t);
+        if (kinds.length === 0)
+            continue;
+        validCount++;
+        for (const k of kinds)
+            x[kindFeature(k)] = 1;
+        x[F['name-words']] = Math.max(x[F['name-words']], phrase.stems.length);
+        const own = ownExact?.get(p) ?? 0;
+        const linkedOcc = phrase.linked - own;
+        const total = phrase.prose + phrase.linked;
+        if (total > 0)
+            x[F['link-probability']] = Math.max(x[F['link-probability']], linkedOcc / total);
+        const toTarget = (phrase.linkedTo.get(t) ?? 0) - own;
+        if (linkedOcc > 0)
+            x[F.commonness] = Math.max(x[F.commonness], toTarget / linkedOcc);
+    }
+    x[F.mentions] = validCount === 0 ? 0 : Math.log1p(count);
+    const aa = adamicAdar(ctx.neighbours, s, t);
+    x[F['adamic-adar']] = Math.log1p(aa.adamicAdar);
+    x[F['two-step-paths']] = Math.log1p(twoStepPaths(graph, s, t));
+    x[F['shared-folders']] = sharedSegments(ctx.folders[s], ctx.folders[t]);
+    x[F['target-inlinks']] = Math.log1p(ranking.contentInlinks[t] - (linked ? 1 : 0));
+    x[F['source-outlinks']] = Math.log1p(ctx.outlinks[s] - (linked ? 1 : 0));
+    const pct = ctx.rankPct[s];
+    x[F['source-rank']] = Number.isNaN(pct) ? 0 : pct;
+    const d = linked ? depthWithout(graph, ranking, ctx.isEntry, s, t) : ranking.depth[t];
+    x[F['target-depth']] = d < 0 ? DEPTH_CAP : Math.min(d, DEPTH_CAP);
+    return x;
+}
+function kindFeature(kind) {
+    switch (kind) {
+        case 'title':
+            return F['title-mention'];
+        case 'anchor-text':
+            return F['anchor-text-mention'];
+        case 'label':
+            return F['label-mention'];
+        case 'alias':
+            return F['alias-mention'];
+    }
+}
+/** Per page: the distinct pages it links to with at least one content link. */
+export function contentOutlinks(graph) {
+    const n = graph.pages.length;
+    const out = new Int32Array(n);
+    for (let s = 0; s < n; s++) {
+        for (let e = graph.forward.offsets[s]; e < graph.forward.offsets[s + 1]; e++)
+            if ((graph.forward.flags[e] & EDGE_CONTENT) !== 0)
+                out[s]++;
+    }
+    return out;
+}
+/** The vector with the name evidence zeroed: the pair as if the source did not mention the target. */
+export function withoutNames(x) {
+    const y = [...x];
+    for (const j of NAME_FEATURES)
+        y[j] = 0;
+    return y;
+}

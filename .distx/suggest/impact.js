@@ -1,0 +1,179 @@
+import { outWeightSums } from '../graph/csr.js';
+import { pagerank } from '../rank/pagerank.js';
+import { pagerankScenarios } from '../rank/pagerank-batch.js';
+import { depthMask, teleportVector } from '../rank/rank.js';
+/** The PageRank settings of the ranking stage, with the current vector as warm start. */
+export function rankModel(graph, ranking, options) {
+    const teleport = teleportVector(graph, options);
+    return {
+        graph,
+        current: ranking.pagerank,
+        options: {
+            damping: options.damping,
+            maxIterations: options.pagerankIterations,
+            tolerance: options.pagerankTolerance,
+            outWeights: outWeightSums(graph.forward, graph.pages.length),
+            ...(teleport === null ? {} : { teleport }),
+        },
+    };
+}
+/** PageRank of every page with the content links source -> target added (weight 1 each). */
+export function pagerankWithLinks(model, links) {
+    const { graph } = model;
+    return pagerank(graph.forward, graph.reverse, graph.pages.length, {
+        ...model.options,
+        start: model.current,
+        extraEdges: links.map((l) => ({ from: l.from, to: l.to, weight: 1 })),
+    }).scores;
+}
+/**
+ * PageRank of each link's target with that link alone added (weight 1, a content link), each
+ * link its own scenario; all in one batched run, exactly as {@link pagerankWithLinks} per link.
+ * @returns `after[i]`: PageRank (sum 1) of `links[i].to` with `links[i]` added
+ */
+export function targetRanksWithLinks(model, links) {
+    const { graph, options } = model;
+    const result = pagerankScenarios(graph.forward, graph.reverse, graph.pages.length, options, links.map((l) => [{ from: l.from, to: l.to, weight: 1 }]), model.current, links.map((l) => [l.to]));
+    const after = new Float64Array(links.length);
+    for (let i = 0; i < links.length; i++)
+        after[i] = result.values[i][0];
+    return after;
+}
+/**
+ * Which suggestions get a PageRank prediction: the `limit` best by score (ties: smaller id
+ * first) and the first `limit` of the depth-repair plan (`planIds` in the plan's greedy order,
+ * which takes the links that fix the most pages first); `limit` 0 = all. At most `2 x limit`
+ * predictions whatever the site's size: the plan grows with the site (about 4% of the pages on
+ * generated sites: 44 links at 1,000 pages, 409 at 10,000), and each prediction reads the whole
+ * graph some twenty times.
+ * @returns one flag per item, 1 = predict
+ */
+export function impactSelection(items, planIds, limit) {
+    const selected = new Uint8Array(items.length);
+    if (limit === 0 || limit >= items.length)
+        return selected.fill(1);
+    const order = items.map((_, i) => i).sort((a, b) => items[b].score - items[a].score || cmp(items[a].id, items[b].id));
+    for (let k = 0; k < limit; k++)
+        selected[order[k]] = 1;
+    const inPlan = new Set(planIds.slice(0, limit));
+    items.forEach((item, i) => {
+        if (inPlan.has(item.id))
+            selected[i] = 1;
+    });
+    return selected;
+}
+function cmp(a, b) {
+    return a < b ? -1 : a > b ? 1 : 0;
+}
+/**
+ * Click depths that can take proposed links: `add` relaxes exactly (the depths stay those of a
+ * full BFS on the graph with every added link), `gain` counts without changing anything.
+ */
+export class DepthState {
+    /** Current depth per page (-1 unreachable), with the added links. */
+    depth;
+    forward;
+    mask;
+    added = new Map();
+    stamp;
+    scratch;
+    queue;
+    epoch = 0;
+    /**
+     * @param depth depths of the graph as it is (copied)
+     * @param mask edge flags click depth follows (`depthMask(options)`)
+     */
+    constructor(forward, depth, mask) {
+        this.forward = forward;
+        this.mask = mask;
+        this.depth = depth.slice();
+        this.stamp = new Int32Array(depth.length);
+        this.scratch = new Int32Array(depth.length);
+        this.queue = new Int32Array(depth.length);
+    }
+    /** Depth of `target` with the link source -> target added (the only page whose depth matters for a report row). */
+    depthWith(source, target) {
+        const ds = this.depth[source];
+        const dt = this.depth[target];
+        if (ds < 0)
+            return dt;
+        return dt < 0 ? ds + 1 : Math.min(dt, ds + 1);
+    }
+    /**
+     * How many pages `counts` would accept go from outside `limit` (deeper, or unreachable) to
+     * within it if the link source -> target were added. Nothing changes.
+     */
+    gain(source, target, limit, counts) {
+        const ds = this.depth[source];
+        if (ds < 0 || ds + 1 > limit)
+            return 0;
+        const epoch = ++this.epoch;
+        const get = (u) => (this.stamp[u] === epoch ? this.scratch[u] : this.depth[u]);
+        let fixed = 0;
+        let head = 0;
+        let tail = 0;
+        const visit = (v, d) => {
+            const cur = get(v);
+            if (cur >= 0 && cur <= d)
+                return;
+            this.stamp[v] = epoch;
+            this.scratch[v] = d;
+            const before = this.depth[v];
+            if ((before < 0 || before > limit) && counts(v))
+                fixed++;
+            if (d < limit)
+                this.queue[tail++] = v;
+        };
+        visit(target, ds + 1);
+        while (head < tail) {
+            const u = this.queue[head++];
+            const d = get(u) + 1;
+            this.eachNext(u, (v) => visit(v, d));
+        }
+        return fixed;
+    }
+    /**
+     * Add the link source -> target and update every depth it shortens.
+     * @returns the pages whose depth changed
+     */
+    add(source, target) {
+        const list = this.added.get(source);
+        if (list === undefined)
+            this.added.set(source, [target]);
+        else
+            list.push(target);
+        const ds = this.depth[source];
+        const changed = [];
+        if (ds < 0)
+            return changed;
+        let head = 0;
+        let tail = 0;
+        const visit = (v, d) => {
+            const cur = this.depth[v];
+            if (cur >= 0 && cur <= d)
+                return;
+            this.depth[v] = d;
+            changed.push(v);
+            this.queue[tail++] = v;
+        };
+        visit(target, ds + 1);
+        while (head < tail) {
+            const u = this.queue[head++];
+            const d = this.depth[u] + 1;
+            this.eachNext(u, (v) => visit(v, d));
+        }
+        return changed;
+    }
+    eachNext(u, fn) {
+        const { offsets, targets, flags } = this.forward;
+        for (let e = offsets[u]; e < offsets[u + 1]; e++)
+            if ((flags[e] & this.mask) !== 0)
+                fn(targets[e]);
+        for (const v of this.added.get(u) ?? [])
+            fn(v);
+    }
+}
+/** A {@link DepthState} for the graph and ranking as they are. */
+export function depthState(graph, ranking, options) {
+    return new DepthState(graph.forward, ranking.depth, depthMask(options));
+}

@@ -1,0 +1,21 @@
+/** The suggest stage (DESIGN section 7): importance, under-linked pages, link suggestions, impact, repair plan. */
+export { suggestLinks, compareSuggestions } from './suggest.js';
+export { chooseForTargets, KEY_TERMS, STRONG_LEADERS } from './choose.js';
+export { parseTraffic } from './traffic.js';
+export { computeImportance, viewsPerPage, HIGH_PERCENTILE, LOW_PERCENTILE } from './importance.js';
+export { findUnderlinked, pagerankPercentiles } from './underlinked.js';
+export { percentiles } from './percentile.js';
+export { findCandidates, hasContentLink } from './candidates.js';
+export { candidatePool, MENTION_LIMIT, GRAPH_LIMIT, HUB_DEGREE } from './candidates.js';
+export { buildMentionIndex, nameKindsFor, MAX_PAGES_PER_NAME } from './mentions.js';
+export { FEATURES, pairFeatures, withoutNames } from './features.js';
+export { fitLogistic, predictLogistic, areaUnderCurve, linearScore, contributions, sigmoid } from './logistic.js';
+export { fitLinkModel, trainingPairs, fixedModel, FIXED_WEIGHTS, heldOutForAuc } from './model.js';
+export { contentNeighbours, adamicAdar, twoStepPaths, depthWithout, sharedFolders, graphNeighbourhood } from './proximity.js';
+export { findAnchors, prepareSource, positionInSpan, ANCHOR_OPTIONS } from './anchor.js';
+export { targetNames, routeWords } from './names.js';
+export { chooseSuggestions } from './select.js';
+export { rankModel, pagerankWithLinks, targetRanksWithLinks, impactSelection, DepthState, depthState } from './impact.js';
+export { repairPlan } from './repair.js';
+export { suggestionId } from './id.js';
+export { reasonText, targetReasons, evidenceWords } from './reason.js';

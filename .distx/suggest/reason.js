@@ -1,0 +1,72 @@
+import { F, NAME_FEATURES } from './features.js';
+/** Evidence items shown at most. */
+export const EVIDENCE_SHOWN = 3;
+/** The whole reason: why the target, then the evidence for this source. */
+export function reasonText(f, e) {
+    const why = targetReasons(f);
+    const evidence = evidenceWords(e);
+    const anchor = e.anchor === null ? 'no anchor phrase in the text: the link needs a sentence written by hand' : null;
+    return [why, ...evidence, ...(anchor === null ? [] : [anchor])].join('; ');
+}
+/** Why the target wants links, e.g. `orphan page (no inlinks), 5 clicks deep (limit 3)`. */
+export function targetReasons(f) {
+    const parts = f.reasons.map((r) => {
+        switch (r) {
+            case 'orphan':
+                return 'orphan page (no inlinks)';
+            case 'unreachable':
+                return 'unreachable from the entry pages';
+            case 'too-deep':
+                return `${f.depth} clicks deep (limit ${f.maxDepth})`;
+            case 'few-inlinks':
+                return `important page with ${f.contentInlinks} content inlink${f.contentInlinks === 1 ? '' : 's'} (minimum ${f.minInlinks})`;
+            case 'rank-below-importance':
+                return `PageRank percentile ${pct(f.rankPercentile)} far below importance percentile ${pct(f.importancePercentile)}`;
+        }
+    });
+    return parts.length > 0 ? parts.join(', ') : 'related page';
+}
+/** The strongest positive parts of the score, in words, largest first. */
+export function evidenceWords(e) {
+    const c = e.contributions;
+    const x = e.features;
+    const items = [];
+    const names = NAME_FEATURES.reduce((a, j) => a + (x[j] !== 0 ? c[j] : 0), 0);
+    if (x[F.mentions] > 0 && e.anchor !== null) {
+        const times = Math.round(Math.expm1(x[F.mentions]));
+        const which = x[F['anchor-text-mention']] === 1
+            ? 'the words other pages link it with'
+            : x[F['title-mention']] === 1
+                ? 'its title'
+                : x[F['label-mention']] === 1
+                    ? 'its navigation label'
+                    : 'its route name';
+        items.push({ weight: names, words: `mentions "${e.anchor.text}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
+    }
+    // Only what raised the score because the pair has more of it than the usual pair.
+    const add = (j, words) => {
+        if (e.above[j] === true)
+            items.push({ weight: c[j], words });
+    };
+    add(F.similarity, `similar text (cosine ${x[F.similarity].toFixed(2)}, where 1 = the same words)`);
+    if (e.commonNeighbours > 0)
+        add(F['adamic-adar'], `${count(e.commonNeighbours, 'page')} ${e.commonNeighbours === 1 ? 'is' : 'are'} linked with both`);
+    if (e.twoStep > 0)
+        add(F['two-step-paths'], `links to ${count(e.twoStep, 'page')} that link to it`);
+    if (e.folder !== '')
+        add(F['shared-folders'], `same folder ${e.folder}`);
+    add(F['target-inlinks'], `a page others link to often (${count(Math.round(Math.expm1(x[F['target-inlinks']])), 'page')})`);
+    add(F['source-rank'], `the source ranks high (PageRank percentile ${pct(x[F['source-rank']])})`);
+    add(F['source-outlinks'], `the source links out a lot (${count(Math.round(Math.expm1(x[F['source-outlinks']])), 'page')})`);
+    return items
+        .filter((i) => i.weight > 0.05)
+        .sort((a, b) => b.weight - a.weight)
+        .slice(0, EVIDENCE_SHOWN)
+        .map((i) => i.words);
+}
+function count(n, noun) {
+    return `${n} ${noun}${n === 1 ? '' : 's'}`;
+}
+function pct(x) {
+    return String(Math.round(x * 100));
+}

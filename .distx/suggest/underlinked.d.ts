@@ -1,0 +1,25 @@
+/**
+ * Under-linked pages (DESIGN section 7). Reasons, in this order:
+ * - `orphan`: no inlinks from any other page (entry pages are never orphans);
+ * - `unreachable`: no click path from the entry pages;
+ * - `too-deep`: click depth greater than `maxDepth`;
+ * - `few-inlinks`: an important (`high`) page with fewer than `suggest.minInlinks` content inlinks;
+ * - `rank-below-importance`: an important (`high`) page whose importance percentile minus its
+ *   PageRank percentile is greater than `suggest.rankGap` (both percentiles over the pages that
+ *   are not excluded). Only important pages: DESIGN section 7 says so, and on a generated site
+ *   of 2,000 pages applying it to every page flagged about a quarter of them on a weak signal
+ *   (content centrality against PageRank).
+ * Entry pages are reached directly, so they get no reason; pages with `linkweave.exclude` get none.
+ */
+import type { ResolvedOptions } from '../options.js';
+import type { Ranking, SiteGraph } from '../types.js';
+import type { Importance } from './importance.js';
+import type { UnderlinkedPage } from './types.js';
+/** PageRank percentile of every page among the pages that are not excluded (NaN for excluded pages). */
+export declare function pagerankPercentiles(graph: SiteGraph, ranking: Ranking): Float64Array;
+/**
+ * The under-linked pages, by page id, each with its reasons.
+ * @param importance from `computeImportance`
+ * @param rankPercentile from `pagerankPercentiles`
+ */
+export declare function findUnderlinked(graph: SiteGraph, ranking: Ranking, importance: Importance, rankPercentile: Float64Array, options: ResolvedOptions): UnderlinkedPage[];

@@ -1,0 +1,33 @@
+// `node scripts/screenshot.mjs [out.png] [--full]`: the README's picture of the HTML report.
+// Writes the example site's HTML report the way a user would (from the repository folder, so
+// the page names the root as typed: examples/docs-site), opens it in Debian's chromium through
+// playwright-core and saves a screenshot (default docs/report.png, the top of the page at
+// 1280 px wide; --full takes the whole page). Needs `npm run build` first and /usr/bin/chromium.
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { chromium } from 'playwright-core';
+
+const repo = fileURLToPath(new URL('..', import.meta.url));
+const args = process.argv.slice(2);
+const out = args.find((a) => !a.startsWith('--')) ?? join(repo, 'docs/report.png');
+const full = args.includes('--full');
+const html = join(mkdtempSync(join(tmpdir(), 'lw-shot-')), 'report.html');
+const run = spawnSync(process.execPath, ['dist/cli/bin.js', 'suggest', 'examples/docs-site', '--output', html, '--quiet'], { cwd: repo, encoding: 'utf8' });
+if (run.status !== 0 && run.status !== 1) throw new Error(`linkweave exited ${run.status}: ${run.stderr}`);
+
+const browser = await chromium.launch({
+  executablePath: '/usr/bin/chromium',
+  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+});
+try {
+  const page = await browser.newPage({ viewport: { width: 1280, height: 1500 }, deviceScaleFactor: 1 });
+  await page.goto(pathToFileURL(html).href);
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: out, fullPage: full });
+  console.log(`screenshot written to ${out}`);
+} finally {
+  await browser.close();
+}
