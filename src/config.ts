@@ -48,7 +48,7 @@ export interface SuggestConfig {
   perTarget?: number | undefined;
   /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
   perSource?: number | undefined;
-  /** Least score (0..1, the link model's probability that an author would write the link) a suggestion needs. @default 0.1 */
+  /** Least score (0..1, the link model's probability that an author would write the link) a suggestion needs. @default 0.05 */
   minScore?: number | undefined;
   /** Least cosine similarity (0..1) for a TF-IDF neighbour to be a candidate source. @default 0.1 */
   minSimilarity?: number | undefined;
@@ -137,7 +137,7 @@ export interface Config {
   important?: string[] | undefined;
   /** A CSV of `route,views` (relative to the root) used as importance. @default null */
   traffic?: string | null | undefined;
-  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minScore: 0.1, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
+  /** Link suggestions. @default { targets: 'underlinked', perTarget: 5, perSource: 3, minScore: 0.05, minSimilarity: 0.1, relatedK: 10, minInlinks: 2, rankGap: 0.5, impactLimit: 200 } */
   suggest?: SuggestConfig | undefined;
   /** Limits on the whole site. @default every limit null (none) */
   limits?: LimitsConfig | undefined;

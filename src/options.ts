@@ -85,9 +85,9 @@ const schema = z.strictObject({
       perSource: z.number().int().min(0).default(3),
       /**
        * Least score (the link model's probability that an author would write the link) a
-       * suggestion needs; 0 = every candidate. @default 0.1
+       * suggestion needs; 0 = every candidate. @default 0.05
        */
-      minScore: z.number().min(0).max(1).default(0.1),
+      minScore: z.number().min(0).max(1).default(0.05),
       /** Least cosine similarity for a TF-IDF neighbour to be a candidate source. @default 0.1 */
       minSimilarity: z.number().min(0).max(1).default(0.1),
       /** TF-IDF neighbours per page: related pages kept, and candidate sources of each target. @default 10 */

@@ -69,6 +69,16 @@ export interface TrainingPair {
   readonly linked: boolean;
 }
 
+/** The training pairs and the share of each kind the sample kept. */
+export interface TrainingSample {
+  /** Sorted by target, then source. */
+  readonly pairs: TrainingPair[];
+  /** Linked candidate pairs kept / all of them (1 unless capped at {@link MAX_POSITIVES}). */
+  readonly linkedRate: number;
+  /** Unlinked candidate pairs kept / all of them. */
+  readonly notLinkedRate: number;
+}
+
 /** The fitted (or fixed) model and what the report says of it. */
 export interface LinkModel {
   readonly model: LogisticModel;
@@ -98,7 +108,7 @@ export function trainingPairs(
   candidatesOf: (target: number) => readonly number[],
   isLinked: (source: number, target: number) => boolean,
   seed = TRAINING_SEED,
-): TrainingPair[] {
+): TrainingSample {
   const sample = targets.length <= TRAIN_TARGETS ? [...targets] : shuffle(streamFor(seed, 10), [...targets]).slice(0, TRAIN_TARGETS).sort((a, b) => a - b);
   const positives: TrainingPair[] = [];
   const negatives: TrainingPair[] = [];
@@ -111,7 +121,11 @@ export function trainingPairs(
   const pos = positives.length <= MAX_POSITIVES ? positives : shuffle(streamFor(seed, 11), positives).slice(0, MAX_POSITIVES);
   const wantNeg = Math.max(MIN_POSITIVES, pos.length * NEGATIVES_PER_POSITIVE);
   const neg = negatives.length <= wantNeg ? negatives : shuffle(streamFor(seed, 12), negatives).slice(0, wantNeg);
-  return [...pos, ...neg].sort((a, b) => a.target - b.target || a.source - b.source);
+  return {
+    pairs: [...pos, ...neg].sort((a, b) => a.target - b.target || a.source - b.source),
+    linkedRate: positives.length === 0 ? 1 : pos.length / positives.length,
+    notLinkedRate: negatives.length === 0 ? 1 : neg.length / negatives.length,
+  };
 }
 
 /** Whether a training pair is kept out of the fit to measure the AUC (a hash of the pair). */
@@ -122,10 +136,15 @@ export function heldOutForAuc(p: TrainingPair): boolean {
 }
 
 /**
- * Fit the model on the training pairs.
+ * Fit the model on the training sample. The sample keeps only some of the unlinked pairs, which
+ * raises the odds the fit sees by linkedRate / notLinkedRate; the intercept is corrected by
+ * ln(notLinkedRate / linkedRate) (the prior correction for case-control samples, King and Zeng,
+ * "Logistic regression in rare events data", 2001), so the score is the probability among the
+ * candidates as they are.
  * @param featuresOf the feature vector of a pair
  */
-export function fitLinkModel(pairs: readonly TrainingPair[], featuresOf: (source: number, target: number) => number[]): LinkModel {
+export function fitLinkModel(sample: TrainingSample, featuresOf: (source: number, target: number) => number[]): LinkModel {
+  const { pairs } = sample;
   const fitRows: number[][] = [];
   const fitLabels: number[] = [];
   const testRows: number[][] = [];
@@ -144,7 +163,8 @@ export function fitLinkModel(pairs: readonly TrainingPair[], featuresOf: (source
   const positives = count(fitLabels, 1);
   const negatives = count(fitLabels, 0);
   const enough = positives >= MIN_POSITIVES && negatives >= MIN_POSITIVES;
-  const model = enough ? fitLogistic(fitRows, fitLabels, { l2: L2 }) : fixedModel();
+  const fit = enough ? fitLogistic(fitRows, fitLabels, { l2: L2 }) : fixedModel();
+  const model = enough ? { ...fit, intercept: fit.intercept + Math.log(sample.notLinkedRate / sample.linkedRate) } : fit;
   const auc = areaUnderCurve(testRows.map((x) => linearScore(model, x)), testLabels);
   return {
     model,
