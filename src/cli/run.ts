@@ -53,13 +53,15 @@ export async function run(argv: readonly string[], io: CliIo): Promise<number> {
   }
 }
 
-/** Flags override configuration keys: --max-depth, --fail-on, --no-cache. */
+/** Flags override configuration keys: --max-depth, --fail-on, --no-cache, --preset. */
 export function withFlags(config: Config, values: FlagValues): Config {
   const merged: Config = { ...config };
   if (typeof values['max-depth'] === 'number') merged.maxDepth = values['max-depth'];
   const failOn = stringFlag(values, 'fail-on');
   if (failOn === 'error' || failOn === 'warning') merged.failOn = failOn;
   if (values['no-cache'] === true) merged.cache = { ...config.cache, enabled: false };
+  const preset = stringFlag(values, 'preset');
+  if (preset !== null) merged.preset = preset as NonNullable<Config['preset']>;
   return merged;
 }
 
