@@ -65,11 +65,13 @@ export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Pr
   const written = resolveOptions(config, resolve(root), configOrigin);
   const preset = readPreset(resolve(root), written.preset);
   if (preset !== null) hooks.onNote?.(preset.summary);
-  const options = preset === null ? written : resolveOptions(configWithPreset(preset, config), preset.contentRoot, configOrigin);
+  let options = preset === null ? written : resolveOptions(configWithPreset(preset, config), preset.contentRoot, configOrigin);
   validateRuleConfig(options, configOrigin);
   const stage = stageTimer(hooks);
 
   const collected = await stage('collect', () => collectInputs(options, preset));
+  // A navigation list read from the generator's config is named like a navigation file.
+  if (options.navigation === null && collected.navigation !== null) options = { ...options, navigation: collected.navigation.file };
   // Nothing changed since the last run with the cache on: its report is this run's report.
   const cacheDir = options.cache.enabled ? resolve(options.cache.dir) : null;
   const key = cacheDir === null ? '' : resultKey(reportInputs(options, command, collected, baseline));
