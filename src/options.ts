@@ -51,21 +51,6 @@ const schema = z.strictObject({
       headingIdsDefault: z.enum(HEADING_ID_STYLES).default('github'),
     })
     .prefault({}),
-  /** Site generator whose config files set defaults: 'auto' detects one from the files present, 'none' reads none. @default 'auto' */
-  preset: z.enum(['auto', 'none', ...PRESET_NAMES]).default('auto'),
-  /** Route prefixes that are part of the site but not of these sources (links there are "outside", never broken). @default [] */
-  outside: z.array(z.string().min(1)).default([]),
-  /** Links the generator makes on pages it builds. */
-  generated: z
-    .strictObject({
-      /** Each section index page (`_index`) lists the pages and sections of its folder. @default false */
-      sectionLists: z.boolean().default(false),
-      /** Folders of dated posts: each post links the previous and next one. @default [] */
-      postFolders: z.array(z.string().min(1)).default([]),
-      /** Routes the generator makes with no source file (a blog index): links there are "outside", never broken. @default [] */
-      routes: z.array(z.string().startsWith('/')).default([]),
-    })
-    .prefault({}),
   /** Entry pages for click depth (and for `teleport: 'entry'`). @default ['/'] */
   entry: z.array(z.string().min(1)).min(1).default(['/']),
   /** A table-of-contents file (Markdown or YAML list of links) shown on every page. @default null */
@@ -154,6 +139,21 @@ const schema = z.strictObject({
     .prefault({}),
   /** Worker threads for parsing: 0 = automatic (by file count and cores), 1 = main thread only. @default 0 */
   workers: z.number().int().min(0).default(0),
+  /** Site generator whose config files set defaults: 'auto' detects one from the files present, 'none' reads none. @default 'auto' */
+  preset: z.enum(['auto', 'none', ...PRESET_NAMES]).default('auto'),
+  /** Route prefixes that are part of the site but not of these sources (links there are "outside", never broken). @default [] */
+  outside: z.array(z.string().min(1)).default([]),
+  /** Links the generator makes on pages it builds. */
+  generated: z
+    .strictObject({
+      /** Each section index page (`_index`) lists the pages and sections of its folder. @default false */
+      sectionLists: z.boolean().default(false),
+      /** Folders of dated posts: each post links the previous and next one. @default [] */
+      postFolders: z.array(z.string().min(1)).default([]),
+      /** Routes the generator makes with no source file (a blog index): links there are "outside", never broken. @default [] */
+      routes: z.array(z.string().startsWith('/')).default([]),
+    })
+    .prefault({}),
 });
 
 /** Configuration as a user writes it (every key optional), documented key by key in src/config.ts. */

@@ -76,6 +76,8 @@ export function resolveLink(raw: RawLink, src: LinkSource, ctx: ResolveContext, 
   if (isTemplated(raw.href)) return make(raw, src, -1, raw.href.replace(URL_TRIM, ''), '', 'internal', 'templated');
   const link = resolveInSources(raw, src, ctx, fast);
   if (link.status !== 'broken' || ctx.scope === undefined) return link;
+  // Only a link that resolved to a usable path can be placed outside; the rest stay broken.
+  if (raw.href.includes('\0') || link.target.split('/').includes('..')) return link;
   const href = raw.href.replace(URL_TRIM, '');
   const fileLink = raw.fileRelative === true || (!src.hasBase && isMarkdownExtension(extensionOf(pathPart(href))));
   if (!isOutside(href, link.target, src.routeDir, src.fileDir, fileLink, ctx.scope)) return link;
