@@ -22,6 +22,8 @@ import { runRules, validateRuleConfig } from './rules/index.js';
 import type { AuxProblem } from './rules/index.js';
 import { buildReport } from './report/index.js';
 import { resolveOptions } from './options.js';
+import { configWithPreset, readPreset } from './preset/index.js';
+import type { PresetRun } from './preset/index.js';
 import type { Config, ResolvedOptions } from './options.js';
 import type { Finding, LinkModelReport, PageFacts, RawLink, RepairPlan, Report, Suggestion } from './types.js';
 import { VERSION } from './version.js';
@@ -35,6 +37,8 @@ export interface AnalyzeHooks {
   onStage?(stage: StageName, phase: 'start' | 'end'): void;
   /** Progress inside a stage (files parsed so far). */
   onProgress?(stage: StageName, done: number, total: number): void;
+  /** A line worth telling the user: what was read as the site's generator config, the heading-id style chosen. */
+  onNote?(message: string): void;
 }
 
 /** What `analyze` takes: a configuration plus the content root and what to compute. */
@@ -57,11 +61,17 @@ export type AnalyzeInput = Config & {
  */
 export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Promise<Report> {
   const { root, command = 'check', configOrigin = 'configuration', baseline, ...config } = input;
-  const options = resolveOptions(config, resolve(root), configOrigin);
+  // The configuration is checked as written first, so a bad key is reported against it.
+  const written = resolveOptions(config, resolve(root), configOrigin);
+  const preset = readPreset(resolve(root), written.preset);
+  if (preset !== null) hooks.onNote?.(preset.summary);
+  let options = preset === null ? written : resolveOptions(configWithPreset(preset, config), preset.contentRoot, configOrigin);
   validateRuleConfig(options, configOrigin);
   const stage = stageTimer(hooks);
 
-  const collected = await stage('collect', () => collectInputs(options));
+  const collected = await stage('collect', () => collectInputs(options, preset));
+  // A navigation list read from the generator's config is named like a navigation file.
+  if (options.navigation === null && collected.navigation !== null) options = { ...options, navigation: collected.navigation.file };
   // Nothing changed since the last run with the cache on: its report is this run's report.
   const cacheDir = options.cache.enabled ? resolve(options.cache.dir) : null;
   const key = cacheDir === null ? '' : resultKey(reportInputs(options, command, collected, baseline));
@@ -115,7 +125,7 @@ export interface CollectedInputs {
 }
 
 /** Read everything `analyze` reads before parsing: the sources, navigation, redirects and traffic files. */
-export async function collectInputs(options: ResolvedOptions): Promise<CollectedInputs> {
+export async function collectInputs(options: ResolvedOptions, preset: PresetRun | null = null): Promise<CollectedInputs> {
   const aux = [options.navigation, options.redirects, options.traffic].filter((p): p is string => p !== null);
   const [sources, navText, redirectsText, trafficText] = await Promise.all([
     collectSources(options, aux),
@@ -124,11 +134,16 @@ export async function collectInputs(options: ResolvedOptions): Promise<Collected
     options.traffic === null ? null : readAuxFile(options, 'traffic', options.traffic),
   ]);
   const auxProblems: AuxProblem[] = [];
-  const navigation = navText === null ? null : { file: navText.file, links: parseNavigation(navText.file, navText.text) };
-  let redirects: Redirect[] = [];
+  let navigation = navText === null ? null : { file: navText.file, links: parseNavigation(navText.file, navText.text) };
+  const presetNav = preset?.site.navigation ?? null;
+  if (navigation === null && presetNav !== null) {
+    const name = presetNav.format === 'yaml' && !/\.ya?ml$/i.test(presetNav.file) ? `${presetNav.file}.yml` : presetNav.file;
+    navigation = { file: presetNav.file, links: parseNavigation(name, presetNav.text) };
+  }
+  let redirects: Redirect[] = (preset?.site.redirects ?? []).map((r) => ({ from: r.from, to: r.to, line: 0 }));
   if (redirectsText !== null) {
     const parsed = parseRedirects(redirectsText.file, redirectsText.text);
-    redirects = parsed.redirects;
+    redirects = [...parsed.redirects, ...redirects];
     for (const p of parsed.problems) auxProblems.push({ file: redirectsText.file, line: p.line, message: p.message });
   }
   let traffic: Map<string, number> | null = null;
@@ -197,6 +212,14 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
       options,
     ),
   );
+  const ids = graph.headingIds;
+  if (ids !== undefined && ids.fragmentLinks > 0) {
+    const how = ids.how === 'auto' ? 'chosen by the fragment links' : 'set by routes.headingIds';
+    hooks.onNote?.(`heading ids: ${ids.style} style (${how}), ${ids.resolved} of ${ids.fragmentLinks} fragment links resolve`);
+  }
+  for (const inc of graph.includesOutside ?? []) {
+    hooks.onNote?.(`${inc.file}:${inc.line}:${inc.column}: included file "${inc.written}" is outside the sources; its ids and links are unknown`);
+  }
   const ranking = await stage('rank', () => rankGraph(graph, options));
   let suggestions: Suggestion[] = [];
   let importance: readonly ('high' | 'normal' | 'low')[] | undefined;

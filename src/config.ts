@@ -6,6 +6,9 @@
  * the schema's input type, so the two cannot drift apart.
  */
 
+import type { HeadingIdStyle } from './parse/heading-ids.js';
+import type { PresetName } from './preset/names.js';
+
 /** How much a check's findings weigh (SARIF's levels); `none`: the check does not run. */
 export type Level = 'error' | 'warning' | 'none';
 
@@ -38,6 +41,33 @@ export interface RoutesConfig {
   indexNames?: string[] | undefined;
   /** Match routes without regard to case. @default false */
   caseInsensitive?: boolean | undefined;
+  /** Folder (relative to the content root) -> route prefix its files are served under, e.g. `{ "src/pages": "/" }`. @default {} */
+  folders?: Record<string, string> | undefined;
+  /** Folders of dated posts: `YYYY-MM-DD-name.md` is routed `YYYY/MM/DD/name`. @default [] */
+  dated?: string[] | undefined;
+  /**
+   * Site-absolute links are written below the base path (the generator prepends it, as
+   * VitePress and Docusaurus do): an unresolved one is broken. When false, an unresolved
+   * site-absolute link outside the base path is "outside the content". @default false
+   */
+  absoluteLinksUnderBase?: boolean | undefined;
+  /**
+   * How headings get their fragment ids. `auto` picks the style under which the most of the
+   * site's own fragment links resolve (`headingIdsDefault` breaks a tie). @default 'auto'
+   */
+  headingIds?: 'auto' | HeadingIdStyle | undefined;
+  /** The style `auto` keeps when styles tie; a preset sets its generator's. @default 'github' */
+  headingIdsDefault?: HeadingIdStyle | undefined;
+}
+
+/** Links the site generator makes on the pages it builds. */
+export interface GeneratedConfig {
+  /** Each section index page (`_index`) lists the pages and sections of its folder (Hugo). @default false */
+  sectionLists?: boolean | undefined;
+  /** Folders (relative to the content root) of dated posts: each post links the previous and next one. @default [] */
+  postFolders?: string[] | undefined;
+  /** Routes the generator makes with no source file (a blog index): links there are "outside", never broken. @default [] */
+  routes?: string[] | undefined;
 }
 
 /** Link suggestions (`linkweave suggest`, `command: 'suggest'`). */
@@ -99,8 +129,18 @@ export interface Config {
   include?: string[] | undefined;
   /** Extra globs to leave out (node_modules, dot-folders and the output file are always left out). @default [] */
   exclude?: string[] | undefined;
-  /** How file paths become routes. @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false } */
+  /** How file paths become routes. @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, headingIds: 'auto', headingIdsDefault: 'github' } */
   routes?: RoutesConfig | undefined;
+  /**
+   * Site generator whose own config files (book.toml, hugo.toml, mkdocs.yml, ...) set the content
+   * folder, routes, navigation and redirects: `auto` detects one in the run folder and its
+   * parents up to the repository root; `none` reads none. Keys written here win over the preset's. @default 'auto'
+   */
+  preset?: 'auto' | 'none' | PresetName | undefined;
+  /** Route prefixes that belong to the site but not to these sources: links there are "outside the content", never broken. @default [] */
+  outside?: string[] | undefined;
+  /** Links the generator makes on the pages it builds. @default { sectionLists: false, postFolders: [], routes: [] } */
+  generated?: GeneratedConfig | undefined;
   /** Entry pages (routes) for click depth and for `teleport: 'entry'`. @default ['/'] */
   entry?: string[] | undefined;
   /** A table-of-contents file (Markdown or YAML list of links), relative to the root, shown on every page. @default null */

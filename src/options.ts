@@ -6,6 +6,8 @@
 import { z } from 'zod';
 import { describeIssue, oldFormProblem } from './config-issues.js';
 import { EngineError } from './errors.js';
+import { HEADING_ID_STYLES } from './parse/heading-ids.js';
+import { PRESET_NAMES } from './preset/names.js';
 
 /** How much a check's findings weigh: SARIF's levels (`none` = the check does not run). */
 export const LEVELS = ['error', 'warning', 'none'] as const;
@@ -37,6 +39,16 @@ const schema = z.strictObject({
       indexNames: z.array(z.string().min(1)).default(['index', 'README', '_index']),
       /** Match routes without regard to case. @default false */
       caseInsensitive: z.boolean().default(false),
+      /** Folder (relative to the content root) -> route prefix its files are served under. @default {} */
+      folders: z.record(z.string().min(1), z.string().startsWith('/')).default({}),
+      /** Folders of dated posts: `YYYY-MM-DD-name.md` is routed `YYYY/MM/DD/name`. @default [] */
+      dated: z.array(z.string().min(1)).default([]),
+      /** Site-absolute links are written below the base path (the generator prepends it): an unresolved one is broken, never "outside". @default false */
+      absoluteLinksUnderBase: z.boolean().default(false),
+      /** How headings get their fragment ids: 'auto' picks the style under which most of the site's fragment links resolve. @default 'auto' */
+      headingIds: z.enum(['auto', ...HEADING_ID_STYLES]).default('auto'),
+      /** The style 'auto' keeps when styles tie (a preset sets its generator's). @default 'github' */
+      headingIdsDefault: z.enum(HEADING_ID_STYLES).default('github'),
     })
     .prefault({}),
   /** Entry pages for click depth (and for `teleport: 'entry'`). @default ['/'] */
@@ -135,6 +147,21 @@ const schema = z.strictObject({
     .prefault({}),
   /** Worker threads for parsing: 0 = automatic (by file count and cores), 1 = main thread only. @default 0 */
   workers: z.number().int().min(0).default(0),
+  /** Site generator whose config files set defaults: 'auto' detects one from the files present, 'none' reads none. @default 'auto' */
+  preset: z.enum(['auto', 'none', ...PRESET_NAMES]).default('auto'),
+  /** Route prefixes that are part of the site but not of these sources (links there are "outside", never broken). @default [] */
+  outside: z.array(z.string().min(1)).default([]),
+  /** Links the generator makes on pages it builds. */
+  generated: z
+    .strictObject({
+      /** Each section index page (`_index`) lists the pages and sections of its folder. @default false */
+      sectionLists: z.boolean().default(false),
+      /** Folders of dated posts: each post links the previous and next one. @default [] */
+      postFolders: z.array(z.string().min(1)).default([]),
+      /** Routes the generator makes with no source file (a blog index): links there are "outside", never broken. @default [] */
+      routes: z.array(z.string().startsWith('/')).default([]),
+    })
+    .prefault({}),
 });
 
 /** Configuration as a user writes it (every key optional), documented key by key in src/config.ts. */
@@ -176,6 +203,9 @@ export function resolveOptions(input: unknown, root: string, origin = 'configura
         `${origin}: key "linkPatterns.${i}.pattern": not a valid regular expression (${(error as Error).message})`,
       );
     }
+  }
+  for (const [i, prefix] of options.outside.entries()) {
+    if (!prefix.startsWith('/')) throw new EngineError('E_CONFIG_INVALID', `${origin}: key "outside.${i}": must start with "/", got "${prefix}"`);
   }
   if (!options.routes.basePath.startsWith('/')) {
     throw new EngineError('E_CONFIG_INVALID', `${origin}: key "routes.basePath": must start with "/", got "${options.routes.basePath}"`);

@@ -78,6 +78,10 @@ export interface Heading {
   readonly slug: string;
   readonly line: number;
   readonly column: number;
+  /** True when the id is written in the source (`## Title {#id}`): every heading-id style keeps it. */
+  readonly explicit?: true;
+  /** The text a heading-id style turns into the id, when it differs from `text` (runs of spaces kept). */
+  readonly raw?: string;
 }
 
 /**
@@ -113,6 +117,16 @@ export interface PageMeta {
   readonly exclude: boolean;
 }
 
+/** A file pulled into a page by the generator's include syntax. */
+export interface IncludeRef {
+  /** The path as written. */
+  readonly written: string;
+  /** The candidate paths relative to the content root, `/` separators, in lookup order (may start with `../`). */
+  readonly paths: readonly string[];
+  readonly line: number;
+  readonly column: number;
+}
+
 /** Everything `parse` learns about one source file. */
 export interface PageFacts {
   readonly file: string;
@@ -125,6 +139,14 @@ export interface PageFacts {
   readonly headings: readonly Heading[];
   /** Every fragment target in the page: heading slugs plus `id`/`name` attributes. Sorted, unique. */
   readonly ids: readonly string[];
+  /**
+   * The ids that do not depend on the heading-id style (`id`/`name` attributes, explicit heading
+   * ids), sorted; present on Markdown pages with headings whose ids the style makes. Absent: every
+   * id in `ids` is fixed.
+   */
+  readonly fixedIds?: readonly string[];
+  /** Files this page pulls in (mdBook `{{#include}}`, MkDocs snippets, Hugo include shortcodes). */
+  readonly includes?: readonly IncludeRef[];
   readonly links: readonly RawLink[];
   /** HTML `<base href>` (first with an href), if any. */
   readonly baseHref?: string;
@@ -137,7 +159,18 @@ export interface PageFacts {
 export type LinkKind = 'internal' | 'external' | 'asset' | 'mailto' | 'other';
 
 /** Outcome of resolving a link. */
-export type LinkStatus = 'ok' | 'broken' | 'broken-fragment' | 'external' | 'asset' | 'other' | 'self';
+export type LinkStatus =
+  | 'ok'
+  | 'broken'
+  | 'broken-fragment'
+  | 'external'
+  | 'asset'
+  | 'other'
+  | 'self'
+  /** A site link outside the content: above the base path, under a mounted or configured `outside` prefix. Never broken. */
+  | 'outside'
+  /** A destination holding template syntax (`{{`, `{%`, `<%`): never resolved, never broken. */
+  | 'templated';
 
 /** A link after resolution. */
 export interface ResolvedLink {
@@ -193,6 +226,15 @@ export interface SiteGraph {
   readonly missingEntries: readonly string[];
   /** Files whose route another file already has (the first by path is kept). */
   readonly duplicates: readonly { readonly file: string; readonly route: string; readonly keptFile: string }[];
+  /** The heading-id style fragments were checked under, and how many fragment links it resolves. */
+  readonly headingIds?: {
+    readonly style: string;
+    readonly how: 'auto' | 'set';
+    readonly fragmentLinks: number;
+    readonly resolved: number;
+  };
+  /** Includes whose file is not among the sources (once per path): the page's ids are unknown. */
+  readonly includesOutside?: readonly { readonly file: string; readonly line: number; readonly column: number; readonly written: string }[];
 }
 
 /** Result of the ranking stage. Arrays are indexed by page id. */
@@ -345,6 +387,12 @@ export interface Report {
     readonly internalLinks: number;
     readonly brokenLinks: number;
     readonly brokenFragments: number;
+    /** Links to the site outside these sources (above the base path, mounted or `outside` prefixes): never broken. */
+    readonly outsideLinks: number;
+    /** Links whose destination holds template syntax: never resolved, never broken. */
+    readonly templatedLinks: number;
+    /** Includes whose file is not among the sources (once per path). */
+    readonly includesOutside: number;
     readonly orphans: number;
     readonly unreachable: number;
     readonly deadEnds: number;
@@ -352,6 +400,8 @@ export interface Report {
     readonly iterations: number;
     readonly converged: boolean;
     readonly findings: { readonly error: number; readonly warning: number };
+    /** The heading-id style fragments were checked under (`auto`: the one that resolves the most fragment links). */
+    readonly headingIds: { readonly style: string; readonly how: 'auto' | 'set'; readonly fragmentLinks: number; readonly resolved: number };
   };
   readonly pages: readonly ReportPage[];
   readonly links: readonly ReportLink[];

@@ -4,7 +4,7 @@ import type { ResolvedOptions } from '../options.js';
 /**
  * Every option `src/parse/` reads (a test records the reads of `parseSource` and checks it
  * against this list):
- * - `routes.style`, `routes.basePath`, `routes.indexNames`: the route and title of a page;
+ * - `routes.style`, `routes.basePath`, `routes.indexNames`, `routes.folders`, `routes.dated`: the route and title of a page;
  * - `linkPatterns`: links found by the configured patterns;
  * - `maxLinksPerPage`: links kept per page (more are dropped with a problem).
  *
@@ -14,7 +14,15 @@ import type { ResolvedOptions } from '../options.js';
  * `include`/`exclude` choose which files are parsed, not what a file yields; every later stage's
  * option (entry, template*, rules...) is applied after parsing.
  */
-export const PARSE_OPTION_KEYS = ['routes.style', 'routes.basePath', 'routes.indexNames', 'linkPatterns', 'maxLinksPerPage'] as const;
+export const PARSE_OPTION_KEYS = [
+  'routes.style',
+  'routes.basePath',
+  'routes.indexNames',
+  'routes.folders',
+  'routes.dated',
+  'linkPatterns',
+  'maxLinksPerPage',
+] as const;
 
 /**
  * A stable string of the values of `PARSE_OPTION_KEYS`. Cached facts are reused only under the

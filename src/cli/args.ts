@@ -6,6 +6,7 @@
 import { EngineError } from '../errors.js';
 import { FORMAT_IDS } from '../report/format.js';
 import type { FormatId } from '../report/types.js';
+import { PRESET_NAMES } from '../preset/names.js';
 
 /** One flag of the command line. */
 export interface FlagSpec {
@@ -46,6 +47,13 @@ export const FLAGS = {
     value: 'LEVEL',
     choices: ['error', 'warning'],
     description: 'fail the run (exit 1) on findings at or above this level (config failOn)',
+  },
+  preset: {
+    name: 'preset',
+    kind: 'string',
+    value: 'NAME',
+    choices: ['auto', 'none', ...PRESET_NAMES],
+    description: "read the site as this generator's (config preset; default: detected)",
   },
   quiet: { name: 'quiet', kind: 'boolean', description: 'print nothing but the report (no summary, no progress)' },
   noProgress: { name: 'no-progress', kind: 'boolean', description: 'no progress display on stderr' },

@@ -51,6 +51,7 @@ const CHECK_FLAGS: readonly FlagSpec[] = [
   FLAGS.output,
   FLAGS.maxDepth,
   FLAGS.failOn,
+  FLAGS.preset,
   ...REVIEW_FLAGS,
   FLAGS.quiet,
   FLAGS.noProgress,
@@ -115,7 +116,12 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   let report;
   try {
     const baseline = review.baseline === null ? {} : { baseline: review.baseline };
-    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, progress?.hooks ?? {});
+    // What was read as the site's generator config goes to stderr (never into the report).
+    const onNote = (message: string): void => {
+      progress?.done();
+      if (!flags.quiet) io.stderr.write(`linkweave: ${message}\n`);
+    };
+    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, { ...progress?.hooks, onNote });
   } finally {
     progress?.done();
   }

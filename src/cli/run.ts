@@ -55,8 +55,9 @@ export async function run(argv: readonly string[], io: CliIo): Promise<number> {
 
 /**
  * Flags override configuration keys: --max-depth (maxDepth), --fail-on (failOn), --no-cache
- * (cache.enabled), --targets, --per-target and --per-source (suggest.targets, .perTarget,
- * .perSource). The parser has already refused a flag the command does not take.
+ * (cache.enabled), --preset (preset), --targets, --per-target and --per-source
+ * (suggest.targets, .perTarget, .perSource). The parser has already refused a flag the command
+ * does not take.
  */
 export function withFlags(config: Config, values: FlagValues): Config {
   const merged: Config = { ...config };
@@ -70,6 +71,8 @@ export function withFlags(config: Config, values: FlagValues): Config {
   const failOn = stringFlag(values, 'fail-on');
   if (failOn === 'error' || failOn === 'warning') merged.failOn = failOn;
   if (values['no-cache'] === true) merged.cache = { ...config.cache, enabled: false };
+  const preset = stringFlag(values, 'preset');
+  if (preset !== null) merged.preset = preset as NonNullable<Config['preset']>;
   return merged;
 }
 

@@ -13,6 +13,10 @@ import { navigationSource, pageSource } from './source.js';
 import type { ResolveContext } from './resolve.js';
 import { buildRouteIndex, resolveRouteValue } from './routes.js';
 import { markTemplateLinks } from './template.js';
+import { generatedEdges } from './generated.js';
+import { applyHeadingIdStyle, PageIds } from './heading-ids.js';
+import { resolveIncludes } from './includes.js';
+import { scopeContext } from './scope.js';
 
 /** Pages with more ids than this get a Set for fragment checks; smaller ones are scanned. */
 const ID_SET_THRESHOLD = 16;
@@ -26,8 +30,12 @@ const ID_SET_THRESHOLD = 16;
 export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGraph {
   const routes = options.routes;
   const basePath = normalizedBasePath(routes);
-  const { pages, duplicates, fileToPage } = selectPages(input.pages, routes);
+  const includes = resolveIncludes(input.pages, input.assets);
+  const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, includes.includedFiles);
   const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]!);
+  const unknownIds = new Set<number>();
+  for (const p of pages) if (includes.unknown.has(p.factsIndex)) unknownIds.add(p.id);
+  const pageIds = new PageIds(facts, pages.map((p) => includes.pulledIn.get(p.factsIndex) ?? []), unknownIds);
   const n = pages.length;
 
   const { routeIndex, redirectEnds } = buildRouteIndex(
@@ -49,7 +57,9 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
     fileIndex,
     assets,
     pageRoutes: pages.map((p) => p.route),
+    scope: scopeContext(basePath, options.outside, options.generated.routes, routes.absoluteLinksUnderBase),
     hasId(page, id) {
+      if (unknownIds.has(page) || includes.pulledIn.has(pages[page]!.factsIndex)) return pageIds.has(page, id, 'github');
       const ids = facts[page]!.ids;
       if (ids.length <= ID_SET_THRESHOLD) return ids.includes(id);
       let set = idSets[page];
@@ -77,10 +87,11 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
     for (const raw of f.links) resolved.push(resolveLink(raw, src, ctx));
     if (resolved.length - start > 1) sortRange(resolved, start);
   }
-  const links = resolved.slice(0, navCount).concat(markTemplateLinks(resolved.slice(navCount), n, options.templateShare));
+  const marked = resolved.slice(0, navCount).concat(markTemplateLinks(resolved.slice(navCount), n, options.templateShare));
+  const { links, choice } = applyHeadingIdStyle(marked, pageIds, routes.headingIds, routes.headingIdsDefault);
 
   const uniqueNav = [...new Set(navTargets)].sort((a, b) => a - b);
-  const edges = createEdgeList(links.length + uniqueNav.length * n);
+  const edges = createEdgeList(links.length + uniqueNav.length * n + 2 * n);
   for (const l of links) {
     if (l.from < 0 || l.to < 0 || l.to === l.from) continue;
     if (l.context === 'template') pushEdge(edges, l.from, l.to, options.templateWeight, EDGE_TEMPLATE);
@@ -88,10 +99,18 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
   }
   // The navigation file is the sidebar of every page: a template edge from each page to each target.
   for (const t of uniqueNav) for (let p = 0; p < n; p++) if (p !== t) pushEdge(edges, p, t, options.templateWeight, EDGE_TEMPLATE);
+  // Links the generator puts on the pages it builds: section lists, previous/next post.
+  const { entries, missingEntries } = resolveEntries(options.entry, basePath, ctx);
+  for (const e of generatedEdges(pages, options.generated.sectionLists, options.generated.postFolders, entries)) {
+    pushEdge(edges, e.from, e.to, options.templateWeight, EDGE_TEMPLATE);
+  }
   const { forward, reverse } = buildCsr(edges, n);
 
-  const { entries, missingEntries } = resolveEntries(options.entry, basePath, ctx);
-  return { pages, routeIndex, links, forward, reverse, entries, missingEntries, duplicates };
+  return {
+    pages, routeIndex, links, forward, reverse, entries, missingEntries, duplicates,
+    headingIds: choice,
+    ...(includes.outside.length === 0 ? {} : { includesOutside: includes.outside }),
+  };
 }
 
 /** Entry routes (or source file paths) -> page ids; the ones that match no page, as written. */

@@ -34,12 +34,15 @@ export function compareStrings(a: string, b: string): number {
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
-/** Select and sort the pages of `facts`. */
-export function selectPages(facts: readonly PageFacts[], routes: RouteOptions): PageSelection {
+/**
+ * Select and sort the pages of `facts`.
+ * @param notPages files that are no pages of their own (pulled into another page)
+ */
+export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, notPages: ReadonlySet<string> = new Set()): PageSelection {
   const candidates: { index: number; route: string; key: string; file: string }[] = [];
   for (let index = 0; index < facts.length; index++) {
     const f = facts[index]!;
-    if (f.meta.draft) continue;
+    if (f.meta.draft || notPages.has(f.file)) continue;
     const route = canonicalRoute(f.route);
     candidates.push({ index, route, key: routeKeyOf(route, routes), file: f.file });
   }

@@ -26,6 +26,8 @@ import {
 } from './normalize.js';
 import type { RouteOptions } from './normalize.js';
 import { decodeFragment, filePathOf, joinPath, pathPart, removeDotSegments, stripIndexFile } from './paths.js';
+import { isOutside, isTemplated } from './scope.js';
+import type { ScopeContext } from './scope.js';
 import { SITE_ORIGIN } from './source.js';
 import type { LinkSource } from './source.js';
 
@@ -58,8 +60,10 @@ export interface ResolveContext {
   readonly assets: ReadonlySet<string>;
   /** Route of each page id. */
   readonly pageRoutes: readonly string[];
-  /** True when page `page` has the fragment target `id`. */
+  /** True when page `page` has the fragment target `id` (always true when its ids are unknown). */
   hasId(page: number, id: string): boolean;
+  /** Link scope (outside prefixes, generated routes); absent: nothing is outside. */
+  readonly scope?: ScopeContext;
 }
 
 /**
@@ -69,6 +73,19 @@ export interface ResolveContext {
  *   that both paths agree
  */
 export function resolveLink(raw: RawLink, src: LinkSource, ctx: ResolveContext, fast = true): ResolvedLink {
+  if (isTemplated(raw.href)) return make(raw, src, -1, raw.href.replace(URL_TRIM, ''), '', 'internal', 'templated');
+  const link = resolveInSources(raw, src, ctx, fast);
+  if (link.status !== 'broken' || ctx.scope === undefined) return link;
+  // Only a link that resolved to a usable path can be placed outside; the rest stay broken.
+  if (raw.href.includes('\0') || link.target.split('/').includes('..')) return link;
+  const href = raw.href.replace(URL_TRIM, '');
+  const fileLink = raw.fileRelative === true || (!src.hasBase && isMarkdownExtension(extensionOf(pathPart(href))));
+  if (!isOutside(href, link.target, src.routeDir, src.fileDir, fileLink, ctx.scope)) return link;
+  return { ...link, status: 'outside' };
+}
+
+/** Resolve a link among the sources: a page, an asset, a redirect, or broken. */
+function resolveInSources(raw: RawLink, src: LinkSource, ctx: ResolveContext, fast: boolean): ResolvedLink {
   if (raw.href.includes('\0')) return broken(raw, src, raw.href, 'internal');
   let href = raw.href.replace(URL_TRIM, '');
   const hasScheme = SCHEME.test(href);

@@ -111,6 +111,11 @@ export function readFrontmatter(value: string, contentStart: number): Frontmatte
     if (typeof record[key] === 'boolean') meta[key] = record[key];
     else wrong(key, record[key], 'true or false');
   }
+  // Pages the generator reads but does not render (Hugo's `headless`, `build.render: never`,
+  // `_build.render: false`) are left out like drafts.
+  const build = (record.build ?? record._build) as unknown;
+  const render = typeof build === 'object' && build !== null ? (build as Record<string, unknown>).render : undefined;
+  if (record.headless === true || render === 'never' || render === false) meta.draft = true;
   if ('aliases' in record) {
     const a = record.aliases;
     if (typeof a === 'string' && a.trim() !== '') meta.aliases = [a.trim()];

@@ -205,7 +205,10 @@ function heading(w: Walk, node: Heading, flags: number): void {
   const slugText = custom === null ? raw : raw.slice(0, custom.index);
   const text = collapseSpace(slugText);
   const slug = custom === null ? w.slugger.slug(slugText) : custom[1]!;
-  w.draft.headings.push({ depth: node.depth, text, slug, offset: startOf(w, node) });
+  const offset = startOf(w, node);
+  if (custom !== null) w.draft.headings.push({ depth: node.depth, text, slug, offset, explicit: true });
+  else if (slugText !== text) w.draft.headings.push({ depth: node.depth, text, slug, offset, raw: slugText });
+  else w.draft.headings.push({ depth: node.depth, text, slug, offset });
   if (node.depth === 1 && w.draft.firstH1 === undefined && text !== '') w.draft.firstH1 = text;
   walkChildren(w, node, flags | NO_SPAN | NO_BODY);
 }

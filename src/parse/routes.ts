@@ -41,7 +41,40 @@ export function routeOfFile(path: string, meta: Pick<PageMeta, 'slug' | 'permali
     const slug = meta.slug.trim();
     return canonicalUrlPath(completeRoute(slug.startsWith('/') ? slug : base + slug, routes.style));
   }
+  const mapped = mapFolder(path, routes);
+  if (mapped !== null) return mapped;
   return base + fileRoutePath(path, routes);
+}
+
+/**
+ * A file under a folder of `routes.folders` gets that folder's route prefix (a generator's
+ * `src/pages/` served at `/`, `docs/` at `/docs/`); a file in a folder of `routes.dated` named
+ * `YYYY-MM-DD-name` gets `YYYY/MM/DD/name` (dated posts). Null when neither applies.
+ */
+function mapFolder(path: string, routes: RouteOptions): string | null {
+  const folders = routes.folders;
+  const dated = routes.dated;
+  if (Object.keys(folders).length === 0 && dated.length === 0) return null;
+  let rest = path.replace(/^(?:\.?\/)+/, '');
+  let prefix: string | null = null;
+  let longest = -1;
+  for (const [folder, route] of Object.entries(folders)) {
+    const f = folder.endsWith('/') ? folder : `${folder}/`;
+    if (rest.startsWith(f) && f.length > longest) {
+      longest = f.length;
+      prefix = route;
+    }
+  }
+  const folderOf = rest.slice(0, rest.lastIndexOf('/') + 1);
+  const isDated = dated.some((d) => folderOf.startsWith(d.endsWith('/') ? d : `${d}/`));
+  if (prefix === null && !isDated) return null;
+  if (prefix !== null) rest = rest.slice(longest);
+  else prefix = normalizedBasePath(routes);
+  if (isDated) rest = rest.replace(/(^|\/)(\d{4})-(\d{2})-(\d{2})-([^/]+)$/, '$1$2/$3/$4/$5');
+  let start = prefix.startsWith('/') ? prefix : `/${prefix}`;
+  const base = normalizedBasePath(routes);
+  if (base !== '/' && !start.startsWith(base)) start = base + start.slice(1);
+  return canonicalUrlPath((start.endsWith('/') ? start : `${start}/`) + fileRoutePath(rest, routes));
 }
 
 /** The route of a file below `basePath`, without a leading slash (`a/b/`, `a/b.html`, ``), encoded. */

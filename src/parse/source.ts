@@ -4,7 +4,8 @@
  * a run.
  */
 import type { ResolvedOptions } from '../options.js';
-import type { PageFacts, RawLink, SourceFile, SourceProblem } from '../types.js';
+import type { Heading, IncludeRef, PageFacts, RawLink, SourceFile, SourceProblem } from '../types.js';
+import { findIncludes } from './includes.js';
 import { describeError } from './failure.js';
 import { EMPTY_META } from './frontmatter.js';
 import { readHtmlPage } from './html.js';
@@ -88,9 +89,18 @@ function assemble(file: SourceFile, options: ResolvedOptions, bom: number, lines
   const headings = draft.headings
     .slice()
     .sort((a, b) => a.offset - b.offset)
-    .map((h) => ({ depth: h.depth, text: h.text, slug: h.slug, ...positionOf(lines, h.offset) }));
+    .map((h) => {
+      const heading: Heading = { depth: h.depth, text: h.text, slug: h.slug, ...positionOf(lines, h.offset) };
+      if (h.explicit === true) return { ...heading, explicit: true as const };
+      return h.raw === undefined ? heading : { ...heading, raw: h.raw };
+    });
   const ids = new Set<string>(draft.ids);
   for (const h of headings) if (h.slug !== '') ids.add(h.slug);
+  // Ids a heading-id style makes are told apart from the ones written in the source.
+  const styled = file.kind === 'markdown' && headings.some((h) => h.explicit !== true);
+  const fixedIds = new Set<string>(draft.ids);
+  if (styled) for (const h of headings) if (h.explicit === true && h.slug !== '') fixedIds.add(h.slug);
+  const includes = findIncludes(bom === 1 ? file.text.slice(1) : file.text, file.path, draft.code, lines);
   const spans = draft.spans
     .slice()
     .sort((a, b) => a.offset - b.offset)
@@ -110,7 +120,11 @@ function assemble(file: SourceFile, options: ResolvedOptions, bom: number, lines
     spans,
     problems,
   };
-  return draft.baseHref === undefined ? facts : { ...facts, baseHref: draft.baseHref };
+  const extra: { fixedIds?: string[]; includes?: IncludeRef[]; baseHref?: string } = {};
+  if (styled) extra.fixedIds = [...fixedIds].sort();
+  if (includes.length > 0) extra.includes = includes;
+  if (draft.baseHref !== undefined) extra.baseHref = draft.baseHref;
+  return Object.keys(extra).length === 0 ? facts : { ...facts, ...extra };
 }
 
 function pickTitle(fromFrontmatter: string | undefined, draft: PageDraft, path: string, options: ResolvedOptions): string {

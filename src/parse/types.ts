@@ -36,6 +36,10 @@ export interface HeadingDraft {
   readonly text: string;
   readonly slug: string;
   readonly offset: number;
+  /** The id is written in the source (`{#id}`). */
+  readonly explicit?: true;
+  /** The text given to the heading-id style, when it differs from `text`. */
+  readonly raw?: string;
 }
 
 /** A span candidate: `text === source.slice(offset, offset + text.length)`, one line at most. */

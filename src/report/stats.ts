@@ -36,7 +36,11 @@ export function computeStats(input: {
   let internalLinks = 0;
   let brokenLinks = 0;
   let brokenFragments = 0;
+  let outsideLinks = 0;
+  let templatedLinks = 0;
   for (const link of graph.links) {
+    if (link.status === 'outside') outsideLinks++;
+    else if (link.status === 'templated') templatedLinks++;
     if (link.kind === 'internal') internalLinks++;
     if (link.from >= 0 && !isChecked(graph, link.from)) continue;
     if (link.status === 'broken') brokenLinks++;
@@ -50,6 +54,9 @@ export function computeStats(input: {
     internalLinks,
     brokenLinks,
     brokenFragments,
+    outsideLinks,
+    templatedLinks,
+    includesOutside: graph.includesOutside?.length ?? 0,
     orphans,
     unreachable,
     deadEnds,
@@ -57,6 +64,7 @@ export function computeStats(input: {
     iterations: ranking.iterations,
     converged: ranking.converged,
     findings: { error, warning: findings.length - error },
+    headingIds: graph.headingIds ?? { style: 'github', how: 'set', fragmentLinks: 0, resolved: 0 },
   };
   return { stats, gate: { maxDepth, orphans, brokenLinks, brokenFragments, unreachable, fewestImportantInlinks } };
 }

@@ -92,10 +92,11 @@ describe('RFC 3986 section 5.4 examples on the route resolver', () => {
       expect(l.target).toBe(path);
       expect(l.fragment).toBe(fragment);
       expect(l.status).toBe(path === RFC_BASE_ROUTE ? 'self' : 'ok');
-      // The path is the same when no page is there: the link is broken, with that path as target.
+      // The path is the same when no page is there: the link is broken, with that path as target;
+      // a reference that climbs above the site's root (`../../../g`) points outside the content.
       const m = resolvedWithout[i]!;
       expect(m.target).toBe(path);
-      expect(m.status).toBe(path === RFC_BASE_ROUTE ? 'self' : 'broken');
+      expect(m.status).toBe(path === RFC_BASE_ROUTE ? 'self' : ref.startsWith('../../../') ? 'outside' : 'broken');
     });
   });
 
@@ -153,8 +154,9 @@ describe('links between source files (DESIGN section 4)', () => {
   });
   it('escaping above the root stays at the root and never names an outside file', () => {
     const l = from('../../../../etc/passwd');
-    expect(l).toMatchObject({ target: '/etc/passwd', status: 'broken', kind: 'internal' });
-    expect(from('../../../../../etc/passwd.md')).toMatchObject({ target: 'etc/passwd.md', status: 'broken' });
+    // It climbs above the content root: outside the content (never broken, never read).
+    expect(l).toMatchObject({ target: '/etc/passwd', status: 'outside', kind: 'internal' });
+    expect(from('../../../../../etc/passwd.md')).toMatchObject({ target: 'etc/passwd.md', status: 'outside' });
   });
   it('assets: present -> asset, missing -> broken asset; Markdown may name them beside the file', () => {
     expect(from('/img/logo.png')).toMatchObject({ kind: 'asset', status: 'asset', target: '/img/logo.png' });

@@ -74,6 +74,8 @@ export function summaryParts(report: Report): string[] {
     plural(s.links, 'link'),
     plural(s.brokenLinks, 'broken link'),
     plural(s.brokenFragments, 'broken fragment'),
+    ...(s.outsideLinks > 0 ? [`${plural(s.outsideLinks, 'link')} outside the content`] : []),
+    ...(s.templatedLinks > 0 ? [`${plural(s.templatedLinks, 'templated link')}`] : []),
     plural(s.orphans, 'orphan page'),
     `${s.unreachable} unreachable`,
     plural(s.deadEnds, 'dead end'),

@@ -1,0 +1,84 @@
+/**
+ * Hugo (`hugo.toml|yaml|json`, `config.*`, `config/_default/`): content in `contentDir` (default
+ * `content/`; a multilingual site's default language's own `contentDir` when it has one), pages
+ * at `/a/b/` (`uglyURLs`: `/a/b.html`), `_index.md` and `index.md` stand for their folder, URLs
+ * lower-cased, `baseURL`'s path is the base path, each section's `_index.md` lists its pages.
+ * Relative links resolve against the page URL. `module.mounts` whose source folder is absent
+ * bring content in from elsewhere at build time: their targets are outside these sources.
+ * Heading ids: `markup.goldmark.parser.autoHeadingIDType` (github, github-ascii, blackfriday).
+ */
+import type { HeadingIdStyle } from '../parse/heading-ids.js';
+import type { PresetReader } from './types.js';
+import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
+
+const ID_TYPES: Readonly<Record<string, HeadingIdStyle>> = {
+  github: 'hugo-github',
+  'github-ascii': 'hugo-github-ascii',
+  blackfriday: 'hugo-blackfriday',
+};
+
+/** Hugo's `ref`/`relref` shortcodes name a page file: read as file links. */
+const REF_PATTERN = '\\{\\{[<%]\\s*(?:rel)?ref\\s+"([^"#]+\\.md)(?:#[^"]*)?"\\s*[>%]\\}\\}';
+
+export const readHugo: PresetReader = (configFile, files) => {
+  const notes: string[] = [];
+  const parsed = parseConfigText(configFile, files.read(configFile) ?? '');
+  const conf: Record<string, unknown> = parsed.ok ? { ...parsed.value } : {};
+  if (!parsed.ok) notes.push(`${configFile} does not parse (${parsed.error}); Hugo's defaults used`);
+  // config/_default/ splits the config into one file per top-level key.
+  if (configFile.startsWith('config/_default/')) {
+    for (const key of ['languages', 'markup', 'module']) {
+      for (const ext of ['toml', 'yaml', 'yml', 'json']) {
+        const text = files.read(`config/_default/${key}.${ext}`);
+        if (text === null) continue;
+        const part = parseConfigText(`${key}.${ext}`, text);
+        if (part.ok && conf[key] === undefined) conf[key] = part.value;
+      }
+    }
+  }
+  let content = cleanFolder(str(conf.contentDir) ?? str(conf.contentdir) ?? 'content');
+  const languages = isRecord(conf.languages) ? conf.languages : {};
+  const defaultLang = str(conf.defaultContentLanguage) ?? str(conf.defaultcontentlanguage) ?? 'en';
+  const langDir = str(dig(languages, defaultLang, 'contentDir')) ?? str(dig(languages, defaultLang, 'contentdir'));
+  if (langDir !== undefined) content = cleanFolder(langDir);
+  let basePath = basePathOf(str(conf.baseURL) ?? str(conf.baseurl));
+  if (conf.defaultContentLanguageInSubdir === true) basePath = `${basePath ?? '/'}${defaultLang}/`;
+  const idType = str(dig(conf, 'markup', 'goldmark', 'parser', 'autoHeadingIDType'));
+  const outside: string[] = [];
+  const mounts = dig(conf, 'module', 'mounts');
+  if (Array.isArray(mounts)) {
+    for (const m of mounts) {
+      const source = str(dig(m, 'source'));
+      const target = str(dig(m, 'target'));
+      if (source === undefined || target === undefined || !/^content(\/|$)/.test(target)) continue;
+      if (files.exists(source)) continue;
+      const route = target.replace(/^content\/?/, '');
+      outside.push(`/${route}${route === '' || route.endsWith('/') ? '' : '/'}`);
+    }
+  }
+  if (isRecord(conf.permalinks)) notes.push('permalinks rules are not applied (pages keep their folder routes)');
+  const parts = [shownFolder(content)];
+  if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
+  if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
+  return {
+    name: 'hugo',
+    configFile,
+    contentDir: content,
+    config: {
+      routes: {
+        style: conf.uglyURLs === true || conf.uglyurls === true ? 'html' : 'directory',
+        indexNames: ['index', '_index'],
+        caseInsensitive: conf.disablePathToLower !== true,
+        headingIdsDefault: (idType !== undefined ? ID_TYPES[idType] : undefined) ?? 'hugo-github',
+        ...(basePath === null ? {} : { basePath }),
+      },
+      linkPatterns: [{ pattern: REF_PATTERN, route: '$1' }],
+      generated: { sectionLists: true },
+      ...(outside.length === 0 ? {} : { outside }),
+    },
+    navigation: null,
+    redirects: [],
+    parts,
+    notes,
+  };
+};
