@@ -37,7 +37,7 @@ describe('the example site, as a newcomer sees it', () => {
 
   it('terminal report (100 columns when not a terminal; the run fails with exit 1 as planted)', async () => {
     expect(text.code).toBe(1);
-    expect(text.stderr).toBe('');
+    expect(text.stderr).toBe('linkweave: heading ids: github style (chosen by the fragment links), 20 of 23 fragment links resolve\n');
     await expect(text.stdout).toMatchFileSnapshot('__snapshots__/example-site.txt');
     const command = (l: string) => l.startsWith('  linkweave apply ');
     for (const line of text.stdout.split('\n')) if (!command(line)) expect(line.length).toBeLessThanOrEqual(100);
