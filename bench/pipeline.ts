@@ -1,5 +1,5 @@
 /**
- * One timed run of the real pipeline: `analyze` with `command: 'suggest'` (stages timed from
+ * One timed run of the real pipeline: `analyze` with `command: 'suggest'` or `'check'` (stages timed from
  * its hooks), then the write stage as the command line does it: `formatReportPieces(report, 'json')`
  * and `writeFileAtomic`.
  */
@@ -34,6 +34,8 @@ export interface RunSettings {
   readonly cacheDir: string | null;
   /** Where the JSON report is written (outside the site). */
   readonly outFile: string;
+  /** @default 'suggest' */
+  readonly command?: 'check' | 'suggest';
 }
 
 /** Run the pipeline once on the site at `root`. */
@@ -50,7 +52,7 @@ export async function runPipeline(lib: Built, root: string, settings: RunSetting
   const cache = settings.cacheDir === null ? { enabled: false } : { enabled: true, dir: settings.cacheDir };
   const c0 = process.cpuUsage();
   const t0 = performance.now();
-  const report = await lib.api.analyze({ ...siteConfig(root), root, command: 'suggest', cache }, hooks);
+  const report = await lib.api.analyze({ ...siteConfig(root), root, command: settings.command ?? 'suggest', cache }, hooks);
   const tw = performance.now();
   // As the command line writes it: in pieces (one string cannot hold a 100,000-page report).
   await lib.write.writeFileAtomic(settings.outFile, lib.api.formatReportPieces(report, 'json'));
