@@ -165,15 +165,15 @@ export function renderTable(results: readonly SizeResult[], related: readonly (R
     'within 4x',
   );
   const growth = (stage: BenchStage, limit: number | null) => (r: SizeResult, i: number): string => {
-    if (i === 0) return '-';
-    const prev = results[i - 1]!;
+    const prev = results.slice(0, i).reverse().find((x) => x.vocabulary === r.vocabulary);
+    if (prev === undefined) return '-';
     if (!isMeasured(r.measure) || !isMeasured(prev.measure)) return 'n/a';
     const v = stageMedian(r.measure, stage) / stageMedian(prev.measure, stage);
     const ratio = `${v.toFixed(1)}x for ${(r.size / prev.size).toFixed(0)}x pages`;
     return limit !== null && prev.size === 10_000 && r.size === 50_000 ? `${ratio} ${mark(v <= limit)}` : ratio;
   };
-  row('text: time / previous size', growth('text', TARGETS.textGrowth10kTo50k), '<= 6x from 10,000 to 50,000');
-  row('suggest: time / previous size', growth('suggest', null), '~ pages ratio');
+  row('text: time / previous size (same kind)', growth('text', TARGETS.textGrowth10kTo50k), '<= 6x from 10,000 to 50,000');
+  row('suggest: time / previous size (same kind)', growth('suggest', null), '~ pages ratio');
 
   const relatedCells = (text: string): ((r: SizeResult, i: number) => string) => (_r, i) => (i === 0 ? text : '');
   for (const rel of related) {
