@@ -9,3 +9,5 @@ export { isStoredFacts } from './validate.js';
 export type { CacheSettings, CacheStats, IgnoredReason, ParseMisses } from './types.js';
 export { readResult, resultKey, writeResult } from './result.js';
 export type { ResultInputs } from './result.js';
+export { readCachedOutput, saveCachedOutput } from './output.js';
+export type { ReportCacheInfo } from './output.js';

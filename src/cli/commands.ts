@@ -4,6 +4,8 @@
  */
 import { resolve } from 'node:path';
 import { analyze } from '../analyze.js';
+import { readCachedOutput, saveCachedOutput } from '../cache/index.js';
+import type { ReportCacheInfo } from '../cache/index.js';
 import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
 import type { Config } from '../options.js';
 import { formatReportPieces } from '../report/index.js';
@@ -75,12 +77,15 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   const review = readReviewInputs(ctx.values, io, ctx.root);
   const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
   let report;
+  const cache: { info: ReportCacheInfo | null } = { info: null };
   try {
     const baseline = review.baseline === null ? {} : { baseline: review.baseline };
-    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, progress?.hooks ?? {});
+    const hooks = { ...(progress?.hooks ?? {}), onReportCache: (info: ReportCacheInfo) => (cache.info = info) };
+    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, hooks);
   } finally {
     progress?.done();
   }
+  const analyzed = report;
   report = withComparison(report, review);
   await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
@@ -89,8 +94,16 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   if (output === null) {
     for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);
   } else {
-    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd });
-    await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
+    const writeOptions = { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) };
+    // A report from the whole-report cache (and not changed here by a comparison) is written as
+    // the bytes written for it last time, without formatting it again.
+    const reused = report === analyzed ? cache.info : null;
+    const bytes = reused === null ? null : readCachedOutput(reused, format, io.cwd);
+    if (bytes !== null) await writeFileAtomic(output, bytes, writeOptions);
+    else {
+      await writeFileAtomic(output, formatReportPieces(report, format, { color: false, cwd: io.cwd }), writeOptions);
+      if (reused !== null) saveCachedOutput(reused, format, io.cwd, output);
+    }
     if (!flags.quiet) {
       // After another format went to a file, the terminal gets a summary: the counts, the gate
       // and the first findings and suggestions (a large site has a hundred thousand).
