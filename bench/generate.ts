@@ -11,7 +11,7 @@
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { SitePlan } from './site/plan.js';
+import type { SitePlan, Vocabulary } from './site/plan.js';
 import { planSite } from './site/plan.js';
 import { extraParagraph, renderPage } from './site/render.js';
 
@@ -29,6 +29,8 @@ export interface GenerateOptions {
   readonly topicLoyalty?: number;
   /** Share of pages listed on their folder's index page. @default 0.75 */
   readonly featuredShare?: number;
+  /** How pages choose their words (see {@link Vocabulary}). @default 'topical' */
+  readonly vocabulary?: Vocabulary;
 }
 
 /** What the generator made. */
@@ -66,6 +68,7 @@ function planOf(options: GenerateOptions): SitePlan {
     maxFolderPages: options.maxFolderPages ?? 200,
     topicLoyalty: options.topicLoyalty ?? 0.85,
     featuredShare: options.featuredShare ?? 0.75,
+    vocabulary: options.vocabulary ?? 'topical',
   });
 }
 

@@ -10,6 +10,7 @@ import type * as Graph from '../src/graph/index.js';
 import type * as Rank from '../src/rank/index.js';
 import type * as Text from '../src/text/index.js';
 import type * as Write from '../src/report/write.js';
+import type * as Cache from '../src/cache/index.js';
 
 /** The modules of the built package the bench uses. */
 export interface Built {
@@ -20,6 +21,7 @@ export interface Built {
   readonly rank: typeof Rank;
   readonly text: typeof Text;
   readonly write: typeof Write;
+  readonly cache: typeof Cache;
 }
 
 /** URL of a file of the build (`dist/...`), from `dist-bench/bench/`. */
@@ -36,7 +38,7 @@ export async function loadBuilt(): Promise<Built> {
       throw new Error(`bench: cannot load dist/${path} (run "npm run build" first): ${(error as Error).message}`);
     }
   };
-  const [api, collect, parse, graph, rank, text, write] = await Promise.all([
+  const [api, collect, parse, graph, rank, text, write, cache] = await Promise.all([
     load<typeof Api>('index.js'),
     load<typeof Collect>('collect/index.js'),
     load<typeof Parse>('parse/index.js'),
@@ -44,6 +46,7 @@ export async function loadBuilt(): Promise<Built> {
     load<typeof Rank>('rank/index.js'),
     load<typeof Text>('text/index.js'),
     load<typeof Write>('report/write.js'),
+    load<typeof Cache>('cache/index.js'),
   ]);
-  return { api, collect, parse, graph, rank, text, write };
+  return { api, collect, parse, graph, rank, text, write, cache };
 }

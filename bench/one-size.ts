@@ -43,6 +43,8 @@ export interface MeasureResult {
   readonly files: number;
   readonly sourceBytes: number;
   readonly cold: RunTiming[];
+  /** Cold `check` runs (no suggestions), a fresh cache folder each. */
+  readonly coldCheck: RunTiming[];
   /** Empty when the cache wrote nothing (not built yet). */
   readonly warm: RunTiming[];
   readonly warmChanged: RunTiming[];
@@ -56,6 +58,12 @@ export interface MeasureResult {
 export interface RelatedResult {
   readonly mode: 'related';
   readonly size: number;
+  readonly vocabulary: string;
+  /** Posting entries read and row entries scored by the inverted-index search (its work). */
+  readonly postingsRead: number;
+  readonly entriesScored: number;
+  /** Posting entries of all relating terms of all pages (what reading every posting would cost). */
+  readonly postingsTotal: number;
   readonly terms: number;
   readonly inverted: Span[];
   readonly brute: Span;
@@ -104,6 +112,7 @@ async function measure(lib: Built, root: string, work: string, size: number, run
   gc();
 
   const cold: RunTiming[] = [];
+  const coldCheck: RunTiming[] = [];
   const warm: RunTiming[] = [];
   const warmChanged: RunTiming[] = [];
   const bare: Span[] = [];
@@ -116,6 +125,9 @@ async function measure(lib: Built, root: string, work: string, size: number, run
     gc();
     const cacheDir = join(work, `cache-${r}`);
     const outFile = join(work, 'report.json');
+    coldCheck.push(await runPipeline(lib, root, { cacheDir: join(work, `cache-check-${r}`), outFile, command: 'check' }));
+    rmSync(join(work, `cache-check-${r}`), { recursive: true, force: true });
+    gc();
     cold.push(await runPipeline(lib, root, { cacheDir, outFile }));
     cacheBytes = folderBytes(cacheDir);
     gc();
@@ -133,18 +145,19 @@ async function measure(lib: Built, root: string, work: string, size: number, run
     rmSync(cacheDir, { recursive: true, force: true });
   }
   return {
-    mode: 'measure', size, runs, files: paths.length, sourceBytes, cold, warm, warmChanged, cacheBytes,
+    mode: 'measure', size, runs, files: paths.length, sourceBytes, cold, coldCheck, warm, warmChanged, cacheBytes,
     bareParse: bare, pagerank, bandwidth,
   };
 }
 
-async function related(lib: Built, root: string, size: number, runs: number): Promise<RelatedResult> {
+async function related(lib: Built, root: string, size: number, runs: number, vocabulary: string): Promise<RelatedResult> {
   const front = await runFront(lib, root);
   const index = lib.text.buildTermIndex(front.ordered.map((f) => f.text));
   const k = 10;
   const inverted: Span[] = [];
   // One untimed call of each first, so both are timed with their code compiled by the JIT.
   let fast = lib.text.relatedPages(index, k);
+  gc();
   for (let r = 0; r < runs; r++) {
     const clock = startClock();
     fast = lib.text.relatedPages(index, k);
@@ -155,7 +168,11 @@ async function related(lib: Built, root: string, size: number, runs: number): Pr
   const slow = bruteForceRelated(index, k);
   const brute = clock.stop();
   const agreement = compareRelated(fast, slow);
-  return { mode: 'related', size, terms: index.terms.length, inverted, brute, ...agreement };
+  const stats = lib.text.relatedPagesWithStats(index, k);
+  return {
+    mode: 'related', size, vocabulary, terms: index.terms.length, inverted, brute, ...agreement,
+    postingsRead: stats.postingsRead, entriesScored: stats.entriesScored, postingsTotal: stats.postingsRead + stats.postingsSkipped,
+  };
 }
 
 async function main(): Promise<void> {
@@ -166,6 +183,7 @@ async function main(): Promise<void> {
       runs: { type: 'string' },
       mode: { type: 'string', default: 'rss' },
       seed: { type: 'string', default: '1' },
+      vocabulary: { type: 'string', default: 'topical' },
     },
   });
   const size = Number(values.size);
@@ -177,9 +195,11 @@ async function main(): Promise<void> {
   const work = mkdtempSync(join(tmpdir(), 'lw-bench-work-'));
   const root = values.dir ?? join(work, 'site');
   try {
-    if (values.dir === undefined) generateSite(root, { pages: size, seed: Number(values.seed) });
+    const vocabulary = values.vocabulary;
+    if (vocabulary !== 'topical' && vocabulary !== 'shared') throw new Error(`one-size: --vocabulary must be topical or shared, got "${vocabulary}"`);
+    if (values.dir === undefined) generateSite(root, { pages: size, seed: Number(values.seed), vocabulary });
     const lib = await loadBuilt();
-    const result = mode === 'rss' ? await rss(lib, root, work) : mode === 'measure' ? await measure(lib, root, work, size, runs) : await related(lib, root, size, runs);
+    const result = mode === 'rss' ? await rss(lib, root, work) : mode === 'measure' ? await measure(lib, root, work, size, runs) : await related(lib, root, size, runs, vocabulary);
     process.stdout.write(`RESULT ${JSON.stringify(result)}\n`);
   } finally {
     rmSync(work, { recursive: true, force: true });

@@ -3,11 +3,14 @@
  * in fresh child processes, print one table.
  *
  *   node --expose-gc dist-bench/bench/run.js [--sizes 1000,10000] [--full] [--runs N] [--record] [--seed S]
+ *     [--vocabulary topical,shared]
  *
  * Default sizes 1,000 / 10,000 / 50,000; `--full` adds 100,000. Medians of `--runs` runs
  * (default 3 below 50,000 pages, 1 from 50,000). `--record` puts the table on top of
  * bench/RESULTS.md (older tables are kept below). Sites are generated into os.tmpdir() and
- * removed afterwards.
+ * removed afterwards. `--vocabulary` names the site kinds measured at every size (default
+ * `topical`; `shared` adds a large site-wide vocabulary, see bench/site/plan.ts); the related-pages
+ * check against brute force runs on both kinds.
  */
 import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -17,6 +20,7 @@ import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
 import { generateSite } from './generate.js';
 import type { MeasureResult, RelatedResult, RssResult } from './one-size.js';
+import type { Vocabulary } from './site/plan.js';
 import type { MachineInfo, SizeResult } from './table.js';
 import { renderTable } from './table.js';
 
@@ -85,6 +89,12 @@ function record(table: string, command: string): string {
   return file;
 }
 
+function parseVocabularies(text: string): Vocabulary[] {
+  const kinds = text.split(',').map((s) => s.trim());
+  for (const k of kinds) if (k !== 'topical' && k !== 'shared') throw new Error(`bench: --vocabulary takes topical and/or shared separated by commas, got "${text}"`);
+  return [...new Set(kinds as Vocabulary[])];
+}
+
 async function main(): Promise<void> {
   const { values } = parseArgs({
     options: {
@@ -93,8 +103,10 @@ async function main(): Promise<void> {
       runs: { type: 'string' },
       record: { type: 'boolean', default: false },
       seed: { type: 'string', default: '1' },
+      vocabulary: { type: 'string', default: 'topical' },
     },
   });
+  const vocabularies = parseVocabularies(values.vocabulary);
   const sizes = parseSizes(values.sizes, values.full);
   const seed = Number(values.seed);
   if (values.runs !== undefined && !(Number.isInteger(Number(values.runs)) && Number(values.runs) >= 1)) {
@@ -104,28 +116,35 @@ async function main(): Promise<void> {
   log(`${machine.date} · ${machine.cpu} × ${machine.cores} · Node ${machine.node}; sizes ${sizes.join(', ')}`);
   const base = mkdtempSync(join(tmpdir(), 'lw-bench-'));
   const results: SizeResult[] = [];
-  let related: RelatedResult | { error: string } | null = null;
+  const related: (RelatedResult | { error: string })[] = [];
   try {
-    for (const size of sizes) {
-      const dir = join(base, `site-${size}`);
-      const t = performance.now();
-      const site = generateSite(dir, { pages: size, seed });
-      const generateMs = performance.now() - t;
-      log(`${size} pages: generated ${(site.bytes / 1e6).toFixed(1)} MB in ${(generateMs / 1000).toFixed(1)} s; peak RSS run...`);
-      const rss = await child<RssResult>(['--mode', 'rss', '--size', String(size), '--dir', dir], []);
-      log(`${size} pages: measuring...`);
-      const runs = values.runs ?? String(size >= 50_000 ? 1 : 3);
-      const heap = `--max-old-space-size=${size >= 50_000 ? 12_288 : 4096}`;
-      const measure = await child<MeasureResult>(['--mode', 'measure', '--size', String(size), '--dir', dir, '--runs', runs], ['--expose-gc', heap]);
-      results.push({ size, generateMs, rss, measure });
+    // The related-pages check first: it is short, and a long run stopped early still has it.
+    for (const vocabulary of ['topical', 'shared'] as const) {
+      const dir = join(base, `site-related-${vocabulary}`);
+      generateSite(dir, { pages: RELATED_PAGES, seed, vocabulary });
+      log(`related pages (${vocabulary}): inverted index against brute force on ${RELATED_PAGES} pages...`);
+      const result = await child<RelatedResult>(['--mode', 'related', '--size', String(RELATED_PAGES), '--dir', dir, '--runs', '3', '--vocabulary', vocabulary], ['--expose-gc']);
+      related.push(result);
       rmSync(dir, { recursive: true, force: true });
-      // The table so far, so a long run that is stopped still leaves its numbers.
-      log(`so far:\n${renderTable(results, null, { ...machine, load: [machine.load[0], loadavg()[0]!] })}`);
     }
-    const dir = join(base, `site-${RELATED_PAGES}`);
-    generateSite(dir, { pages: RELATED_PAGES, seed });
-    log(`related pages: inverted index against brute force on ${RELATED_PAGES} pages...`);
-    related = await child<RelatedResult>(['--mode', 'related', '--size', String(RELATED_PAGES), '--dir', dir, '--runs', '3'], ['--expose-gc']);
+    for (const size of sizes) {
+      for (const vocabulary of vocabularies) {
+        const dir = join(base, `site-${vocabulary}-${size}`);
+        const t = performance.now();
+        const site = generateSite(dir, { pages: size, seed, vocabulary });
+        const generateMs = performance.now() - t;
+        log(`${size} pages (${vocabulary}): generated ${(site.bytes / 1e6).toFixed(1)} MB in ${(generateMs / 1000).toFixed(1)} s; peak RSS run...`);
+        const rss = await child<RssResult>(['--mode', 'rss', '--size', String(size), '--dir', dir], []);
+        log(`${size} pages (${vocabulary}): measuring...`);
+        const runs = values.runs ?? String(size >= 50_000 ? 1 : 3);
+        const heap = `--max-old-space-size=${size >= 50_000 ? 12_288 : 4096}`;
+        const measure = await child<MeasureResult>(['--mode', 'measure', '--size', String(size), '--dir', dir, '--runs', runs], ['--expose-gc', heap]);
+        results.push({ size, vocabulary, generateMs, rss, measure });
+        rmSync(dir, { recursive: true, force: true });
+        // The table so far, so a long run that is stopped still leaves its numbers.
+        log(`so far:\n${renderTable(results, related, { ...machine, load: [machine.load[0], loadavg()[0]!] })}`);
+      }
+    }
   } finally {
     rmSync(base, { recursive: true, force: true });
   }

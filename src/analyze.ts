@@ -7,7 +7,7 @@
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { parseWithCache, readResult, resultKey, writeResult } from './cache/index.js';
-import type { ResultInputs } from './cache/index.js';
+import type { ReportCacheInfo, ResultInputs } from './cache/index.js';
 import { collectSources, readAuxFile } from './collect/index.js';
 import type { CollectResult } from './collect/index.js';
 import { parseNavigation, parseRedirects } from './parse/index.js';
@@ -35,6 +35,11 @@ export type StageName = 'collect' | 'parse' | 'graph' | 'rank' | 'text' | 'sugge
 export interface AnalyzeHooks {
   /** A stage starts or ends. */
   onStage?(stage: StageName, phase: 'start' | 'end'): void;
+  /**
+   * Where the report of this run is in the whole-report cache (only with the cache on): lets
+   * a caller that writes the report copy the bytes it wrote last time (`readCachedOutput`).
+   */
+  onReportCache?(info: ReportCacheInfo): void;
   /** Progress inside a stage (files parsed so far). */
   onProgress?(stage: StageName, done: number, total: number): void;
   /** A line worth telling the user: what was read as the site's generator config, the heading-id style chosen. */
@@ -76,6 +81,7 @@ export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Pr
   const cacheDir = options.cache.enabled ? resolve(options.cache.dir) : null;
   const key = cacheDir === null ? '' : resultKey(reportInputs(options, command, collected, baseline));
   const cached = cacheDir === null ? null : readResult(cacheDir, command, key);
+  if (cacheDir !== null) hooks.onReportCache?.({ dir: cacheDir, command, key, hit: cached !== null });
   if (cached !== null) return cached;
   // The facts are handed over without a binding here, so `finish` can let their texts go.
   const report = await finish({

@@ -5,7 +5,7 @@
  * needs its target's file, route and headings).
  */
 import type { Random } from './prng.js';
-import { intBetween, mulberry32, pick, shuffle } from './prng.js';
+import { intBetween, mixSeed, mulberry32, pick, shuffle } from './prng.js';
 import { COMMON_WORDS, TITLE_VERBS, capitalize, inventWord } from './words.js';
 
 /** A topic cluster: its label (the ground truth of relatedness) and its own words. */
@@ -58,7 +58,22 @@ export interface SitePlan {
   readonly popularity: readonly number[];
   /** Ids of the root's special pages that the shared footer links to. */
   readonly footerPages: readonly number[];
+  /**
+   * The site-wide vocabulary every page draws from whatever its topic, most common first (empty
+   * for the `topical` kind); see {@link Vocabulary}.
+   */
+  readonly shared: readonly string[];
 }
+
+/**
+ * How pages choose their words.
+ * - `topical`: a small common vocabulary (most of it in more than half the pages, so it relates
+ *   nothing) and each topic's own invented words: related pages share rare terms.
+ * - `shared`: the same, plus a large site-wide vocabulary drawn with a Zipf-like popularity, as
+ *   in real prose: thousands of terms sit in 1-50% of the pages, so most pairs of pages share
+ *   some relating terms and an inverted index reads long postings.
+ */
+export type Vocabulary = 'topical' | 'shared';
 
 /** Knobs of the plan (defaults in `generate.ts`). */
 export interface PlanOptions {
@@ -70,6 +85,7 @@ export interface PlanOptions {
   readonly topicLoyalty: number;
   /** Share of pages listed on their folder's index. */
   readonly featuredShare: number;
+  readonly vocabulary: Vocabulary;
 }
 
 const ROOT_PAGES: readonly { name: string; title: string }[] = [
@@ -81,6 +97,8 @@ const ROOT_PAGES: readonly { name: string; title: string }[] = [
 ];
 
 const WORDS_PER_TOPIC = 32;
+/** Words of the site-wide vocabulary of a `shared` site. */
+const SHARED_WORDS = 6000;
 
 /** GitHub-style slug of a heading made of plain lower-case words and spaces. */
 export function slugOf(text: string): string {
@@ -165,7 +183,16 @@ export function planSite(options: PlanOptions): SitePlan {
   for (const p of pages) topicPages[p.topic]!.push(p.id);
   const popularity = shuffle(rnd, pages.map((p) => p.id));
   const footerPages = pages.filter((p) => p.folder === 0 && !p.isIndex).map((p) => p.id).slice(0, 3);
-  return { seed: options.seed, topics, folders, pages, topicPages, popularity, footerPages };
+  return { seed: options.seed, topics, folders, pages, topicPages, popularity, footerPages, shared: sharedWords(options, taken) };
+}
+
+/** The site-wide vocabulary, from a stream of its own (the `topical` plan's draws are unchanged). */
+function sharedWords(options: PlanOptions, taken: Set<string>): string[] {
+  if (options.vocabulary === 'topical') return [];
+  const rnd = mulberry32(mixSeed(options.seed, 0x5eed));
+  const words: string[] = [];
+  for (let i = 0; i < SHARED_WORDS; i++) words.push(inventWord(rnd, taken));
+  return words;
 }
 
 /** Sizes of the non-root folders: between min and max pages, more small ones than large ones. */

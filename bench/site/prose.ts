@@ -17,6 +17,8 @@ export interface Voice {
   readonly focus: readonly string[];
   /** Every topic, for rare words from elsewhere. */
   readonly topics: readonly Topic[];
+  /** The site-wide vocabulary, most common first (empty: a `topical` site). */
+  readonly shared: readonly string[];
 }
 
 /** Pick the words a page focuses on. */
@@ -27,6 +29,9 @@ export function focusWords(rnd: Random, topic: Topic): string[] {
 }
 
 function word(v: Voice): string {
+  // A `shared` site: a third of the words come from the site-wide vocabulary instead, with a
+  // heavy head (u^3: the first word is drawn about 10,000 times as often as the last).
+  if (v.shared.length > 0 && v.rnd() < 0.35) return v.shared[skewedIndex(v.rnd, v.shared.length, 3)]!;
   const r = v.rnd();
   if (r < 0.34) return pick(v.rnd, FUNCTION_WORDS);
   if (r < 0.66) return pick(v.rnd, COMMON_WORDS);

@@ -38,7 +38,7 @@ export function renderPage(site: SitePlan, id: number): string {
   const page = site.pages[id]!;
   const rnd = mulberry32(mixSeed(site.seed, id));
   const topic = site.topics[page.topic]!;
-  const v: Voice = { rnd, topic, focus: focusWords(rnd, topic), topics: site.topics };
+  const v: Voice = { rnd, topic, focus: focusWords(rnd, topic), topics: site.topics, shared: site.shared };
   const target = targetBytes(rnd);
   const out: string[] = [`---\ntitle: "${page.title}"\n---`];
   const folder = site.folders[page.folder]!;
@@ -108,7 +108,7 @@ export function extraParagraph(site: SitePlan, id: number, salt: number): string
   const page = site.pages[id]!;
   const rnd = mulberry32(mixSeed(site.seed ^ 0x5bd1e995, id * 31 + salt));
   const topic = site.topics[page.topic]!;
-  const v: Voice = { rnd, topic, focus: focusWords(rnd, topic), topics: site.topics };
+  const v: Voice = { rnd, topic, focus: focusWords(rnd, topic), topics: site.topics, shared: site.shared };
   const to = site.pages[site.topicPages[page.topic]![0]!]!;
   return `\n${paragraph(v, to.id === id ? [] : [{ text: anchorFor(rnd, to), href: relativeFile(page, to) }], null)}\n`;
 }

@@ -10,3 +10,5 @@ export type { CacheSettings, CacheStats, IgnoredReason, ParseMisses } from './ty
 export { codeHash, codeVersion } from './code.js';
 export { readResult, resultKey, writeResult } from './result.js';
 export type { ResultInputs } from './result.js';
+export { readCachedOutput, saveCachedOutput } from './output.js';
+export type { ReportCacheInfo } from './output.js';

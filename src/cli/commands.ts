@@ -4,6 +4,8 @@
  */
 import { resolve } from 'node:path';
 import { analyze } from '../analyze.js';
+import { readCachedOutput, saveCachedOutput } from '../cache/index.js';
+import type { ReportCacheInfo } from '../cache/index.js';
 import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
 import type { Config } from '../options.js';
 import { formatReportPieces, summaryLines } from '../report/index.js';
@@ -114,6 +116,7 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   const review = readReviewInputs(ctx.values, io, ctx.root);
   const progress = !flags.quiet && flags.progress && io.stderrIsTTY === true ? progressHooks(io.stderr) : null;
   let report;
+  const cache: { info: ReportCacheInfo | null } = { info: null };
   try {
     const baseline = review.baseline === null ? {} : { baseline: review.baseline };
     // What was read as the site's generator config goes to stderr (never into the report).
@@ -121,10 +124,12 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
       progress?.done();
       if (!flags.quiet) io.stderr.write(`linkweave: ${message}\n`);
     };
-    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, { ...progress?.hooks, onNote });
+    const hooks = { ...(progress?.hooks ?? {}), onNote, onReportCache: (info: ReportCacheInfo) => (cache.info = info) };
+    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, hooks);
   } finally {
     progress?.done();
   }
+  const analyzed = report;
   report = withComparison(report, review);
   await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
@@ -135,8 +140,16 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   if (output === null) {
     for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);
   } else {
-    const text = formatReportPieces(report, format, { color: false, cwd: io.cwd, ...config });
-    await writeFileAtomic(output, text, { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) });
+    const writeOptions = { label: flags.output!, ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }) };
+    // A report from the whole-report cache (and not changed here by a comparison) is written as
+    // the bytes written for it last time, without formatting it again.
+    const reused = report === analyzed ? cache.info : null;
+    const bytes = reused === null ? null : readCachedOutput(reused, format, io.cwd);
+    if (bytes !== null) await writeFileAtomic(output, bytes, writeOptions);
+    else {
+      await writeFileAtomic(output, formatReportPieces(report, format, { color: false, cwd: io.cwd, ...config }), writeOptions);
+      if (reused !== null) saveCachedOutput(reused, format, io.cwd, output);
+    }
     if (!flags.quiet) {
       // The report went to a file: the terminal gets the summary alone (the site's counts, the
       // findings' count and the verdict), so a CI log does not carry the report twice.

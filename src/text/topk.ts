@@ -95,3 +95,104 @@ export function kthLargest(ids: ArrayLike<number>, length: number, score: ArrayL
   }
   return heap[0]!;
 }
+
+/** The k-th best of the exact scores met so far for one query (a min-heap of the k best values). */
+export class ExactTopK {
+  private readonly heap: Float64Array;
+  private size = 0;
+
+  constructor(private readonly k: number) {
+    this.heap = new Float64Array(Math.max(1, k));
+  }
+
+  /** Forget every score (for the next query). */
+  reset(): void {
+    this.size = 0;
+  }
+
+  /** The k-th best score so far, or -Infinity while fewer than k were added. */
+  kth(): number {
+    return this.size < this.k ? -Infinity : this.heap[0]!;
+  }
+
+  /** Offer one score. */
+  add(s: number): void {
+    const { heap, k } = this;
+    if (this.size < k) {
+      let j = this.size++;
+      heap[j] = s;
+      while (j > 0) {
+        const p = (j - 1) >> 1;
+        if (heap[p]! <= heap[j]!) break;
+        [heap[p], heap[j]] = [heap[j]!, heap[p]!];
+        j = p;
+      }
+      return;
+    }
+    if (s <= heap[0]!) return;
+    heap[0] = s;
+    let j = 0;
+    for (;;) {
+      const l = 2 * j + 1;
+      const r = l + 1;
+      let m = j;
+      if (l < k && heap[l]! < heap[m]!) m = l;
+      if (r < k && heap[r]! < heap[m]!) m = r;
+      if (m === j) return;
+      [heap[m], heap[j]] = [heap[j]!, heap[m]!];
+      j = m;
+    }
+  }
+}
+
+/**
+ * For every page, the k best exact scores met so far with any other page (k values a page, in
+ * one typed array of min-heaps): the k-th of them is a lower bound of the page's k-th best
+ * similarity before its own search starts.
+ */
+export class KnownScores {
+  private readonly heaps: Float64Array;
+  private readonly sizes: Int32Array;
+
+  constructor(n: number, private readonly k: number) {
+    this.heaps = new Float64Array(Math.max(0, n * k));
+    this.sizes = new Int32Array(n);
+  }
+
+  /** The k-th best known score of `page`, or -Infinity while fewer than k are known. */
+  kth(page: number): number {
+    return this.sizes[page]! < this.k ? -Infinity : this.heaps[page * this.k]!;
+  }
+
+  /** Offer a score of `page` with some other page (offered once per pair and search). */
+  offer(page: number, s: number): void {
+    const { heaps, k } = this;
+    const at = page * k;
+    const size = this.sizes[page]!;
+    if (size < k) {
+      let j = size;
+      this.sizes[page] = size + 1;
+      heaps[at + j] = s;
+      while (j > 0) {
+        const p = (j - 1) >> 1;
+        if (heaps[at + p]! <= heaps[at + j]!) break;
+        [heaps[at + p], heaps[at + j]] = [heaps[at + j]!, heaps[at + p]!];
+        j = p;
+      }
+      return;
+    }
+    if (s <= heaps[at]!) return;
+    heaps[at] = s;
+    let j = 0;
+    for (;;) {
+      const l = 2 * j + 1;
+      const r = l + 1;
+      let m = j;
+      if (l < k && heaps[at + l]! < heaps[at + m]!) m = l;
+      if (r < k && heaps[at + r]! < heaps[at + m]!) m = r;
+      if (m === j) return;
+      [heaps[at + m], heaps[at + j]] = [heaps[at + j]!, heaps[at + m]!];
+      j = m;
+    }
+  }
+}

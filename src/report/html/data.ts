@@ -8,6 +8,7 @@
 import type { Report, ReportPage } from '../../types.js';
 import { buildOverview } from './layout.js';
 import type { Overview } from './layout.js';
+import { selectSummary } from './summary.js';
 
 /** One page as the HTML report's script sees it. */
 export interface HtmlPage {
@@ -85,7 +86,43 @@ export interface HtmlData {
   readonly findings: readonly HtmlFinding[];
   readonly suggestions: readonly HtmlSuggestion[];
   readonly overview: Overview;
+  /**
+   * null: everything is embedded. Otherwise the site was too large for one page, and `pages`,
+   * `edges`, `findings` and `suggestions` hold a selection (see {@link selectSummary}); `stats`,
+   * `gate` and `histogram` still count the whole site.
+   */
+  readonly summary: HtmlSummary | null;
 }
+
+/** What a summary kept of the report's lists, against their full lengths. */
+export interface HtmlSummary {
+  readonly pages: { readonly kept: number; readonly total: number };
+  readonly findings: { readonly kept: number; readonly total: number };
+  readonly suggestions: { readonly kept: number; readonly total: number };
+}
+
+/**
+ * Above these sizes the HTML report embeds a summary instead of every page, link, finding and
+ * suggestion (a 100,000-page site would give a page of about 170 MB that no browser opens
+ * quickly); the JSON report keeps everything.
+ */
+export interface SummaryLimits {
+  /** More pages than this: summarise. */
+  readonly pages: number;
+  /** More findings plus suggestions than this: summarise. */
+  readonly rows: number;
+  /** Pages kept with the most to fix (findings, unreachable, deepest, fewest inlinks). */
+  readonly worstPages: number;
+  /** Findings kept, errors first, in the report's order. */
+  readonly findings: number;
+  /** Suggestions kept, in the report's order (best first). */
+  readonly suggestions: number;
+  /** Pages kept at even steps of the PageRank order, so the distribution chart keeps its shape. */
+  readonly rankSamples: number;
+}
+
+/** The limits the HTML formatter uses. */
+export const SUMMARY_LIMITS: SummaryLimits = { pages: 5000, rows: 20_000, worstPages: 1000, findings: 2000, suggestions: 2000, rankSamples: 400 };
 
 /** Above this many pages the overview shows folders instead of pages. */
 export const PAGE_OVERVIEW_LIMIT = 300;
@@ -94,7 +131,12 @@ export const PAGE_OVERVIEW_LIMIT = 300;
  * Build the HTML report's data from a report.
  * @param report the report (its arrays are already sorted)
  */
-export function buildHtmlData(report: Report): HtmlData {
+export function buildHtmlData(report: Report, limits: SummaryLimits = SUMMARY_LIMITS): HtmlData {
+  const full = buildFullData(report);
+  return full.pages.length > limits.pages || full.findings.length + full.suggestions.length > limits.rows ? selectSummary(full, limits, PAGE_OVERVIEW_LIMIT) : full;
+}
+
+function buildFullData(report: Report): HtmlData {
   const pageIndex = new Map<string, number>();
   report.pages.forEach((p, i) => pageIndex.set(p.route, i));
   const { edges, nav } = collectEdges(report, pageIndex);
@@ -161,6 +203,7 @@ export function buildHtmlData(report: Report): HtmlData {
     findings,
     suggestions,
     overview: buildOverview(pages, edges, report.options.maxDepth, PAGE_OVERVIEW_LIMIT),
+    summary: null,
   };
 }
 

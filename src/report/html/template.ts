@@ -41,6 +41,7 @@ export function renderPage(data: HtmlData, parts: PageParts): string {
     '<a class="lw-skip" href="#lw-graph">Skip to the link graph</a>',
     '<main>',
     header(data),
+    summaryNotice(data),
     toc(data),
     stats(data),
     '<div class="lw-row">',
@@ -246,6 +247,19 @@ function tableSection(id: 'findings' | 'suggestions', title: string, count: numb
     `<p class="lw-shown" id="lw-${id}-shown" aria-live="polite"></p>`,
     `<div class="lw-table-wrap"><table class="lw-table" id="lw-${id}-table"><caption class="lw-sr">${title}; select a column header to sort</caption><thead></thead><tbody></tbody></table></div>`,
     `<button type="button" class="lw-more" id="lw-${id}-more" hidden>Show all rows</button>`,
+    '</section>',
+  ].join('\n');
+}
+
+/** On a large site, what the page leaves out and where the rest is. */
+function summaryNotice(data: HtmlData): string {
+  const s = data.summary;
+  if (s === null) return '';
+  const of = (part: { kept: number; total: number }, what: string): string => `${part.kept} of ${part.total} ${what}`;
+  return [
+    '<section class="lw-panel" id="lw-summary-notice" role="note">',
+    `<p>This site is large, so this page is a summary. It shows ${of(s.pages, 'pages')} (those with the most to fix, the highest PageRank and a sample across the PageRank range, with the links between them), ${of(s.findings, 'findings')} (errors first) and ${of(s.suggestions, 'suggested links')} (best first). The counts, the gate and the click-depth histogram cover the whole site.</p>`,
+    '<p>Everything is in the JSON report: run the same command with <code>--format json --output report.json</code>.</p>',
     '</section>',
   ].join('\n');
 }
