@@ -1,2 +1,0 @@
-/** Types of the backtest: held-out links, per-method scores, one run, the whole result. */
-export {};

@@ -1,8 +1,0 @@
-/** The page-facts cache: facts keyed by path, content hash, tool version and code, and parse options. */
-export { parseWithCache } from './parse-cached.js';
-export { parseFingerprint, PARSE_OPTION_KEYS } from './fingerprint.js';
-export { openCache } from './store.js';
-export { CACHE_SCHEMA, SHARDS, shardFileName, shardOfPath, isCacheable, packFacts, unpackFacts } from './format.js';
-export { isStoredFacts } from './validate.js';
-export { codeHash, codeVersion } from './code.js';
-export { readResult, resultKey, writeResult } from './result.js';

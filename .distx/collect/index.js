@@ -1,6 +1,0 @@
-/** The `collect` stage: find and read the sources under the content root. */
-export { collectSources, READ_BATCH } from './collect.js';
-export { readAuxFile } from './aux.js';
-export { readSource, kindOfPath } from './read.js';
-export { decodeSource, firstInvalidUtf8, positionOfByte, BINARY_SNIFF_BYTES } from './decode.js';
-export { ALWAYS_EXCLUDED } from './list.js';

@@ -1,4 +1,0 @@
-/** A fresh, empty draft. */
-export function newDraft() {
-    return { links: [], headings: [], ids: [], spans: [], body: [], code: [], problems: [] };
-}

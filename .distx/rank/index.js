@@ -1,4 +1,0 @@
-/** The ranking stage: PageRank, click depth, inlinks and outlinks. */
-export { pagerank } from './pagerank.js';
-export { clickDepth } from './depth.js';
-export { rankGraph, teleportVector, depthMask } from './rank.js';

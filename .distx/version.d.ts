@@ -1,2 +1,0 @@
-/** The tool's version, written into every report (a test keeps it equal to package.json's). */
-export declare const VERSION = "0.1.0";
