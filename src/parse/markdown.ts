@@ -133,6 +133,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
     }
     case 'definition':
       if (!w.definitions.has(node.identifier)) w.definitions.set(node.identifier, node.url);
+      draft.protected.push([startOf(w, node), endOf(w, node), 'link-definition']);
       return;
     case 'code':
     case 'inlineCode':
