@@ -123,7 +123,8 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
       }
       if (ch !== 123 && ch !== 60) continue;
     }
-    if (escaped(src, i)) continue;
+    // A backslash does not stop template syntax (Liquid and Hugo read `\{{ x }}` as a tag); it
+    // escapes `<` in Markdown.
     if (ch === 123) {
       const t = templateOpen(src, i);
       if (t !== null) {
@@ -163,6 +164,7 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
       continue;
     }
     // '<'
+    if (markdown && escaped(src, i)) continue;
     let end = matchComment(src, i, markdown ? lineEnd(i) : n);
     let k: ProtectedKind = 'html-comment';
     if (end === -1 && mdx) {
