@@ -110,6 +110,7 @@ export interface TextSpan {
  * - `link-definition`: a Markdown link reference definition (`[label]: /url "title"`);
  * - `container-marker`: an admonition or container line (`:::`, `!!!`, `???`);
  * - `attribute-list`: a heading id `{#id}` or an attribute list `{: .class}`, `{.class #id}`;
+ * - `link`: an existing link, its text included (a link inside it would break it);
  * - `code`: inline code, code blocks, scripts and styles.
  */
 export type ProtectedKind =
@@ -125,6 +126,7 @@ export type ProtectedKind =
   | 'link-definition'
   | 'container-marker'
   | 'attribute-list'
+  | 'link'
   | 'code';
 
 /**

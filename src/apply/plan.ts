@@ -15,14 +15,15 @@
  * - re-parsing the edited text (`parseSource`) does not show a link with that href starting at
  *   the anchor's place, e.g. when the anchor sits where link syntax is not read;
  * - the edited text's protected regions are not those of the original, shifted by the
- *   inserted markup, byte for byte (the edit would have changed syntax next to the anchor).
+ *   inserted markup, byte for byte (the edit would have changed syntax next to the anchor), or
+ *   a link of the original (href and text) is no longer read.
  * Edits are made from the end of the file backwards, so every offset still refers to the
  * original text; nothing but the link markup is inserted.
  */
 import type { ResolvedOptions } from '../options.js';
 import { buildLineIndex, parseSource, positionOf } from '../parse/index.js';
 import { NO_ANCHOR } from './select.js';
-import type { ProtectedRegion, SourceFile, Suggestion } from '../types.js';
+import type { ProtectedRegion, RawLink, SourceFile, Suggestion } from '../types.js';
 import { linkMarkup } from './markup.js';
 import { changedRegions, overlappingRegion, REGION_WORDS } from './regions.js';
 import type { Insertion } from './regions.js';
@@ -41,6 +42,8 @@ export interface PlanInput {
   readonly options: ResolvedOptions;
   /** Protected regions of `file` as read now (`parseSource(file, options).protected`). */
   readonly regions: readonly ProtectedRegion[];
+  /** Links of `file` as read now (`parseSource(file, options).links`): each must survive the edit. */
+  readonly links: readonly RawLink[];
 }
 
 /** Source problems that mean the decoded text is not the file's bytes. */
@@ -90,7 +93,11 @@ export function planFile(input: PlanInput): FilePlan {
     const failed = applied.filter((a) => !facts.links.some((l) => l.href === a.href && l.line === a.line && l.column === a.column));
     for (const f of failed) refuse(candidates.find((s) => s.id === f.id)!, 'not-a-link', `a link here would not be read as a link (checked by parsing the edited file)`);
     if (failed.length === 0) {
-      const touched = touchedByChanges(candidates, input.regions, facts.protected, insertionsOf(applied));
+      // The new links are regions of the edited text themselves (`link`, and `html-tag` for <a>).
+      const extents = applied.map((a) => [a.offset, a.offset + a.open.length + a.anchor.length + a.close.length] as const);
+      const after = facts.protected.filter((r) => !extents.some(([s, e]) => r[0] >= s && r[1] <= e));
+      const touched = touchedByChanges(candidates, input.regions, after, insertionsOf(applied));
+      for (const s of lostLinkSuggestions(candidates, input.links, facts.links, applied)) if (!touched.includes(s)) touched.push(s);
       if (touched.length === 0) return done(file, input.style, applied, refused, text);
       for (const s of touched) refuse(s, 'region-changed', 'the link would change the template, HTML or other syntax next to it (checked by parsing the edited file)');
       failed.push(...applied.filter((a) => touched.some((s) => s.id === a.id)));
@@ -127,6 +134,32 @@ function touchedByChanges(
   if (changed.length === 0) return [];
   const touched = candidates.filter((s) => changed.some(([a, b]) => a <= s.endOffset && b >= s.offset));
   return touched.length > 0 ? touched : [...candidates];
+}
+
+/**
+ * Suggestions to blame when a link of the original (by href and text) is not read in the edited
+ * text any more: those on the line of a lost link, or all when none is.
+ */
+function lostLinkSuggestions(
+  candidates: readonly Suggestion[],
+  before: readonly RawLink[],
+  after: readonly RawLink[],
+  applied: readonly AppliedLink[],
+): Suggestion[] {
+  const key = (href: string, text: string) => `${href}\u0000${text.replace(/\s+/g, ' ').trim()}`;
+  const left = new Map<string, number>();
+  for (const l of after) left.set(key(l.href, l.text), (left.get(key(l.href, l.text)) ?? 0) + 1);
+  for (const a of applied) left.set(key(a.href, a.anchor), (left.get(key(a.href, a.anchor)) ?? 0) - 1);
+  const lost: RawLink[] = [];
+  for (const l of before) {
+    const k = key(l.href, l.text);
+    const n = left.get(k) ?? 0;
+    if (n > 0) left.set(k, n - 1);
+    else lost.push(l);
+  }
+  if (lost.length === 0) return [];
+  const onLine = candidates.filter((s) => lost.some((l) => l.line === s.line));
+  return onLine.length > 0 ? onLine : [...candidates];
 }
 
 /** True when `offset` falls between a high and a low surrogate (inserting there would break the character). */

@@ -18,6 +18,7 @@ export const REGION_WORDS: Readonly<Record<ProtectedKind, string>> = {
   'link-definition': 'inside a link reference definition',
   'container-marker': 'on an admonition or container marker line',
   'attribute-list': 'inside a heading id or attribute list',
+  link: 'inside an existing link',
   code: 'inside code',
 };
 

@@ -116,6 +116,7 @@ const PROTECTED_KINDS = new Set<unknown>([
   'link-definition',
   'container-marker',
   'attribute-list',
+  'link',
   'code',
 ] satisfies ProtectedKind[]);
 

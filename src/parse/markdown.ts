@@ -126,6 +126,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
       };
       if (node.type === 'link') draft.links.push(link);
       else w.references.push({ link, id: node.identifier });
+      draft.protected.push([link.offset, endOf(w, node), 'link']);
       let f = flags | IN_LINK | NO_SPAN;
       if (node.type === 'link' && looksLikeUrl(text, node.url)) f |= NO_BODY;
       walkChildren(w, node, f);

@@ -31,6 +31,7 @@ import type { PageDraft } from './types.js';
 /** How far a `{...}` group or a JSX tag may reach, in UTF-16 code units. */
 const MAX_GROUP = 4000;
 
+const A_CLOSE = /<\/a\s*>/gi;
 const TOML_OPEN = /^\+\+\+[ \t]*(?:\r\n|\r|\n)/;
 const TOML_CLOSE = /^\+\+\+[ \t]*$/gm;
 
@@ -175,10 +176,16 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
       end = markdown ? matchMarkdownTag(src, i) : matchHtmlTag(src, i, n);
       k = 'html-tag';
     }
-    if (end !== -1) {
-      push(i, end, k);
-      i = end - 1;
+    if (end === -1) continue;
+    if (k !== 'html-comment' && /^<a[\s>]/i.test(src.slice(i, i + 3))) {
+      // An existing link, its text included: a link inside it would break it.
+      A_CLOSE.lastIndex = end;
+      const close = A_CLOSE.exec(src);
+      if (close !== null) end = close.index + close[0].length;
+      k = 'link';
     }
+    push(i, end, k);
+    i = end - 1;
   }
 }
 

@@ -127,8 +127,11 @@ function unapply(text: string, applied: readonly AppliedLink[]): string {
 
 const squash = (s: string) => s.replace(/\s+/g, ' ').trim();
 
-/** `planFile` with the regions of the file as read now, as `applySuggestions` passes them. */
-const planNow = (input: Omit<PlanInput, 'regions'>) => planFile({ ...input, regions: parseSource(input.file, options).protected });
+/** `planFile` with the regions and links of the file as read now, as `applySuggestions` passes them. */
+const planNow = (input: Omit<PlanInput, 'regions' | 'links'>) => {
+  const now = parseSource(input.file, options);
+  return planFile({ ...input, regions: now.protected, links: now.links });
+};
 
 function checkProperty(kind: FileKind, doc: fc.Arbitrary<string>, path: string) {
   let applied = 0;
