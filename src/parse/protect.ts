@@ -57,7 +57,7 @@ export function protectDraft(input: ProtectInput, draft: PageDraft): ProtectedRe
   const found: ProtectedRegion[] = [...frontMatter(input.src), ...draft.protected];
   scan(input, code, found);
   for (let i = 0; i < code.length; i++) found.push([code[i]![0], code[i]![1], 'code']);
-  const regions = normalize(found);
+  const regions = normalize(input.src, found);
   const cut = cutSpansByRanges(draft.spans, regions);
   draft.spans.length = 0;
   draft.spans.push(...cut);
@@ -213,6 +213,15 @@ function blankLineStarts(input: ProtectInput): number[] {
   return out;
 }
 
+/** True when `src` holds only spaces, tabs and line endings in `[from, to)`. */
+function isBlank(src: string, from: number, to: number): boolean {
+  for (let i = from; i < to; i++) {
+    const c = src.charCodeAt(i);
+    if (c !== 32 && c !== 9 && c !== 10 && c !== 13) return false;
+  }
+  return true;
+}
+
 /** `[start, end)` pairs from a flat list, sorted by start. */
 function pairs(flat: readonly number[]): [number, number][] {
   const out: [number, number][] = [];
@@ -220,15 +229,21 @@ function pairs(flat: readonly number[]): [number, number][] {
   return out.sort((a, b) => a[0] - b[0] || b[1] - a[1]);
 }
 
-/** Sorted by start (longest first), regions held by an earlier one dropped; `code` loses ties. */
-function normalize(found: ProtectedRegion[]): ProtectedRegion[] {
+/**
+ * Sorted by start (longest first), regions held by an earlier one dropped (`code` loses ties),
+ * and regions of one kind (but `link`) with only white space between them merged: an HTML page
+ * is mostly runs of tags, and no anchor starts or ends on white space.
+ */
+function normalize(src: string, found: ProtectedRegion[]): ProtectedRegion[] {
   const order = (r: ProtectedRegion) => (r[2] === 'code' ? 1 : 0);
   const sorted = found.filter((r) => r[1] > r[0]).sort((a, b) => a[0] - b[0] || b[1] - a[1] || order(a) - order(b));
   const out: ProtectedRegion[] = [];
   let reach = -1;
   for (const r of sorted) {
     if (r[1] <= reach) continue;
-    out.push(r);
+    const last = out[out.length - 1];
+    if (last !== undefined && last[2] === r[2] && r[2] !== 'link' && r[0] >= last[1] && isBlank(src, last[1], r[0])) out[out.length - 1] = [last[0], r[1], r[2]];
+    else out.push(r);
     reach = r[1];
   }
   return out;
