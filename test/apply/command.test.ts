@@ -252,3 +252,53 @@ describe('link style and bytes', () => {
     expect(fs.readFileSync(path.join(cwd, 'secret.md'), 'utf8')).toBe('wiring');
   });
 });
+
+describe('refusals a dry run lists', () => {
+  const SITE = {
+    'index.md': '# Home\n\nSee [the guide](/guide/).\n',
+    'guide.md':
+      '---\ntitle: Guide\n---\n\n# Guide\n\nThe {{< feature url="/status/" title="status page" >}} here.\n\nRead the status page daily.\n\n<!-- status page -->\n',
+    'status.md': '# Status page\n\nAll fine.\n',
+  };
+
+  it('--all --dry-run: each suggestion it will not apply, with the reason in plain words; nothing written', async () => {
+    const { cwd, root } = project(SITE);
+    const picks = [
+      { file: 'guide.md', anchor: 'status page', target: '/status/' },
+      { file: 'guide.md', anchor: 'status page', target: '/status/', occurrence: 1 },
+      { file: 'guide.md', anchor: 'status page', target: '/status/', occurrence: 2 },
+    ];
+    const report = JSON.parse(reportFor(root, SITE, picks)) as { suggestions: Suggestion[] };
+    const loose = { ...report.suggestions[0]!, id: 'loose', anchor: null, offset: -1, endOffset: -1 };
+    const stale = { ...report.suggestions[1]!, id: 'stale', sourceHash: '0'.repeat(64) };
+    fs.writeFileSync(path.join(cwd, 'r.json'), JSON.stringify({ ...report, suggestions: [...report.suggestions, loose, stale] }));
+    const before = snapshot(cwd);
+    const r = await cli(cwd, ['apply', 'docs', '--from', 'r.json', '--all', '--dry-run']);
+    expect(r.code).toBe(1);
+    expect(snapshot(cwd)).toEqual(before);
+    expect(r.stdout).toContain('+Read the [status page](/status/) daily.\n');
+    expect(r.stderr).toBe(
+      [
+        'Would apply 1 link in 1 file (dry run: nothing written)',
+        '  docs/guide.md  link style absolute (the site\'s links)',
+        '    9:10  [status page](/status/)  -> /status/  id id1',
+        'Would not apply 4 suggestions:',
+        '  docs/guide.md  id id0: inside a shortcode (line 7)',
+        '  docs/guide.md  id id2: inside an HTML comment (line 11)',
+        '  docs/guide.md  id loose: no anchor phrase: needs a sentence written by hand',
+        `  docs/guide.md  id stale: the source changed since the report (content hash 000000000000, now ${report.suggestions[0]!.sourceHash.slice(0, 12)}); run "linkweave suggest" again`,
+        '',
+      ].join('\n'),
+    );
+  });
+
+  it('--all with nothing it can apply exits 1, not a silent "Applied 0 links"', async () => {
+    const { cwd, root } = project(SITE);
+    const report = JSON.parse(reportFor(root, SITE, [{ file: 'guide.md', anchor: 'status page', target: '/status/' }])) as { suggestions: Suggestion[] };
+    const loose = { ...report.suggestions[0]!, id: 'loose', anchor: null, offset: -1, endOffset: -1 };
+    fs.writeFileSync(path.join(cwd, 'r.json'), JSON.stringify({ ...report, suggestions: [loose] }));
+    const r = await cli(cwd, ['apply', 'docs', '--from', 'r.json', '--all']);
+    expect(r.code).toBe(1);
+    expect(r.stdout).toBe('Applied 0 links in 0 files\nDid not apply 1 suggestion:\n  docs/guide.md  id loose: no anchor phrase: needs a sentence written by hand\n');
+  });
+});
