@@ -189,6 +189,7 @@ function textWithLiteralLinks(w: Walk, node: Text, flags: number, literal: reado
     });
     if (offset !== -1) {
       cuts.push(offset, offset + l.text.length);
+      draft.protected.push([offset, offset + l.text.length, 'link']);
       searchFrom = offset + l.text.length;
     }
     if ((flags & NO_BODY) === 0) draft.body.push(node.value.slice(at, l.index));
