@@ -100,7 +100,8 @@ export interface TextSpan {
  * - `template-tag`: `{{ ... }}` (Liquid, Nunjucks, Eleventy, VitePress/Vue interpolation, mdBook
  *   `{{#include ...}}`, macros such as `{{jsxref("Array")}}`), `{% ... %}` and `{# ... #}`;
  * - `template-block`: the body of a block that is not prose: Liquid/Nunjucks `raw`, `verbatim`,
- *   `comment`, `highlight`, and Hugo's `highlight` shortcode;
+ *   `comment`, `highlight`, Hugo's `highlight` shortcode, kramdown's `{::comment}` and
+ *   `{::nomarkdown}`;
  * - `mdx-jsx`: a JSX element's tag in an `.mdx` file (its children are prose);
  * - `mdx-expression`: a `{...}` expression in an `.mdx` file;
  * - `braces`: any other `{...}` group outside code (expressions and type annotations some

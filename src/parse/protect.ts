@@ -31,6 +31,7 @@ import type { PageDraft } from './types.js';
 /** How far a `{...}` group or a JSX tag may reach, in UTF-16 code units. */
 const MAX_GROUP = 4000;
 
+const KRAMDOWN_BLOCK = /^\{::(comment|nomarkdown)\b(?:[^}]*[^/}])?\}$/;
 const A_CLOSE = /<\/a\s*>/gi;
 const TOML_OPEN = /^\+\+\+[ \t]*(?:\r\n|\r|\n)/;
 const TOML_CLOSE = /^\+\+\+[ \t]*$/gm;
@@ -151,7 +152,7 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
         continue;
       }
       const limit = Math.min(paragraphEnd(i), i + MAX_GROUP);
-      const end = matchBraces(src, i, limit, mdx);
+      let end = matchBraces(src, i, limit, mdx);
       if (end === -1) {
         if (mdx) {
           const stop = lineEnd(i);
@@ -160,7 +161,18 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
         }
         continue;
       }
-      push(i, end, isAttributeList(src.slice(i, Math.min(end, i + 200))) ? 'attribute-list' : mdx ? 'mdx-expression' : 'braces');
+      const group = src.slice(i, Math.min(end, i + 200));
+      push(i, end, isAttributeList(group) ? 'attribute-list' : mdx ? 'mdx-expression' : 'braces');
+      // kramdown's {::comment} and {::nomarkdown} extensions: the body up to {:/name} or {:/}.
+      const extension = KRAMDOWN_BLOCK.exec(group);
+      if (extension !== null) {
+        const close = new RegExp(String.raw`\{:\/(?:${extension[1]!})?\}`, 'g');
+        close.lastIndex = end;
+        const m = close.exec(src);
+        const bodyEnd = m === null ? n : m.index;
+        push(end, bodyEnd, 'template-block');
+        end = bodyEnd;
+      }
       i = end - 1;
       continue;
     }

@@ -56,6 +56,12 @@ describe('protected regions, one syntax at a time', () => {
     ['collapsible admonition', '???+ info "Release notes"\n    Inside.\n', [['container-marker', '???+ info "Release notes"']], ['Inside.']],
     ['heading id', '## Release notes {#notes}\n\nText.\n', [['attribute-list', '{#notes}']], ['Text.']],
     ['attribute list', 'A paragraph.\n{: .note title="release notes"}\n', [['attribute-list', '{: .note title="release notes"}']], ['A paragraph.']],
+    [
+      'kramdown comment extension',
+      'A\n\n{::comment}\nrelease notes\n{:/comment}\n\nB text.\n',
+      [['attribute-list', '{::comment}'], ['template-block', '\nrelease notes\n'], ['attribute-list', '{:/comment}']],
+      ['A', 'B text.'],
+    ],
     ['a literal autolink is an existing link', 'Use https://registry.example.org/ now.\n', [['link', 'https://registry.example.org/']], ['Use', 'now.']],
     ['braces', 'Takes `x` {string} and more.\n', [['code', '`x`'], ['braces', '{string}']], ['Takes', 'and more.']],
     ['a backslash does not stop a template tag (Liquid and Hugo read it)', 'A \\{{ x }} b.\n', [['template-tag', '{{ x }}']], []],
