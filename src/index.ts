@@ -16,5 +16,7 @@ export type { ErrorCode } from './errors.js';
 export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId, writeFileAtomic } from './report/index.js';
 export type { FormatContext, FormatId, Formatter, WriteOptions } from './report/index.js';
 export type { CacheConfig, CheckConfig, Level, LimitsConfig, LinkPatternConfig, RoutesConfig, SuggestConfig } from './config.js';
+export { applySuggestions } from './apply/index.js';
+export type { ApplyInput, ApplyResult, AppliedLink, FileStyle, LinkStyle, NotApplied, RefusalCode, Selection } from './apply/index.js';
 export { VERSION } from './version.js';
 export type * from './types.js';

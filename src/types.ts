@@ -97,6 +97,49 @@ export interface TextSpan {
   readonly column: number;
 }
 
+/**
+ * What a protected region of a source is: syntax a site generator reads, where a link inserted
+ * by `apply` would change a name, an argument, a URL or hidden text instead of prose.
+ * - `shortcode`: Hugo `{{< ... >}}` and `{{% ... %}}`;
+ * - `template-tag`: `{{ ... }}` (Liquid, Nunjucks, Eleventy, VitePress/Vue interpolation, mdBook
+ *   `{{#include ...}}`, macros such as `{{jsxref("Array")}}`), `{% ... %}` and `{# ... #}`;
+ * - `template-block`: the body of a block that is not prose: Liquid/Nunjucks `raw`, `verbatim`,
+ *   `comment`, `highlight`, Hugo's `highlight` shortcode, kramdown's `{::comment}` and
+ *   `{::nomarkdown}`;
+ * - `mdx-jsx`: a JSX element's tag in an `.mdx` file (its children are prose);
+ * - `mdx-expression`: a `{...}` expression in an `.mdx` file;
+ * - `braces`: any other `{...}` group outside code (expressions and type annotations some
+ *   generators read, such as `{string}` in API docs);
+ * - `html-tag`: an HTML tag with its attributes; `html-comment`: an HTML comment;
+ * - `front-matter`: the YAML (`---`) or TOML (`+++`) block at the top;
+ * - `link-definition`: a Markdown link reference definition (`[label]: /url "title"`);
+ * - `container-marker`: an admonition or container line (`:::`, `!!!`, `???`);
+ * - `attribute-list`: a heading id `{#id}` or an attribute list `{: .class}`, `{.class #id}`;
+ * - `link`: an existing link, its text included (a link inside it would break it);
+ * - `code`: inline code, code blocks, scripts and styles.
+ */
+export type ProtectedKind =
+  | 'shortcode'
+  | 'template-tag'
+  | 'template-block'
+  | 'mdx-jsx'
+  | 'mdx-expression'
+  | 'braces'
+  | 'html-tag'
+  | 'html-comment'
+  | 'front-matter'
+  | 'link-definition'
+  | 'container-marker'
+  | 'attribute-list'
+  | 'link'
+  | 'code';
+
+/**
+ * A protected region: UTF-16 offsets `[start, end)` into `SourceFile.text`, and its kind.
+ * No link may be inserted overlapping it.
+ */
+export type ProtectedRegion = readonly [start: number, end: number, kind: ProtectedKind];
+
 /** Text of a page for the term index, split by field (boosts differ). */
 export interface PageText {
   readonly title: string;
@@ -152,6 +195,11 @@ export interface PageFacts {
   readonly baseHref?: string;
   readonly text: PageText;
   readonly spans: readonly TextSpan[];
+  /**
+   * Protected regions, sorted by start (ends ascend too: no region holds another). `spans`
+   * never overlap them; `apply` refuses an insertion that does.
+   */
+  readonly protected: readonly ProtectedRegion[];
   readonly problems: readonly SourceProblem[];
 }
 

@@ -8,17 +8,26 @@
  * - the file could not be decoded exactly (binary, too large, invalid UTF-8: writing it back
  *   would change bytes other than the link);
  * - the anchor phrase is not at its offsets;
+ * - the anchor overlaps a protected region of the file as it is now (`regions`, from
+ *   `parseSource` of the file just read, not from the report): a shortcode, template tag, HTML
+ *   tag, front matter, ... (see `ProtectedKind`);
  * - its anchor overlaps one of an earlier suggestion in the file (by offset);
  * - re-parsing the edited text (`parseSource`) does not show a link with that href starting at
- *   the anchor's place, e.g. when the anchor sits where link syntax is not read.
+ *   the anchor's place, e.g. when the anchor sits where link syntax is not read;
+ * - the edited text's protected regions are not those of the original, shifted by the
+ *   inserted markup, byte for byte (the edit would have changed syntax next to the anchor), or
+ *   a link of the original (href and text) is no longer read.
  * Edits are made from the end of the file backwards, so every offset still refers to the
  * original text; nothing but the link markup is inserted.
  */
 import type { ResolvedOptions } from '../options.js';
 import { buildLineIndex, parseSource, positionOf } from '../parse/index.js';
-import type { SourceFile, Suggestion } from '../types.js';
+import { NO_ANCHOR } from './select.js';
+import type { ProtectedRegion, RawLink, SourceFile, Suggestion } from '../types.js';
 import { linkMarkup } from './markup.js';
-import type { AppliedLink, FilePlan, LinkStyle, NotApplied } from './types.js';
+import { changedRegions, overlappingRegion, REGION_WORDS } from './regions.js';
+import type { Insertion } from './regions.js';
+import type { AppliedLink, FilePlan, LinkStyle, NotApplied, RefusalCode } from './types.js';
 
 /** What planning one file needs. */
 export interface PlanInput {
@@ -31,6 +40,10 @@ export interface PlanInput {
   readonly style: LinkStyle;
   /** For re-parsing the edited text as the analysis would. */
   readonly options: ResolvedOptions;
+  /** Protected regions of `file` as read now (`parseSource(file, options).protected`). */
+  readonly regions: readonly ProtectedRegion[];
+  /** Links of `file` as read now (`parseSource(file, options).links`): each must survive the edit. */
+  readonly links: readonly RawLink[];
 }
 
 /** Source problems that mean the decoded text is not the file's bytes. */
@@ -40,27 +53,33 @@ const UNWRITABLE = new Set(['binary', 'too-large', 'invalid-utf8', 'unreadable']
 export function planFile(input: PlanInput): FilePlan {
   const { file } = input;
   const refused: NotApplied[] = [];
-  const refuse = (s: Suggestion, reason: string) => refused.push({ id: s.id, file: file.path, reason });
+  const refuse = (s: Suggestion, code: RefusalCode, reason: string, extra: Pick<NotApplied, 'kind'> = {}) =>
+    refused.push({ id: s.id, file: file.path, code, ...extra, reason });
   const bad = file.problems.find((p) => UNWRITABLE.has(p.code));
+  const lines = buildLineIndex(file.text);
 
   let candidates: Suggestion[] = [];
   for (const s of input.suggestions) {
-    if (bad !== undefined) refuse(s, `cannot be edited without changing other bytes: ${bad.message}`);
+    if (bad !== undefined) refuse(s, 'undecodable', `cannot be edited without changing other bytes: ${bad.message}`);
     else if (s.sourceHash !== file.hash) {
-      refuse(s, `changed since the report (content hash ${s.sourceHash.slice(0, 12)}, now ${file.hash.slice(0, 12)}); run "linkweave suggest" again`);
-    } else if (s.anchor === null || s.anchor === '') refuse(s, 'no anchor phrase to link');
+      refuse(s, 'changed', `the source changed since the report (content hash ${s.sourceHash.slice(0, 12)}, now ${file.hash.slice(0, 12)}); run "linkweave suggest" again`);
+    } else if (s.anchor === null || s.anchor === '') refuse(s, 'no-anchor', NO_ANCHOR);
     else if (s.offset < 0 || s.endOffset > file.text.length || file.text.slice(s.offset, s.endOffset) !== s.anchor) {
-      refuse(s, `the anchor "${s.anchor}" is not at offset ${s.offset}`);
+      refuse(s, 'anchor-moved', `the anchor "${s.anchor}" is not at offset ${s.offset}`);
     } else if (splitsPair(file.text, s.offset) || splitsPair(file.text, s.endOffset)) {
-      refuse(s, `the anchor "${s.anchor}" starts or ends inside a character (between the halves of a surrogate pair)`);
-    } else if (!input.hrefs.has(s.id)) refuse(s, `the target ${s.target} is not a page of the report`);
-    else candidates.push(s);
+      refuse(s, 'anchor-moved', `the anchor "${s.anchor}" starts or ends inside a character (between the halves of a surrogate pair)`);
+    } else if (!input.hrefs.has(s.id)) refuse(s, 'not-a-page', `the target ${s.target} is not a page of the report`);
+    else {
+      const region = overlappingRegion(input.regions, s.offset, s.endOffset);
+      if (region === null) candidates.push(s);
+      else refuse(s, 'protected', `${REGION_WORDS[region[2]]} (line ${positionOf(lines, region[0]).line})`, { kind: region[2] });
+    }
   }
   candidates.sort((a, b) => a.offset - b.offset || a.endOffset - b.endOffset || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   const chosen: Suggestion[] = [];
   for (const s of candidates) {
     const last = chosen[chosen.length - 1];
-    if (last !== undefined && s.offset < last.endOffset) refuse(s, `its anchor overlaps the anchor of ${last.id} ("${last.anchor}")`);
+    if (last !== undefined && s.offset < last.endOffset) refuse(s, 'overlap', `its anchor overlaps the anchor of ${last.id} ("${last.anchor}")`);
     else chosen.push(s);
   }
   candidates = chosen;
@@ -70,13 +89,77 @@ export function planFile(input: PlanInput): FilePlan {
   for (;;) {
     const { text, applied } = edit(file.text, candidates, input);
     if (applied.length === 0) return done(file, input.style, applied, refused, file.text);
-    const links = parseSource({ ...file, text }, input.options).links;
-    const failed = applied.filter((a) => !links.some((l) => l.href === a.href && l.line === a.line && l.column === a.column));
-    if (failed.length === 0) return done(file, input.style, applied, refused, text);
-    for (const f of failed) refuse(candidates.find((s) => s.id === f.id)!, `a link here would not be read as a link (checked by parsing the edited file)`);
+    const facts = parseSource({ ...file, text }, input.options);
+    const failed = applied.filter((a) => !facts.links.some((l) => l.href === a.href && l.line === a.line && l.column === a.column));
+    for (const f of failed) refuse(candidates.find((s) => s.id === f.id)!, 'not-a-link', `a link here would not be read as a link (checked by parsing the edited file)`);
+    if (failed.length === 0) {
+      // The new links are regions of the edited text themselves (`link`, and `html-tag` for <a>).
+      const extents = applied.map((a) => [a.offset, a.offset + a.open.length + a.anchor.length + a.close.length] as const);
+      const after = facts.protected.filter((r) => !extents.some(([s, e]) => r[0] >= s && r[1] <= e));
+      const touched = touchedByChanges(candidates, input.regions, after, insertionsOf(applied));
+      for (const s of lostLinkSuggestions(candidates, input.links, facts.links, applied)) if (!touched.includes(s)) touched.push(s);
+      if (touched.length === 0) return done(file, input.style, applied, refused, text);
+      for (const s of touched) refuse(s, 'region-changed', 'the link would change the template, HTML or other syntax next to it (checked by parsing the edited file)');
+      failed.push(...applied.filter((a) => touched.some((s) => s.id === a.id)));
+    }
     const gone = new Set(failed.map((f) => f.id));
     candidates = candidates.filter((s) => !gone.has(s.id));
   }
+}
+
+/** The inserted markup of `applied` as insertions at original offsets, ascending. */
+function insertionsOf(applied: readonly AppliedLink[]): Insertion[] {
+  const out: Insertion[] = [];
+  let shift = 0;
+  for (const a of applied) {
+    const start = a.offset - shift;
+    out.push({ at: start, length: a.open.length });
+    out.push({ at: start + a.anchor.length, length: a.close.length });
+    shift += a.open.length + a.close.length;
+  }
+  return out;
+}
+
+/**
+ * The suggestions whose anchor touches (overlaps or borders) a region that the edit did not keep
+ * byte for byte; all of them when a change touches none (nothing may go out unchecked).
+ */
+function touchedByChanges(
+  candidates: readonly Suggestion[],
+  before: readonly ProtectedRegion[],
+  after: readonly ProtectedRegion[],
+  insertions: readonly Insertion[],
+): Suggestion[] {
+  const changed = changedRegions(before, after, insertions);
+  if (changed.length === 0) return [];
+  const touched = candidates.filter((s) => changed.some(([a, b]) => a <= s.endOffset && b >= s.offset));
+  return touched.length > 0 ? touched : [...candidates];
+}
+
+/**
+ * Suggestions to blame when a link of the original (by href and text) is not read in the edited
+ * text any more: those on the line of a lost link, or all when none is.
+ */
+function lostLinkSuggestions(
+  candidates: readonly Suggestion[],
+  before: readonly RawLink[],
+  after: readonly RawLink[],
+  applied: readonly AppliedLink[],
+): Suggestion[] {
+  const key = (href: string, text: string) => `${href}\u0000${text.replace(/\s+/g, ' ').trim()}`;
+  const left = new Map<string, number>();
+  for (const l of after) left.set(key(l.href, l.text), (left.get(key(l.href, l.text)) ?? 0) + 1);
+  for (const a of applied) left.set(key(a.href, a.anchor), (left.get(key(a.href, a.anchor)) ?? 0) - 1);
+  const lost: RawLink[] = [];
+  for (const l of before) {
+    const k = key(l.href, l.text);
+    const n = left.get(k) ?? 0;
+    if (n > 0) left.set(k, n - 1);
+    else lost.push(l);
+  }
+  if (lost.length === 0) return [];
+  const onLine = candidates.filter((s) => lost.some((l) => l.line === s.line));
+  return onLine.length > 0 ? onLine : [...candidates];
 }
 
 /** True when `offset` falls between a high and a low surrogate (inserting there would break the character). */

@@ -15,7 +15,7 @@ export interface Selected {
 }
 
 /** Reason given for a suggestion without an anchor phrase. */
-export const NO_ANCHOR = 'no anchor phrase in the source to link (add a sentence that links to the target by hand)';
+export const NO_ANCHOR = 'no anchor phrase: needs a sentence written by hand';
 
 /**
  * Pick the suggestions `selection` names from `suggestions`. Duplicate ids count once.
@@ -37,7 +37,7 @@ export function selectSuggestions(suggestions: readonly Suggestion[], selection:
   }
   const skipped = picked
     .filter((s) => s.anchor === null)
-    .map((s) => ({ id: s.id, file: s.file, reason: NO_ANCHOR }))
+    .map((s): NotApplied => ({ id: s.id, file: s.file, code: 'no-anchor', reason: NO_ANCHOR }))
     .sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   const chosen = picked
     .filter((s) => s.anchor !== null)

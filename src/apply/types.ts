@@ -1,5 +1,5 @@
 /** Types of the apply stage: link styles, and what planning one file's edits gives. */
-import type { FileKind } from '../types.js';
+import type { FileKind, ProtectedKind } from '../types.js';
 
 /**
  * How a new link names its target:
@@ -50,10 +50,43 @@ export interface AppliedLink {
   readonly offset: number;
 }
 
+/**
+ * Why a suggestion was not applied:
+ * - `no-anchor`: it has no anchor phrase (a sentence must be written by hand);
+ * - `bad-path`: its file is not a source file under the content root;
+ * - `unreadable`: the file is missing or cannot be read;
+ * - `undecodable`: the file cannot be written back without changing other bytes;
+ * - `changed`: the file's content hash is not the report's;
+ * - `anchor-moved`: the anchor phrase is not at its offsets (or splits a character);
+ * - `not-a-page`: the target is not a page of the report;
+ * - `protected`: the anchor overlaps a protected region of the file as it is now (`kind` says which);
+ * - `overlap`: the anchor overlaps the anchor of another chosen suggestion;
+ * - `not-a-link`: the edited file would not read the markup as a link there;
+ * - `region-changed`: the edit would change a protected region next to the anchor;
+ * - `write-failed`: the file could not be written.
+ */
+export type RefusalCode =
+  | 'no-anchor'
+  | 'bad-path'
+  | 'unreadable'
+  | 'undecodable'
+  | 'changed'
+  | 'anchor-moved'
+  | 'not-a-page'
+  | 'protected'
+  | 'overlap'
+  | 'not-a-link'
+  | 'region-changed'
+  | 'write-failed';
+
 /** A suggestion not applied, and why. */
 export interface NotApplied {
   readonly id: string;
   readonly file: string;
+  readonly code: RefusalCode;
+  /** For `protected`: the kind of region the anchor lies in. */
+  readonly kind?: ProtectedKind;
+  /** The reason in plain words. */
   readonly reason: string;
 }
 

@@ -6,7 +6,7 @@
  * Each shard file is two parts:
  *
  * ```
- * {"schema":"linkweave/facts-cache@2","version":"0.1.0","fingerprint":"...","shard":3,"count":2}\n
+ * {"schema":"linkweave/facts-cache@3","version":"0.1.0","fingerprint":"...","shard":3,"count":2}\n
  * [\n<entry>,\n<entry>\n]\n
  * ```
  *
@@ -23,8 +23,8 @@
  */
 import type { PageFacts, SourceFile, TextSpan } from '../types.js';
 
-/** Schema id of a shard file; bump when the entry layout changes. */
-export const CACHE_SCHEMA = 'linkweave/facts-cache@2';
+/** Schema id of a shard file; bump when the entry layout changes (2: heading fields and `protected` regions). */
+export const CACHE_SCHEMA = 'linkweave/facts-cache@3';
 
 /** Number of shard files. */
 export const SHARDS = 16;

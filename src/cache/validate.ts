@@ -4,7 +4,7 @@
  * schema: they run over every link of every cached page on each warm run, and plain `typeof`
  * checks cost a few nanoseconds per field where a schema parse builds a new object for each.
  */
-import type { Heading, RawLink, SourceProblem, TextSpan } from '../types.js';
+import type { Heading, ProtectedKind, ProtectedRegion, RawLink, SourceProblem, TextSpan } from '../types.js';
 import type { ShardHeader, StoredFacts } from './format.js';
 
 type Unknown = Record<string, unknown>;
@@ -103,6 +103,27 @@ function isSpans(v: unknown): boolean {
   return true;
 }
 
+const PROTECTED_KINDS = new Set<unknown>([
+  'shortcode',
+  'template-tag',
+  'template-block',
+  'mdx-jsx',
+  'mdx-expression',
+  'braces',
+  'html-tag',
+  'html-comment',
+  'front-matter',
+  'link-definition',
+  'container-marker',
+  'attribute-list',
+  'link',
+  'code',
+] satisfies ProtectedKind[]);
+
+function isRegion(v: unknown): v is ProtectedRegion {
+  return Array.isArray(v) && v.length === 3 && isInt(v[0]) && isInt(v[1]) && v[1] >= v[0] && PROTECTED_KINDS.has(v[2]);
+}
+
 function every<T>(v: unknown, check: (x: unknown) => x is T): boolean {
   if (!Array.isArray(v)) return false;
   for (const x of v) if (!check(x)) return false;
@@ -142,6 +163,7 @@ export function isStoredFacts(v: unknown): v is StoredFacts {
     typeof text.headings === 'string' &&
     typeof text.body === 'string' &&
     isSpans(v.spans) &&
+    every(v.protected, isRegion) &&
     every(v.problems, isProblem)
   );
 }

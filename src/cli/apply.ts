@@ -3,43 +3,29 @@
  * prevailing style. The suggestions come from `--from report.json` or from a `suggest` run
  * made now. Planning is the pure `apply/` stage; this file reads, checks and writes files.
  *
- * Output: the applied, skipped and refused suggestions on stdout; with `--dry-run` the unified
- * diff on stdout (so it can be piped to `git apply`) and that summary on stderr, and nothing
- * written (not even the parse cache).
+ * Reading, checking and writing the files is `applySuggestions` (src/apply/run.ts); this file
+ * reads the flags, prints and picks the exit code.
+ *
+ * Output: the applied links, then each suggestion not applied with the reason in plain words
+ * ("inside a shortcode", "the source changed since the report", "no anchor phrase: needs a
+ * sentence written by hand"), on stdout; with `--dry-run` the unified diff on stdout (so it can
+ * be piped to `git apply`) and that summary on stderr, and nothing written (not even the parse
+ * cache).
  *
  * Exit codes: 0 every chosen suggestion was applied (with `--all`, suggestions without an
- * anchor phrase are skipped and do not count); 1 some were refused (the file changed since the
- * report, overlapping anchors, ...) or an id given with `--ids` has no anchor phrase: the rest
- * were applied; 2 usage (no `--ids`/`--all`, an unknown id), an unreadable or invalid `--from`
- * report, or a file that could not be written.
+ * anchor phrase are listed but do not count, unless none at all could be applied); 1 some were
+ * refused (the file changed since the report, an anchor inside a protected region, overlapping
+ * anchors, ...), an id given with `--ids` has no anchor phrase, or `--all` applied nothing of
+ * what it found: the rest were applied; 2 usage (no `--ids`/`--all`, an unknown id), an
+ * unreadable or invalid `--from` report, or a file that could not be written.
  */
-import fs from 'node:fs';
-import { join, resolve } from 'node:path';
 import { analyze } from '../analyze.js';
-import {
-  LINK_STYLES,
-  addCounts,
-  chooseStyle,
-  countStyles,
-  encodeText,
-  groupByFile,
-  hadBom,
-  hrefFor,
-  majority,
-  planFile,
-  selectSuggestions,
-  unifiedDiff,
-} from '../apply/index.js';
-import type { AppliedLink, LinkStyle, NotApplied, Selection, StyleCounts } from '../apply/index.js';
-import { collectSources, kindOfPath, readSource } from '../collect/index.js';
+import { applySuggestions, LINK_STYLES } from '../apply/index.js';
+import type { AppliedLink, ApplyResult, LinkStyle, Selection } from '../apply/index.js';
 import { parseReportFile } from '../compare/index.js';
 import { EngineError } from '../errors.js';
 import { resolveOptions } from '../options.js';
-import type { ResolvedOptions } from '../options.js';
-import { parseSource } from '../parse/index.js';
 import { displayPath } from '../report/formatters/common.js';
-import { writeFileAtomic } from '../report/write.js';
-import type { SourceFile, Suggestion } from '../types.js';
 import type { FlagSpec } from './args.js';
 import type { CommandContext } from './commands.js';
 import { readUserFile } from './review.js';
@@ -62,15 +48,6 @@ export const APPLY_FLAGS: readonly FlagSpec[] = [
   },
 ];
 
-interface Outcome {
-  readonly applied: AppliedLink[];
-  readonly skipped: NotApplied[];
-  readonly refused: NotApplied[];
-  readonly styles: Map<string, string>;
-  readonly diff: string[];
-  writeFailed: boolean;
-}
-
 /** Run `apply`; returns the exit code. */
 export async function runApplyCommand(ctx: CommandContext): Promise<number> {
   const { io, values, root } = ctx;
@@ -79,67 +56,39 @@ export async function runApplyCommand(ctx: CommandContext): Promise<number> {
   }
   const selection = selectionOf(values);
   const dryRun = values['dry-run'] === true;
-  const forced = typeof values['link-style'] === 'string' ? (values['link-style'] as LinkStyle) : null;
+  const linkStyle = typeof values['link-style'] === 'string' ? (values['link-style'] as LinkStyle) : null;
   const options = resolveOptions(ctx.config, root, ctx.configOrigin);
-
   const fromPath = typeof values.from === 'string' ? values.from : null;
-  const source = fromPath === null ? await suggestNow(ctx, dryRun) : parseReportFile(readUserFile(io.cwd, fromPath, 'from'), fromPath);
-  const selected = selectSuggestions(source.suggestions, selection);
-  if (selected.unknown.length > 0) {
+  const report = fromPath === null ? await suggestNow(ctx, dryRun) : parseReportFile(readUserFile(io.cwd, fromPath, 'from'), fromPath);
+  const show = (f: string) => displayPath(f, root, io.cwd);
+  const result = await applySuggestions({
+    options,
+    report,
+    selection,
+    dryRun,
+    linkStyle,
+    showPath: show,
+    ...(io.tempFiles === undefined ? {} : { tempFiles: io.tempFiles }),
+  });
+  if (result.unknown.length > 0) {
     const where = fromPath === null ? "this run's suggestions" : `"${fromPath}"`;
-    throw new EngineError('E_USAGE', `flag --ids: no suggestion with id ${selected.unknown.map((id) => `"${id}"`).join(', ')} in ${where}; nothing was written`);
+    throw new EngineError('E_USAGE', `flag --ids: no suggestion with id ${result.unknown.map((id) => `"${id}"`).join(', ')} in ${where}; nothing was written`);
   }
+  if (dryRun) io.stdout.write(result.diffs.join(''));
+  if (!ctx.flags.quiet) (dryRun ? io.stderr : io.stdout).write(summary(result, dryRun, show));
+  return exitCode(result, selection);
+}
 
-  // A page row without a route or file (a hand-edited report) gives no address to link to: its
-  // suggestions are refused as targets that are not pages of the report.
-  const pages = new Map(source.pages.filter((p) => p.route.startsWith('/') && p.file !== '').map((p) => [p.route, { route: p.route, file: p.file }]));
-  const out: Outcome = { applied: [], skipped: [...selected.skipped], refused: [], styles: new Map(), diff: [], writeFailed: false };
-  const realRoot = fs.realpathSync(root);
-  let site: StyleCounts | null = null;
-
-  for (const [rel, group] of groupByFile(selected.chosen)) {
-    const read = readForApply(rel, root, realRoot, options);
-    if ('reason' in read) {
-      for (const s of group) out.refused.push({ id: s.id, file: rel, reason: read.reason });
-      continue;
-    }
-    const facts = parseSource(read.file, options);
-    const own = countStyles(facts.links, read.file.kind);
-    if (forced === null && majority(own) === null) site ??= await countSite(options);
-    const { style, origin } = chooseStyle(own, () => site!, forced);
-    const from = { file: rel, kind: read.file.kind, route: facts.route, ...(facts.baseHref === undefined ? {} : { baseHref: facts.baseHref }) };
-    const hrefs = new Map<string, string>();
-    for (const s of group) {
-      const target = pages.get(s.target);
-      if (target !== undefined) hrefs.set(s.id, hrefFor(from, target, style));
-    }
-    const plan = planFile({ file: read.file, suggestions: group, hrefs, style, options });
-    out.refused.push(...plan.refused);
-    if (plan.applied.length === 0) continue;
-    out.styles.set(rel, `${style} (${origin === 'flag' ? '--link-style' : origin === 'file' ? "the file's own links" : origin === 'site' ? "the site's links" : 'default'})`);
-    const shown = displayPath(rel, root, io.cwd);
-    if (dryRun) {
-      out.diff.push(unifiedDiff(shown, plan.before, plan.after));
-      out.applied.push(...plan.applied);
-      continue;
-    }
-    try {
-      await writeFileAtomic(read.real, encodeText(plan.after, hadBom(read.file)), {
-        label: shown,
-        ...(io.tempFiles === undefined ? {} : { tracker: io.tempFiles }),
-      });
-      out.applied.push(...plan.applied);
-    } catch (error) {
-      out.writeFailed = true;
-      for (const a of plan.applied) out.refused.push({ id: a.id, file: rel, reason: (error as Error).message });
-    }
-  }
-
-  if (dryRun) io.stdout.write(out.diff.join(''));
-  if (!ctx.flags.quiet) (dryRun ? io.stderr : io.stdout).write(summary(out, dryRun, (f) => displayPath(f, root, io.cwd)));
-  if (out.writeFailed) return 2;
-  const explicitSkip = selection !== 'all' && out.skipped.length > 0;
-  return out.refused.length > 0 || explicitSkip ? 1 : 0;
+/**
+ * 2 a write failed; 1 a suggestion was refused, an id given with `--ids` has no anchor phrase,
+ * or `--all` found suggestions but could apply none of them; 0 otherwise.
+ */
+function exitCode(result: ApplyResult, selection: Selection): number {
+  if (result.writeFailed) return 2;
+  const refused = result.notApplied.filter((n) => n.code !== 'no-anchor');
+  if (refused.length > 0) return 1;
+  if (selection !== 'all') return result.notApplied.length > 0 ? 1 : 0;
+  return result.applied.length === 0 && result.notApplied.length > 0 ? 1 : 0;
 }
 
 function selectionOf(values: CommandContext['values']): Selection {
@@ -159,60 +108,25 @@ async function suggestNow(ctx: CommandContext, dryRun: boolean) {
   return analyze({ ...config, root: ctx.root, command: 'suggest', configOrigin: ctx.configOrigin });
 }
 
-/**
- * Read one source named by a report, refusing paths that are not a source file inside the
- * root (a report is input: it could name anything). The real path is where the write goes,
- * so a symlink inside the root is written through, never replaced.
- */
-function readForApply(
-  rel: string,
-  root: string,
-  realRoot: string,
-  options: ResolvedOptions,
-): { file: SourceFile; real: string } | { reason: string } {
-  const kind = kindOfPath(rel);
-  const segments = rel.split('/');
-  if (kind === null || rel.startsWith('/') || rel.includes('\\') || rel.includes('\0') || segments.some((s) => s === '..' || s === '.' || s === '')) {
-    return { reason: `"${rel}" is not the path of a source file under the content root` };
-  }
-  let real: string;
-  try {
-    real = fs.realpathSync(join(root, ...segments));
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    return { reason: code === 'ENOENT' ? `"${rel}" does not exist (any more)` : `"${rel}" cannot be read (${code ?? 'error'})` };
-  }
-  const read = readSource(real, rel, kind, { realRoot, maxFileBytes: options.maxFileBytes });
-  if ('warning' in read) return { reason: read.warning.message };
-  return { file: read.file, real };
-}
+const ORIGIN_WORDS = { flag: '--link-style', file: "the file's own links", site: "the site's links", default: 'default' } as const;
 
-/** The link styles of every source of the site (read only when a file has no links of its own). */
-async function countSite(options: ResolvedOptions): Promise<StyleCounts> {
-  const { files } = await collectSources(options);
-  let counts: StyleCounts = { relative: 0, absolute: 0, 'route-relative': 0 };
-  for (const file of files) counts = addCounts(counts, countStyles(parseSource(file, options).links, file.kind));
-  return counts;
-}
-
-/** The summary: applied (with the markup and style), skipped and refused suggestions. */
-function summary(out: Outcome, dryRun: boolean, shown: (file: string) => string): string {
-  const files = new Set(out.applied.map((a) => a.file)).size;
+/** The summary: applied links (with the markup and style), then every suggestion not applied and why. */
+function summary(result: ApplyResult, dryRun: boolean, shown: (file: string) => string): string {
+  const files = new Set(result.applied.map((a) => a.file)).size;
   const verb = dryRun ? 'Would apply' : 'Applied';
-  const lines = [`${verb} ${count(out.applied.length, 'link')} in ${count(files, 'file')}${dryRun ? ' (dry run: nothing written)' : ''}`];
+  const lines = [`${verb} ${count(result.applied.length, 'link')} in ${count(files, 'file')}${dryRun ? ' (dry run: nothing written)' : ''}`];
   const byFile = new Map<string, AppliedLink[]>();
-  for (const a of out.applied) byFile.set(a.file, [...(byFile.get(a.file) ?? []), a]);
+  for (const a of result.applied) byFile.set(a.file, [...(byFile.get(a.file) ?? []), a]);
   for (const [file, links] of byFile) {
-    lines.push(`  ${shown(file)}  link style ${out.styles.get(file)}`);
+    const style = result.styles.get(file)!;
+    lines.push(`  ${shown(file)}  link style ${style.style} (${ORIGIN_WORDS[style.origin]})`);
     for (const a of links) lines.push(`    ${a.line}:${a.column}  ${a.open}${a.anchor}${a.close}  -> ${a.target}  id ${a.id}`);
   }
-  const list = (title: string, items: readonly NotApplied[]) => {
-    if (items.length === 0) return;
-    lines.push(`${title} ${count(items.length, 'suggestion')}:`);
-    for (const i of items) lines.push(`  ${shown(i.file)}  id ${i.id}: ${i.reason}`);
-  };
-  list('Skipped', out.skipped);
-  list('Refused', out.refused);
+  const not = result.notApplied;
+  if (not.length > 0) {
+    lines.push(`${dryRun ? 'Would not apply' : 'Did not apply'} ${count(not.length, 'suggestion')}:`);
+    for (const n of not) lines.push(`  ${shown(n.file)}  id ${n.id}: ${n.reason}`);
+  }
   return `${lines.join('\n')}\n`;
 }
 

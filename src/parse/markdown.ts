@@ -126,6 +126,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
       };
       if (node.type === 'link') draft.links.push(link);
       else w.references.push({ link, id: node.identifier });
+      draft.protected.push([link.offset, endOf(w, node), 'link']);
       let f = flags | IN_LINK | NO_SPAN;
       if (node.type === 'link' && looksLikeUrl(text, node.url)) f |= NO_BODY;
       walkChildren(w, node, f);
@@ -133,6 +134,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
     }
     case 'definition':
       if (!w.definitions.has(node.identifier)) w.definitions.set(node.identifier, node.url);
+      draft.protected.push([startOf(w, node), endOf(w, node), 'link-definition']);
       return;
     case 'code':
     case 'inlineCode':
@@ -187,6 +189,7 @@ function textWithLiteralLinks(w: Walk, node: Text, flags: number, literal: reado
     });
     if (offset !== -1) {
       cuts.push(offset, offset + l.text.length);
+      draft.protected.push([offset, offset + l.text.length, 'link']);
       searchFrom = offset + l.text.length;
     }
     if ((flags & NO_BODY) === 0) draft.body.push(node.value.slice(at, l.index));

@@ -4,7 +4,7 @@
  * a run.
  */
 import type { ResolvedOptions } from '../options.js';
-import type { Heading, IncludeRef, PageFacts, RawLink, SourceFile, SourceProblem } from '../types.js';
+import type { Heading, IncludeRef, PageFacts, ProtectedRegion, RawLink, SourceFile, SourceProblem } from '../types.js';
 import { findIncludes } from './includes.js';
 import { describeError } from './failure.js';
 import { EMPTY_META } from './frontmatter.js';
@@ -13,6 +13,7 @@ import type { LineIndex } from './lines.js';
 import { buildLineIndex, positionOf } from './lines.js';
 import { readMarkdownPage } from './markdown-page.js';
 import { addPatternLinks } from './patterns.js';
+import { protectDraft } from './protect.js';
 import { routeOfFile } from './routes.js';
 import type { PageDraft, Read } from './types.js';
 import { newDraft } from './types.js';
@@ -30,9 +31,11 @@ export function parseSource(file: SourceFile, options: ResolvedOptions): PageFac
   let lines: LineIndex | null = null;
   try {
     lines = buildLineIndex(src);
-    const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines, /\.mdx$/i.test(file.path));
+    const mdx = /\.mdx$/i.test(file.path);
+    const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines, mdx);
     addPatternLinks(src, options.linkPatterns, read.draft);
-    return assemble(file, options, bom, lines, read);
+    const regions = protectDraft({ src, lines, kind: file.kind, mdx }, read.draft);
+    return assemble(file, options, bom, lines, read, regions);
   } catch (error) {
     return failedFacts(file, options, bom, lines, error);
   }
@@ -44,7 +47,7 @@ function failedFacts(file: SourceFile, options: ResolvedOptions, bom: number, li
   const draft = newDraft();
   draft.problems.push({ code: 'parse-failed', message });
   try {
-    return assemble(file, options, bom, lines ?? buildLineIndex(''), { draft, meta: EMPTY_META });
+    return assemble(file, options, bom, lines ?? buildLineIndex(''), { draft, meta: EMPTY_META }, []);
   } catch {
     let route: string;
     try {
@@ -55,12 +58,19 @@ function failedFacts(file: SourceFile, options: ResolvedOptions, bom: number, li
     const title = file.path;
     return {
       file: file.path, kind: file.kind, hash: file.hash, route, title, meta: EMPTY_META, headings: [], ids: [], links: [],
-      text: { title, headings: '', body: '' }, spans: [], problems: [...file.problems, { code: 'parse-failed', message }],
+      text: { title, headings: '', body: '' }, spans: [], protected: [], problems: [...file.problems, { code: 'parse-failed', message }],
     };
   }
 }
 
-function assemble(file: SourceFile, options: ResolvedOptions, bom: number, lines: LineIndex, read: Read): PageFacts {
+function assemble(
+  file: SourceFile,
+  options: ResolvedOptions,
+  bom: number,
+  lines: LineIndex,
+  read: Read,
+  regions: readonly ProtectedRegion[],
+): PageFacts {
   const { draft, meta } = read;
   const problems: SourceProblem[] = [...file.problems];
   const links = draft.links.slice().sort((a, b) => a.offset - b.offset);
@@ -118,6 +128,7 @@ function assemble(file: SourceFile, options: ResolvedOptions, bom: number, lines
     links: rawLinks,
     text: { title, headings: headings.map((h) => h.text).join('\n'), body: draft.body.join('') },
     spans,
+    protected: bom === 0 ? regions : regions.map((r): ProtectedRegion => [r[0] + bom, r[1] + bom, r[2]]),
     problems,
   };
   const extra: { fixedIds?: string[]; includes?: IncludeRef[]; baseHref?: string } = {};

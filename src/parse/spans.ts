@@ -8,7 +8,7 @@
  */
 import type { LineIndex } from './lines.js';
 import { lineContentEnd, lineOf, lineStart } from './lines.js';
-import type { PageDraft } from './types.js';
+import type { PageDraft, SpanDraft } from './types.js';
 
 const LINE_BREAK = /\r\n|\r|\n/;
 const WORDY = /[\p{L}\p{N}]/u;
@@ -115,6 +115,34 @@ export function cutSpans(draft: PageDraft, first: number, cuts: readonly number[
     }
     if (from < spanEnd) pushTrimmed(draft, span.text, from - span.offset, spanEnd - span.offset, span.offset);
   }
+}
+
+/**
+ * Spans cut by ranges: each span overlapping a range keeps the trimmed pieces around it that
+ * still hold a letter or digit.
+ * @param spans spans in any order
+ * @param ranges `[start, end)` first, sorted by start with ascending ends (none holds another)
+ * @returns the spans sorted by offset
+ */
+export function cutSpansByRanges(spans: readonly SpanDraft[], ranges: readonly (readonly [number, number, ...unknown[]])[]): SpanDraft[] {
+  const sorted = spans.slice().sort((a, b) => a.offset - b.offset);
+  if (ranges.length === 0) return sorted;
+  const out = { spans: [] as SpanDraft[] } as unknown as PageDraft;
+  let r = 0;
+  for (const span of sorted) {
+    const spanEnd = span.offset + span.text.length;
+    while (r < ranges.length && ranges[r]![1] <= span.offset) r++;
+    let from = span.offset;
+    for (let k = r; k < ranges.length && ranges[k]![0] < spanEnd; k++) {
+      const [cutStart, cutEnd] = ranges[k]!;
+      if (cutEnd <= from) continue;
+      if (cutStart > from) pushTrimmed(out, span.text, from - span.offset, cutStart - span.offset, span.offset);
+      from = Math.max(from, cutEnd);
+    }
+    if (from === span.offset) out.spans.push(span);
+    else if (from < spanEnd) pushTrimmed(out, span.text, from - span.offset, spanEnd - span.offset, span.offset);
+  }
+  return out.spans;
 }
 
 /**

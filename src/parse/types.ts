@@ -2,7 +2,7 @@
  * Types of the parse stage: the redirect record it exports, and the draft it fills while walking
  * one file (offsets only; line/column are computed once at the end from the line table).
  */
-import type { LinkContext, LinkOrigin, PageMeta, SourceProblem } from '../types.js';
+import type { LinkContext, LinkOrigin, PageMeta, ProtectedRegion, SourceProblem } from '../types.js';
 
 /** One line of a redirects file: `from to`. */
 export interface Redirect {
@@ -66,6 +66,8 @@ export interface PageDraft {
   /** Code ranges `[start, end)` in offset order (pairs), where link patterns do not apply. */
   readonly code: number[];
   readonly problems: ProblemDraft[];
+  /** Protected regions the walk found (link definitions); the rest come from `protect.ts`. */
+  readonly protected: ProtectedRegion[];
   firstH1?: string;
   htmlTitle?: string;
   baseHref?: string;
@@ -73,7 +75,7 @@ export interface PageDraft {
 
 /** A fresh, empty draft. */
 export function newDraft(): PageDraft {
-  return { links: [], headings: [], ids: [], spans: [], body: [], code: [], problems: [] };
+  return { links: [], headings: [], ids: [], spans: [], body: [], code: [], problems: [], protected: [] };
 }
 
 /** A file read into a draft, with its frontmatter. */

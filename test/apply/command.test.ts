@@ -120,7 +120,8 @@ describe('apply on the pr-base site', () => {
     const r = await cli(cwd, ['apply', 'docs', '--from', 'report.json', '--all']);
     expect(r.code).toBe(1);
     const stale = byAnchor(report, 'tuning the flame sensor');
-    expect(r.stdout).toContain(`Refused 1 suggestion:\n  docs/guide/install.md  id ${stale.id}: changed since the report`);
+    expect(r.stdout).toContain(`Did not apply 2 suggestions:\n  docs/guide/install.md  id ${stale.id}: the source changed since the report`);
+    expect(r.stdout).toMatch(/\n {2}docs\/index\.md {2}id \w+: no anchor phrase: needs a sentence written by hand\n/);
     expect(r.stdout).toContain('Applied 1 link in 1 file');
     expect(fs.readFileSync(install)).toEqual(changed);
     expect(fs.readFileSync(path.join(root, 'reference', 'codes.md'), 'utf8')).toContain('The [flame sensor threshold](../guide/tuning.md) is out of range.');
@@ -147,7 +148,10 @@ describe('apply on the pr-base site', () => {
     const before = snapshot(cwd);
     const skipped = await cli(cwd, ['apply', 'docs', '--from', 'report.json', '--ids', loose.id]);
     expect(skipped.code).toBe(1);
-    expect(skipped.stdout).toContain(`id ${loose.id}: no anchor phrase in the source to link`);
+    expect(skipped.stdout).toContain(`Applied 0 links in 0 files\nDid not apply 1 suggestion:\n  docs/index.md  id ${loose.id}: no anchor phrase: needs a sentence written by hand\n`);
+    const dryLoose = await cli(cwd, ['apply', 'docs', '--from', 'report.json', '--ids', loose.id, '--dry-run']);
+    expect(dryLoose.code).toBe(1);
+    expect(dryLoose.stderr).toContain(`Would not apply 1 suggestion:\n  docs/index.md  id ${loose.id}: no anchor phrase: needs a sentence written by hand\n`);
     const cases: [string[], RegExp][] = [
       [['apply', 'docs', '--from', 'report.json', '--ids', 'nope,also-nope'], /flag --ids: no suggestion with id "nope", "also-nope" in "report\.json"; nothing was written/],
       [['apply', 'docs'], /"apply" needs --ids ID,ID \(from the suggest output\) or --all/],
@@ -246,5 +250,55 @@ describe('link style and bytes', () => {
     expect(r.code).toBe(1);
     expect(r.stdout.match(/is not the path of a source file under the content root/g)).toHaveLength(4);
     expect(fs.readFileSync(path.join(cwd, 'secret.md'), 'utf8')).toBe('wiring');
+  });
+});
+
+describe('refusals a dry run lists', () => {
+  const SITE = {
+    'index.md': '# Home\n\nSee [the guide](/guide/).\n',
+    'guide.md':
+      '---\ntitle: Guide\n---\n\n# Guide\n\nThe {{< feature url="/status/" title="status page" >}} here.\n\nRead the status page daily.\n\n<!-- status page -->\n',
+    'status.md': '# Status page\n\nAll fine.\n',
+  };
+
+  it('--all --dry-run: each suggestion it will not apply, with the reason in plain words; nothing written', async () => {
+    const { cwd, root } = project(SITE);
+    const picks = [
+      { file: 'guide.md', anchor: 'status page', target: '/status/' },
+      { file: 'guide.md', anchor: 'status page', target: '/status/', occurrence: 1 },
+      { file: 'guide.md', anchor: 'status page', target: '/status/', occurrence: 2 },
+    ];
+    const report = JSON.parse(reportFor(root, SITE, picks)) as { suggestions: Suggestion[] };
+    const loose = { ...report.suggestions[0]!, id: 'loose', anchor: null, offset: -1, endOffset: -1 };
+    const stale = { ...report.suggestions[1]!, id: 'stale', sourceHash: '0'.repeat(64) };
+    fs.writeFileSync(path.join(cwd, 'r.json'), JSON.stringify({ ...report, suggestions: [...report.suggestions, loose, stale] }));
+    const before = snapshot(cwd);
+    const r = await cli(cwd, ['apply', 'docs', '--from', 'r.json', '--all', '--dry-run']);
+    expect(r.code).toBe(1);
+    expect(snapshot(cwd)).toEqual(before);
+    expect(r.stdout).toContain('+Read the [status page](/status/) daily.\n');
+    expect(r.stderr).toBe(
+      [
+        'Would apply 1 link in 1 file (dry run: nothing written)',
+        '  docs/guide.md  link style absolute (the site\'s links)',
+        '    9:10  [status page](/status/)  -> /status/  id id1',
+        'Would not apply 4 suggestions:',
+        '  docs/guide.md  id id0: inside a shortcode (line 7)',
+        '  docs/guide.md  id id2: inside an HTML comment (line 11)',
+        '  docs/guide.md  id loose: no anchor phrase: needs a sentence written by hand',
+        `  docs/guide.md  id stale: the source changed since the report (content hash 000000000000, now ${report.suggestions[0]!.sourceHash.slice(0, 12)}); run "linkweave suggest" again`,
+        '',
+      ].join('\n'),
+    );
+  });
+
+  it('--all with nothing it can apply exits 1, not a silent "Applied 0 links"', async () => {
+    const { cwd, root } = project(SITE);
+    const report = JSON.parse(reportFor(root, SITE, [{ file: 'guide.md', anchor: 'status page', target: '/status/' }])) as { suggestions: Suggestion[] };
+    const loose = { ...report.suggestions[0]!, id: 'loose', anchor: null, offset: -1, endOffset: -1 };
+    fs.writeFileSync(path.join(cwd, 'r.json'), JSON.stringify({ ...report, suggestions: [loose] }));
+    const r = await cli(cwd, ['apply', 'docs', '--from', 'r.json', '--all']);
+    expect(r.code).toBe(1);
+    expect(r.stdout).toBe('Applied 0 links in 0 files\nDid not apply 1 suggestion:\n  docs/guide.md  id loose: no anchor phrase: needs a sentence written by hand\n');
   });
 });

@@ -7,7 +7,7 @@ import { createHash } from 'node:crypto';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { encodeText, hadBom, planFile } from '../../src/apply/index.js';
-import type { AppliedLink } from '../../src/apply/index.js';
+import type { AppliedLink, PlanInput } from '../../src/apply/index.js';
 import { decodeSource } from '../../src/collect/index.js';
 import { DEFAULT_OPTIONS } from '../../src/options.js';
 import { parseSource } from '../../src/parse/index.js';
@@ -127,6 +127,12 @@ function unapply(text: string, applied: readonly AppliedLink[]): string {
 
 const squash = (s: string) => s.replace(/\s+/g, ' ').trim();
 
+/** `planFile` with the regions and links of the file as read now, as `applySuggestions` passes them. */
+const planNow = (input: Omit<PlanInput, 'regions' | 'links'>) => {
+  const now = parseSource(input.file, options);
+  return planFile({ ...input, regions: now.protected, links: now.links });
+};
+
 function checkProperty(kind: FileKind, doc: fc.Arbitrary<string>, path: string) {
   let applied = 0;
   fc.assert(
@@ -134,7 +140,7 @@ function checkProperty(kind: FileKind, doc: fc.Arbitrary<string>, path: string) 
       const original = bytesOf(text, crlf, bom);
       const file = sourceFile(path, kind, original);
       const chosen = anchors(file, picks);
-      const plan = planFile({ file, suggestions: chosen, hrefs: hrefsOf(chosen), style: 'absolute', options });
+      const plan = planNow({ file, suggestions: chosen, hrefs: hrefsOf(chosen), style: 'absolute', options });
       // Every suggestion is applied or refused; only overlaps are refused here.
       expect(plan.applied.length + plan.refused.length).toBe(chosen.length);
       for (const r of plan.refused) expect(r.reason).toMatch(/overlaps/);
@@ -182,7 +188,7 @@ describe('planFile refusals', () => {
   it('several links in one file and on one line: positions after earlier insertions', () => {
     const a = suggestion('a', file, at('tide gauge'), at('tide gauge') + 10);
     const b = suggestion('b', file, at('wave buoy'), at('wave buoy') + 9);
-    const plan = planFile({ file, suggestions: [b, a], hrefs: hrefsOf([a, b]), style: 'absolute', options });
+    const plan = planNow({ file, suggestions: [b, a], hrefs: hrefsOf([a, b]), style: 'absolute', options });
     expect(plan.after).toBe('# Tides\r\n\r\nThe [tide gauge](/target-a/) and the [wave buoy](/target-b/) report every minute.\r\n');
     expect(plan.applied.map((x) => [x.id, x.line, x.column])).toEqual([
       ['a', 3, 5],
@@ -197,10 +203,10 @@ describe('planFile refusals', () => {
     const overlap = suggestion('overlap', file, at('buoy'), at('buoy') + 4);
     const nowhere = suggestion('nowhere', file, at('minute'), at('minute') + 6);
     const hrefs = hrefsOf([ok, stale, moved, overlap]);
-    const plan = planFile({ file, suggestions: [ok, stale, moved, overlap, nowhere], hrefs, style: 'absolute', options });
+    const plan = planNow({ file, suggestions: [ok, stale, moved, overlap, nowhere], hrefs, style: 'absolute', options });
     expect(plan.applied.map((a) => a.id)).toEqual(['ok']);
     expect(Object.fromEntries(plan.refused.map((r) => [r.id, r.reason]))).toEqual({
-      stale: `changed since the report (content hash ffffffffffff, now ${file.hash.slice(0, 12)}); run "linkweave suggest" again`,
+      stale: `the source changed since the report (content hash ffffffffffff, now ${file.hash.slice(0, 12)}); run "linkweave suggest" again`,
       moved: 'the anchor "tide gauge" is not at offset ' + (at('tide gauge') + 1),
       overlap: 'its anchor overlaps the anchor of ok ("wave buoy")',
       nowhere: 'the target /target-nowhere/ is not a page of the report',
@@ -211,7 +217,7 @@ describe('planFile refusals', () => {
     const bang = sourceFile('b.md', 'markdown', new TextEncoder().encode('# B\n\nWow!Calibration matters.\n'));
     const s = suggestion('img', bang, 'Wow!'.length + 5, 'Wow!Calibration'.length + 5);
     expect(s.anchor).toBe('Calibration');
-    const plan = planFile({ file: bang, suggestions: [s], hrefs: hrefsOf([s]), style: 'absolute', options });
+    const plan = planNow({ file: bang, suggestions: [s], hrefs: hrefsOf([s]), style: 'absolute', options });
     expect(plan.applied).toEqual([]);
     expect(plan.after).toBe(bang.text);
     expect(plan.refused[0]!.reason).toMatch(/would not be read as a link/);
@@ -220,11 +226,11 @@ describe('planFile refusals', () => {
   it('refuses files that do not decode exactly (invalid UTF-8) and anchors that split a character', () => {
     const bad = sourceFile('bad.md', 'markdown', Uint8Array.from([...new TextEncoder().encode('# Bad\n\nwave '), 0xff, 0x0a]));
     const s = suggestion('x', bad, bad.text.indexOf('wave'), bad.text.indexOf('wave') + 4);
-    expect(planFile({ file: bad, suggestions: [s], hrefs: hrefsOf([s]), style: 'absolute', options }).refused[0]!.reason).toMatch(
+    expect(planNow({ file: bad, suggestions: [s], hrefs: hrefsOf([s]), style: 'absolute', options }).refused[0]!.reason).toMatch(
       /^cannot be edited without changing other bytes: invalid UTF-8/,
     );
     const emoji = sourceFile('e.md', 'markdown', new TextEncoder().encode('# E\n\nwave🌊 buoy\n'));
     const half = suggestion('half', emoji, emoji.text.indexOf('wave'), emoji.text.indexOf('🌊') + 1);
-    expect(planFile({ file: emoji, suggestions: [half], hrefs: hrefsOf([half]), style: 'absolute', options }).refused[0]!.reason).toMatch(/surrogate/);
+    expect(planNow({ file: emoji, suggestions: [half], hrefs: hrefsOf([half]), style: 'absolute', options }).refused[0]!.reason).toMatch(/surrogate/);
   });
 });

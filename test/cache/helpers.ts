@@ -56,6 +56,7 @@ export function handFacts(file: SourceFile): PageFacts {
     links: [{ href: '../other/', text: 'other', line: 2, column: 3, context: 'content', nofollow: false, origin: 'markdown' }],
     text: { title: 'A page', headings: 'A page', body: text },
     spans,
+    protected: [],
     problems: file.problems,
   };
 }

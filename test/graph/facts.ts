@@ -38,6 +38,7 @@ export function page(file: string, route: string, spec: PageSpec = {}): PageFact
     ...(spec.baseHref === undefined ? {} : { baseHref: spec.baseHref }),
     text: { title: spec.title ?? file, headings: '', body: '' },
     spans: [],
+    protected: [],
     problems: [],
   };
 }

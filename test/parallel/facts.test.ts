@@ -15,7 +15,7 @@ import { writeSmallSite } from './site.js';
 
 /** The keys each kind of object in `PageFacts` may have (src/types.ts). */
 const ALLOWED: Record<string, readonly string[]> = {
-  facts: ['file', 'kind', 'hash', 'route', 'title', 'meta', 'headings', 'ids', 'fixedIds', 'includes', 'links', 'baseHref', 'text', 'spans', 'problems'],
+  facts: ['file', 'kind', 'hash', 'route', 'title', 'meta', 'headings', 'ids', 'fixedIds', 'includes', 'links', 'baseHref', 'text', 'spans', 'protected', 'problems'],
   'facts.meta': ['slug', 'permalink', 'draft', 'noindex', 'aliases', 'importance', 'exclude'],
   'facts.headings[]': ['depth', 'text', 'slug', 'line', 'column', 'explicit', 'raw'],
   'facts.includes[]': ['written', 'paths', 'line', 'column'],

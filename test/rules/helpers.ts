@@ -81,6 +81,7 @@ export function factsOf(spec: PageSpec, problems: readonly SourceProblem[] = spe
     links: [],
     text: { title: '', headings: '', body: '' },
     spans: [],
+    protected: [],
     problems,
   };
 }
