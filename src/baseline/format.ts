@@ -7,7 +7,7 @@
  *   "findings": [
  *     { "rule": "broken-link", "route": "/guides/", "target": "/guides/missing/",
  *       "severity": "error", "file": "guides/index.md", "line": 12, "column": 5,
- *       "message": "Unexpected link to missing page ..." }
+ *       "message": "Broken link: no page ..." }
  *   ]
  * }
  * ```

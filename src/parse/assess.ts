@@ -111,8 +111,8 @@ export function findHeavyRegions(src: string, lines: LineIndex, firstLine: numbe
     complex.set(
       r.from,
       r.chars > MAX_PARAGRAPH_CHARS
-        ? `Unexpected paragraph of ${r.chars} characters, expected at most ${MAX_PARAGRAPH_CHARS}`
-        : `Unexpected ${r.markers} emphasis or bracket characters in one paragraph, expected at most ${MAX_MARKERS_PER_PARAGRAPH}`,
+        ? `A paragraph of ${r.chars} characters is longer than the full parser takes (${MAX_PARAGRAPH_CHARS})`
+        : `A paragraph holds ${r.markers} emphasis or bracket characters, more than the full parser takes (${MAX_MARKERS_PER_PARAGRAPH})`,
     );
   }
   return regions(flags, complex);
@@ -133,8 +133,8 @@ function regions(flags: Uint8Array, complex: Map<number, string>): HeavyRegion[]
     const tail = `; ${where} read with a simple scan (links and headings only, no places to insert links)`;
     out.push(
       f === DEEP
-        ? { from: l, to, code: 'deep-nesting', message: `Unexpected nesting deeper than ${MAX_NESTING} levels, expected at most ${MAX_NESTING}${tail}` }
-        : { from: l, to, code: 'too-complex', message: `${complex.get(l) ?? 'Unexpected paragraph'}${tail}` },
+        ? { from: l, to, code: 'deep-nesting', message: `Lists or quotes nest more than ${MAX_NESTING} levels deep${tail}` }
+        : { from: l, to, code: 'too-complex', message: `${complex.get(l) ?? 'A paragraph is too complex for the full parser'}${tail}` },
     );
     l = to;
   }

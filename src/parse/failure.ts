@@ -19,6 +19,6 @@ export function describeError(error: unknown): string {
 export function parserFailure(parser: 'Markdown' | 'HTML', error: unknown): ProblemDraft {
   const tail = 'the page is read with a simple scan (links and headings only, no places to insert links)';
   return isStackOverflow(error)
-    ? { code: 'deep-nesting', message: `Unexpected ${parser === 'HTML' ? 'element ' : ''}nesting too deep to parse; ${tail}` }
-    : { code: 'parse-failed', message: `Unexpected failure of the ${parser} parser (${describeError(error)}); ${tail}` };
+    ? { code: 'deep-nesting', message: `${parser === 'HTML' ? 'Elements' : 'Blocks'} nest too deep to parse; ${tail}` }
+    : { code: 'parse-failed', message: `The ${parser} parser failed (${describeError(error)}); ${tail}` };
 }

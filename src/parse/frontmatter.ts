@@ -80,7 +80,7 @@ export function readFrontmatter(value: string, contentStart: number): Frontmatte
   }
   if (data === null || data === undefined) return { meta: EMPTY_META, problems };
   if (typeof data !== 'object' || Array.isArray(data)) {
-    return fail(0, `Unexpected ${describe(data)} as frontmatter, expected a mapping of keys; the page is read without its frontmatter`);
+    return fail(0, `The frontmatter is not a mapping of keys (found: ${describe(data)}); the page is read without it`);
   }
   const record = data as Record<string, unknown>;
   const offsets = keyOffsets(doc.contents);

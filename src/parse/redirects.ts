@@ -28,7 +28,7 @@ export function parseRedirects(_file: string, text: string): { redirects: Redire
     } else {
       problems.push({
         line,
-        message: `Unexpected ${fields.length} field${fields.length === 1 ? '' : 's'}, expected "from to" (and an optional status code); the line is skipped`,
+        message: `${fields.length} field${fields.length === 1 ? '' : 's'} where a redirect needs "from to" (and an optional status code); the line is skipped`,
       });
     }
   }

@@ -43,7 +43,7 @@ export function parseSource(file: SourceFile, options: ResolvedOptions): PageFac
 
 /** The page with no links or text, and the failure as a problem. */
 function failedFacts(file: SourceFile, options: ResolvedOptions, bom: number, lines: LineIndex | null, error: unknown): PageFacts {
-  const message = `Unexpected failure while parsing (${describeError(error)}); the page is kept without links or text`;
+  const message = `The page could not be parsed (${describeError(error)}); it is kept without links or text`;
   const draft = newDraft();
   draft.problems.push({ code: 'parse-failed', message });
   try {
@@ -78,7 +78,7 @@ function assemble(
     const first = positionOf(lines, links[options.maxLinksPerPage]!.offset);
     draft.problems.push({
       code: 'too-many-links',
-      message: `Unexpected ${links.length} links on one page, expected at most ${options.maxLinksPerPage} (maxLinksPerPage); links from line ${first.line} on are dropped`,
+      message: `${links.length} links on one page, more than maxLinksPerPage (${options.maxLinksPerPage}); links from line ${first.line} on are dropped`,
       offset: links[options.maxLinksPerPage]!.offset,
     });
     links.length = options.maxLinksPerPage;

@@ -104,7 +104,7 @@ export function createCollector(input: AnalyzeInput): Collector {
         path === null ? 'a file without a path' : file.value === undefined || file.value === null ? 'a file without contents' : null;
       if (problem !== null || add(path!, file.value as string | Uint8Array) === null) {
         const reason = problem ?? `a file outside the content root "${options.root}"`;
-        file.message(`Unexpected ${reason}, expected a file under the content root; not collected`, {
+        file.message(`Not collected: ${reason}; only files under the content root are read`, {
           ruleId: 'not-collected',
           source: MESSAGE_SOURCE,
         });

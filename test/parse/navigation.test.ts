@@ -60,8 +60,8 @@ describe('parseRedirects', () => {
         { from: '/c', to: '/d', line: 5 },
       ],
       problems: [
-        { line: 6, message: 'Unexpected 1 field, expected "from to" (and an optional status code); the line is skipped' },
-        { line: 7, message: 'Unexpected 3 fields, expected "from to" (and an optional status code); the line is skipped' },
+        { line: 6, message: '1 field where a redirect needs "from to" (and an optional status code); the line is skipped' },
+        { line: 7, message: '3 fields where a redirect needs "from to" (and an optional status code); the line is skipped' },
       ],
     });
   });
