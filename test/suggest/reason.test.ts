@@ -25,6 +25,12 @@ describe('reasonText', () => {
     expect(text).toBe('related page; similar text (cosine 0.50, where 1 = the same words); no anchor phrase in the text: the link needs a sentence written by hand');
   });
 
+  it('says where an anchor found without a name mention comes from (part of the title)', () => {
+    const partial: AnchorMatch = { ...anchorAt, text: 'first week', kind: 'title' };
+    const words = evidenceWords({ features: x({ similarity: 0.26 }), contributions: x({ similarity: 0.4 }), above: FEATURES.map(() => true), anchor: partial, commonNeighbours: 0, twoStep: 0, folder: '' });
+    expect(words).toEqual(['"first week" is part of its title', 'similar text (cosine 0.26, where 1 = the same words)']);
+  });
+
   it('leaves out evidence that lowered the score, and a part that rose only because the pair has less of it than usual', () => {
     const words = evidenceWords({ features: x({ 'target-inlinks': Math.log1p(40) }), contributions: x({ 'target-inlinks': -0.5 }), above: FEATURES.map(() => true), anchor: null, commonNeighbours: 0, twoStep: 0, folder: '' });
     expect(words).toEqual([]);
