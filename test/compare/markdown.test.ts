@@ -18,7 +18,8 @@ describe('markdown comment with a base report', () => {
     const base = await analyze({ root: path.join(fixtures, 'pr-base'), command: 'suggest', ...noCache });
     const head = await analyze({ root: path.join(fixtures, 'pr-head'), command: 'suggest', ...noCache });
     const report = { ...head, comparison: compareReports(parseReportFile(formatReport(base, 'json'), 'base.json'), head) };
-    const md = formatReport(report, 'markdown');
+    // Paths as a user in the fixtures folder typed them: the snapshot names no machine folder.
+    const md = formatReport(report, 'markdown', { cwd: fixtures });
     await expect(md).toMatchFileSnapshot('__snapshots__/pr-review.md');
     // The order a reviewer reads in.
     const order = ['### linkweave: this run fails', '#### New findings', '#### Fixed findings', '<summary>All', '#### Structure changes', '#### Suggested links'];
