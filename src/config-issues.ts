@@ -141,6 +141,9 @@ export function oldFormProblem(input: unknown): string | null {
   const parts: string[] = [];
   if ('rules' in input) parts.push(oldRules(input.rules));
   if ('gate' in input) parts.push(oldGate(input.gate));
+  if (isRecord(input.suggest) && 'maxNewLinksPerPage' in input.suggest) {
+    parts.push(`key "suggest.maxNewLinksPerPage" is now "suggest.perSource" (0 = no cap): write "perSource": ${JSON.stringify(input.suggest.maxNewLinksPerPage)}`);
+  }
   return parts.length === 0 ? null : parts.join('; ');
 }
 

@@ -69,6 +69,11 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
       { gate: { maxDepth: 3, maxBrokenLinks: 6, minInlinksForImportant: 2 } },
       'key "gate" is now "limits"; write it as "limits": \\{"brokenLinks":6,"importantPageInlinks":2\\}; "gate.maxDepth" is gone: the depth limit is "maxDepth", and "checks": \\{"click-depth":\\{"level":"error"\\}\\} fails the run on it$',
     ],
+    [
+      'the old per-source key, renamed',
+      { suggest: { maxNewLinksPerPage: 2 } },
+      'key "suggest.maxNewLinksPerPage" is now "suggest.perSource" \\(0 = no cap\\): write "perSource": 2$',
+    ],
     ['not an object', [1, 2], 'the configuration must be an object of keys, got a list of 2$'],
     ['base path', { routes: { basePath: 'docs' } }, 'key "routes.basePath": must start with "/", got "docs"$'],
   ])('%s: %j', async (_name, config, message) => {
