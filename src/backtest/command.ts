@@ -4,7 +4,7 @@
  * it, the backtest run, the table or JSON printed or written atomically. Exit 0 on success;
  * bad flags throw `E_USAGE` (the CLI turns that into exit 2).
  */
-import { resolve } from 'node:path';
+import { relative, resolve } from 'node:path';
 import type { CommandContext } from '../cli/commands.js';
 import { checkOutputPath } from '../cli/output.js';
 import { progressHooks } from '../cli/progress.js';
@@ -39,14 +39,16 @@ export async function runBacktestCommand(ctx: CommandContext): Promise<number> {
     progress?.done();
   }
 
-  const text = format === 'json' ? formatBacktestJson(result) : formatBacktestText(result);
+  // People read the root as they typed it (relative to the working folder); the JSON keeps it whole.
+  const shown = { ...result, root: relative(io.cwd, ctx.root) || '.' };
+  const text = format === 'json' ? formatBacktestJson(result) : formatBacktestText(shown);
   if (output === null) {
     io.stdout.write(text);
     return 0;
   }
   await writeFileAtomic(output, text, io.tempFiles === undefined ? {} : { tracker: io.tempFiles });
   if (!flags.quiet) {
-    if (format === 'json') io.stdout.write(formatBacktestText(result));
+    if (format === 'json') io.stdout.write(formatBacktestText(shown));
     io.stderr.write(`linkweave: backtest written to ${flags.output}\n`);
   }
   return 0;
