@@ -3,11 +3,12 @@
  * comes from one of these streams, so the same seed gives the same bytes on every machine.
  */
 
-// The generator is the project's own (the backtest samples with it too): one copy of mulberry32.
-import { mulberry32 } from '../../src/backtest/prng.js';
-import type { Random } from '../../src/backtest/prng.js';
+// The generator is the project's own (the backtest and the link model sample with it too): one
+// copy of mulberry32 and of the shuffle, on the ground floor.
+import { mulberry32, shuffle } from '../../src/util/prng.js';
+import type { Random } from '../../src/util/prng.js';
 
-export { mulberry32 };
+export { mulberry32, shuffle };
 export type { Random };
 
 /**
@@ -46,15 +47,4 @@ export function skewedIndex(rnd: Random, n: number, power: number): number {
 export function pareto(rnd: Random, min: number, alpha: number, cap: number): number {
   const u = 1 - rnd(); // (0, 1]
   return Math.min(cap, Math.floor(min / Math.pow(u, 1 / alpha)));
-}
-
-/** Fisher-Yates shuffle in place. */
-export function shuffle<T>(rnd: Random, items: T[]): T[] {
-  for (let i = items.length - 1; i > 0; i--) {
-    const j = Math.floor(rnd() * (i + 1));
-    const t = items[i]!;
-    items[i] = items[j]!;
-    items[j] = t;
-  }
-  return items;
 }
