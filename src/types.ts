@@ -98,6 +98,22 @@ export interface TextSpan {
 }
 
 /**
+ * An inline code span in prose (Markdown `` `name()` ``, outside links, headings and templates,
+ * on one line): a place where a link may wrap the whole span, as API references link their code
+ * names. `offset`/`endOffset` cover the span with its backticks, exactly one `code` protected
+ * region; `apply` wraps it whole or not at all.
+ */
+export interface CodeSpan {
+  /** The span as written, backticks included (the source between `offset` and `endOffset`). */
+  readonly text: string;
+  /** UTF-16 offsets into `SourceFile.text`, backticks included. */
+  readonly offset: number;
+  readonly endOffset: number;
+  readonly line: number;
+  readonly column: number;
+}
+
+/**
  * What a protected region of a source is: syntax a site generator reads, where a link inserted
  * by `apply` would change a name, an argument, a URL or hidden text instead of prose.
  * - `shortcode`: Hugo `{{< ... >}}` and `{{% ... %}}`;
@@ -195,6 +211,8 @@ export interface PageFacts {
   readonly baseHref?: string;
   readonly text: PageText;
   readonly spans: readonly TextSpan[];
+  /** Inline code spans a link may wrap whole (Markdown pages; absent when there are none). */
+  readonly codeSpans?: readonly CodeSpan[];
   /**
    * Protected regions, sorted by start (ends ascend too: no region holds another). `spans`
    * never overlap them; `apply` refuses an insertion that does.

@@ -10,7 +10,9 @@
  * - the anchor phrase is not at its offsets;
  * - the anchor overlaps a protected region of the file as it is now (`regions`, from
  *   `parseSource` of the file just read, not from the report): a shortcode, template tag, HTML
- *   tag, front matter, ... (see `ProtectedKind`);
+ *   tag, front matter, ... (see `ProtectedKind`); the one exception is an anchor that is exactly
+ *   an inline code span of the file as read now (`codeSpans`), which the link wraps whole, and
+ *   which must read back as a link whose text is that code;
  * - its anchor overlaps one of an earlier suggestion in the file (by offset);
  * - re-parsing the edited text (`parseSource`) does not show a link with that href starting at
  *   the anchor's place, e.g. when the anchor sits where link syntax is not read;
@@ -21,9 +23,9 @@
  * original text; nothing but the link markup is inserted.
  */
 import type { ResolvedOptions } from '../options.js';
-import { buildLineIndex, parseSource, positionOf } from '../parse/index.js';
+import { buildLineIndex, codeSpanText, parseSource, positionOf } from '../parse/index.js';
 import { NO_ANCHOR } from './select.js';
-import type { ProtectedRegion, RawLink, SourceFile, Suggestion } from '../types.js';
+import type { CodeSpan, ProtectedRegion, RawLink, SourceFile, Suggestion } from '../types.js';
 import { linkMarkup } from './markup.js';
 import { changedRegions, overlappingRegion, REGION_WORDS } from './regions.js';
 import type { Insertion } from './regions.js';
@@ -44,6 +46,8 @@ export interface PlanInput {
   readonly regions: readonly ProtectedRegion[];
   /** Links of `file` as read now (`parseSource(file, options).links`): each must survive the edit. */
   readonly links: readonly RawLink[];
+  /** Inline code spans of `file` as read now (`parseSource(file, options).codeSpans`): an anchor that is exactly one is wrapped whole. */
+  readonly codeSpans?: readonly CodeSpan[];
 }
 
 /** Source problems that mean the decoded text is not the file's bytes. */
@@ -58,6 +62,9 @@ export function planFile(input: PlanInput): FilePlan {
   const bad = file.problems.find((p) => UNWRITABLE.has(p.code));
   const lines = buildLineIndex(file.text);
 
+  const codeSpans = new Set((input.codeSpans ?? []).map((c) => `${c.offset}:${c.endOffset}`));
+  /** The code regions that anchors wrap whole: the edit moves them inside the new link. */
+  const wrapped = new Map<string, ProtectedRegion>();
   let candidates: Suggestion[] = [];
   for (const s of input.suggestions) {
     if (bad !== undefined) refuse(s, 'undecodable', `cannot be edited without changing other bytes: ${bad.message}`);
@@ -72,7 +79,10 @@ export function planFile(input: PlanInput): FilePlan {
     else {
       const region = overlappingRegion(input.regions, s.offset, s.endOffset);
       if (region === null) candidates.push(s);
-      else refuse(s, 'protected', `${REGION_WORDS[region[2]]} (line ${positionOf(lines, region[0]).line})`, { kind: region[2] });
+      else if (region[2] === 'code' && region[0] === s.offset && region[1] === s.endOffset && codeSpans.has(`${s.offset}:${s.endOffset}`)) {
+        wrapped.set(s.id, region);
+        candidates.push(s);
+      } else refuse(s, 'protected', `${REGION_WORDS[region[2]]} (line ${positionOf(lines, region[0]).line})`, { kind: region[2] });
     }
   }
   candidates.sort((a, b) => a.offset - b.offset || a.endOffset - b.endOffset || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
@@ -90,13 +100,18 @@ export function planFile(input: PlanInput): FilePlan {
     const { text, applied } = edit(file.text, candidates, input);
     if (applied.length === 0) return done(file, input.style, applied, refused, file.text);
     const facts = parseSource({ ...file, text }, input.options);
-    const failed = applied.filter((a) => !facts.links.some((l) => l.href === a.href && l.line === a.line && l.column === a.column));
+    const failed = applied.filter((a) => {
+      const link = facts.links.find((l) => l.href === a.href && l.line === a.line && l.column === a.column);
+      return link === undefined || (wrapped.has(a.id) && link.text !== codeSpanText(a.anchor));
+    });
     for (const f of failed) refuse(candidates.find((s) => s.id === f.id)!, 'not-a-link', `a link here would not be read as a link (checked by parsing the edited file)`);
     if (failed.length === 0) {
       // The new links are regions of the edited text themselves (`link`, and `html-tag` for <a>).
       const extents = applied.map((a) => [a.offset, a.offset + a.open.length + a.anchor.length + a.close.length] as const);
       const after = facts.protected.filter((r) => !extents.some(([s, e]) => r[0] >= s && r[1] <= e));
-      const touched = touchedByChanges(candidates, input.regions, after, insertionsOf(applied));
+      const kept = new Set(applied.map((a) => wrapped.get(a.id)));
+      const before = wrapped.size === 0 ? input.regions : input.regions.filter((r) => !kept.has(r));
+      const touched = touchedByChanges(candidates, before, after, insertionsOf(applied));
       for (const s of lostLinkSuggestions(candidates, input.links, facts.links, applied)) if (!touched.includes(s)) touched.push(s);
       if (touched.length === 0) return done(file, input.style, applied, refused, text);
       for (const s of touched) refuse(s, 'region-changed', 'the link would change the template, HTML or other syntax next to it (checked by parsing the edited file)');

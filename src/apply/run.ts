@@ -104,7 +104,7 @@ export async function applySuggestions(input: ApplyInput): Promise<ApplyResult> 
       const target = pages.get(s.target);
       if (target !== undefined) hrefs.set(s.id, hrefFor(from, target, chosen.style));
     }
-    const plan = planFile({ file: read.file, suggestions: group, hrefs, style: chosen.style, options, regions: facts.protected, links: facts.links });
+    const plan = planFile({ file: read.file, suggestions: group, hrefs, style: chosen.style, options, regions: facts.protected, links: facts.links, ...(facts.codeSpans === undefined ? {} : { codeSpans: facts.codeSpans }) });
     notApplied.push(...plan.refused);
     if (plan.applied.length === 0) continue;
     styles.set(rel, chosen);

@@ -25,7 +25,8 @@
 import type { PageFacts, RawLink, ResolvedLink, SiteGraph } from '../types.js';
 import { shuffle, streamFor } from './prng.js';
 import type { HeldOutLink, HeldOutPair } from './types.js';
-import { lineStarts, linkTextRange, positionOf, withoutWords, withSpans } from './unlink.js';
+import { lineStarts, linkTextRange, positionOf, withCodeSpans, withoutWords, withSpans } from './unlink.js';
+import type { TextRange } from './unlink.js';
 
 /** A (source, target) pair of pages with its content links. */
 export interface ContentPair {
@@ -112,26 +113,29 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
     removed.set(f, set);
   }
   const facts = [...input.facts];
-  const located = new Map<RawLink, { start: number; end: number } | null>();
+  const located = new Map<RawLink, TextRange | null>();
   const startsOf = new Map<number, number[]>();
   for (const [f, set] of removed) {
     const page = input.facts[f]!;
     const source = input.sourceText(page.file);
     const starts = source === undefined ? [] : lineStarts(source);
     startsOf.set(f, starts);
-    const ranges: { start: number; end: number }[] = [];
+    const ranges: TextRange[] = [];
+    const codeRanges: TextRange[] = [];
     for (const raw of set) {
       const range = source === undefined ? null : linkTextRange(source, starts, raw, page.kind);
       located.set(raw, range);
-      if (range !== null) ranges.push(range);
+      if (range !== null) (range.code === true ? codeRanges : ranges).push(range);
     }
     const keep = input.keepLinkText === true;
-    facts[f] = {
+    const next: PageFacts = {
       ...page,
       links: page.links.filter((l) => !set.has(l)),
       text: keep ? page.text : withoutWords(page.text, [...set].map((l) => l.text)),
       spans: source === undefined || !keep ? page.spans : withSpans(page.spans, source, starts, ranges),
     };
+    // Code the author linked stays code: a place where a link may wrap it again.
+    facts[f] = source === undefined || !keep || codeRanges.length === 0 ? next : { ...next, codeSpans: withCodeSpans(page.codeSpans ?? [], source, starts, codeRanges) };
   }
   const heldOut = pairs.map((p): HeldOutPair => ({
     source: p.source,

@@ -5,7 +5,8 @@
  * span where an anchor may be proposed, as if the author had written the words without the
  * link). Pure: works on the decoded source text and the parsed facts only.
  */
-import type { FileKind, PageText, RawLink, TextSpan } from '../types.js';
+import { codeSpanText } from '../parse/index.js';
+import type { CodeSpan, FileKind, PageText, RawLink, TextSpan } from '../types.js';
 
 /** UTF-16 offset of the start of each line (`\n`, `\r\n` and lone `\r` end a line). */
 export function lineStarts(text: string): number[] {
@@ -33,13 +34,24 @@ export function positionOf(starts: readonly number[], offset: number): { line: n
   return { line: lo + 1, column: offset - starts[lo]! + 1 };
 }
 
+/** Where a held-out link's words are in the source; `code` when they are one inline code span. */
+export interface TextRange {
+  readonly start: number;
+  readonly end: number;
+  readonly code?: true;
+}
+
+const CODE_SPAN = /^(`+)(?!`)[^\r\n]*?[^`\r\n]\1(?!`)/;
+
 /**
  * Where a link's visible text is in the source: right after the `[` of a Markdown link, or after
  * the opening tag of an `<a>` element (HTML pages, raw HTML in Markdown). The text must be there
- * exactly as `raw.text` says (so a span made from it keeps `text === source.slice(...)`); links
- * whose text carries markup (`[**x**](y)`), link patterns and empty texts give null.
+ * exactly as `raw.text` says (so a span made from it keeps `text === source.slice(...)`), or, in
+ * Markdown, be one inline code span that reads as `raw.text` and fills the brackets
+ * (`` [`fs.stat()`](fs.md) ``: the range is the span with its backticks, `code`); links whose text
+ * carries other markup (`[**x**](y)`), link patterns and empty texts give null.
  */
-export function linkTextRange(source: string, starts: readonly number[], raw: RawLink, kind: FileKind): { start: number; end: number } | null {
+export function linkTextRange(source: string, starts: readonly number[], raw: RawLink, kind: FileKind): TextRange | null {
   if (raw.origin === 'pattern' || raw.origin === 'navigation' || raw.text.trim() === '') return null;
   if (raw.line < 1 || raw.line > starts.length || raw.column < 1) return null;
   const at = starts[raw.line - 1]! + raw.column - 1;
@@ -50,8 +62,21 @@ export function linkTextRange(source: string, starts: readonly number[], raw: Ra
     const close = source.indexOf('>', at);
     if (close >= 0) start = close + 1;
   }
-  if (start < 0 || !source.startsWith(raw.text, start)) return null;
+  if (start < 0) return null;
+  if (kind === 'markdown' && source[start] === '`') {
+    const code = CODE_SPAN.exec(source.slice(start, start + raw.text.length + 200));
+    if (code === null || source[start + code[0].length] !== ']' || codeSpanText(code[0]) !== raw.text) return null;
+    return { start, end: start + code[0].length, code: true };
+  }
+  if (!source.startsWith(raw.text, start)) return null;
   return { start, end: start + raw.text.length };
+}
+
+/** `codeSpans` with a code span for each range added, in offset order. */
+export function withCodeSpans(codeSpans: readonly CodeSpan[], source: string, starts: readonly number[], ranges: readonly TextRange[]): CodeSpan[] {
+  const out = [...codeSpans];
+  for (const r of ranges) out.push({ text: source.slice(r.start, r.end), offset: r.start, endOffset: r.end, ...positionOf(starts, r.start) });
+  return out.sort((a, b) => a.offset - b.offset);
 }
 
 /**

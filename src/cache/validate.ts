@@ -4,7 +4,7 @@
  * schema: they run over every link of every cached page on each warm run, and plain `typeof`
  * checks cost a few nanoseconds per field where a schema parse builds a new object for each.
  */
-import type { Heading, ProtectedKind, ProtectedRegion, RawLink, SourceProblem, TextSpan } from '../types.js';
+import type { CodeSpan, Heading, ProtectedKind, ProtectedRegion, RawLink, SourceProblem, TextSpan } from '../types.js';
 import type { ShardHeader, StoredFacts } from './format.js';
 
 type Unknown = Record<string, unknown>;
@@ -124,6 +124,10 @@ function isRegion(v: unknown): v is ProtectedRegion {
   return Array.isArray(v) && v.length === 3 && isInt(v[0]) && isInt(v[1]) && v[1] >= v[0] && PROTECTED_KINDS.has(v[2]);
 }
 
+function isCodeSpan(v: unknown): v is CodeSpan {
+  return isObject(v) && typeof v.text === 'string' && isInt(v.offset) && isInt(v.endOffset) && v.endOffset > v.offset && isInt(v.line) && isInt(v.column);
+}
+
 function every<T>(v: unknown, check: (x: unknown) => x is T): boolean {
   if (!Array.isArray(v)) return false;
   for (const x of v) if (!check(x)) return false;
@@ -163,6 +167,7 @@ export function isStoredFacts(v: unknown): v is StoredFacts {
     typeof text.headings === 'string' &&
     typeof text.body === 'string' &&
     isSpans(v.spans) &&
+    (v.codeSpans === undefined || every(v.codeSpans, isCodeSpan)) &&
     every(v.protected, isRegion) &&
     every(v.problems, isProblem)
   );

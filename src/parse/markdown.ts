@@ -137,9 +137,15 @@ function visit(w: Walk, node: Nodes, flags: number): void {
       draft.protected.push([startOf(w, node), endOf(w, node), 'link-definition']);
       return;
     case 'code':
-    case 'inlineCode':
       draft.code.push(startOf(w, node), endOf(w, node));
       return;
+    case 'inlineCode': {
+      const start = startOf(w, node);
+      const end = endOf(w, node);
+      draft.code.push(start, end);
+      if ((flags & NO_SPAN) === 0 && /\S/.test(node.value) && !/[\r\n]/.test(w.src.slice(start, end))) draft.codeSpans.push({ text: w.src.slice(start, end), offset: start, end });
+      return;
+    }
     case 'html':
       readRawHtml(node, startOf(w, node), endOf(w, node), w.src, w.lines, draft, (flags & TEMPLATE) !== 0);
       return;

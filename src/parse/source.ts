@@ -4,7 +4,7 @@
  * a run.
  */
 import type { ResolvedOptions } from '../options.js';
-import type { Heading, IncludeRef, PageFacts, ProtectedRegion, RawLink, SourceFile, SourceProblem } from '../types.js';
+import type { Heading, CodeSpan, IncludeRef, PageFacts, ProtectedRegion, RawLink, SourceFile, SourceProblem } from '../types.js';
 import { findIncludes } from './includes.js';
 import { describeError } from './failure.js';
 import { EMPTY_META } from './frontmatter.js';
@@ -115,6 +115,14 @@ function assemble(
     .slice()
     .sort((a, b) => a.offset - b.offset)
     .map((s) => ({ text: s.text, offset: s.offset + bom, ...positionOf(lines, s.offset) }));
+  // A code span may be an anchor only where it is exactly one code region (none held by or
+  // merged into another), so `apply` can wrap it whole.
+  const codeRegions = new Set<string>();
+  for (const r of regions) if (r[2] === 'code') codeRegions.add(`${r[0]}:${r[1]}`);
+  const codeSpans = draft.codeSpans
+    .filter((c) => codeRegions.has(`${c.offset}:${c.end}`))
+    .sort((a, b) => a.offset - b.offset)
+    .map((c): CodeSpan => ({ text: c.text, offset: c.offset + bom, endOffset: c.end + bom, ...positionOf(lines, c.offset) }));
   const title = pickTitle(read.title, draft, file.path, options);
   const facts: PageFacts = {
     file: file.path,
@@ -131,7 +139,8 @@ function assemble(
     protected: bom === 0 ? regions : regions.map((r): ProtectedRegion => [r[0] + bom, r[1] + bom, r[2]]),
     problems,
   };
-  const extra: { fixedIds?: string[]; includes?: IncludeRef[]; baseHref?: string } = {};
+  const extra: { fixedIds?: string[]; includes?: IncludeRef[]; baseHref?: string; codeSpans?: CodeSpan[] } = {};
+  if (codeSpans.length > 0) extra.codeSpans = codeSpans;
   if (styled) extra.fixedIds = [...fixedIds].sort();
   if (includes.length > 0) extra.includes = includes;
   if (draft.baseHref !== undefined) extra.baseHref = draft.baseHref;

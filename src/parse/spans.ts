@@ -164,6 +164,18 @@ export function collapseSpace(text: string): string {
   return text.replace(/\s+/g, ' ').trim();
 }
 
+/**
+ * The text an inline code span reads as (a link around it has this `RawLink.text`): the code
+ * without its backtick runs, one space stripped from each end when both ends have one and it is
+ * not all spaces (CommonMark 0.31, section 6.1), white space collapsed.
+ * @param span the span as written, backticks included
+ */
+export function codeSpanText(span: string): string {
+  let inner = span.replace(/^`+/, '').replace(/`+$/, '');
+  if (inner.length > 1 && inner.startsWith(' ') && inner.endsWith(' ') && inner.trim() !== '') inner = inner.slice(1, -1);
+  return collapseSpace(inner);
+}
+
 /** True when a link's visible text is its own address (an autolink): such text is no prose. */
 export function looksLikeUrl(text: string, href: string): boolean {
   const t = text.trim();

@@ -65,6 +65,8 @@ export interface PageDraft {
   readonly body: string[];
   /** Code ranges `[start, end)` in offset order (pairs), where link patterns do not apply. */
   readonly code: number[];
+  /** Inline code in prose that a link may wrap whole: its source text (backticks included) and range `[offset, end)`. */
+  readonly codeSpans: { text: string; offset: number; end: number }[];
   readonly problems: ProblemDraft[];
   /** Protected regions the walk found (link definitions); the rest come from `protect.ts`. */
   readonly protected: ProtectedRegion[];
@@ -75,7 +77,7 @@ export interface PageDraft {
 
 /** A fresh, empty draft. */
 export function newDraft(): PageDraft {
-  return { links: [], headings: [], ids: [], spans: [], body: [], code: [], problems: [], protected: [] };
+  return { links: [], headings: [], ids: [], spans: [], body: [], code: [], codeSpans: [], problems: [], protected: [] };
 }
 
 /** A file read into a draft, with its frontmatter. */

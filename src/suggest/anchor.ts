@@ -31,8 +31,11 @@ import { forEachWord, isStopWord, stemToken, tokenize } from '../text/tokenize.j
 import type { StemCache } from '../text/tokenize.js';
 import type { TargetName, TargetNames } from './names.js';
 
-/** Which of the target's names an anchor matched. */
-export type AnchorKind = 'title' | 'alias' | 'key-terms' | 'name';
+/**
+ * Which of the target's names an anchor matched: `name` is a phrase of the mention index in
+ * prose, `code` a whole inline code span (the link wraps it, backticks included).
+ */
+export type AnchorKind = 'title' | 'alias' | 'key-terms' | 'name' | 'code';
 
 /** An anchor phrase in a source file. */
 export interface AnchorMatch {

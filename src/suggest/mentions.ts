@@ -18,7 +18,7 @@
  * Built in one pass over every page's prose through a trie of the phrases, so the cost is the
  * number of words times the length of the longest match, never pages times names.
  */
-import type { PageFacts, SiteGraph } from '../types.js';
+import type { CodeSpan, PageFacts, SiteGraph } from '../types.js';
 import { tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
 import { positionInSpan, prepareSource } from './anchor.js';
@@ -177,11 +177,29 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const facts = factsOf(s);
     const hits = new Map<number, MentionHit>();
     bySource.push(hits);
-    if (facts === undefined || facts.spans.length === 0) continue;
-    const tokens = prepareSource(facts.spans, cache);
-    scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
-      const phrase = phrases[phraseId]!;
+    if (facts === undefined) continue;
+    // Mentions in prose and whole inline code spans, in the order of the text (the first
+    // mention of a phrase is its anchor option).
+    const found: { offset: number; phrase: number; anchor: () => AnchorMatch }[] = [];
+    if (facts.spans.length > 0) {
+      const tokens = prepareSource(facts.spans, cache);
+      scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
+        const span = tokens.spans[tokens.span[first]!]!;
+        const start = tokens.start[first]!;
+        const end = tokens.end[first + words - 1]!;
+        found.push({ offset: span.offset + start, phrase: phraseId, anchor: () => match(span, start, end, words) });
+      });
+    }
+    const prose = found.length;
+    for (const code of facts.codeSpans ?? []) {
+      const phraseId = wholeMatch(tokenize(code.text, cache), root);
+      if (phraseId >= 0) found.push({ offset: code.offset, phrase: phraseId, anchor: () => codeMatch(code, phrases[phraseId]!.stems.length) });
+    }
+    if (found.length > prose) found.sort((a, b) => a.offset - b.offset);
+    for (const f of found) {
+      const phrase = phrases[f.phrase]!;
       phrase.prose++;
+      let made: AnchorMatch | null = null;
       for (const ref of phrase.names) {
         if (ref.target === s) continue;
         let hit = hits.get(ref.target);
@@ -190,10 +208,11 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
           hits.set(ref.target, hit);
         }
         hit.count++;
-        if (!hit.phrases.includes(phraseId)) hit.phrases.push(phraseId);
-        keepAnchor(hit, tokens, phraseId, first, words);
+        if (!hit.phrases.includes(f.phrase)) hit.phrases.push(f.phrase);
+        made ??= f.anchor();
+        keepAnchor(hit, f.phrase, made);
       }
-    });
+    }
   }
   for (const hits of bySource) for (const [t, hit] of hits) rankAnchors(hit, phrases, t);
   return { phrases, bySource, linkMatches };
@@ -253,34 +272,44 @@ function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: 
   }
 }
 
+/** The phrase that is a run of stems whole (an inline code span's words), or -1. */
+function wholeMatch(stems: readonly string[], root: TrieNode): number {
+  if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return -1;
+  let node: TrieNode | undefined = root;
+  for (const stem of stems) {
+    node = node.next.get(stem);
+    if (node === undefined) return -1;
+  }
+  return node.phrase;
+}
+
 /** Keep the mention as an anchor option if it is among the earliest that do not overlap; a longer match at the same start wins. */
-function keepAnchor(hit: MentionHit, tokens: SourceTokens, phrase: number, first: number, words: number): void {
-  const last = first + words - 1;
-  const span = tokens.spans[tokens.span[first]!]!;
-  const start = tokens.start[first]!;
-  const end = tokens.end[last]!;
-  const offset = span.offset + start;
-  const endOffset = span.offset + end;
+function keepAnchor(hit: MentionHit, phrase: number, m: AnchorMatch): void {
   if (hit.anchorPhrases.includes(phrase)) return;
   for (let k = 0; k < hit.anchors.length; k++) {
     const a = hit.anchors[k]!;
-    if (offset < a.endOffset && a.offset < endOffset) {
+    if (m.offset < a.endOffset && a.offset < m.endOffset) {
       // Same place: keep the longer phrase.
-      if (a.offset === offset && endOffset > a.endOffset) {
-        hit.anchors[k] = match(span, start, end, offset, endOffset, words);
+      if (a.offset === m.offset && m.endOffset > a.endOffset) {
+        hit.anchors[k] = m;
         hit.anchorPhrases[k] = phrase;
       }
       return;
     }
   }
   if (hit.anchors.length >= MENTIONS_KEPT) return;
-  hit.anchors.push(match(span, start, end, offset, endOffset, words));
+  hit.anchors.push(m);
   hit.anchorPhrases.push(phrase);
 }
 
-function match(span: SourceTokens['spans'][number], start: number, end: number, offset: number, endOffset: number, words: number): AnchorMatch {
+function match(span: SourceTokens['spans'][number], start: number, end: number, words: number): AnchorMatch {
   const { line, column } = positionInSpan(span, start);
-  return { offset, endOffset, line, column, text: span.text.slice(start, end), kind: 'name', words, quality: words };
+  return { offset: span.offset + start, endOffset: span.offset + end, line, column, text: span.text.slice(start, end), kind: 'name', words, quality: words };
+}
+
+/** An inline code span as the anchor: the link wraps it whole, backticks included. */
+function codeMatch(code: CodeSpan, words: number): AnchorMatch {
+  return { offset: code.offset, endOffset: code.endOffset, line: code.line, column: code.column, text: code.text, kind: 'code', words, quality: words };
 }
 
 /**

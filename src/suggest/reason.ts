@@ -83,7 +83,7 @@ export function evidenceWords(e: Evidence): string[] {
     items.push({ weight: names, words: `mentions "${e.anchor.text}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
   }
   // Only what raised the score because the pair has more of it than the usual pair.
-  if (x[F.mentions]! === 0 && e.anchor !== null && e.anchor.kind !== 'name') {
+  if (x[F.mentions]! === 0 && e.anchor !== null && e.anchor.kind !== 'name' && e.anchor.kind !== 'code') {
     // An anchor from the fallback search: part of a name, not one of the names the model weighed.
     const part = e.anchor.kind === 'title' ? 'part of its title' : e.anchor.kind === 'alias' ? "the words of its route" : 'its key terms';
     items.push({ weight: Number.POSITIVE_INFINITY, words: `"${e.anchor.text}" is ${part}` });
