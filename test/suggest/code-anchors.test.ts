@@ -1,0 +1,156 @@
+/**
+ * Inline code as an anchor, as API references link their code names (`` [`fs.stat()`](fs.md) ``):
+ * the parse stage keeps the inline code spans of prose, the mention index reads a whole span as a
+ * mention of a page named by those words, the suggestion's anchor is the span with its backticks,
+ * `apply` wraps the span whole (checked by re-parsing), and the backtest holds out a code link as
+ * a code span again. Real files, the real parse, suggest and apply stages.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { analyze, applySuggestions, resolveOptions } from '../../src/index.js';
+import type { Report, Suggestion } from '../../src/index.js';
+import { codeSpanText, parseSource } from '../../src/parse/index.js';
+import { planFile } from '../../src/apply/index.js';
+import { lineStarts, linkTextRange } from '../../src/backtest/unlink.js';
+import { tempDir, writeTree } from '../collect/tree.js';
+import { md } from '../parse/helpers.js';
+import { markdownPage, testOptions } from './helpers.js';
+
+const cleanups: (() => void)[] = [];
+afterEach(() => {
+  while (cleanups.length > 0) cleanups.pop()!();
+});
+
+describe('codeSpanText (CommonMark 0.31, section 6.1; examples 328-335 written from memory, re-derived by hand)', () => {
+  it.each([
+    ['`foo`', 'foo'],
+    ['`` foo ` bar ``', 'foo ` bar'],
+    ['` `` `', '``'],
+    ['`  ``  `', ' `` '.trim()],
+    ['` a`', 'a'],
+    ['`fs.readFile()`', 'fs.readFile()'],
+  ])('%s reads as %s', (span, text) => {
+    expect(codeSpanText(span)).toBe(text);
+  });
+});
+
+describe('inline code spans in the parse stage', () => {
+  it('keeps prose code spans with their source range, line and column, backticks included', () => {
+    const src = '# Page\n\nCall `fs.readFile()` and then ``a `b` c``.\n';
+    const facts = md(src);
+    expect(facts.codeSpans).toEqual([
+      { text: '`fs.readFile()`', offset: 13, endOffset: 28, line: 3, column: 6 },
+      { text: '``a `b` c``', offset: 38, endOffset: 49, line: 3, column: 31 },
+    ]);
+    for (const c of facts.codeSpans!) expect(src.slice(c.offset, c.endOffset)).toBe(c.text);
+  });
+
+  it('leaves out code in links, headings, tables heads, fenced code, blank spans and spans over two lines', () => {
+    const facts = md('# The `title()` call\n\n[`linked()`](x.md) and ` ` and `two\nlines`.\n\n```\n`fenced()`\n```\n\nKept: `kept()`.\n');
+    expect(facts.codeSpans?.map((c) => c.text)).toEqual(['`kept()`']);
+  });
+
+  it('counts offsets after a BOM and inside list items and block quotes', () => {
+    const src = '\uFEFF# P\n\n- item with `one()`\n\n> quoted `two()` here\n';
+    const facts = md(src);
+    const text = src.slice(1);
+    expect(facts.codeSpans?.map((c) => [c.text, c.line, c.column])).toEqual([
+      ['`one()`', 3, 13],
+      ['`two()`', 5, 10],
+    ]);
+    // Offsets are into the decoded text as collect hands it over (the BOM is not part of it).
+    for (const c of facts.codeSpans!) expect(text.slice(c.offset - 1, c.endOffset - 1)).toBe(c.text);
+  });
+
+  it('keeps none in HTML pages (<code> there is left to the prose rules)', () => {
+    const facts = parseSource({ path: 'p.html', kind: 'html', bytes: 0, hash: 'h', text: '<p>Call <code>x()</code>.</p>', problems: [] }, testOptions());
+    expect(facts.codeSpans).toBeUndefined();
+  });
+});
+
+/** A small API reference: each widget call has a page, guides link some calls as code and mention others as code. */
+function apiSite(): Record<string, string> {
+  const calls = ['open', 'close', 'read', 'write', 'flush', 'seek'];
+  const tree: Record<string, string> = {
+    'index.md': `# Widget guide\n\n${calls.map((c) => `- [widget.${c}()](api/${c}.md)`).join('\n')}\n- [Starting](guides/start.md)\n- [Saving](guides/save.md)\n- [Tuning](guides/tune.md)\n`,
+  };
+  for (const c of calls) {
+    tree[`api/${c}.md`] = `# widget.${c}()\n\nThe \`widget.${c}()\` call is how a widget does ${c} work on its buffer. See the [guide](../index.md).\n`;
+  }
+  tree['guides/start.md'] =
+    '# Starting\n\nFirst call [`widget.open()`](../api/open.md), then [`widget.read()`](../api/read.md) until the buffer is empty.\nWhen done, call `widget.close()` so the buffer is freed.\n';
+  tree['guides/save.md'] =
+    '# Saving\n\nCall [`widget.write()`](../api/write.md) and then [`widget.flush()`](../api/flush.md).\nA widget that was never opened with [`widget.open()`](../api/open.md) cannot save; use `widget.seek()` to move first.\n';
+  tree['guides/tune.md'] =
+    '# Tuning\n\nBig buffers make [`widget.read()`](../api/read.md) and [`widget.write()`](../api/write.md) faster.\nCall [`widget.close()`](../api/close.md) when the work is done, and `widget.flush()` before it.\n';
+  return tree;
+}
+
+async function suggestOn(root: string): Promise<Report> {
+  return analyze({ root, command: 'suggest', cache: { enabled: false }, suggest: { targets: 'all', perSource: 0 } });
+}
+
+describe('code spans as anchors, from suggest to apply', () => {
+  it('suggests the code span that names the target, and apply links the whole span', async () => {
+    const t = tempDir('linkweave-code-');
+    cleanups.push(t.cleanup);
+    writeTree(t.dir, apiSite());
+    const report = await suggestOn(t.dir);
+    const closeFromStart = report.suggestions.find((s) => s.file === 'guides/start.md' && s.target === '/api/close/');
+    expect(closeFromStart).toBeDefined();
+    expect(closeFromStart!.anchor).toBe('`widget.close()`');
+    expect([closeFromStart!.line, closeFromStart!.column]).toEqual([4, 17]);
+
+    const result = await applySuggestions({ options: resolveOptions({}, t.dir), report, selection: { ids: [closeFromStart!.id] } });
+    expect(result.notApplied).toEqual([]);
+    const after = fs.readFileSync(path.join(t.dir, 'guides/start.md'), 'utf8');
+    expect(after.split('\n')[3]).toBe('When done, call [`widget.close()`](../api/close.md) so the buffer is freed.');
+    const reread = markdownPage('guides/start.md', after);
+    const link = reread.links.find((l) => l.href === '../api/close.md');
+    expect(link?.text).toBe('widget.close()');
+    expect([link?.line, link?.column]).toEqual([4, 17]);
+  });
+
+  it('refuses an anchor that covers part of a code span or more than one', () => {
+    const text = '# P\n\nUse `widget.close()` and `widget.open()` here.\n';
+    const file = { path: 'p.md', kind: 'markdown' as const, bytes: text.length, hash: 'h', text, problems: [] };
+    const options = testOptions();
+    const facts = parseSource(file, options);
+    const base: Omit<Suggestion, 'id' | 'offset' | 'endOffset' | 'anchor'> = {
+      source: '/p/', target: '/t/', file: 'p.md', line: 3, column: 5, similarity: 0.5, score: 0.5,
+      targetRankBefore: 1, targetRankAfter: 1, depthBefore: 2, depthAfter: 2, reason: '', sourceHash: 'h',
+    };
+    const at = (id: string, s: number, e: number): Suggestion => ({ ...base, id, offset: s, endOffset: e, anchor: text.slice(s, e) });
+    const whole = facts.codeSpans![0]!;
+    const plan = planFile({
+      file,
+      suggestions: [at('part', whole.offset + 1, whole.endOffset - 1), at('both', whole.offset, facts.codeSpans![1]!.endOffset)],
+      hrefs: new Map([['part', 't.md'], ['both', 't.md']]),
+      style: 'relative',
+      options,
+      regions: facts.protected,
+      links: facts.links,
+      codeSpans: facts.codeSpans,
+    });
+    expect(plan.applied).toEqual([]);
+    expect(plan.refused.map((n) => [n.id, n.code, n.kind])).toEqual([
+      ['both', 'protected', 'code'],
+      ['part', 'protected', 'code'],
+    ]);
+  });
+});
+
+describe('holding out a code link in the backtest', () => {
+  it('finds the code span inside the brackets, backticks included', () => {
+    const src = '# P\n\nSee [`fs.stat()`](fs.md) and [the **bold** one](x.md) and [plain](y.md).\n';
+    const facts = md(src);
+    const starts = lineStarts(src);
+    const [code, bold, plain] = facts.links;
+    expect(linkTextRange(src, starts, code!, 'markdown')).toEqual({ start: 10, end: 21, code: true });
+    expect(src.slice(10, 21)).toBe('`fs.stat()`');
+    expect(linkTextRange(src, starts, bold!, 'markdown')).toBeNull();
+    const p = linkTextRange(src, starts, plain!, 'markdown');
+    expect(p && src.slice(p.start, p.end)).toBe('plain');
+  });
+});
