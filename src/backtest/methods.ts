@@ -18,7 +18,7 @@
  */
 import type { CandidatePair, Chosen } from '../suggest/index.js';
 import { hasContentLink, positionInSpan } from '../suggest/index.js';
-import { cosine, forEachWord, stemToken } from '../text/index.js';
+import { cosine, tokenize, tokenizeWithOffsets } from '../text/index.js';
 import type { StemCache } from '../text/index.js';
 import type { PageFacts, SiteGraph, TermIndex } from '../types.js';
 import { LIST_LENGTH } from './metrics.js';
@@ -131,11 +131,7 @@ export function titlePhraseLists(
   const byTitle = new Map<string, number[]>();
   let longest = 0;
   for (const t of wanted) {
-    const stems: string[] = [];
-    forEachWord(graph.pages[t]!.title, (raw) => {
-      const s = stemToken(raw, cache);
-      if (s !== '') stems.push(s);
-    });
+    const stems = tokenize(graph.pages[t]!.title, cache);
     if (stems.length === 0) continue;
     const key = stems.join(' ');
     byTitle.set(key, [...(byTitle.get(key) ?? []), t]);
@@ -145,11 +141,7 @@ export function titlePhraseLists(
   graph.pages.forEach((page, s) => {
     if (page.meta.exclude) return;
     for (const span of facts[s]?.spans ?? []) {
-      const words: { stem: string; start: number; end: number }[] = [];
-      forEachWord(span.text, (raw, start, end) => {
-        const stem = stemToken(raw, cache);
-        if (stem !== '') words.push({ stem, start, end });
-      });
+      const words = tokenizeWithOffsets(span.text, cache);
       for (let i = 0; i < words.length; i++) {
         let key = '';
         for (let len = 1; len <= longest && i + len <= words.length; len++) {

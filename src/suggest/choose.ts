@@ -23,7 +23,7 @@ import { targetNames } from './names.js';
 import type { TargetNames } from './names.js';
 import { contentNeighbours } from './proximity.js';
 import { contributions } from './logistic.js';
-import { adamicAdar, routeFolders, sharedFolders, twoStepPaths } from './proximity.js';
+import { adamicAdar, routeFolders, sharedSegments, twoStepPaths } from './proximity.js';
 import type { Evidence } from './reason.js';
 import { chooseSuggestions } from './select.js';
 import type { Chosen, ScoredPair } from './select.js';
@@ -92,8 +92,7 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
   const chosen = fallbackAnchors(input, chooseSuggestions(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
-    const shared = sharedFolders(graph.pages[s]!.route, graph.pages[t]!.route);
-    const segments = graph.pages[t]!.route.split('/').filter((x) => x !== '');
+    const shared = sharedSegments(ctx.folders[s]!, ctx.folders[t]!);
     return {
       features: c.pair.features,
       contributions: contributions(model, [...c.pair.features]),
@@ -101,7 +100,7 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
       anchor: c.anchor,
       commonNeighbours: adamicAdar(neighbours, s, t).common,
       twoStep: twoStepPaths(graph, s, t),
-      folder: shared === 0 ? '' : `/${segments.slice(0, shared).join('/')}/`,
+      folder: shared === 0 ? '' : `/${ctx.folders[t]!.slice(0, shared).join('/')}/`,
     };
   };
   return { chosen, model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };

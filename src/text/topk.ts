@@ -65,33 +65,8 @@ export function kthLargest(ids: ArrayLike<number>, length: number, score: ArrayL
   let size = 0;
   for (let i = 0; i < length; i++) {
     const s = score[ids[i]!]!;
-    if (size < k) {
-      let j = size++;
-      heap[j] = s;
-      while (j > 0) {
-        const p = (j - 1) >> 1;
-        if (heap[p]! <= heap[j]!) break;
-        const tmp = heap[p]!;
-        heap[p] = heap[j]!;
-        heap[j] = tmp;
-        j = p;
-      }
-    } else if (s > heap[0]!) {
-      heap[0] = s;
-      let j = 0;
-      for (;;) {
-        const l = 2 * j + 1;
-        const r = l + 1;
-        let m = j;
-        if (l < k && heap[l]! < heap[m]!) m = l;
-        if (r < k && heap[r]! < heap[m]!) m = r;
-        if (m === j) break;
-        const tmp = heap[m]!;
-        heap[m] = heap[j]!;
-        heap[j] = tmp;
-        j = m;
-      }
-    }
+    if (size < k) minHeapPush(heap, 0, size++, s);
+    else if (s > heap[0]!) minHeapReplaceTop(heap, 0, k, s);
   }
   return heap[0]!;
 }
@@ -118,30 +93,8 @@ export class ExactTopK {
   /** Offer one score. */
   add(s: number): void {
     const { heap, k } = this;
-    if (this.size < k) {
-      let j = this.size++;
-      heap[j] = s;
-      while (j > 0) {
-        const p = (j - 1) >> 1;
-        if (heap[p]! <= heap[j]!) break;
-        [heap[p], heap[j]] = [heap[j]!, heap[p]!];
-        j = p;
-      }
-      return;
-    }
-    if (s <= heap[0]!) return;
-    heap[0] = s;
-    let j = 0;
-    for (;;) {
-      const l = 2 * j + 1;
-      const r = l + 1;
-      let m = j;
-      if (l < k && heap[l]! < heap[m]!) m = l;
-      if (r < k && heap[r]! < heap[m]!) m = r;
-      if (m === j) return;
-      [heap[m], heap[j]] = [heap[j]!, heap[m]!];
-      j = m;
-    }
+    if (this.size < k) minHeapPush(heap, 0, this.size++, s);
+    else if (s > heap[0]!) minHeapReplaceTop(heap, 0, k, s);
   }
 }
 
@@ -170,29 +123,40 @@ export class KnownScores {
     const at = page * k;
     const size = this.sizes[page]!;
     if (size < k) {
-      let j = size;
       this.sizes[page] = size + 1;
-      heaps[at + j] = s;
-      while (j > 0) {
-        const p = (j - 1) >> 1;
-        if (heaps[at + p]! <= heaps[at + j]!) break;
-        [heaps[at + p], heaps[at + j]] = [heaps[at + j]!, heaps[at + p]!];
-        j = p;
-      }
-      return;
-    }
-    if (s <= heaps[at]!) return;
-    heaps[at] = s;
-    let j = 0;
-    for (;;) {
-      const l = 2 * j + 1;
-      const r = l + 1;
-      let m = j;
-      if (l < k && heaps[at + l]! < heaps[at + m]!) m = l;
-      if (r < k && heaps[at + r]! < heaps[at + m]!) m = r;
-      if (m === j) return;
-      [heaps[at + m], heaps[at + j]] = [heaps[at + j]!, heaps[at + m]!];
-      j = m;
-    }
+      minHeapPush(heaps, at, size, s);
+    } else if (s > heaps[at]!) minHeapReplaceTop(heaps, at, k, s);
+  }
+}
+
+/** Add `s` to the min-heap of `size` values at `heap[at...]` (the caller counts the new size). */
+function minHeapPush(heap: Float64Array, at: number, size: number, s: number): void {
+  let j = size;
+  heap[at + j] = s;
+  while (j > 0) {
+    const p = (j - 1) >> 1;
+    if (heap[at + p]! <= heap[at + j]!) return;
+    const tmp = heap[at + p]!;
+    heap[at + p] = heap[at + j]!;
+    heap[at + j] = tmp;
+    j = p;
+  }
+}
+
+/** Replace the least of the full min-heap of `k` values at `heap[at...]` by `s`, and restore the order. */
+function minHeapReplaceTop(heap: Float64Array, at: number, k: number, s: number): void {
+  heap[at] = s;
+  let j = 0;
+  for (;;) {
+    const l = 2 * j + 1;
+    const r = l + 1;
+    let m = j;
+    if (l < k && heap[at + l]! < heap[at + m]!) m = l;
+    if (r < k && heap[at + r]! < heap[at + m]!) m = r;
+    if (m === j) return;
+    const tmp = heap[at + m]!;
+    heap[at + m] = heap[at + j]!;
+    heap[at + j] = tmp;
+    j = m;
   }
 }

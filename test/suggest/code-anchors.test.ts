@@ -131,7 +131,7 @@ describe('code spans as anchors, from suggest to apply', () => {
       options,
       regions: facts.protected,
       links: facts.links,
-      codeSpans: facts.codeSpans,
+      codeSpans: facts.codeSpans ?? [],
     });
     expect(plan.applied).toEqual([]);
     expect(plan.refused.map((n) => [n.id, n.code, n.kind])).toEqual([
