@@ -69,6 +69,8 @@ export interface RawLink {
   readonly origin: LinkOrigin;
   /** True when `href` names a source file (from a link pattern whose route ends in a source extension). */
   readonly fileRelative?: boolean;
+  /** The visible text is one inline code span and nothing else (`` [`x()`](y) ``, `<a><code>x()</code></a>`). */
+  readonly code?: true;
 }
 
 /** A heading with its fragment slug. */

@@ -62,7 +62,8 @@ function isLink(v: unknown): v is RawLink {
     CONTEXTS.has(v.context) &&
     typeof v.nofollow === 'boolean' &&
     ORIGINS.has(v.origin) &&
-    optional(v.fileRelative, 'boolean')
+    optional(v.fileRelative, 'boolean') &&
+    (v.code === undefined || v.code === true)
   );
 }
 

@@ -11,7 +11,7 @@
  */
 import type { Element, Root, RootContent } from 'hast';
 import { addHtmlTextSpans, collapseSpace, looksLikeUrl } from './spans.js';
-import type { PageDraft } from './types.js';
+import type { LinkDraft, PageDraft } from './types.js';
 
 const TEMPLATE = 1;
 const IN_LINK = 2;
@@ -106,7 +106,9 @@ function visit(node: RootContent, ctx: Walk, flags: number): void {
     const text = collapseSpace(tag === 'area' ? (typeof props.alt === 'string' ? props.alt : '') : plainText(node));
     const rel = props.rel;
     const nofollow = Array.isArray(rel) ? rel.some((r) => String(r).toLowerCase() === 'nofollow') : typeof rel === 'string' && /(?:^|\s)nofollow(?:\s|$)/i.test(rel);
-    draft.links.push({ offset: start, href, text, context: (flags & TEMPLATE) !== 0 ? 'template' : 'content', nofollow, origin: 'html' });
+    const link: LinkDraft = { offset: start, href, text, context: (flags & TEMPLATE) !== 0 ? 'template' : 'content', nofollow, origin: 'html' };
+    if (tag === 'a' && isOneCode(node)) link.code = true;
+    draft.links.push(link);
     f |= IN_LINK;
     if (looksLikeUrl(text, href)) f |= NO_BODY;
   }
@@ -158,4 +160,15 @@ export function plainText(node: Element): string {
     }
   }
   return out;
+}
+
+/** An element whose only content (white space aside) is one `<code>` element. */
+function isOneCode(node: Element): boolean {
+  let code = 0;
+  for (const c of node.children) {
+    if (c.type === 'text' && c.value.trim() === '') continue;
+    if (c.type === 'element' && c.tagName === 'code') code++;
+    else return false;
+  }
+  return code === 1;
 }

@@ -124,6 +124,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
         nofollow: false,
         origin: 'markdown',
       };
+      if (node.children.length === 1 && node.children[0]!.type === 'inlineCode') link.code = true;
       if (node.type === 'link') draft.links.push(link);
       else w.references.push({ link, id: node.identifier });
       draft.protected.push([link.offset, endOf(w, node), 'link']);

@@ -94,7 +94,7 @@ function assemble(
   const rawLinks: RawLink[] = links.map((l) => {
     const at = positionOf(lines, l.offset);
     const link: RawLink = { href: l.href, text: l.text, line: at.line, column: at.column, context: l.context, nofollow: l.nofollow, origin: l.origin };
-    return l.fileRelative === undefined ? link : { ...link, fileRelative: l.fileRelative };
+    return l.fileRelative === undefined && l.code === undefined ? link : { ...link, ...(l.fileRelative === undefined ? {} : { fileRelative: l.fileRelative }), ...(l.code === undefined ? {} : { code: l.code }) };
   });
   const headings = draft.headings
     .slice()

@@ -28,6 +28,7 @@ export interface LinkDraft {
   nofollow: boolean;
   origin: LinkOrigin;
   fileRelative?: boolean;
+  code?: true;
 }
 
 /** A heading found while walking. */

@@ -32,8 +32,29 @@ export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text';
 export const MAX_PAGES_PER_NAME = 8;
 /** Longest name, in kept words. */
 export const MAX_NAME_WORDS = 8;
-/** Distinct phrases kept per (source, target) pair as anchor options (each at its first mention). */
-export const MENTIONS_KEPT = 6;
+/** Anchor options kept per (source, target) pair (each the first mention of its phrase and placement). */
+export const MENTIONS_KEPT = 8;
+
+/**
+ * Where a mention or a link sits, as a number: bit 1 set when it is inline code, bit 2 set when
+ * it is alone on its line (a list of links, "See also" entries). Authors link some placements far
+ * more than others, and sites differ: an API reference links its code names in running text, a
+ * guide links a command in a list at the end and leaves the same name in code unlinked above.
+ */
+export type Placement = 0 | 1 | 2 | 3;
+const CODE = 1 as const;
+const ALONE = 2 as const;
+
+/** How often the site links each placement: content links and unlinked mentions of page names, by {@link Placement}. */
+export interface PlacementHabit {
+  readonly linked: [number, number, number, number];
+  readonly mentioned: [number, number, number, number];
+}
+
+/** The share of a placement's occurrences that are links, with one link and one mention added (so an unseen placement is 1/2). */
+export function placementRate(habit: PlacementHabit, place: number): number {
+  return (habit.linked[place]! + 1) / (habit.linked[place]! + habit.mentioned[place]! + 2);
+}
 
 /** One page's claim on a phrase. */
 export interface NameRef {
@@ -68,6 +89,8 @@ export interface MentionHit {
   readonly anchors: AnchorMatch[];
   /** The phrase of each anchor option. */
   readonly anchorPhrases: number[];
+  /** The placement of each anchor option. */
+  readonly anchorPlaces: Placement[];
 }
 
 /** The dictionary and the mentions found. */
@@ -77,6 +100,8 @@ export interface MentionIndex {
   readonly bySource: readonly Map<number, MentionHit>[];
   /** Per source page id: the phrases found in the texts of its content links to pages. */
   readonly linkMatches: readonly (readonly LinkTextMatch[])[];
+  /** How often the site links each placement (which anchor options come first). */
+  readonly placement: PlacementHabit;
 }
 
 /** A phrase found in the text of a content link. */
@@ -126,13 +151,13 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     claim(tokenize(page.title, cache), page.id, 'title');
     for (const route of [page.route, ...page.meta.aliases]) claim(routeWords(route, cache), page.id, 'alias');
   }
-  const contentLinks: { from: number; to: number; stems: string[] }[] = [];
+  const contentLinks: { from: number; to: number; stems: string[]; line: number; code: boolean }[] = [];
   for (const link of graph.links) {
     if (link.from < 0 || link.to < 0 || link.from === link.to) continue;
     const stems = tokenize(link.raw.text, cache);
     if (link.context === 'content') {
       claim(stems, link.to, 'anchor-text', link.from);
-      contentLinks.push({ from: link.from, to: link.to, stems });
+      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, code: link.raw.code === true });
     } else {
       claim(stems, link.to, 'label');
     }
@@ -157,12 +182,18 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // Link texts: a whole-text match is a linked occurrence; a match inside a longer text is an
   // occurrence that is not a link (of that phrase).
   const linkMatches: LinkTextMatch[][] = Array.from({ length: n }, () => []);
+  const habit: PlacementHabit = { linked: [0, 0, 0, 0], mentioned: [0, 0, 0, 0] };
+  const lines: (LineCounts | null)[] = new Array<LineCounts | null>(n).fill(null);
+  const linesOf = (page: number): LineCounts => (lines[page] ??= lineCounts(factsOf(page)));
   for (const link of contentLinks) {
     const exact = link.stems.length > 0 && link.stems.length <= MAX_NAME_WORDS ? byKey.get(link.stems.join(' ')) : undefined;
     if (exact !== undefined) {
       const p = phrases[exact]!;
       p.linked++;
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
+      const on = linesOf(link.from);
+      const alone = !on.words.has(link.line) && !on.code.has(link.line) && on.links.get(link.line) === 1;
+      habit.linked[(link.code ? CODE : 0) | (alone ? ALONE : 0)]++;
     }
     const joins = link.stems.map(() => true);
     scanStems(link.stems, joins, root, (phraseId, _first, words) => {
@@ -180,58 +211,67 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (facts === undefined) continue;
     // Mentions in prose and whole inline code spans, in the order of the text (the first
     // mention of a phrase is its anchor option).
-    const found: { offset: number; phrase: number; anchor: () => AnchorMatch }[] = [];
+    const found: { offset: number; phrase: number; place: Placement; anchor: () => AnchorMatch }[] = [];
+    const on = linesOf(s);
     if (facts.spans.length > 0) {
       const tokens = prepareSource(facts.spans, cache);
       scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
         const span = tokens.spans[tokens.span[first]!]!;
         const start = tokens.start[first]!;
         const end = tokens.end[first + words - 1]!;
-        found.push({ offset: span.offset + start, phrase: phraseId, anchor: () => match(span, start, end, words) });
+        const alone = on.words.get(span.line) === 1 && !on.code.has(span.line) && !on.links.has(span.line) && !WORD.test(span.text.slice(0, start) + span.text.slice(end));
+        found.push({ offset: span.offset + start, phrase: phraseId, place: alone ? ALONE : 0, anchor: () => match(span, start, end, words) });
       });
     }
     const prose = found.length;
     for (const code of facts.codeSpans ?? []) {
       const phraseId = wholeMatch(tokenize(code.text, cache), root);
-      if (phraseId >= 0) found.push({ offset: code.offset, phrase: phraseId, anchor: () => codeMatch(code, phrases[phraseId]!.stems.length) });
+      if (phraseId < 0) continue;
+      const alone = !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
+      found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId]!.stems.length) });
     }
     if (found.length > prose) found.sort((a, b) => a.offset - b.offset);
     for (const f of found) {
       const phrase = phrases[f.phrase]!;
       phrase.prose++;
+      habit.mentioned[f.place]++;
       let made: AnchorMatch | null = null;
       for (const ref of phrase.names) {
         if (ref.target === s) continue;
         let hit = hits.get(ref.target);
         if (hit === undefined) {
-          hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [] };
+          hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [], anchorPlaces: [] };
           hits.set(ref.target, hit);
         }
         hit.count++;
         if (!hit.phrases.includes(f.phrase)) hit.phrases.push(f.phrase);
         made ??= f.anchor();
-        keepAnchor(hit, f.phrase, made);
+        keepAnchor(hit, f.phrase, f.place, made);
       }
     }
   }
-  for (const hits of bySource) for (const [t, hit] of hits) rankAnchors(hit, phrases, t);
-  return { phrases, bySource, linkMatches };
+  for (const hits of bySource) for (const [t, hit] of hits) rankAnchors(hit, phrases, t, habit);
+  return { phrases, bySource, linkMatches, placement: habit };
 }
 
 const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias'];
+/** Added to a phrase's link odds, so that names never written as links still rank by placement. */
+const PHRASE_PRIOR = 0.05;
 
 /**
- * Order a pair's anchor options the way an author would pick: the phrase most often written as
- * a link to this target where it occurs (links to the target / occurrences), then the kind of
- * name (another page's anchor text, the title, a navigation label, the route's words), then the
- * longer phrase, then the earlier place.
+ * Order a pair's anchor options the way an author of this site would pick: by the odds that the
+ * phrase is written as a link to this target where it occurs (links to the target / occurrences,
+ * plus a small prior so unlinked names still compare) times the share of its placement that the
+ * site links ({@link placementRate}); then the kind of name (another page's anchor text, the
+ * title, a navigation label, the route's words), then the longer phrase, then the earlier place.
  */
-function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number): void {
+function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number, habit: PlacementHabit): void {
   const order = hit.anchors.map((_, k) => k);
   const odds = (k: number): number => {
     const p = phrases[hit.anchorPhrases[k]!]!;
     const total = p.prose + p.linked;
-    return total === 0 ? 0 : (p.linkedTo.get(target) ?? 0) / total;
+    const phraseOdds = total === 0 ? 0 : (p.linkedTo.get(target) ?? 0) / total;
+    return (phraseOdds + PHRASE_PRIOR) * placementRate(habit, hit.anchorPlaces[k]!);
   };
   const kind = (k: number): number => {
     const p = phrases[hit.anchorPhrases[k]!]!;
@@ -242,8 +282,10 @@ function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number
   order.sort((a, b) => odds(b) - odds(a) || kind(a) - kind(b) || hit.anchors[b]!.words - hit.anchors[a]!.words || hit.anchors[a]!.offset - hit.anchors[b]!.offset);
   const anchors = order.map((k) => hit.anchors[k]!);
   const ids = order.map((k) => hit.anchorPhrases[k]!);
+  const places = order.map((k) => hit.anchorPlaces[k]!);
   hit.anchors.splice(0, anchors.length, ...anchors);
   hit.anchorPhrases.splice(0, ids.length, ...ids);
+  hit.anchorPlaces.splice(0, places.length, ...places);
 }
 
 /**
@@ -283,9 +325,12 @@ function wholeMatch(stems: readonly string[], root: TrieNode): number {
   return node.phrase;
 }
 
-/** Keep the mention as an anchor option if it is among the earliest that do not overlap; a longer match at the same start wins. */
-function keepAnchor(hit: MentionHit, phrase: number, m: AnchorMatch): void {
-  if (hit.anchorPhrases.includes(phrase)) return;
+/**
+ * Keep the mention as an anchor option if it is the first of its phrase and placement and does
+ * not overlap a kept one; a longer match at the same start wins.
+ */
+function keepAnchor(hit: MentionHit, phrase: number, place: Placement, m: AnchorMatch): void {
+  for (let k = 0; k < hit.anchorPhrases.length; k++) if (hit.anchorPhrases[k] === phrase && hit.anchorPlaces[k] === place) return;
   for (let k = 0; k < hit.anchors.length; k++) {
     const a = hit.anchors[k]!;
     if (m.offset < a.endOffset && a.offset < m.endOffset) {
@@ -293,6 +338,7 @@ function keepAnchor(hit: MentionHit, phrase: number, m: AnchorMatch): void {
       if (a.offset === m.offset && m.endOffset > a.endOffset) {
         hit.anchors[k] = m;
         hit.anchorPhrases[k] = phrase;
+        hit.anchorPlaces[k] = place;
       }
       return;
     }
@@ -300,6 +346,26 @@ function keepAnchor(hit: MentionHit, phrase: number, m: AnchorMatch): void {
   if (hit.anchors.length >= MENTIONS_KEPT) return;
   hit.anchors.push(m);
   hit.anchorPhrases.push(phrase);
+  hit.anchorPlaces.push(place);
+}
+
+/** Per line of a page: prose spans with a word, inline code spans that may be anchors, content links. */
+interface LineCounts {
+  readonly words: Map<number, number>;
+  readonly code: Map<number, number>;
+  readonly links: Map<number, number>;
+}
+
+const WORD = /[\p{L}\p{N}]/u;
+
+function lineCounts(facts: PageFacts | undefined): LineCounts {
+  const out: LineCounts = { words: new Map(), code: new Map(), links: new Map() };
+  if (facts === undefined) return out;
+  const add = (m: Map<number, number>, line: number): void => void m.set(line, (m.get(line) ?? 0) + 1);
+  for (const span of facts.spans) if (WORD.test(span.text)) add(out.words, span.line);
+  for (const code of facts.codeSpans ?? []) add(out.code, code.line);
+  for (const link of facts.links) if (link.context === 'content') add(out.links, link.line);
+  return out;
 }
 
 function match(span: SourceTokens['spans'][number], start: number, end: number, words: number): AnchorMatch {

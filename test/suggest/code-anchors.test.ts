@@ -15,7 +15,10 @@ import { planFile } from '../../src/apply/index.js';
 import { lineStarts, linkTextRange } from '../../src/backtest/unlink.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import { md } from '../parse/helpers.js';
-import { markdownPage, testOptions } from './helpers.js';
+import { buildMentionIndex, placementRate } from '../../src/suggest/mentions.js';
+import { factsByPage } from '../../src/suggest/facts-of.js';
+import { createStemCache } from '../../src/text/index.js';
+import { markdownPage, siteInput, testOptions } from './helpers.js';
 
 const cleanups: (() => void)[] = [];
 afterEach(() => {
@@ -61,6 +64,12 @@ describe('inline code spans in the parse stage', () => {
     ]);
     // Offsets are into the decoded text as collect hands it over (the BOM is not part of it).
     for (const c of facts.codeSpans!) expect(text.slice(c.offset - 1, c.endOffset - 1)).toBe(c.text);
+  });
+
+  it('marks links whose whole text is one code span, in Markdown and HTML', () => {
+    expect(md('# P\n\n[`x()`](y.md), [`x()` and more](z.md), [plain](w.md)\n').links.map((l) => l.code)).toEqual([true, undefined, undefined]);
+    const html = parseSource({ path: 'p.html', kind: 'html', bytes: 0, hash: 'h', text: '<p><a href="y.html"> <code>x()</code> </a> <a href="z.html"><code>x</code>()</a></p>', problems: [] }, testOptions());
+    expect(html.links.map((l) => l.code)).toEqual([true, undefined]);
   });
 
   it('keeps none in HTML pages (<code> there is left to the prose rules)', () => {
@@ -152,5 +161,59 @@ describe('holding out a code link in the backtest', () => {
     expect(linkTextRange(src, starts, bold!, 'markdown')).toBeNull();
     const p = linkTextRange(src, starts, plain!, 'markdown');
     expect(p && src.slice(p.start, p.end)).toBe('plain');
+  });
+});
+
+describe("the site's placement habit orders the anchor options", () => {
+  /**
+   * Two sites with the same mentions of the `npm widget` command on page `guide`: once in code in
+   * running text (line 3), once alone in a list at the end (line 7). One site links its command
+   * names in lists and leaves them unlinked in code; the other links them in code in running text.
+   */
+  function site(linksInLists: boolean) {
+    const options = testOptions();
+    const other = ['alpha', 'beta', 'gamma', 'delta'];
+    const pages = [
+      markdownPage('index.md', `# Home\n\n${['widget', ...other].map((c) => `- [npm ${c}](${c}.md)`).join('\n')}\n- [Guide](guide.md)\n`),
+      markdownPage('widget.md', '# npm widget\n\nMakes widgets.\n'),
+      ...other.map((c) => markdownPage(`${c}.md`, `# npm ${c}\n\nDoes ${c} things.\n`)),
+      markdownPage('guide.md', '# Guide\n\nFirst run `npm widget` in the folder.\n\nThen you are done.\n\n## See also\n\n- npm widget\n'),
+      // The habit: how other pages write their links to the commands.
+      ...other.map((c, i) =>
+        markdownPage(
+          `use-${c}.md`,
+          linksInLists
+            ? `# Using ${c}\n\nRun \`npm ${other[(i + 1) % 4]}\` first, then \`npm ${c}\`.\n\n## See also\n\n- [npm ${c}](${c}.md)\n`
+            : `# Using ${c}\n\nRun [\`npm ${c}\`](${c}.md) first.\n\n## See also\n\n- npm ${other[(i + 1) % 4]}\n`,
+        ),
+      ),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    return { index, hit: index.bySource[id('/guide/')]!.get(id('/widget/'))! };
+  }
+
+  it('a site that links commands in lists gets the list entry first', () => {
+    const { index, hit } = site(true);
+    expect(index.placement.linked[2]).toBeGreaterThan(0);
+    expect(hit.anchors.map((a) => [a.text, a.line])).toEqual([
+      ['npm widget', 9],
+      ['`npm widget`', 3],
+    ]);
+  });
+
+  it('a site that links commands in code in running text gets the code span first', () => {
+    const { index, hit } = site(false);
+    expect(index.placement.linked[1]).toBeGreaterThan(0);
+    expect(hit.anchors.map((a) => [a.text, a.line])).toEqual([
+      ['`npm widget`', 3],
+      ['npm widget', 9],
+    ]);
+  });
+
+  it('rates a placement by its share of links, one link and one mention added', () => {
+    const habit = { linked: [3, 0, 8, 1] as [number, number, number, number], mentioned: [97, 0, 2, 9] as [number, number, number, number] };
+    expect([0, 1, 2, 3].map((p) => placementRate(habit, p))).toEqual([4 / 102, 1 / 2, 9 / 12, 2 / 12]);
   });
 });
