@@ -9,6 +9,7 @@
  * | anchor-text-mention  | ... a phrase other pages already link the target with (1/0)                      |
  * | label-mention        | ... the label of a navigation or template link to the target (1/0)               |
  * | alias-mention        | ... the words of the target's route or an alias (1/0)                            |
+ * | heading-mention      | ... one of the target's section headings (1/0)                                   |
  * | mentions             | ln(1 + mentions of any of those names)                                           |
  * | name-words           | words of the longest name mentioned                                              |
  * | link-probability     | of the names mentioned, the highest share of a name's occurrences that are links |
@@ -41,6 +42,7 @@ export const FEATURES = [
   'anchor-text-mention',
   'label-mention',
   'alias-mention',
+  'heading-mention',
   'mentions',
   'name-words',
   'link-probability',
@@ -66,6 +68,7 @@ export const NAME_FEATURES: readonly number[] = [
   F['anchor-text-mention'],
   F['label-mention'],
   F['alias-mention'],
+  F['heading-mention'],
   F.mentions,
   F['name-words'],
   F['link-probability'],
@@ -158,6 +161,8 @@ function kindFeature(kind: NameKind): number {
       return F['label-mention'];
     case 'alias':
       return F['alias-mention'];
+    case 'heading':
+      return F['heading-mention'];
   }
 }
 

@@ -26,7 +26,7 @@ import type { AnchorMatch, SourceTokens } from './anchor.js';
 import { routeWords } from './names.js';
 
 /** Where a name comes from. */
-export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text';
+export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text' | 'heading';
 
 /** A phrase that names more pages than this is left out of the dictionary. */
 export const MAX_PAGES_PER_NAME = 8;
@@ -150,6 +150,10 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   for (const page of graph.pages) {
     claim(tokenize(page.title, cache), page.id, 'title');
     for (const route of [page.route, ...page.meta.aliases]) claim(routeWords(route, cache), page.id, 'alias');
+    for (const h of factsOf(page.id)?.headings ?? []) {
+      if (h.depth < 2) continue;
+      for (const name of headingNames(h.text)) claim(tokenize(name, cache), page.id, 'heading');
+    }
   }
   const contentLinks: { from: number; to: number; stems: string[]; line: number; code: boolean }[] = [];
   for (const link of graph.links) {
@@ -192,7 +196,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       p.linked++;
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
       const on = linesOf(link.from);
-      const alone = !on.words.has(link.line) && !on.code.has(link.line) && on.links.get(link.line) === 1;
+      const alone = on.markdown && !on.words.has(link.line) && !on.code.has(link.line) && on.links.get(link.line) === 1;
       habit.linked[(link.code ? CODE : 0) | (alone ? ALONE : 0)]++;
     }
     const joins = link.stems.map(() => true);
@@ -219,7 +223,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         const span = tokens.spans[tokens.span[first]!]!;
         const start = tokens.start[first]!;
         const end = tokens.end[first + words - 1]!;
-        const alone = on.words.get(span.line) === 1 && !on.code.has(span.line) && !on.links.has(span.line) && !WORD.test(span.text.slice(0, start) + span.text.slice(end));
+        const alone = on.markdown && on.words.get(span.line) === 1 && !on.code.has(span.line) && !on.links.has(span.line) && !WORD.test(span.text.slice(0, start) + span.text.slice(end));
         found.push({ offset: span.offset + start, phrase: phraseId, place: alone ? ALONE : 0, anchor: () => match(span, start, end, words) });
       });
     }
@@ -227,7 +231,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     for (const code of facts.codeSpans ?? []) {
       const phraseId = wholeMatch(tokenize(code.text, cache), root);
       if (phraseId < 0) continue;
-      const alone = !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
+      const alone = on.markdown && !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
       found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId]!.stems.length) });
     }
     if (found.length > prose) found.sort((a, b) => a.offset - b.offset);
@@ -254,7 +258,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   return { phrases, bySource, linkMatches, placement: habit };
 }
 
-const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias'];
+const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias', 'heading'];
 /** Added to a phrase's link odds, so that names never written as links still rank by placement. */
 const PHRASE_PRIOR = 0.05;
 
@@ -349,8 +353,34 @@ function keepAnchor(hit: MentionHit, phrase: number, place: Placement, m: Anchor
   hit.anchorPlaces.push(place);
 }
 
-/** Per line of a page: prose spans with a word, inline code spans that may be anchors, content links. */
+/**
+ * The names a section heading gives its page, when the heading names something in code (an API
+ * reference's `fs.readFile(path)`, `ERR_WIDGET_CLOSED`, `Class: fs.Dir`): the heading, the part
+ * after a label (`Class: fs.Dir` -> `fs.Dir`) and a call without its arguments
+ * (`fs.readFile(path[, options])` -> `fs.readFile`), as prose writes them. Headings in words
+ * ("Installing the widget") name a section, not the page, and give none: on a guide they made
+ * many weak mentions. Common practice in API references, no source.
+ */
+export function headingNames(text: string): string[] {
+  const label = /^[\p{L} ]{1,24}:\s+(.+)$/u.exec(text);
+  const rest = label === null ? text : label[1]!;
+  if (!CODE_NAME.test(rest)) return [];
+  const out = rest === text ? [text] : [text, rest];
+  const call = /^([^\s(]+)\(.*\)$/.exec(rest);
+  if (call !== null) out.push(call[1]!);
+  return out;
+}
+
+/** A name written as code: a dotted, underscored or called identifier, camelCase, or an upper-case constant. */
+const CODE_NAME = /[\p{L}\p{N}$][._][\p{L}\p{N}$]|[\p{L}\p{N}$_]\(|\p{Ll}\p{Lu}|^[\p{Lu}\p{N}_]{3,}$/u;
+
+/**
+ * Per line of a page: prose spans with a word, inline code spans that may be anchors, content
+ * links. Only Markdown lines are the author's: an HTML page's lines are its generator's, so
+ * nothing there counts as alone on its line.
+ */
 interface LineCounts {
+  readonly markdown: boolean;
   readonly words: Map<number, number>;
   readonly code: Map<number, number>;
   readonly links: Map<number, number>;
@@ -359,7 +389,7 @@ interface LineCounts {
 const WORD = /[\p{L}\p{N}]/u;
 
 function lineCounts(facts: PageFacts | undefined): LineCounts {
-  const out: LineCounts = { words: new Map(), code: new Map(), links: new Map() };
+  const out: LineCounts = { markdown: facts?.kind === 'markdown', words: new Map(), code: new Map(), links: new Map() };
   if (facts === undefined) return out;
   const add = (m: Map<number, number>, line: number): void => void m.set(line, (m.get(line) ?? 0) + 1);
   for (const span of facts.spans) if (WORD.test(span.text)) add(out.words, span.line);

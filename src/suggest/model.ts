@@ -49,6 +49,7 @@ export const FIXED_WEIGHTS: Readonly<Record<FeatureName, number>> & { readonly i
   'anchor-text-mention': 2,
   'label-mention': 1,
   'alias-mention': 0.5,
+  'heading-mention': 0.5,
   mentions: 0.5,
   'name-words': 0.2,
   'link-probability': 1,

@@ -79,7 +79,9 @@ export function evidenceWords(e: Evidence): string[] {
           ? 'its title'
           : x[F['label-mention']] === 1
             ? 'its navigation label'
-            : 'its route name';
+            : x[F['alias-mention']] === 1
+              ? 'its route name'
+              : 'one of its section headings';
     items.push({ weight: names, words: `mentions "${e.anchor.text}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
   }
   // Only what raised the score because the pair has more of it than the usual pair.

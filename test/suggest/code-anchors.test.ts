@@ -15,7 +15,7 @@ import { planFile } from '../../src/apply/index.js';
 import { lineStarts, linkTextRange } from '../../src/backtest/unlink.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import { md } from '../parse/helpers.js';
-import { buildMentionIndex, placementRate } from '../../src/suggest/mentions.js';
+import { buildMentionIndex, headingNames, placementRate } from '../../src/suggest/mentions.js';
 import { factsByPage } from '../../src/suggest/facts-of.js';
 import { createStemCache } from '../../src/text/index.js';
 import { markdownPage, siteInput, testOptions } from './helpers.js';
@@ -215,5 +215,35 @@ describe("the site's placement habit orders the anchor options", () => {
   it('rates a placement by its share of links, one link and one mention added', () => {
     const habit = { linked: [3, 0, 8, 1] as [number, number, number, number], mentioned: [97, 0, 2, 9] as [number, number, number, number] };
     expect([0, 1, 2, 3].map((p) => placementRate(habit, p))).toEqual([4 / 102, 1 / 2, 9 / 12, 2 / 12]);
+  });
+});
+
+describe('section headings name their page', () => {
+  it.each([
+    ['Installing the widget', []],
+    ['Why (and when) to cache', []],
+    ['Event: close', []],
+    ['fs.readFile(path[, options], callback)', ['fs.readFile(path[, options], callback)', 'fs.readFile']],
+    ['Class: fs.Dir', ['Class: fs.Dir', 'fs.Dir']],
+    ['Static method: Buffer.from(array)', ['Static method: Buffer.from(array)', 'Buffer.from(array)', 'Buffer.from']],
+    ['ERR_WIDGET_CLOSED', ['ERR_WIDGET_CLOSED']],
+    ['readFileSync', ['readFileSync']],
+    ['PyObject_New()', ['PyObject_New()', 'PyObject_New']],
+  ])('%s gives %j', (heading, names) => {
+    expect(headingNames(heading)).toEqual(names);
+  });
+
+  it('a code span naming a section of another page is a mention of that page', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [Errors](errors.md)\n- [Guide](guide.md)\n'),
+      markdownPage('errors.md', '# Errors\n\n## `ERR_WIDGET_CLOSED`\n\nThe widget was closed.\n\n## `ERR_WIDGET_FULL`\n\nThe buffer is full.\n'),
+      markdownPage('guide.md', '# Guide\n\nWriting to a closed widget throws `ERR_WIDGET_CLOSED`.\n'),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const hit = index.bySource[id('/guide/')]!.get(id('/errors/'));
+    expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([['`ERR_WIDGET_CLOSED`', 3, 'code']]);
   });
 });
