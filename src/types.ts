@@ -100,14 +100,16 @@ export interface TextSpan {
 }
 
 /**
- * An inline code span in prose (Markdown `` `name()` ``, outside links, headings and templates,
- * on one line): a place where a link may wrap the whole span, as API references link their code
- * names. `offset`/`endOffset` cover the span with its backticks, exactly one `code` protected
- * region; `apply` wraps it whole or not at all.
+ * An inline code span in prose (Markdown `` `name()` ``, an HTML `<code>` element; outside links,
+ * headings and templates, on one line): a place where a link may wrap the whole span, as API
+ * references link their code names. `offset`/`endOffset` cover the span with its backticks or
+ * tags, exactly one `code` protected region; `apply` wraps it whole or not at all.
  */
 export interface CodeSpan {
-  /** The span as written, backticks included (the source between `offset` and `endOffset`). */
+  /** The span as written, backticks or tags included (the source between `offset` and `endOffset`). */
   readonly text: string;
+  /** The code as it reads (what a link around it has as `RawLink.text`), white space collapsed. */
+  readonly code: string;
   /** UTF-16 offsets into `SourceFile.text`, backticks included. */
   readonly offset: number;
   readonly endOffset: number;

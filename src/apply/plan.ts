@@ -23,7 +23,7 @@
  * original text; nothing but the link markup is inserted.
  */
 import type { ResolvedOptions } from '../options.js';
-import { buildLineIndex, codeSpanText, parseSource, positionOf } from '../parse/index.js';
+import { buildLineIndex, parseSource, positionOf } from '../parse/index.js';
 import { NO_ANCHOR } from './select.js';
 import type { CodeSpan, ProtectedRegion, RawLink, SourceFile, Suggestion } from '../types.js';
 import { linkMarkup } from './markup.js';
@@ -62,9 +62,9 @@ export function planFile(input: PlanInput): FilePlan {
   const bad = file.problems.find((p) => UNWRITABLE.has(p.code));
   const lines = buildLineIndex(file.text);
 
-  const codeSpans = new Set((input.codeSpans ?? []).map((c) => `${c.offset}:${c.endOffset}`));
+  const codeSpans = new Map((input.codeSpans ?? []).map((c) => [`${c.offset}:${c.endOffset}`, c]));
   /** The code regions that anchors wrap whole: the edit moves them inside the new link. */
-  const wrapped = new Map<string, ProtectedRegion>();
+  const wrapped = new Map<string, { region: ProtectedRegion; span: CodeSpan }>();
   let candidates: Suggestion[] = [];
   for (const s of input.suggestions) {
     if (bad !== undefined) refuse(s, 'undecodable', `cannot be edited without changing other bytes: ${bad.message}`);
@@ -80,7 +80,7 @@ export function planFile(input: PlanInput): FilePlan {
       const region = overlappingRegion(input.regions, s.offset, s.endOffset);
       if (region === null) candidates.push(s);
       else if (region[2] === 'code' && region[0] === s.offset && region[1] === s.endOffset && codeSpans.has(`${s.offset}:${s.endOffset}`)) {
-        wrapped.set(s.id, region);
+        wrapped.set(s.id, { region, span: codeSpans.get(`${s.offset}:${s.endOffset}`)! });
         candidates.push(s);
       } else refuse(s, 'protected', `${REGION_WORDS[region[2]]} (line ${positionOf(lines, region[0]).line})`, { kind: region[2] });
     }
@@ -102,14 +102,15 @@ export function planFile(input: PlanInput): FilePlan {
     const facts = parseSource({ ...file, text }, input.options);
     const failed = applied.filter((a) => {
       const link = facts.links.find((l) => l.href === a.href && l.line === a.line && l.column === a.column);
-      return link === undefined || (wrapped.has(a.id) && link.text !== codeSpanText(a.anchor));
+      const code = wrapped.get(a.id);
+      return link === undefined || (code !== undefined && link.text !== code.span.code);
     });
     for (const f of failed) refuse(candidates.find((s) => s.id === f.id)!, 'not-a-link', `a link here would not be read as a link (checked by parsing the edited file)`);
     if (failed.length === 0) {
       // The new links are regions of the edited text themselves (`link`, and `html-tag` for <a>).
       const extents = applied.map((a) => [a.offset, a.offset + a.open.length + a.anchor.length + a.close.length] as const);
       const after = facts.protected.filter((r) => !extents.some(([s, e]) => r[0] >= s && r[1] <= e));
-      const kept = new Set(applied.map((a) => wrapped.get(a.id)));
+      const kept = new Set(applied.map((a) => wrapped.get(a.id)?.region));
       const before = wrapped.size === 0 ? input.regions : input.regions.filter((r) => !kept.has(r));
       const touched = touchedByChanges(candidates, before, after, insertionsOf(applied));
       for (const s of lostLinkSuggestions(candidates, input.links, facts.links, applied)) if (!touched.includes(s)) touched.push(s);

@@ -125,7 +125,7 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
     for (const raw of set) {
       const range = source === undefined ? null : linkTextRange(source, starts, raw, page.kind);
       located.set(raw, range);
-      if (range !== null) (range.code === true ? codeRanges : ranges).push(range);
+      if (range !== null) (range.code !== undefined ? codeRanges : ranges).push(range);
     }
     const keep = input.keepLinkText === true;
     const next: PageFacts = {

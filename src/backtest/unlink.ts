@@ -5,7 +5,7 @@
  * span where an anchor may be proposed, as if the author had written the words without the
  * link). Pure: works on the decoded source text and the parsed facts only.
  */
-import { codeSpanText } from '../parse/index.js';
+import { codeSpanText, collapseSpace, decodeBasicEntities } from '../parse/index.js';
 import type { CodeSpan, FileKind, PageText, RawLink, TextSpan } from '../types.js';
 
 /** UTF-16 offset of the start of each line (`\n`, `\r\n` and lone `\r` end a line). */
@@ -34,11 +34,11 @@ export function positionOf(starts: readonly number[], offset: number): { line: n
   return { line: lo + 1, column: offset - starts[lo]! + 1 };
 }
 
-/** Where a held-out link's words are in the source; `code` when they are one inline code span. */
+/** Where a held-out link's words are in the source; `code` (the code as it reads) when they are one inline code span. */
 export interface TextRange {
   readonly start: number;
   readonly end: number;
-  readonly code?: true;
+  readonly code?: string;
 }
 
 const CODE_SPAN = /^(`+)(?!`)[^\r\n]*?[^`\r\n]\1(?!`)/;
@@ -46,10 +46,11 @@ const CODE_SPAN = /^(`+)(?!`)[^\r\n]*?[^`\r\n]\1(?!`)/;
 /**
  * Where a link's visible text is in the source: right after the `[` of a Markdown link, or after
  * the opening tag of an `<a>` element (HTML pages, raw HTML in Markdown). The text must be there
- * exactly as `raw.text` says (so a span made from it keeps `text === source.slice(...)`), or, in
- * Markdown, be one inline code span that reads as `raw.text` and fills the brackets
- * (`` [`fs.stat()`](fs.md) ``: the range is the span with its backticks, `code`); links whose text
- * carries other markup (`[**x**](y)`), link patterns and empty texts give null.
+ * exactly as `raw.text` says (so a span made from it keeps `text === source.slice(...)`), or be
+ * one inline code span that reads as `raw.text` and fills the link (`` [`fs.stat()`](fs.md) ``,
+ * `<a href="fs.html"><code>fs.stat()</code></a>`: the range is the span with its backticks or
+ * tags, `code`); links whose text carries other markup (`[**x**](y)`), link patterns and empty
+ * texts give null.
  */
 export function linkTextRange(source: string, starts: readonly number[], raw: RawLink, kind: FileKind): TextRange | null {
   if (raw.origin === 'pattern' || raw.origin === 'navigation' || raw.text.trim() === '') return null;
@@ -66,7 +67,15 @@ export function linkTextRange(source: string, starts: readonly number[], raw: Ra
   if (kind === 'markdown' && source[start] === '`') {
     const code = CODE_SPAN.exec(source.slice(start, start + raw.text.length + 200));
     if (code === null || source[start + code[0].length] !== ']' || codeSpanText(code[0]) !== raw.text) return null;
-    return { start, end: start + code[0].length, code: true };
+    return { start, end: start + code[0].length, code: raw.text };
+  }
+  if (source[at] === '<' && /^<code[\s>]/i.test(source.slice(start, start + 6))) {
+    const close = source.toLowerCase().indexOf('</code>', start);
+    if (close < 0) return null;
+    const end = close + '</code>'.length;
+    if (!/^\s*<\/a>/i.test(source.slice(end, end + 40)) || /[\r\n]/.test(source.slice(start, end))) return null;
+    if (collapseSpace(decodeBasicEntities(source.slice(start, end).replace(/<[^>]*>/g, ''))) !== raw.text) return null;
+    return { start, end, code: raw.text };
   }
   if (!source.startsWith(raw.text, start)) return null;
   return { start, end: start + raw.text.length };
@@ -75,7 +84,7 @@ export function linkTextRange(source: string, starts: readonly number[], raw: Ra
 /** `codeSpans` with a code span for each range added, in offset order. */
 export function withCodeSpans(codeSpans: readonly CodeSpan[], source: string, starts: readonly number[], ranges: readonly TextRange[]): CodeSpan[] {
   const out = [...codeSpans];
-  for (const r of ranges) out.push({ text: source.slice(r.start, r.end), offset: r.start, endOffset: r.end, ...positionOf(starts, r.start) });
+  for (const r of ranges) out.push({ text: source.slice(r.start, r.end), code: r.code ?? '', offset: r.start, endOffset: r.end, ...positionOf(starts, r.start) });
   return out.sort((a, b) => a.offset - b.offset);
 }
 
@@ -123,3 +132,4 @@ export function withoutWords(text: PageText, linkTexts: readonly string[]): Page
   }
   return { title: text.title, headings, body };
 }
+

@@ -89,7 +89,7 @@ function isProblem(v: unknown): v is SourceProblem {
 }
 
 function isSpan(v: unknown): v is TextSpan {
-  return isObject(v) && typeof v.text === 'string' && isInt(v.offset) && isInt(v.line) && isInt(v.column);
+  return isObject(v) && typeof v.text === 'string' && typeof v.code === 'string' && isInt(v.offset) && isInt(v.line) && isInt(v.column);
 }
 
 function isSpans(v: unknown): boolean {

@@ -116,7 +116,16 @@ function visit(node: RootContent, ctx: Walk, flags: number): void {
   if (CODE_TAGS.has(tag)) {
     f |= NO_BODY | NO_SPAN;
     const end = node.position?.end.offset;
-    if (end !== undefined) draft.code.push(start, ctx.map(end));
+    if (end !== undefined) {
+      const stop = ctx.map(end);
+      draft.code.push(start, stop);
+      // A <code> element in prose may be an anchor, wrapped whole, as a Markdown code span is.
+      if (tag === 'code' && (flags & SPAN_OK) !== 0 && (flags & (NO_SPAN | IN_LINK | TEMPLATE)) === 0) {
+        const text = ctx.src.slice(start, stop);
+        const code = collapseSpace(plainText(node));
+        if (code !== '' && !/[\r\n]/.test(text)) draft.codeSpans.push({ text, code, offset: start, end: stop });
+      }
+    }
   }
   if (NO_SPAN_TAGS.has(tag)) f |= NO_SPAN;
   if (SPAN_TAGS.has(tag)) f |= SPAN_OK;

@@ -4,7 +4,7 @@ export { routeOfFile, normalizeRoute, hasSourceExtension } from './routes.js';
 export { parseNavigation } from './navigation.js';
 export { parseRedirects } from './redirects.js';
 export { buildLineIndex, positionOf, lineOf, lineStart } from './lines.js';
-export { codeSpanText } from './spans.js';
+export { anchorForReading, codeSpanText, collapseSpace, decodeBasicEntities } from './spans.js';
 export type { LineIndex } from './lines.js';
 export { MAX_NESTING, MAX_MARKERS_PER_PARAGRAPH, MAX_PARAGRAPH_CHARS } from './assess.js';
 export type { Redirect, LineProblem } from './types.js';

@@ -144,7 +144,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
       const start = startOf(w, node);
       const end = endOf(w, node);
       draft.code.push(start, end);
-      if ((flags & NO_SPAN) === 0 && /\S/.test(node.value) && !/[\r\n]/.test(w.src.slice(start, end))) draft.codeSpans.push({ text: w.src.slice(start, end), offset: start, end });
+      if ((flags & NO_SPAN) === 0 && /\S/.test(node.value) && !/[\r\n]/.test(w.src.slice(start, end))) draft.codeSpans.push({ text: w.src.slice(start, end), code: collapseSpace(node.value), offset: start, end });
       return;
     }
     case 'html':

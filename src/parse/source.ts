@@ -122,7 +122,7 @@ function assemble(
   const codeSpans = draft.codeSpans
     .filter((c) => codeRegions.has(`${c.offset}:${c.end}`))
     .sort((a, b) => a.offset - b.offset)
-    .map((c): CodeSpan => ({ text: c.text, offset: c.offset + bom, endOffset: c.end + bom, ...positionOf(lines, c.offset) }));
+    .map((c): CodeSpan => ({ text: c.text, code: c.code, offset: c.offset + bom, endOffset: c.end + bom, ...positionOf(lines, c.offset) }));
   const title = pickTitle(read.title, draft, file.path, options);
   const facts: PageFacts = {
     file: file.path,

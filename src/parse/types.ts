@@ -67,7 +67,7 @@ export interface PageDraft {
   /** Code ranges `[start, end)` in offset order (pairs), where link patterns do not apply. */
   readonly code: number[];
   /** Inline code in prose that a link may wrap whole: its source text (backticks included) and range `[offset, end)`. */
-  readonly codeSpans: { text: string; offset: number; end: number }[];
+  readonly codeSpans: { text: string; code: string; offset: number; end: number }[];
   readonly problems: ProblemDraft[];
   /** Protected regions the walk found (link definitions); the rest come from `protect.ts`. */
   readonly protected: ProtectedRegion[];

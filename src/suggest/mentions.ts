@@ -229,7 +229,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     }
     const prose = found.length;
     for (const code of facts.codeSpans ?? []) {
-      const phraseId = wholeMatch(tokenize(code.text, cache), root);
+      const phraseId = wholeMatch(tokenize(code.code, cache), root);
       if (phraseId < 0) continue;
       const alone = on.markdown && !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
       found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId]!.stems.length) });

@@ -4,6 +4,7 @@
  * score), e.g. `orphan page (no inlinks); mentions "trait objects" twice (its title); 4 pages are
  * linked with both; same folder`. No internal key name is ever shown.
  */
+import { anchorForReading } from '../parse/index.js';
 import type { UnderlinkedReason } from '../types.js';
 import type { AnchorMatch } from './anchor.js';
 import { F, NAME_FEATURES } from './features.js';
@@ -82,7 +83,7 @@ export function evidenceWords(e: Evidence): string[] {
             : x[F['alias-mention']] === 1
               ? 'its route name'
               : 'one of its section headings';
-    items.push({ weight: names, words: `mentions "${e.anchor.text}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
+    items.push({ weight: names, words: `mentions "${anchorForReading(e.anchor.text)}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
   }
   // Only what raised the score because the pair has more of it than the usual pair.
   if (x[F.mentions]! === 0 && e.anchor !== null && e.anchor.kind !== 'name' && e.anchor.kind !== 'code') {

@@ -43,8 +43,8 @@ describe('inline code spans in the parse stage', () => {
     const src = '# Page\n\nCall `fs.readFile()` and then ``a `b` c``.\n';
     const facts = md(src);
     expect(facts.codeSpans).toEqual([
-      { text: '`fs.readFile()`', offset: 13, endOffset: 28, line: 3, column: 6 },
-      { text: '``a `b` c``', offset: 38, endOffset: 49, line: 3, column: 31 },
+      { text: '`fs.readFile()`', code: 'fs.readFile()', offset: 13, endOffset: 28, line: 3, column: 6 },
+      { text: '``a `b` c``', code: 'a `b` c', offset: 38, endOffset: 49, line: 3, column: 31 },
     ]);
     for (const c of facts.codeSpans!) expect(src.slice(c.offset, c.endOffset)).toBe(c.text);
   });
@@ -72,9 +72,12 @@ describe('inline code spans in the parse stage', () => {
     expect(html.links.map((l) => l.code)).toEqual([true, undefined]);
   });
 
-  it('keeps none in HTML pages (<code> there is left to the prose rules)', () => {
-    const facts = parseSource({ path: 'p.html', kind: 'html', bytes: 0, hash: 'h', text: '<p>Call <code>x()</code>.</p>', problems: [] }, testOptions());
-    expect(facts.codeSpans).toBeUndefined();
+  it('keeps <code> elements in the prose of HTML pages, tags included, with the code as it reads', () => {
+    const text = '<h2><code>title()</code></h2>\n<p>Call <code class="x"><span class="pre">a&lt;b</span> <span>()</span></code> or <a href="y.html"><code>linked()</code></a>.</p>\n<pre><code>block()</code></pre>\n';
+    const facts = parseSource({ path: 'p.html', kind: 'html', bytes: 0, hash: 'h', text, problems: [] }, testOptions());
+    expect(facts.codeSpans).toEqual([
+      { text: '<code class="x"><span class="pre">a&lt;b</span> <span>()</span></code>', code: 'a<b ()', offset: 38, endOffset: 108, line: 2, column: 9 },
+    ]);
   });
 });
 
@@ -150,13 +153,32 @@ describe('code spans as anchors, from suggest to apply', () => {
   });
 });
 
+describe('an HTML <code> element as the anchor', () => {
+  it('is wrapped whole by apply, and the re-parsed link reads as the code', () => {
+    const text = '<html><body>\n<p>Call <code class="xref"><span class="pre">widget.close()</span></code> when done.</p>\n</body></html>\n';
+    const file = { path: 'p.html', kind: 'html' as const, bytes: text.length, hash: 'h', text, problems: [] };
+    const options = testOptions();
+    const facts = parseSource(file, options);
+    const span = facts.codeSpans![0]!;
+    const suggestion: Suggestion = {
+      id: 'c', source: '/p.html', target: '/t.html', file: 'p.html', line: span.line, column: span.column, offset: span.offset, endOffset: span.endOffset,
+      anchor: span.text, similarity: 0.5, score: 0.5, targetRankBefore: 1, targetRankAfter: 1, depthBefore: 2, depthAfter: 2, reason: '', sourceHash: 'h',
+    };
+    const plan = planFile({ file, suggestions: [suggestion], hrefs: new Map([['c', 't.html']]), style: 'relative', options, regions: facts.protected, links: facts.links, codeSpans: facts.codeSpans ?? [] });
+    expect(plan.refused).toEqual([]);
+    expect(plan.after.split('\n')[1]).toBe('<p>Call <a href="t.html"><code class="xref"><span class="pre">widget.close()</span></code></a> when done.</p>');
+    const link = parseSource({ ...file, text: plan.after }, options).links[0]!;
+    expect([link.text, link.code]).toEqual(['widget.close()', true]);
+  });
+});
+
 describe('holding out a code link in the backtest', () => {
   it('finds the code span inside the brackets, backticks included', () => {
     const src = '# P\n\nSee [`fs.stat()`](fs.md) and [the **bold** one](x.md) and [plain](y.md).\n';
     const facts = md(src);
     const starts = lineStarts(src);
     const [code, bold, plain] = facts.links;
-    expect(linkTextRange(src, starts, code!, 'markdown')).toEqual({ start: 10, end: 21, code: true });
+    expect(linkTextRange(src, starts, code!, 'markdown')).toEqual({ start: 10, end: 21, code: 'fs.stat()' });
     expect(src.slice(10, 21)).toBe('`fs.stat()`');
     expect(linkTextRange(src, starts, bold!, 'markdown')).toBeNull();
     const p = linkTextRange(src, starts, plain!, 'markdown');
@@ -245,5 +267,17 @@ describe('section headings name their page', () => {
     const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
     const hit = index.bySource[id('/guide/')]!.get(id('/errors/'));
     expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([['`ERR_WIDGET_CLOSED`', 3, 'code']]);
+  });
+});
+
+describe('holding out an HTML code link in the backtest', () => {
+  it('finds the <code> element that fills an HTML link, tags included', () => {
+    const src = '<p>See <a href="fs.html"><code class="xref"><span>fs.stat()</span></code></a>, <a href="x.html"><code>x</code>()</a>.</p>\n';
+    const facts = parseSource({ path: 'p.html', kind: 'html', bytes: 0, hash: 'h', text: src, problems: [] }, testOptions());
+    const starts = lineStarts(src);
+    const [code, mixed] = facts.links;
+    const range = linkTextRange(src, starts, code!, 'html');
+    expect(range && [src.slice(range.start, range.end), range.code]).toEqual(['<code class="xref"><span>fs.stat()</span></code>', 'fs.stat()']);
+    expect(linkTextRange(src, starts, mixed!, 'html')).toBeNull();
   });
 });

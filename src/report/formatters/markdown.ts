@@ -10,6 +10,7 @@
  * "structure changes" part follows (pages added and removed, a table of the pages whose rank or
  * depth changed most), before the suggestions.
  */
+import { anchorForReading } from '../../parse/index.js';
 import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { Formatter } from '../types.js';
 import {
@@ -83,7 +84,7 @@ function collapse<T>(items: readonly T[], render: (part: readonly T[]) => string
 }
 
 function suggestionItem(s: Suggestion): string {
-  return `- [ ] "${escapeMarkdown(s.anchor ?? '')}" in ${code(`${s.file}:${s.line}`)} -> ${code(s.target)} (${formatSimilarity(s.similarity)} similar; ${impactOf(s)}) id ${code(s.id)}`;
+  return `- [ ] "${escapeMarkdown(anchorForReading(s.anchor ?? ''))}" in ${code(`${s.file}:${s.line}`)} -> ${code(s.target)} (${formatSimilarity(s.similarity)} similar; ${impactOf(s)}) id ${code(s.id)}`;
 }
 
 function handWrittenItem(s: Suggestion): string {

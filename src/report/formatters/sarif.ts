@@ -5,6 +5,7 @@
  * level `note` whose `fixes` entry replaces the anchor phrase with the link markup. With a
  * baseline or a base report, each finding has a `baselineState` (`new` or `unchanged`).
  */
+import { anchorForReading } from '../../parse/index.js';
 import { pathToFileURL } from 'node:url';
 import type { ArtifactLocation, Fix, Log, ReportingDescriptor, Result } from 'sarif';
 import { rules } from '../../rules/registry.js';
@@ -96,14 +97,14 @@ function suggestionResult(files: ReadonlyMap<string, string>, s: Suggestion, rul
   const what =
     s.anchor === null
       ? `Add a link to ${s.target} near here; needs a sentence written by hand, no phrase here names the target (${impact}).`
-      : `Add a link to ${s.target} on "${s.anchor}" (${impact}).`;
+      : `Add a link to ${s.target} on "${anchorForReading(s.anchor)}" (${impact}).`;
   const text = s.reason === '' ? what : `${what} Why: ${s.reason}.`;
   const fixes: Fix[] =
     s.anchor === null
       ? []
       : [
           {
-            description: { text: `Link "${s.anchor}" to ${s.target}` },
+            description: { text: `Link "${anchorForReading(s.anchor)}" to ${s.target}` },
             artifactChanges: [
               {
                 artifactLocation: artifact(s.file),

@@ -10,6 +10,7 @@
  * Lines wrap at `ctx.width` (default 100) between words, never inside a quoted phrase, a route
  * or a command. Colour through picocolors, only when `ctx.color`.
  */
+import { anchorForReading } from '../../parse/index.js';
 import pc from 'picocolors';
 import type { Comparison, Finding, PageChange, Report, Suggestion } from '../../types.js';
 import type { FormatContext, Formatter } from '../types.js';
@@ -151,7 +152,7 @@ function suggestionLines(report: Report, ctx: FormatContext, c: Colors, width: n
         const location = `${where(s)}:${s.line}:${s.column}`;
         const head: Word[] = [
           { text: 'link', sep: '', paint: c.green },
-          { text: `"${clean(s.anchor!)}"`, sep: ' ', paint: plain },
+          { text: `"${clean(anchorForReading(s.anchor!))}"`, sep: ' ', paint: plain },
           { text: '->', sep: ' ', paint: plain },
           { text: clean(s.target), sep: ' ', paint: c.cyan },
         ];

@@ -5,6 +5,7 @@
  * Page ids are indexes into `report.pages` (sorted by route). Links become one edge per
  * (from, to) page pair with flag bits (1 content, 2 template), sorted by from, then to.
  */
+import { anchorForReading } from '../../parse/index.js';
 import type { Report, ReportPage } from '../../types.js';
 import { buildOverview } from './layout.js';
 import type { Overview } from './layout.js';
@@ -178,7 +179,7 @@ function buildFullData(report: Report): HtmlData {
     file: s.file,
     line: s.line,
     column: s.column,
-    anchor: s.anchor,
+    anchor: s.anchor === null ? null : anchorForReading(s.anchor),
     similarity: s.similarity,
     targetRankBefore: s.targetRankBefore,
     targetRankAfter: s.targetRankAfter,
