@@ -196,8 +196,8 @@ export const CLIENT_SCRIPT = `"use strict";
 	function font(px, weight) {
 		ctx2d.font = (weight || 400) + " " + px * unit + "px system-ui, sans-serif";
 	}
-	function nodeRadius(_rank, scale) {
-		return 5.5 * (scale || 1);
+	function nodeRadius(scale = 1) {
+		return 5.5 * scale;
 	}
 	function shapePath(x, y, r, shape) {
 		ctx2d.beginPath();
@@ -342,11 +342,11 @@ export const CLIENT_SCRIPT = `"use strict";
 	const drawnList = byId("lw-drawn");
 	function drawFocus(id, layout) {
 		const cx = VW / 2, cy = VH / 2;
-		const rc = nodeRadius(PAGES[id].rank, 1.4) * unit;
+		const rc = nodeRadius(1.4) * unit;
 		const room = Math.max(8, Math.floor((210 - 16 * unit) / unit / 6.4));
 		function column(items, x, side) {
 			for (const it of items) {
-				const r = Math.max(5, nodeRadius(PAGES[it.id].rank)) * unit;
+				const r = Math.max(5, nodeRadius()) * unit;
 				const template = !(it.flags & 1);
 				ctx2d.setLineDash(template ? [4 * unit, 4 * unit] : []);
 				ctx2d.lineWidth = 1.2 * unit;
@@ -480,7 +480,7 @@ export const CLIENT_SCRIPT = `"use strict";
 		}
 		const order = PAGES.map((_, i) => i);
 		order.sort((a, b) => PAGES[a].pagerank - PAGES[b].pagerank || b - a);
-		const radius = (i) => (PAGES[i].depth === null ? Math.max(6, nodeRadius(PAGES[i].rank)) : nodeRadius(PAGES[i].rank)) * unit;
+		const radius = (i) => (PAGES[i].depth === null ? Math.max(6, nodeRadius()) : nodeRadius()) * unit;
 		for (const i of order) drawPageNode(i, pos[2 * i], pos[2 * i + 1], radius(i), false);
 		const named = PAGES.map((_, i) => i);
 		const prio = (i) => {

@@ -50,8 +50,8 @@ export function sizeCanvas(): void {
 function font(px: number, weight?: number): void { ctx2d.font = (weight || 400) + ' ' + (px * unit) + 'px system-ui, sans-serif'; }
 
 /** Every page is drawn the same size: colour and shape carry its state, the rings its depth. */
-export function nodeRadius(_rank: number, scale?: number): number {
-  return 5.5 * (scale || 1);
+export function nodeRadius(scale = 1): number {
+  return 5.5 * scale;
 }
 
 export function shapePath(x: number, y: number, r: number, shape: 'square' | 'triangle' | 'circle'): void {

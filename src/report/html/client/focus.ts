@@ -38,12 +38,12 @@ const drawnList = byId('lw-drawn');
  */
 export function drawFocus(id: number, layout: FocusLayout): number[] {
   const cx = VW / 2, cy = VH / 2;
-  const rc = nodeRadius(PAGES[id]!.rank, 1.4) * unit;
+  const rc = nodeRadius(1.4) * unit;
   // Labels get the room between the column and the canvas edge (or the centre).
   const room = Math.max(8, Math.floor((210 - 16 * unit) / unit / 6.4));
   function column(items: readonly ColumnItem[], x: number, side: 1 | -1): void {
     for (const it of items) {
-      const r = Math.max(5, nodeRadius(PAGES[it.id]!.rank)) * unit;
+      const r = Math.max(5, nodeRadius()) * unit;
       const template = !(it.flags & 1);
       ctx2d.setLineDash(template ? [4 * unit, 4 * unit] : []);
       ctx2d.lineWidth = 1.2 * unit;

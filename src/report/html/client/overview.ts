@@ -90,7 +90,7 @@ export function drawPagesOverview(o: PageOverview): number[] {
   }
   const order = PAGES.map((_, i) => i);
   order.sort((a, b) => PAGES[a]!.pagerank - PAGES[b]!.pagerank || b - a);
-  const radius = (i: number): number => (PAGES[i]!.depth === null ? Math.max(6, nodeRadius(PAGES[i]!.rank)) : nodeRadius(PAGES[i]!.rank)) * unit;
+  const radius = (i: number): number => (PAGES[i]!.depth === null ? Math.max(6, nodeRadius()) : nodeRadius()) * unit;
   for (const i of order) drawPageNode(i, pos[2 * i]!, pos[2 * i + 1]!, radius(i), false);
   // Names where they fit: unreachable pages first (they are few and need reading), then the
   // entry pages, then the pages deeper than the limit, then the others by PageRank; a name that would overlap another is left out.
