@@ -1,7 +1,7 @@
 /** `formatReport`: the built-in formatters by id. */
 import { EngineError } from '../errors.js';
 import type { Report } from '../types.js';
-import { htmlFormatter } from './formatters/html.js';
+import { htmlFormatter } from './html/format.js';
 import { jsonFormatter } from './formatters/json.js';
 import { markdownFormatter } from './formatters/markdown.js';
 import { sarifFormatter } from './formatters/sarif.js';

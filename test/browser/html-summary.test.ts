@@ -4,7 +4,7 @@
  * so it is not asserted).
  */
 import { describe, it, expect, beforeAll, afterAll } from 'vitest';
-import { htmlFormatter } from '../../src/report/formatters/html.js';
+import { htmlFormatter } from '../../src/report/html/format.js';
 import { launchReportBrowser } from './open-report.js';
 import type { ReportBrowser } from './open-report.js';
 import { buildFixtureReport } from './report-fixture.js';

@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { chromium } from 'playwright-core';
 import type { Page } from 'playwright-core';
-import { htmlFormatter } from '../../src/report/formatters/html.js';
+import { htmlFormatter } from '../../src/report/html/format.js';
 import type { Report } from '../../src/types.js';
 import { browserLaunch } from './launch.js';
 import type { BrowserSource } from './launch.js';

@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { chromium } from 'playwright-core';
 import type { Browser } from 'playwright-core';
-import { htmlFormatter } from '../../src/report/formatters/html.js';
+import { htmlFormatter } from '../../src/report/html/format.js';
 import { browserLaunch, browserSource, SYSTEM_CHROMIUM } from './launch.js';
 import { buildFixtureReport } from './report-fixture.js';
 

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { formatHtml } from '../../src/report/formatters/html.js';
+import { formatHtml } from '../../src/report/html/format.js';
 import { buildHtmlData, SUMMARY_LIMITS } from '../../src/report/html/data.js';
 import type { SummaryLimits } from '../../src/report/html/data.js';
 import { buildFixtureReport } from '../browser/report-fixture.js';

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { describe, it, expect } from 'vitest';
-import { htmlFormatter, formatHtml, CLIENT_SCRIPT } from '../../src/report/formatters/html.js';
+import { CLIENT_SCRIPT } from '../../src/report/html/client.generated.js';
+import { htmlFormatter, formatHtml } from '../../src/report/html/format.js';
 import { escapeHtml, jsonForScript } from '../../src/report/html/escape.js';
 import type { HtmlData } from '../../src/report/html/data.js';
 import { decodeRows } from '../../src/report/html/embed.js';

@@ -2,7 +2,7 @@
  * The form in which the HTML report embeds its data: the long lists (pages, findings,
  * suggestions) as rows of values with one list of field names each, instead of objects that
  * repeat every key (about half the size at 5,000 pages). Booleans become 0/1. The page's
- * script turns the rows back into objects (`decodeRows` in client-core.ts does the same as
+ * script turns the rows back into objects (`decodeRows` in client/data.ts does the same as
  * `decodeRows` here).
  */
 import type { HtmlData, HtmlFinding, HtmlPage, HtmlSuggestion } from './data.js';

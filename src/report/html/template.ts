@@ -6,7 +6,6 @@
 import { depthHistogramSvg, pagerankSvg, shorten } from './charts.js';
 import type { HtmlData } from './data.js';
 import { escapeHtml, formatNumber } from './escape.js';
-import { describeFailure } from '../formatters/common.js';
 
 /** The inline parts the page is assembled from, and their CSP hashes. */
 export interface PageParts {
@@ -22,9 +21,11 @@ export interface PageParts {
 /**
  * Render the whole page.
  * @param data the report's HTML data
+ * @param failures the gate's failures in words, one per `data.gate.failures` entry (the
+ *   formatters' shared `describeFailure`)
  * @param parts styles, script and data, with their hashes
  */
-export function renderPage(data: HtmlData, parts: PageParts): string {
+export function renderPage(data: HtmlData, failures: readonly string[], parts: PageParts): string {
   // Nothing may load from outside the file: only the hashed inline style and script run.
   const csp = `default-src 'none'; style-src '${parts.styleHash}'; script-src '${parts.scriptHash}'; img-src data:`;
   return [
@@ -40,7 +41,7 @@ export function renderPage(data: HtmlData, parts: PageParts): string {
     '<body>',
     '<a class="lw-skip" href="#lw-graph">Skip to the link graph</a>',
     '<main>',
-    header(data),
+    header(data, failures),
     summaryNotice(data),
     toc(data),
     stats(data),
@@ -63,9 +64,9 @@ export function renderPage(data: HtmlData, parts: PageParts): string {
   ].join('\n');
 }
 
-function header(data: HtmlData): string {
+function header(data: HtmlData, failureText: readonly string[]): string {
   const { gate } = data;
-  const failures = gate.failures.map((f) => `<li>${escapeHtml(describeFailure(f, gate.failOn))}</li>`);
+  const failures = failureText.map((text) => `<li>${escapeHtml(text)}</li>`);
   const errors = data.stats.findings.error;
   const warnings = data.stats.findings.warning;
   if (!gate.passed && failures.length === 0) {

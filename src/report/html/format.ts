@@ -5,10 +5,13 @@
  * link graph and sortable, filterable tables of findings and suggested links.
  *
  * Pure: builds a string from the report. The charts are SVG written here; the graph is drawn
- * on a canvas by hand-written script. No charting or graph library is bundled: one would have
- * to be inlined from `node_modules` (file-system access, which a formatter may not do) or kept
- * as a copied source blob, and the few drawings needed here are small. The overview layout is
- * computed here without randomness, so the same report gives byte-identical HTML.
+ * on a canvas by the page's own script: the TypeScript modules in `client/`, bundled at build
+ * time (scripts/build-client.mjs) into the constant of `client.generated.ts`, which is inlined.
+ * No charting or graph library is bundled: the few drawings needed here are small. The overview
+ * layout is computed here without randomness, so the same report gives byte-identical HTML.
+ *
+ * This is the only file of `report/html/` that uses the formatters' shared words
+ * (`formatters/common.ts`); nothing under `formatters/` imports `report/html/`.
  *
  * Safety: every text from the report is HTML-escaped in markup and `\u003c`-escaped in the
  * embedded JSON; a Content-Security-Policy lets only the page's own hashed style and script
@@ -16,21 +19,14 @@
  */
 import { createHash } from 'node:crypto';
 import type { Report } from '../../types.js';
+import { describeFailure, displayRoot } from '../formatters/common.js';
 import type { FormatContext, Formatter } from '../types.js';
-import { CLIENT_CORE } from '../html/client-core.js';
-import { CLIENT_DRAW } from '../html/client-draw.js';
-import { CLIENT_FOCUS } from '../html/client-focus.js';
-import { CLIENT_GRAPH } from '../html/client-graph.js';
-import { CLIENT_TABLES } from '../html/client-tables.js';
-import { buildHtmlData } from '../html/data.js';
-import { embedData } from '../html/embed.js';
-import { jsonForScript } from '../html/escape.js';
-import { STYLES } from '../html/styles.js';
-import { renderPage } from '../html/template.js';
-import { displayRoot } from './common.js';
-
-/** The page's script: the parts in one function scope, run once the document is parsed. */
-export const CLIENT_SCRIPT = `(function () {${CLIENT_CORE}${CLIENT_DRAW}${CLIENT_FOCUS}${CLIENT_TABLES}${CLIENT_GRAPH}})();`;
+import { CLIENT_SCRIPT } from './client.generated.js';
+import { buildHtmlData } from './data.js';
+import { embedData } from './embed.js';
+import { jsonForScript } from './escape.js';
+import { STYLES } from './styles.js';
+import { renderPage } from './template.js';
 
 function cspHash(text: string): string {
   return `sha256-${createHash('sha256').update(text, 'utf8').digest('base64')}`;
@@ -45,7 +41,8 @@ function cspHash(text: string): string {
  */
 export function formatHtml(report: Report, cwd?: string): string {
   const data = { ...buildHtmlData(report), root: displayRoot(report.root, cwd) };
-  return renderPage(data, {
+  const failures = data.gate.failures.map((f) => describeFailure(f, data.gate.failOn));
+  return renderPage(data, failures, {
     styles: STYLES,
     script: CLIENT_SCRIPT,
     json: jsonForScript(embedData(data)),
