@@ -69,7 +69,7 @@ export function formatBacktestJson(result: BacktestResult): string {
       score: scoreFormula(suggest.minSimilarity),
     },
     site: result.site,
-    runs: result.runs.map((run) => ({ ...run, candidateCoverage: r(run.candidateCoverage), methods: run.methods.map(methodJson) })),
+    runs: result.runs.map((run) => ({ ...run, candidateCoverage: r(run.candidateCoverage), bestRecallAt1: r(run.bestRecallAt1), methods: run.methods.map(methodJson) })),
     summary: result.summary.map((s) => ({
       method: s.method,
       ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, rs(s.recall[i]!)])),

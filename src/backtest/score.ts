@@ -101,6 +101,7 @@ export function runOnce(base: RunBase, share: number, seed: number, keepLinkText
     heldOutLinks: heldOut.reduce((a, p) => a + p.links.length, 0),
     targets: targets.length,
     candidateCoverage: heldOut.length === 0 ? null : covered / heldOut.length,
+    bestRecallAt1: truth.size === 0 ? null : [...truth.values()].reduce((a, sources) => a + 1 / sources.size, 0) / truth.size,
     model: {
       source: choice.modelReport.source,
       trainingPairs: choice.modelReport.trainingPairs.linked + choice.modelReport.trainingPairs.notLinked,

@@ -86,6 +86,12 @@ export interface RunResult {
    * nothing was held out.
    */
   readonly candidateCoverage: number | null;
+  /**
+   * The highest recall@1 any method can reach on this run: the mean over targets of
+   * 1 / (held-out sources of the target), as one first place finds one of them. Null when nothing
+   * was held out.
+   */
+  readonly bestRecallAt1: number | null;
   /** The link model fitted on this run's reduced site (source, training pairs, AUC). */
   readonly model: { readonly source: 'fitted' | 'fixed'; readonly trainingPairs: number; readonly auc: number | null };
   readonly methods: readonly MethodScores[];
