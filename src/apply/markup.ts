@@ -3,7 +3,7 @@
  * anchor. Markdown: `[anchor](href)`; HTML: `<a href="href">anchor</a>`. The anchor itself is
  * never touched (it is source text already: escapes and entities stay as written).
  */
-import { encodeRouteSegment, extensionOf, isSourceExtension } from '../graph/normalize.js';
+import { encodeRouteSegment, extensionOf, isSourceExtension } from '../routes/index.js';
 import type { LinkSource, LinkStyle, LinkTarget } from './types.js';
 
 /**

@@ -5,7 +5,8 @@ import { EngineError } from '../errors.js';
 import type { ResolvedOptions } from '../options.js';
 import type { SourceFile } from '../types.js';
 import { compare, isInside, listFiles, toRelative, WarningLog } from './list.js';
-import { describeIoError, kindOfPath, readSource } from './read.js';
+import { kindOfPath } from '../routes/index.js';
+import { describeIoError, readSource } from './read.js';
 import type { CollectResult } from './types.js';
 
 /** Files read between two turns of the event loop (reads are synchronous; see read.ts). */

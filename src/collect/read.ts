@@ -2,26 +2,10 @@
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import type { FileKind, SourceFile } from '../types.js';
+import { kindOfPath } from '../routes/index.js';
 import { decodeSource } from './decode.js';
 import { isInside } from './list.js';
 import type { CollectWarning } from './types.js';
-
-/** Kind of a source file from its extension, or null when it is not a source extension. */
-export function kindOfPath(path: string): FileKind | null {
-  const dot = path.lastIndexOf('.');
-  if (dot < 0 || dot < path.lastIndexOf('/')) return null;
-  switch (path.slice(dot + 1).toLowerCase()) {
-    case 'md':
-    case 'markdown':
-    case 'mdx':
-      return 'markdown';
-    case 'html':
-    case 'htm':
-      return 'html';
-    default:
-      return null;
-  }
-}
 
 /** What reading one file needs to know. */
 export interface ReadContext {

@@ -6,7 +6,7 @@ import type { ResolvedOptions } from '../options.js';
 import type { PageFacts, ResolvedLink, SiteGraph } from '../types.js';
 import type { GraphInput } from './types.js';
 import { createEdgeList, pushEdge, buildCsr, EDGE_CONTENT, EDGE_TEMPLATE } from './csr.js';
-import { extensionOf, isSourceExtension, lookupKey, normalizedBasePath, routeKeyOf } from './normalize.js';
+import { extensionOf, isSourceExtension, lookupKey, normalizedBasePath, routeKeyOf } from '../routes/index.js';
 import { selectPages } from './pages.js';
 import { resolveLink } from './resolve.js';
 import { navigationSource, pageSource } from './source.js';

@@ -2,7 +2,6 @@
 export { buildGraph } from './build.js';
 export { resolveLink } from './resolve.js';
 export { pageSource, navigationSource, fileUrlOf, SITE_ORIGIN } from './source.js';
-export { removeDotSegments, joinPath } from './paths.js';
 export type { ResolveContext } from './resolve.js';
 export type { LinkSource } from './source.js';
 export { buildRouteIndex, resolveRouteValue } from './routes.js';
@@ -11,20 +10,4 @@ export { markTemplateLinks, TEMPLATE_MIN_PAGES } from './template.js';
 export { buildCsr, transpose, outWeightSums, createEdgeList, pushEdge, EDGE_CONTENT, EDGE_TEMPLATE } from './csr.js';
 export { selectPages, canonicalRoute, compareStrings } from './pages.js';
 export type { DuplicateRoute, PageSelection } from './pages.js';
-export {
-  normalizeRoute,
-  canonicalPath,
-  routeKeyOf,
-  lookupRoute,
-  lookupKey,
-  encodeRouteSegment,
-  decodeRouteSegment,
-  decodePathSegments,
-  normalizedBasePath,
-  withBasePath,
-  extensionOf,
-  isSourceExtension,
-  isMarkdownExtension,
-} from './normalize.js';
-export type { RouteOptions } from './normalize.js';
 export type { GraphInput, GraphRedirect, RedirectEnd, EdgeList } from './types.js';

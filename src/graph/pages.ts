@@ -3,8 +3,8 @@
  * one page per route (the first file by path keeps it), pages sorted by route.
  */
 import type { PageFacts, PageNode } from '../types.js';
-import { canonicalPath, encodeRouteSegment, routeKeyOf } from './normalize.js';
-import type { RouteOptions } from './normalize.js';
+import { canonicalPath, encodeRouteSegment, routeKeyOf } from '../routes/index.js';
+import type { RouteOptions } from '../routes/index.js';
 
 /** A file that lost its route to another file. */
 export interface DuplicateRoute {

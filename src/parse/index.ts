@@ -1,6 +1,5 @@
 /** The parse stage: source files -> page facts (pure; the only stage importing remark/rehype). */
 export { parseSource } from './source.js';
-export { routeOfFile, normalizeRoute, hasSourceExtension } from './routes.js';
 export { parseNavigation } from './navigation.js';
 export { parseRedirects } from './redirects.js';
 export { buildLineIndex, positionOf, lineOf, lineStart } from './lines.js';

@@ -14,7 +14,7 @@ import { buildLineIndex, positionOf } from './lines.js';
 import { readMarkdownPage } from './markdown-page.js';
 import { addPatternLinks } from './patterns.js';
 import { protectDraft } from './protect.js';
-import { routeOfFile } from './routes.js';
+import { routeOfFile } from '../routes/index.js';
 import type { PageDraft, Read } from './types.js';
 import { newDraft } from './types.js';
 

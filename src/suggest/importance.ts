@@ -15,7 +15,7 @@
 import picomatch from 'picomatch';
 import type { ResolvedOptions } from '../options.js';
 import type { SiteGraph } from '../types.js';
-import { lookupRoute } from '../graph/normalize.js';
+import { lookupRoute } from '../routes/index.js';
 import { percentiles } from './percentile.js';
 import type { ImportanceLevel } from './types.js';
 
