@@ -9,7 +9,7 @@ import { createEdgeList, pushEdge, buildCsr, EDGE_CONTENT, EDGE_TEMPLATE } from 
 import { extensionOf, isSourceExtension, lookupKey, normalizedBasePath, routeKeyOf } from '../routes/index.js';
 import { selectPages } from './pages.js';
 import { resolveLink } from './resolve.js';
-import { navigationSource, pageSource } from './source.js';
+import { navigationSource, pageSource } from './link-source.js';
 import type { ResolveContext } from './resolve.js';
 import { buildRouteIndex, resolveRouteValue } from './routes.js';
 import { markTemplateLinks } from './template.js';

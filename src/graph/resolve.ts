@@ -28,8 +28,8 @@ import type { RouteOptions } from '../routes/index.js';
 import { decodeFragment, filePathOf, joinPath, pathPart, removeDotSegments, stripIndexFile } from '../routes/index.js';
 import { isOutside, isTemplated } from './scope.js';
 import type { ScopeContext } from './scope.js';
-import { SITE_ORIGIN } from './source.js';
-import type { LinkSource } from './source.js';
+import { SITE_ORIGIN } from './link-source.js';
+import type { LinkSource } from './link-source.js';
 
 
 const HOSTED_SCHEMES = new Set(['http:', 'https:', 'ftp:', 'ws:', 'wss:']);

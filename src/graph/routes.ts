@@ -5,7 +5,7 @@
 import type { GraphRedirect, RedirectEnd } from './types.js';
 import { canonicalPath, extensionOf, lookupKey, routeKeyOf, withBasePath } from '../routes/index.js';
 import type { RouteOptions } from '../routes/index.js';
-import { SITE_ORIGIN } from './source.js';
+import { SITE_ORIGIN } from './link-source.js';
 
 /** Longest redirect chain followed; longer chains (and loops) end as dead routes. */
 const MAX_REDIRECT_HOPS = 64;

@@ -32,3 +32,5 @@ export {
   hasSourceExtension,
 } from './extensions.js';
 export type { RouteOptions } from './types.js';
+export { LINK_STYLES, hrefFor, linkMarkup, linkText, relativeFilePath, relativeRoute } from './link-markup.js';
+export type { LinkSource, LinkStyle, LinkTarget } from './link-markup.js';
