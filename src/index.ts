@@ -19,4 +19,5 @@ export type { CacheConfig, CheckConfig, Level, LimitsConfig, LinkPatternConfig, 
 export { applySuggestions } from './apply/index.js';
 export type { ApplyInput, ApplyResult, AppliedLink, FileStyle, LinkStyle, NotApplied, RefusalCode, Selection } from './apply/index.js';
 export { VERSION } from './version.js';
-export type * from './types.js';
+/** The public JSON report contract. */
+export type * from './report/schema.js';

@@ -8,6 +8,7 @@ import { describeIssue, oldFormProblem } from './config-issues.js';
 import { EngineError } from './errors.js';
 import { HEADING_ID_STYLES } from './parse/heading-ids.js';
 import { PRESET_NAMES } from './preset/names.js';
+import { SOURCE_GLOB } from './routes/index.js';
 
 /** How much a check's findings weigh: SARIF's levels (`none` = the check does not run). */
 export const LEVELS = ['error', 'warning', 'none'] as const;
@@ -26,7 +27,7 @@ const linkPattern = z.strictObject({
 
 const schema = z.strictObject({
   /** @default ['**\/*.{md,markdown,mdx,html,htm}'] */
-  include: z.array(z.string().min(1)).default(['**/*.{md,markdown,mdx,html,htm}']),
+  include: z.array(z.string().min(1)).default([SOURCE_GLOB]),
   /** Extra globs to leave out (node_modules, dot-folders and the output file are always left out). @default [] */
   exclude: z.array(z.string().min(1)).default([]),
   routes: z

@@ -8,7 +8,7 @@ export { REGION_WORDS, overlappingRegion, changedRegions } from './regions.js';
 export type { Insertion } from './regions.js';
 export { classifyHref, countStyles, addCounts, majority, chooseStyle } from './style.js';
 export type { StyleOrigin } from './style.js';
-export { hrefFor, linkMarkup, relativeFilePath, relativeRoute } from './markup.js';
+export { hrefFor, linkMarkup, linkText, relativeFilePath, relativeRoute } from './markup.js';
 export { planFile } from './plan.js';
 export type { PlanInput } from './plan.js';
 export { selectSuggestions, groupByFile, NO_ANCHOR } from './select.js';

@@ -9,7 +9,7 @@
  * scheme or `//`), and links to assets (any other extension) do not count. In HTML sources,
  * `relative` and `route-relative` are one style (a relative URL), counted as `relative`.
  */
-import { extensionOf, isSourceExtension } from '../graph/normalize.js';
+import { extensionOf, isSourceExtension } from '../routes/index.js';
 import type { FileKind, RawLink } from '../types.js';
 import type { LinkStyle, StyleCounts } from './types.js';
 

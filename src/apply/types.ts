@@ -1,37 +1,12 @@
 /** Types of the apply stage: link styles, and what planning one file's edits gives. */
-import type { FileKind, ProtectedKind } from '../types.js';
+import type { ProtectedKind } from '../types.js';
+import type { LinkStyle } from '../routes/index.js';
 
-/**
- * How a new link names its target:
- * - `relative`: the target's source file relative to the source file (`../guides/calibration.md`),
- *   how authors link Markdown files; in an HTML source, the target's route relative to the page
- *   (`../guides/calibration/`);
- * - `absolute`: the site-absolute route (`/guides/calibration/`);
- * - `route-relative`: the target's route relative to the page's route, as a browser resolves it
- *   (`../calibration/`); the same as `relative` in HTML.
- */
-export type LinkStyle = 'relative' | 'absolute' | 'route-relative';
-
-/** The link styles, for the `--link-style` flag. */
-export const LINK_STYLES: readonly LinkStyle[] = ['relative', 'absolute', 'route-relative'];
+export { LINK_STYLES } from '../routes/index.js';
+export type { LinkSource, LinkStyle, LinkTarget } from '../routes/index.js';
 
 /** Internal links of each style, counted in one file or a whole site. */
 export type StyleCounts = Readonly<Record<LinkStyle, number>>;
-
-/** The page a link goes to. */
-export interface LinkTarget {
-  readonly route: string;
-  readonly file: string;
-}
-
-/** The page a link is written in. */
-export interface LinkSource {
-  readonly file: string;
-  readonly kind: FileKind;
-  readonly route: string;
-  /** HTML `<base href>`: relative links would resolve against it, so links are written absolute. */
-  readonly baseHref?: string;
-}
 
 /** A link `planFile` inserted. */
 export interface AppliedLink {

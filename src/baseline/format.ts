@@ -19,7 +19,7 @@
  * Only rule, route and target are used for matching; the rest tells a reader (and the "fixed"
  * list) where the finding was.
  */
-import { compareText } from '../rules/structure.js';
+import { compareText } from '../util/index.js';
 import type { Finding } from '../types.js';
 
 /** Schema id of the baseline file. */

@@ -10,7 +10,7 @@
  * are paired in report order (file, line, column), so a line inserted above keeps the pairs
  * in step.
  */
-import { compareFindings } from '../rules/engine.js';
+import { compareFindings } from '../util/index.js';
 import type { Finding } from '../types.js';
 
 /** The matching key of a finding: rule, route and target (message, file and position left out). */

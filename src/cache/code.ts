@@ -7,6 +7,7 @@ import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import { dirname, join, relative, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { compareText } from '../util/index.js';
 
 let memo: string | null = null;
 
@@ -49,5 +50,5 @@ function codeFiles(dir: string, ext: string): string[] {
     }
   };
   walk(dir);
-  return out.sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  return out.sort(compareText);
 }

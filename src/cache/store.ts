@@ -7,6 +7,7 @@ import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import { join } from 'node:path';
 import type { PageFacts, SourceFile } from '../types.js';
+import { compareText, describeIoError } from '../util/index.js';
 import { CACHE_SCHEMA, packFacts, shardFileName, shardOfPath, SHARDS, unpackFacts } from './format.js';
 import type { ShardHeader, StoredFacts } from './format.js';
 import type { IgnoredReason } from './types.js';
@@ -161,13 +162,13 @@ function writeShard(dir: string, index: number, key: CacheKey, entries: Readonly
     } catch {
       // Nothing more can be done about a temp file that cannot be removed.
     }
-    return describe(error);
+    return describeIoError(error);
   }
 }
 
 /** The text of a shard file: header line, then the entries sorted by path, one per line. */
 function serializeShard(index: number, key: CacheKey, entries: ReadonlyMap<string, StoredFacts | Unpacked>): string {
-  const paths = [...entries.keys()].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  const paths = [...entries.keys()].sort(compareText);
   const header: ShardHeader = { schema: CACHE_SCHEMA, version: key.version, fingerprint: key.fingerprint, shard: index, count: paths.length };
   const parts: string[] = [JSON.stringify(header), '\n[\n'];
   for (let i = 0; i < paths.length; i++) {
@@ -177,23 +178,4 @@ function serializeShard(index: number, key: CacheKey, entries: ReadonlyMap<strin
   }
   parts.push('\n]\n');
   return parts.join('');
-}
-
-function describe(error: unknown): string {
-  const code = (error as NodeJS.ErrnoException).code;
-  switch (code) {
-    case 'EACCES':
-    case 'EPERM':
-    case 'EROFS':
-      return `permission denied (${code})`;
-    case 'ENOTDIR':
-    case 'EEXIST':
-      return `a part of the path is not a folder (${code})`;
-    case 'ENOSPC':
-      return 'no space left on the device (ENOSPC)';
-    case undefined:
-      return (error as Error).message;
-    default:
-      return code;
-  }
 }

@@ -5,7 +5,7 @@ import { EngineError } from '../errors.js';
 import type { ResolvedOptions } from '../options.js';
 import { realRootOf } from './collect.js';
 import { isInside, toRelative } from './list.js';
-import { describeIoError } from './read.js';
+import { describeIoError } from '../util/index.js';
 
 /** The configuration keys that name an auxiliary file. */
 export type AuxKey = 'navigation' | 'redirects' | 'traffic';

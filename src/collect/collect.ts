@@ -4,8 +4,10 @@ import { isAbsolute, join, normalize, resolve } from 'node:path';
 import { EngineError } from '../errors.js';
 import type { ResolvedOptions } from '../options.js';
 import type { SourceFile } from '../types.js';
-import { compare, isInside, listFiles, toRelative, WarningLog } from './list.js';
-import { describeIoError, kindOfPath, readSource } from './read.js';
+import { isInside, listFiles, toRelative, WarningLog } from './list.js';
+import { kindOfPath } from '../routes/index.js';
+import { readSource } from './read.js';
+import { compareText, describeIoError } from '../util/index.js';
 import type { CollectResult } from './types.js';
 
 /** Files read between two turns of the event loop (reads are synchronous; see read.ts). */
@@ -57,8 +59,8 @@ export async function collectSources(options: ResolvedOptions, extraExclude: rea
   }
 
   return {
-    files: files.sort((a, b) => compare(a.path, b.path)),
-    assets: assets.sort(compare),
+    files: files.sort((a, b) => compareText(a.path, b.path)),
+    assets: assets.sort(compareText),
     warnings: warnings.sorted(),
   };
 }

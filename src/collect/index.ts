@@ -2,7 +2,8 @@
 export { collectSources, READ_BATCH } from './collect.js';
 export { readAuxFile } from './aux.js';
 export type { AuxKey } from './aux.js';
-export { readSource, kindOfPath } from './read.js';
+export { readSource } from './read.js';
+export { kindOfPath } from '../routes/index.js';
 export type { ReadContext, ReadOutcome } from './read.js';
 export { decodeSource, firstInvalidUtf8, positionOfByte, BINARY_SNIFF_BYTES } from './decode.js';
 export type { Decoded } from './decode.js';

@@ -5,6 +5,7 @@
 import fs from 'node:fs';
 import { dirname, relative, sep } from 'node:path';
 import { glob } from 'tinyglobby';
+import { compareText } from '../util/index.js';
 import type { CollectWarning } from './types.js';
 
 /** Always left out: dependencies, dot-folders and dot-files. */
@@ -31,13 +32,8 @@ export class WarningLog {
 
   /** Warnings sorted by file, then code. */
   sorted(): CollectWarning[] {
-    return [...this.#byKey.values()].sort((a, b) => compare(a.file, b.file) || compare(a.code, b.code));
+    return [...this.#byKey.values()].sort((a, b) => compareText(a.file, b.file) || compareText(a.code, b.code));
   }
-}
-
-/** Code-unit order (never locale order, so the output is the same on every machine). */
-export function compare(a: string, b: string): number {
-  return a < b ? -1 : a > b ? 1 : 0;
 }
 
 class SymlinkRefused extends Error {
@@ -124,5 +120,5 @@ export async function listFiles(
     fs: { realpath: guardedRealpath(realRoot, warnings) as unknown as typeof fs.realpath },
   });
   // Patterns cannot climb out (they are checked before), but never trust a listing blindly.
-  return found.filter((p) => !p.startsWith('../') && p !== '..').sort(compare);
+  return found.filter((p) => !p.startsWith('../') && p !== '..').sort(compareText);
 }

@@ -2,26 +2,11 @@
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import type { FileKind, SourceFile } from '../types.js';
+import { kindOfPath } from '../routes/index.js';
+import { describeIoError } from '../util/index.js';
 import { decodeSource } from './decode.js';
 import { isInside } from './list.js';
 import type { CollectWarning } from './types.js';
-
-/** Kind of a source file from its extension, or null when it is not a source extension. */
-export function kindOfPath(path: string): FileKind | null {
-  const dot = path.lastIndexOf('.');
-  if (dot < 0 || dot < path.lastIndexOf('/')) return null;
-  switch (path.slice(dot + 1).toLowerCase()) {
-    case 'md':
-    case 'markdown':
-    case 'mdx':
-      return 'markdown';
-    case 'html':
-    case 'htm':
-      return 'html';
-    default:
-      return null;
-  }
-}
 
 /** What reading one file needs to know. */
 export interface ReadContext {
@@ -144,24 +129,4 @@ function ioWarning(file: string, error: unknown): CollectWarning {
     code: 'unreadable',
     message: `cannot read "${file}": ${describeIoError(error)}; skipped`,
   };
-}
-
-/** A short reason for an I/O error, without the absolute path Node puts in its messages. */
-export function describeIoError(error: unknown): string {
-  const code = (error as NodeJS.ErrnoException).code;
-  switch (code) {
-    case 'ENOENT':
-      return 'no such file (ENOENT)';
-    case 'EACCES':
-    case 'EPERM':
-      return `permission denied (${code})`;
-    case 'EISDIR':
-      return 'is a folder (EISDIR)';
-    case 'ENOTDIR':
-      return 'a parent is not a folder (ENOTDIR)';
-    case undefined:
-      return (error as Error).message;
-    default:
-      return code;
-  }
 }

@@ -10,7 +10,7 @@
  * Pure.
  */
 import { matchFindings } from '../baseline/index.js';
-import { compareText } from '../rules/structure.js';
+import { compareText } from '../util/index.js';
 import { RATIO_DECIMALS, roundTo } from '../report/round.js';
 import type { Comparison, PageChange, Report } from '../types.js';
 import type { ReportFile } from './read.js';

@@ -3,8 +3,9 @@
  * one page per route (the first file by path keeps it), pages sorted by route.
  */
 import type { PageFacts, PageNode } from '../types.js';
-import { canonicalPath, encodeRouteSegment, routeKeyOf } from './normalize.js';
-import type { RouteOptions } from './normalize.js';
+import { canonicalPath, encodeRouteSegment, routeKeyOf } from '../routes/index.js';
+import { compareText } from '../util/index.js';
+import type { RouteOptions } from '../routes/index.js';
 
 /** A file that lost its route to another file. */
 export interface DuplicateRoute {
@@ -29,11 +30,6 @@ export function canonicalRoute(route: string): string {
   return canonicalPath(route) ?? canonicalPath(route.split('/').map(encodeRouteSegment).join('/'))!;
 }
 
-/** Code-unit order: deterministic and locale-free. */
-export function compareStrings(a: string, b: string): number {
-  return a < b ? -1 : a > b ? 1 : 0;
-}
-
 /**
  * Select and sort the pages of `facts`.
  * @param notPages files that are no pages of their own (pulled into another page)
@@ -46,7 +42,7 @@ export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, n
     const route = canonicalRoute(f.route);
     candidates.push({ index, route, key: routeKeyOf(route, routes), file: f.file });
   }
-  candidates.sort((a, b) => compareStrings(a.key, b.key) || compareStrings(a.file, b.file) || a.index - b.index);
+  candidates.sort((a, b) => compareText(a.key, b.key) || compareText(a.file, b.file) || a.index - b.index);
 
   const kept: typeof candidates = [];
   const lost: { file: string; route: string; keptIndex: number }[] = [];
@@ -56,7 +52,7 @@ export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, n
     else kept.push(c);
   }
   const order = kept.map((_, i) => i);
-  order.sort((a, b) => compareStrings(kept[a]!.route, kept[b]!.route) || compareStrings(kept[a]!.file, kept[b]!.file));
+  order.sort((a, b) => compareText(kept[a]!.route, kept[b]!.route) || compareText(kept[a]!.file, kept[b]!.file));
   const idOfKept = new Int32Array(kept.length);
   const pages: PageNode[] = order.map((k, id) => {
     idOfKept[k] = id;
@@ -73,6 +69,6 @@ export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, n
     duplicates.push({ file: d.file, route: d.route, keptFile: keptPage.file });
     if (!fileToPage.has(d.file)) fileToPage.set(d.file, keptPage.id);
   }
-  duplicates.sort((a, b) => compareStrings(a.route, b.route) || compareStrings(a.file, b.file));
+  duplicates.sort((a, b) => compareText(a.route, b.route) || compareText(a.file, b.file));
   return { pages, duplicates, fileToPage };
 }

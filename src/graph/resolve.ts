@@ -23,13 +23,13 @@ import {
   lookupKey,
   routeKeyOf,
   withBasePath,
-} from './normalize.js';
-import type { RouteOptions } from './normalize.js';
-import { decodeFragment, filePathOf, joinPath, pathPart, removeDotSegments, stripIndexFile } from './paths.js';
+} from '../routes/index.js';
+import type { RouteOptions } from '../routes/index.js';
+import { decodeFragment, filePathOf, joinPath, pathPart, removeDotSegments, stripIndexFile } from '../routes/index.js';
 import { isOutside, isTemplated } from './scope.js';
 import type { ScopeContext } from './scope.js';
-import { SITE_ORIGIN } from './source.js';
-import type { LinkSource } from './source.js';
+import { SITE_ORIGIN } from './link-source.js';
+import type { LinkSource } from './link-source.js';
 
 
 const HOSTED_SCHEMES = new Set(['http:', 'https:', 'ftp:', 'ws:', 'wss:']);

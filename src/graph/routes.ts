@@ -3,9 +3,9 @@
  * all keyed by `normalizeRoute` keys (DESIGN section 3: old routes that still resolve).
  */
 import type { GraphRedirect, RedirectEnd } from './types.js';
-import { canonicalPath, extensionOf, lookupKey, routeKeyOf, withBasePath } from './normalize.js';
-import type { RouteOptions } from './normalize.js';
-import { SITE_ORIGIN } from './source.js';
+import { canonicalPath, extensionOf, lookupKey, routeKeyOf, withBasePath } from '../routes/index.js';
+import type { RouteOptions } from '../routes/index.js';
+import { SITE_ORIGIN } from './link-source.js';
 
 /** Longest redirect chain followed; longer chains (and loops) end as dead routes. */
 const MAX_REDIRECT_HOPS = 64;

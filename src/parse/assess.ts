@@ -8,8 +8,8 @@
  * Real pages nest a few levels and hold tens of links per paragraph, so the limits below sit far
  * above real content and far below the slow cases.
  */
-import type { LineIndex } from './lines.js';
-import { lineContentEnd, lineStart } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { lineContentEnd, lineStart } from '../util/line-index.js';
 
 /** Container nesting (block quotes, list items) above which lines are read by the simple scanner. */
 export const MAX_NESTING = 32;

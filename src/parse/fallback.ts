@@ -9,8 +9,8 @@
  * prose), no reference links and no template context.
  */
 import type GithubSlugger from 'github-slugger';
-import type { LineIndex } from './lines.js';
-import { lineContentEnd, lineStart } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { lineContentEnd, lineStart } from '../util/line-index.js';
 import { collapseSpace } from './spans.js';
 import type { PageDraft } from './types.js';
 

@@ -14,8 +14,8 @@
  * looks them up.
  */
 import type { IncludeRef } from '../types.js';
-import type { LineIndex } from './lines.js';
-import { positionOf } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { positionOf } from '../util/line-index.js';
 
 const QUICK = /\{\{#|--8<--|\{\{[<%]|\{%-?\s*include/;
 const DIRECTIVES: readonly { readonly re: RegExp; readonly from: 'file' | 'root' | 'includes' }[] = [

@@ -4,8 +4,8 @@
  */
 import type { Html } from 'mdast';
 import { walkHast } from './hast.js';
-import type { LineIndex } from './lines.js';
-import { buildLineIndex, lineContentEnd, lineOf, lineStart } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { buildLineIndex, lineContentEnd, lineOf, lineStart } from '../util/line-index.js';
 import { parseHtmlFragment } from './processors.js';
 import type { PageDraft } from './types.js';
 

@@ -11,8 +11,8 @@
 import type GithubSlugger from 'github-slugger';
 import type { Heading, Html, Nodes, Parents, RootContent, Text } from 'mdast';
 import type { BlankedText } from './assess.js';
-import type { LineIndex } from './lines.js';
-import { lineOf, lineStart } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { lineOf, lineStart } from '../util/line-index.js';
 import { closesTag, inlineOpenTag, readRawHtml } from './markdown-html.js';
 import { parseMarkdownTree } from './processors.js';
 import { findLiteralLinks, mayHoldLiteralLink } from './literal-links.js';

@@ -13,8 +13,8 @@ import { isMap, isScalar, isSeq, parseDocument } from 'yaml';
 import type { Node as YamlNode } from 'yaml';
 import { EngineError } from '../errors.js';
 import type { RawLink } from '../types.js';
-import type { LineIndex } from './lines.js';
-import { buildLineIndex, positionOf } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { buildLineIndex, positionOf } from '../util/line-index.js';
 import { readMarkdownPage } from './markdown-page.js';
 
 const LINK_KEYS = ['link', 'href', 'path', 'url', 'file'];

@@ -11,8 +11,8 @@
  * an opener that is not closed by then protects the rest of its line.
  */
 import type { FileKind, ProtectedKind, ProtectedRegion } from '../types.js';
-import type { LineIndex } from './lines.js';
-import { lineContentEnd, lineOf, lineStart } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { lineContentEnd, lineOf, lineStart } from '../util/line-index.js';
 import {
   blockCloser,
   isAttributeList,

@@ -6,8 +6,8 @@
  * A span is kept only where the source holds exactly the text the parser produced (no escapes
  * or character references in between), so inserting at an offset inside it is safe.
  */
-import type { LineIndex } from './lines.js';
-import { lineContentEnd, lineOf, lineStart } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { lineContentEnd, lineOf, lineStart } from '../util/line-index.js';
 import type { PageDraft, SpanDraft } from './types.js';
 
 const LINE_BREAK = /\r\n|\r|\n/;

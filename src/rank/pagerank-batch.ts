@@ -23,6 +23,7 @@
 import type { Csr } from '../types.js';
 import { EngineError } from '../errors.js';
 import { outWeightSums } from '../graph/csr.js';
+import { checkLength, distribution } from './vectors.js';
 import type { ExtraEdge, PagerankOptions } from './pagerank.js';
 import { pullLanes, settleLanes } from './lanes.js';
 
@@ -67,9 +68,9 @@ export function pagerankScenarios(
 ): ScenarioResult {
   const { damping, maxIterations, tolerance } = opts;
   if (!(damping > 0 && damping < 1)) throw new EngineError('E_INTERNAL', `pagerankScenarios: damping must be in (0, 1), got ${damping}`);
-  checkLength(forward.offsets.length - 1, n, 'forward CSR');
-  checkLength(reverse.offsets.length - 1, n, 'reverse CSR');
-  checkLength(start.length, n, 'start');
+  checkLength('pagerankScenarios', forward.offsets.length - 1, n, 'forward CSR');
+  checkLength('pagerankScenarios', reverse.offsets.length - 1, n, 'reverse CSR');
+  checkLength('pagerankScenarios', start.length, n, 'start');
   if (at !== undefined && at.length !== scenarios.length) {
     throw new EngineError('E_INTERNAL', `pagerankScenarios: "at" has ${at.length} lists for ${scenarios.length} scenarios`);
   }
@@ -81,10 +82,10 @@ export function pagerankScenarios(
   if (count === 0 || n === 0) return { values, iterations: iterationsOut, converged: convergedOut };
 
   const lanes = Math.max(1, Math.min(count, Math.floor(opts.lanes ?? DEFAULT_LANES)));
-  const teleport = opts.teleport === undefined ? null : distribution(opts.teleport, n, 'teleport');
-  const x0 = distribution(start, n, 'start') ?? (teleport === null ? new Float64Array(n).fill(1 / n) : teleport.slice());
+  const teleport = opts.teleport === undefined ? null : distribution('pagerankScenarios', opts.teleport, n, 'teleport');
+  const x0 = distribution('pagerankScenarios', start, n, 'start') ?? (teleport === null ? new Float64Array(n).fill(1 / n) : teleport.slice());
   const outWeights = opts.outWeights ?? outWeightSums(forward, n);
-  checkLength(outWeights.length, n, 'outWeights');
+  checkLength('pagerankScenarios', outWeights.length, n, 'outWeights');
   const inv = new Float64Array(n);
   let baseDangling = 0;
   for (let u = 0; u < n; u++) {
@@ -242,22 +243,4 @@ function planScenarios(scenarios: readonly (readonly ExtraEdge[])[], n: number, 
     nodes.push(list);
   });
   return { edgeStart, edgeFrom, edgeTo, edgeWeight, patchStart, patchNode: patchNode.subarray(0, p), patchInv: patchAdd.subarray(0, p), at: nodes };
-}
-
-function checkLength(actual: number, n: number, what: string): void {
-  if (actual !== n) throw new EngineError('E_INTERNAL', `pagerankScenarios: ${what} has ${actual} nodes, expected ${n}`);
-}
-
-/** A copy of `v` scaled to sum 1; null when it has no positive mass. */
-function distribution(v: Float64Array, n: number, what: string): Float64Array | null {
-  checkLength(v.length, n, what);
-  let sum = 0;
-  for (let i = 0; i < n; i++) {
-    if (!(v[i] >= 0)) throw new EngineError('E_INTERNAL', `pagerankScenarios: ${what}[${i}] is ${v[i]}, expected a non-negative number`);
-    sum += v[i];
-  }
-  if (!(sum > 0) || !Number.isFinite(sum)) return null;
-  const out = new Float64Array(n);
-  for (let i = 0; i < n; i++) out[i] = v[i] / sum;
-  return out;
 }

@@ -16,6 +16,7 @@
 import type { Csr } from '../types.js';
 import { EngineError } from '../errors.js';
 import { outWeightSums } from '../graph/csr.js';
+import { checkLength, distribution } from './vectors.js';
 
 /** An edge that is not in the CSR but should count as if it were (impact prediction). */
 export interface ExtraEdge {
@@ -55,20 +56,20 @@ export interface PagerankResult {
 export function pagerank(forward: Csr, reverse: Csr, n: number, opts: PagerankOptions): PagerankResult {
   const { damping, maxIterations, tolerance } = opts;
   if (!(damping > 0 && damping < 1)) throw new EngineError('E_INTERNAL', `pagerank: damping must be in (0, 1), got ${damping}`);
-  checkLength(forward.offsets.length - 1, n, 'forward CSR');
-  checkLength(reverse.offsets.length - 1, n, 'reverse CSR');
+  checkLength('pagerank', forward.offsets.length - 1, n, 'forward CSR');
+  checkLength('pagerank', reverse.offsets.length - 1, n, 'reverse CSR');
   if (n === 0) return { scores: new Float64Array(0), iterations: 0, converged: true };
 
-  const teleport = opts.teleport === undefined ? null : distribution(opts.teleport, n, 'teleport');
+  const teleport = opts.teleport === undefined ? null : distribution('pagerank', opts.teleport, n, 'teleport');
   const uniform = 1 / n;
-  let x: Float64Array | null = opts.start === undefined ? null : distribution(opts.start, n, 'start');
+  let x: Float64Array | null = opts.start === undefined ? null : distribution('pagerank', opts.start, n, 'start');
   if (x === null) {
     x = teleport === null ? new Float64Array(n).fill(uniform) : teleport.slice();
   }
 
   // Inverse out-weights, extra edges included; 0 marks a dangling page.
   const inv = opts.outWeights === undefined ? outWeightSums(forward, n) : opts.outWeights.slice();
-  checkLength(inv.length, n, 'outWeights');
+  checkLength('pagerank', inv.length, n, 'outWeights');
   const extras = opts.extraEdges ?? [];
   const extraFrom = new Int32Array(extras.length);
   const extraTo = new Int32Array(extras.length);
@@ -175,23 +176,4 @@ function settle(
   }
   totals[0] = change;
   totals[1] = dangling;
-}
-
-function checkLength(actual: number, n: number, what: string): void {
-  if (actual !== n) throw new EngineError('E_INTERNAL', `pagerank: ${what} has ${actual} nodes, expected ${n}`);
-}
-
-/** A copy of `v` scaled to sum 1; null when it has no positive mass. Throws on a wrong length or a negative entry. */
-function distribution(v: Float64Array, n: number, what: string): Float64Array | null {
-  checkLength(v.length, n, what);
-  let sum = 0;
-  for (let i = 0; i < n; i++) {
-    const value = v[i];
-    if (!(value >= 0)) throw new EngineError('E_INTERNAL', `pagerank: ${what}[${i}] is ${value}, expected a non-negative number`);
-    sum += value;
-  }
-  if (!(sum > 0) || !Number.isFinite(sum)) return null;
-  const out = new Float64Array(n);
-  for (let i = 0; i < n; i++) out[i] = v[i] / sum;
-  return out;
 }

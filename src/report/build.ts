@@ -19,12 +19,12 @@
  */
 import type { Finding, LinkModelReport, Report, ReportLink, ReportPage, ResolvedLink, Suggestion } from '../types.js';
 import { matchFindings } from '../baseline/match.js';
-import { compareFindings } from '../rules/engine.js';
-import { compareText, navigationFile } from '../rules/structure.js';
+import { compareFindings, compareSuggestions, compareText, navigationFile } from '../util/index.js';
 import { evaluateGate } from './gate.js';
 import { PAGERANK_DECIMALS, RATIO_DECIMALS, roundTo } from './round.js';
 import { computeStats } from './stats.js';
-import type { Importance, ReportInput } from './types.js';
+import type { ReportInput } from './types.js';
+import type { Importance } from './schema.js';
 
 /** Build the report. Pure; the inputs are not changed. */
 export function buildReport(input: ReportInput): Report {
@@ -112,16 +112,6 @@ function roundSuggestion(s: Suggestion): Suggestion {
     targetRankBefore: roundTo(s.targetRankBefore, RATIO_DECIMALS),
     targetRankAfter: s.targetRankAfter === null ? null : roundTo(s.targetRankAfter, RATIO_DECIMALS),
   };
-}
-
-function compareSuggestions(a: Suggestion, b: Suggestion): number {
-  return (
-    compareText(a.file, b.file) ||
-    a.line - b.line ||
-    a.column - b.column ||
-    compareText(a.target, b.target) ||
-    compareText(a.id, b.id)
-  );
 }
 
 /** The model with its numbers rounded to 6 decimals (the report's rule for floats). */

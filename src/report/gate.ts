@@ -14,7 +14,7 @@
  */
 import type { ResolvedOptions } from '../options.js';
 import type { Finding, GateFailure, Report } from '../types.js';
-import { compareText } from '../rules/structure.js';
+import { compareText } from '../util/index.js';
 import type { GateStats } from './types.js';
 
 /** Decide the verdict. `findings` are the ones that count (a baseline may have removed known ones). */

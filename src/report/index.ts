@@ -7,8 +7,9 @@ export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId } 
 export { textFormatter, summaryLines } from './formatters/text.js';
 export { jsonFormatter } from './formatters/json.js';
 export { markdownFormatter, escapeMarkdown } from './formatters/markdown.js';
-export { sarifFormatter, toSarif, linkMarkup, SUGGESTION_RULE } from './formatters/sarif.js';
+export { sarifFormatter, toSarif, suggestionLink, SUGGESTION_RULE } from './formatters/sarif.js';
 export { htmlFormatter, formatHtml } from './html/format.js';
 export { writeFileAtomic, removeTempFilesSync, TEMP_PREFIX } from './write.js';
 export type { TempFileTracker, WriteOptions } from './write.js';
-export type { FormatContext, FormatId, Formatter, GateStats, Importance, ReportInput } from './types.js';
+export type { FormatContext, FormatId, Formatter, GateStats, ReportInput } from './types.js';
+export type { Importance } from './schema.js';

@@ -5,7 +5,8 @@
  */
 import type { Finding, Ranking, Report, SiteGraph } from '../types.js';
 import { entrySet, isChecked, isDeadEnd, isOrphan, isUnreachable } from '../rules/structure.js';
-import type { GateStats, Importance } from './types.js';
+import type { GateStats } from './types.js';
+import type { Importance } from './schema.js';
 
 /** Counts of the report plus what the gate reads. */
 export function computeStats(input: {
@@ -20,14 +21,14 @@ export function computeStats(input: {
   let orphans = 0;
   let unreachable = 0;
   let deadEnds = 0;
-  let maxDepth: number | null = null;
+  let deepest: number | null = null;
   let fewestImportantInlinks: number | null = null;
   for (const page of graph.pages) {
     if (!isChecked(graph, page.id)) continue;
     if (isOrphan(graph, ranking, entries, page.id)) orphans++;
     if (isDeadEnd(graph, ranking, page.id)) deadEnds++;
     if (isUnreachable(ranking, page.id)) unreachable++;
-    else maxDepth = Math.max(maxDepth ?? 0, ranking.depth[page.id]!);
+    else deepest = Math.max(deepest ?? 0, ranking.depth[page.id]!);
     if (importance[page.id] === 'high') {
       const inlinks = ranking.contentInlinks[page.id]!;
       fewestImportantInlinks = Math.min(fewestImportantInlinks ?? inlinks, inlinks);
@@ -60,11 +61,11 @@ export function computeStats(input: {
     orphans,
     unreachable,
     deadEnds,
-    maxDepth,
+    maxDepth: deepest,
     iterations: ranking.iterations,
     converged: ranking.converged,
     findings: { error, warning: findings.length - error },
     headingIds: graph.headingIds ?? { style: 'github', how: 'set', fragmentLinks: 0, resolved: 0 },
   };
-  return { stats, gate: { maxDepth, orphans, brokenLinks, brokenFragments, unreachable, fewestImportantInlinks } };
+  return { stats, gate: { deepest, orphans, brokenLinks, brokenFragments, unreachable, fewestImportantInlinks } };
 }

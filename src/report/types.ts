@@ -1,9 +1,8 @@
 /** Types of the report stage: what `buildReport` takes and what formatters share. */
 import type { ResolvedOptions } from '../options.js';
-import type { Finding, LinkModelReport, Ranking, RepairPlan, Report, SiteGraph, Suggestion } from '../types.js';
+import type { LinkStyle } from '../routes/index.js';
+import type { Finding, Importance, LinkModelReport, Ranking, RepairPlan, Report, SiteGraph, Suggestion } from '../types.js';
 
-/** Importance of a page, as the suggest stage decides it. */
-export type Importance = 'high' | 'normal' | 'low';
 
 /** Everything `buildReport` needs; `analyze` passes the stages' outputs unchanged. */
 export interface ReportInput {
@@ -36,7 +35,8 @@ export interface ReportInput {
 
 /** The counts the gate's limits read (from the report's stats, plus one the stats do not carry). */
 export interface GateStats {
-  readonly maxDepth: number | null;
+  /** Click depth of the deepest reachable page (the report's `stats.maxDepth`); null when none is reachable. */
+  readonly deepest: number | null;
   readonly orphans: number;
   readonly brokenLinks: number;
   readonly brokenFragments: number;
@@ -70,6 +70,12 @@ export interface FormatContext {
    * run, e.g. `['--config', 'ci/linkweave.json']` (as the user typed them). @default none
    */
   readonly applyArgs?: readonly string[];
+  /**
+   * SARIF: the link style of each source file (by its path in the report), so a fix proposes
+   * the markup `apply` writes there (`ApplyResult.styles`; give `absolute` for an HTML page
+   * with a `<base href>`). A file not in it gets `relative`. @default none
+   */
+  readonly linkStyles?: ReadonlyMap<string, LinkStyle>;
 }
 
 /** A report writer: pure, one file each under `report/formatters/`. */

@@ -7,6 +7,7 @@ import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import { EngineError } from '../errors.js';
+import { describeIoError } from '../util/index.js';
 
 /** Prefix of every temp file (dot-file: never collected; listed in .gitignore). */
 export const TEMP_PREFIX = '.linkweave-tmp-';
@@ -63,7 +64,7 @@ export async function writeFileAtomic(path: string, data: string | Uint8Array | 
     created = false;
   } catch (error) {
     if (created) await fs.promises.rm(temp, { force: true }).catch(() => undefined);
-    throw new EngineError('E_IO', `cannot write "${options.label ?? path}": ${reason(error)}`, { cause: error });
+    throw new EngineError('E_IO', `cannot write "${options.label ?? path}": ${describeIoError(error)}`, { cause: error });
   } finally {
     tracker?.delete(temp);
   }
@@ -89,25 +90,5 @@ async function existingMode(path: string): Promise<number | undefined> {
     return stat.isFile() ? stat.mode & 0o7777 : undefined;
   } catch {
     return undefined;
-  }
-}
-
-function reason(error: unknown): string {
-  const code = (error as NodeJS.ErrnoException).code;
-  switch (code) {
-    case 'EISDIR':
-      return 'it is a folder (EISDIR)';
-    case 'EACCES':
-    case 'EPERM':
-    case 'EROFS':
-      return `permission denied (${code})`;
-    case 'ENOTDIR':
-      return 'a parent is not a folder (ENOTDIR)';
-    case 'ENOSPC':
-      return 'no space left on the device (ENOSPC)';
-    case undefined:
-      return (error as Error).message;
-    default:
-      return code;
   }
 }

@@ -9,7 +9,7 @@ import type { Level } from '../config.js';
 import type { Finding, Severity } from '../types.js';
 import type { Rule, RuleContext, RuleFinding } from './types.js';
 import { rules as builtinRules } from './registry.js';
-import { compareText } from './structure.js';
+import { compareFindings, compareText } from '../util/index.js';
 
 /** A rule with its level and options from the configuration. */
 export interface RuleSetting {
@@ -102,16 +102,4 @@ function stamp(rule: string, severity: Exclude<Severity, 'off'>, found: RuleFind
     message: found.message,
   };
   return found.target === undefined ? finding : { ...finding, target: found.target };
-}
-
-/** Order of findings everywhere in the output: file, line, column, rule, message. */
-export function compareFindings(a: Finding, b: Finding): number {
-  return (
-    compareText(a.file, b.file) ||
-    a.line - b.line ||
-    a.column - b.column ||
-    compareText(a.rule, b.rule) ||
-    compareText(a.message, b.message) ||
-    compareText(a.target ?? '', b.target ?? '')
-  );
 }

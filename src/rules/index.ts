@@ -1,6 +1,6 @@
 /** The rules stage: one module per rule, an explicit list, and the engine that runs them. */
 export { rules } from './registry.js';
-export { runRules, validateRuleConfig, compareFindings } from './engine.js';
+export { runRules, validateRuleConfig } from './engine.js';
 export type { RuleSetting } from './engine.js';
 export type { Rule, RuleContext, RuleFinding, SourceWarning, AuxProblem } from './types.js';
 export { brokenLink } from './broken-link.js';
@@ -15,4 +15,4 @@ export { sourceProblem } from './source-problem.js';
 export { duplicateRoute } from './duplicate-route.js';
 export { missingEntry } from './missing-entry.js';
 export { boundedDistance, nearest } from './nearest.js';
-export { contentOutlinks, entrySet, isDeadEnd, isOrphan, isUnreachable, navigationFile, compareText } from './structure.js';
+export { contentOutlinks, entrySet, isDeadEnd, isOrphan, isUnreachable } from './structure.js';

@@ -1,7 +1,7 @@
 /** Where a finding points: helpers shared by the rules. */
 import type { PageNode, ResolvedLink } from '../types.js';
 import type { RuleContext, RuleFinding } from './types.js';
-import { navigationFile } from './structure.js';
+import { navigationFile } from '../util/index.js';
 
 /** A finding about a whole page: line 1, column 1 of its file. */
 export function pageFinding(page: PageNode, message: string, target?: string): RuleFinding {

@@ -5,12 +5,6 @@
 import type { ResolvedOptions } from '../options.js';
 import type { Csr, Ranking, SiteGraph } from '../types.js';
 
-/** Path of the navigation file as the report names it (relative posix path, no leading `./`). */
-export function navigationFile(options: Pick<ResolvedOptions, 'navigation'>): string {
-  if (options.navigation === null) return '';
-  return options.navigation.replace(/\\/g, '/').replace(/^(\.\/)+/, '');
-}
-
 /** Ids of the entry pages, as a set. */
 export function entrySet(graph: SiteGraph): ReadonlySet<number> {
   return new Set(graph.entries);
@@ -59,9 +53,4 @@ export function isDeadEnd(graph: SiteGraph, ranking: Ranking, page: number, coun
 /** Unreachable: no path of links from any entry page. */
 export function isUnreachable(ranking: Ranking, page: number): boolean {
   return ranking.depth[page]! < 0;
-}
-
-/** Code-unit order, the same on every machine (unlike `localeCompare`). */
-export function compareText(a: string, b: string): number {
-  return a < b ? -1 : a > b ? 1 : 0;
 }

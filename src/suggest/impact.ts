@@ -13,6 +13,7 @@
  */
 import type { ResolvedOptions } from '../options.js';
 import type { Csr, Ranking, SiteGraph } from '../types.js';
+import { compareText } from '../util/index.js';
 import { outWeightSums } from '../graph/csr.js';
 import { pagerank } from '../rank/pagerank.js';
 import type { PagerankOptions } from '../rank/pagerank.js';
@@ -85,17 +86,13 @@ export function targetRanksWithLinks(model: RankModel, links: readonly { from: n
 export function impactSelection(items: readonly { readonly id: string; readonly score: number }[], planIds: readonly string[], limit: number): Uint8Array {
   const selected = new Uint8Array(items.length);
   if (limit === 0 || limit >= items.length) return selected.fill(1);
-  const order = items.map((_, i) => i).sort((a, b) => items[b]!.score - items[a]!.score || cmp(items[a]!.id, items[b]!.id));
+  const order = items.map((_, i) => i).sort((a, b) => items[b]!.score - items[a]!.score || compareText(items[a]!.id, items[b]!.id));
   for (let k = 0; k < limit; k++) selected[order[k]!] = 1;
   const inPlan = new Set(planIds.slice(0, limit));
   items.forEach((item, i) => {
     if (inPlan.has(item.id)) selected[i] = 1;
   });
   return selected;
-}
-
-function cmp(a: string, b: string): number {
-  return a < b ? -1 : a > b ? 1 : 0;
 }
 
 /**

@@ -15,9 +15,9 @@
 import picomatch from 'picomatch';
 import type { ResolvedOptions } from '../options.js';
 import type { SiteGraph } from '../types.js';
-import { lookupRoute } from '../graph/normalize.js';
+import { lookupRoute } from '../routes/index.js';
 import { percentiles } from './percentile.js';
-import type { ImportanceLevel } from './types.js';
+import type { Importance as ImportanceLevel } from '../types.js';
 
 /** Percentile from which a page is `high` without an explicit level. */
 export const HIGH_PERCENTILE = 0.9;

@@ -1,8 +1,8 @@
 /** The suggest stage (DESIGN section 7): importance, under-linked pages, link suggestions, impact, repair plan. */
-export { suggestLinks, compareSuggestions } from './suggest.js';
-export { chooseForTargets, KEY_TERMS, STRONG_LEADERS } from './choose.js';
-export type { ChooseResult } from './choose.js';
-export type { SuggestInput, SuggestResult, UnderlinkedPage, RepairPlan, ImportanceLevel } from './types.js';
+export { suggestLinks } from './suggest.js';
+export { rankCandidates, KEY_TERMS, STRONG_LEADERS } from './rank-candidates.js';
+export type { RankedCandidates } from './rank-candidates.js';
+export type { SuggestInput, SuggestResult, UnderlinkedPage, RepairPlan } from './types.js';
 export { parseTraffic } from './traffic.js';
 export type { TrafficResult } from './traffic.js';
 export { computeImportance, viewsPerPage, HIGH_PERCENTILE, LOW_PERCENTILE } from './importance.js';
@@ -26,8 +26,8 @@ export { findAnchors, prepareSource, positionInSpan, ANCHOR_OPTIONS } from './an
 export type { AnchorMatch, AnchorKind, SourceTokens } from './anchor.js';
 export { targetNames, routeWords } from './names.js';
 export type { TargetName, TargetNames, KeyTerms } from './names.js';
-export { chooseSuggestions } from './select.js';
-export type { ScoredPair, Chosen } from './select.js';
+export { pickUnderCaps } from './pick.js';
+export type { ScoredPair, Chosen } from './pick.js';
 export { rankModel, pagerankWithLinks, targetRanksWithLinks, impactSelection, DepthState, depthState } from './impact.js';
 export type { RankModel } from './impact.js';
 export { repairPlan } from './repair.js';

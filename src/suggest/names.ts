@@ -3,6 +3,7 @@
  * words of the last segment of its route and of its frontmatter aliases) and its key terms, as
  * Porter stems.
  */
+import { SOURCE_EXTENSION_END } from '../routes/index.js';
 import { tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
 
@@ -43,7 +44,7 @@ export function routeWords(route: string, cache: StemCache): string[] {
   } catch {
     // keep the segment as written
   }
-  return tokenize(decoded.replace(/\.(?:html?|md|markdown|mdx)$/i, '').replace(/[-_.+~]+/g, ' '), cache);
+  return tokenize(decoded.replace(SOURCE_EXTENSION_END, '').replace(/[-_.+~]+/g, ' '), cache);
 }
 
 /**

@@ -9,7 +9,8 @@
  */
 import type { ResolvedOptions } from '../options.js';
 import type { Suggestion } from '../types.js';
-import { chooseForTargets } from './choose.js';
+import { compareSuggestions } from '../util/index.js';
+import { rankCandidates } from './rank-candidates.js';
 import { suggestionId } from './id.js';
 import { depthState, impactSelection, rankModel, targetRanksWithLinks } from './impact.js';
 import { computeImportance } from './importance.js';
@@ -35,7 +36,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     settings.targets === 'all'
       ? graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id)
       : underlinked.map((u) => u.page);
-  const choice = chooseForTargets(input, options, targets, rankPct);
+  const choice = rankCandidates(input, options, targets, rankPct);
   const chosen = choice.chosen;
   const model = rankModel(graph, ranking, options);
   const depths = depthState(graph, ranking, options);
@@ -95,13 +96,4 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
     m.suggestion = { ...m.suggestion, targetRankAfter: after[j]! * n };
   });
   return { suggestions: made.map((m) => m.suggestion), underlinked, plan, importance: importance.level, model: choice.modelReport };
-}
-
-/** Output order: file, line, column, then target route (code-unit order). */
-export function compareSuggestions(a: Suggestion, b: Suggestion): number {
-  return cmp(a.file, b.file) || a.line - b.line || a.column - b.column || cmp(a.target, b.target) || cmp(a.id, b.id);
-}
-
-function cmp(a: string, b: string): number {
-  return a < b ? -1 : a > b ? 1 : 0;
 }

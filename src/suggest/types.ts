@@ -1,6 +1,6 @@
 /** Types of the suggest stage (contracts.md). */
 import type { StemCache } from '../text/tokenize.js';
-import type { LinkModelReport, PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
+import type { Importance, LinkModelReport, PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
 
 /** What `suggestLinks` works from. Arrays are indexed by page id (the graph's order). */
 export interface SuggestInput {
@@ -24,8 +24,6 @@ export interface SuggestInput {
   readonly stems?: StemCache;
 }
 
-/** Importance level of a page. */
-export type ImportanceLevel = 'high' | 'normal' | 'low';
 
 /** A page that wants more links, and why (reasons in a fixed order). */
 export interface UnderlinkedPage {
@@ -42,7 +40,7 @@ export interface SuggestResult {
   readonly underlinked: UnderlinkedPage[];
   readonly plan: RepairPlan;
   /** Importance level per page id. */
-  readonly importance: ImportanceLevel[];
+  readonly importance: Importance[];
   /** The link model the suggestions were scored with. */
   readonly model: LinkModelReport;
 }

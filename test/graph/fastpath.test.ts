@@ -6,7 +6,7 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { buildGraph, pageSource, navigationSource, resolveLink } from '../../src/graph/index.js';
 import type { ResolveContext } from '../../src/graph/index.js';
-import { joinPath, removeDotSegments } from '../../src/graph/index.js';
+import { joinPath, removeDotSegments } from '../../src/routes/index.js';
 import type { Config } from '../../src/options.js';
 import { link, options, page } from './facts.js';
 

@@ -16,7 +16,7 @@ const finding = (rule: string, severity: Finding['severity']): Finding => ({
   message: 'm',
 });
 
-const calm: GateStats = { maxDepth: 2, orphans: 0, brokenLinks: 0, brokenFragments: 0, unreachable: 0, fewestImportantInlinks: null };
+const calm: GateStats = { deepest: 2, orphans: 0, brokenLinks: 0, brokenFragments: 0, unreachable: 0, fewestImportantInlinks: null };
 const gate = (config: Config) => resolveOptions(config, '/site');
 
 describe('evaluateGate: severity', () => {

@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import ajvDraft04 from 'ajv-draft-04';
 import ajvFormats from 'ajv-formats';
 import type { Log, Result } from 'sarif';
-import { formatReport, linkMarkup, toSarif } from '../../src/report/index.js';
+import { formatReport, suggestionLink, toSarif } from '../../src/report/index.js';
 import { rules } from '../../src/rules/index.js';
 import { fixtureReport } from './fixture.js';
 
@@ -112,7 +112,9 @@ describe('sarif formatter', () => {
 
   it('links HTML sources with <a href> and percent-encodes file URIs', () => {
     const s = { ...report.suggestions[1]!, file: 'old pages/intro.html', anchor: 'tuning options' };
-    expect(linkMarkup(s, report.pages.find((p) => p.route === s.target)?.file)).toBe('<a href="/guide/configure/advanced/tuning/">tuning options</a>');
+    const file = report.pages.find((p) => p.route === s.target)?.file;
+    expect(suggestionLink(s, file, 'absolute')).toBe('<a href="/guide/configure/advanced/tuning/">tuning options</a>');
+    expect(suggestionLink(s, file, 'relative')).toBe('<a href="../guide/configure/advanced/tuning/">tuning options</a>');
     const spaced = toSarif({ ...report, findings: [{ ...report.findings[0]!, file: 'old pages/a b.md' }], suggestions: [] });
     expect(spaced.runs[0]!.results![0]!.locations![0]!.physicalLocation!.artifactLocation!.uri).toBe('old%20pages/a%20b.md');
     expect(validate(spaced)).toBe(true);

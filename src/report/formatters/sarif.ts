@@ -11,7 +11,9 @@ import type { ArtifactLocation, Fix, Log, ReportingDescriptor, Result } from 'sa
 import { rules } from '../../rules/registry.js';
 import type { Finding, Report, Suggestion } from '../../types.js';
 import { jsonTextPieces } from './json.js';
-import type { Formatter } from '../types.js';
+import type { FormatContext, Formatter } from '../types.js';
+import { kindOfPath, linkText } from '../../routes/index.js';
+import type { LinkStyle } from '../../routes/index.js';
 import { formatSimilarity, impactOf } from './common.js';
 
 /** Rule id of suggestion results. */
@@ -66,24 +68,16 @@ function endOf(line: number, column: number, text: string): { endLine: number; e
   return { endLine: line + parts.length - 1, endColumn: parts[parts.length - 1]!.length + 1 };
 }
 
-/** Relative path from the folder of `from` to `to` (both relative to the root). */
-function relativePath(from: string, to: string): string {
-  const a = from.split('/').slice(0, -1);
-  const b = to.split('/');
-  let i = 0;
-  while (i < a.length && i < b.length - 1 && a[i] === b[i]) i++;
-  return [...a.slice(i).map(() => '..'), ...b.slice(i)].join('/');
-}
-
 /**
- * The link the fix inserts around the anchor: in Markdown a link to the target's source file
- * relative to the source (how authors link Markdown files), else to the target route; in HTML
- * an `<a href>` to the route.
+ * The link the fix inserts in place of the anchor: exactly what `apply` writes (`linkText`), in
+ * the file's link style from `ctx.linkStyles` (else `relative`, apply's style when the site has
+ * no links to follow). A target the report has no file for is linked by its route.
  */
-export function linkMarkup(s: Suggestion & { anchor: string }, targetFile: string | undefined): string {
-  if (/\.html?$/i.test(s.file)) return `<a href="${s.target}">${s.anchor}</a>`;
-  const href = targetFile !== undefined && /\.(md|markdown|mdx)$/i.test(targetFile) ? relativePath(s.file, targetFile) : s.target;
-  return `[${s.anchor}](${encodeURI(href)})`;
+export function suggestionLink(s: Suggestion & { anchor: string }, targetFile: string | undefined, style: LinkStyle): string {
+  const kind = kindOfPath(s.file) ?? 'markdown';
+  const source = { file: s.file, kind, route: s.source };
+  if (targetFile === undefined) return linkText(source, { route: s.target, file: s.target }, 'absolute', s.anchor);
+  return linkText(source, { route: s.target, file: targetFile }, style, s.anchor);
 }
 
 /** Source file by route (looked up per suggestion; a search of the pages each time was quadratic). */
@@ -91,7 +85,7 @@ function filesByRoute(report: Report): Map<string, string> {
   return new Map(report.pages.map((p) => [p.route, p.file]));
 }
 
-function suggestionResult(files: ReadonlyMap<string, string>, s: Suggestion, ruleIndex: number): Result {
+function suggestionResult(files: ReadonlyMap<string, string>, styles: FormatContext['linkStyles'], s: Suggestion, ruleIndex: number): Result {
   const region = { startLine: s.line, startColumn: s.column };
   const impact = `${formatSimilarity(s.similarity)} similar; target ${impactOf(s)}`;
   const what =
@@ -111,7 +105,7 @@ function suggestionResult(files: ReadonlyMap<string, string>, s: Suggestion, rul
                 replacements: [
                   {
                     deletedRegion: { ...region, ...endOf(s.line, s.column, s.anchor) },
-                    insertedContent: { text: linkMarkup({ ...s, anchor: s.anchor }, files.get(s.target)) },
+                    insertedContent: { text: suggestionLink({ ...s, anchor: s.anchor }, files.get(s.target), styles?.get(s.file) ?? 'relative') },
                   },
                 ],
               },
@@ -150,15 +144,18 @@ function baselineStates(report: Report): (f: Finding) => Result['baselineState']
   };
 }
 
-/** The SARIF log of a report, as an object (the formatter stringifies it). */
-export function toSarif(report: Report): Log {
+/**
+ * The SARIF log of a report, as an object (the formatter stringifies it).
+ * @param linkStyles the link style of each source file, as `apply` chose it (`FormatContext.linkStyles`)
+ */
+export function toSarif(report: Report, linkStyles?: FormatContext['linkStyles']): Log {
   const driverRules = descriptors();
   const index = new Map(driverRules.map((r, i) => [r.id, i]));
   const state = baselineStates(report);
   const files = filesByRoute(report);
   const results: Result[] = [
     ...report.findings.map((f) => findingResult(f, index.get(f.rule), state(f))),
-    ...report.suggestions.map((s) => suggestionResult(files, s, index.get(SUGGESTION_RULE)!)),
+    ...report.suggestions.map((s) => suggestionResult(files, linkStyles, s, index.get(SUGGESTION_RULE)!)),
   ];
   const root = pathToFileURL(report.root).href;
   return {
@@ -179,12 +176,12 @@ export function toSarif(report: Report): Log {
 export const sarifFormatter: Formatter = {
   id: 'sarif',
   fileExtension: '.sarif',
-  format(report) {
-    return `${JSON.stringify(toSarif(report), null, 2)}\n`;
+  format(report, ctx) {
+    return `${JSON.stringify(toSarif(report, ctx.linkStyles), null, 2)}\n`;
   },
   // The log, runs, one run, results: each result stringified alone (a large site's log is
   // longer than one string can be).
-  pieces(report) {
-    return jsonTextPieces(toSarif(report), 4);
+  pieces(report, ctx) {
+    return jsonTextPieces(toSarif(report, ctx.linkStyles), 4);
   },
 };

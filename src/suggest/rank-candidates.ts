@@ -25,8 +25,8 @@ import { contentNeighbours } from './proximity.js';
 import { contributions } from './logistic.js';
 import { adamicAdar, routeFolders, sharedSegments, twoStepPaths } from './proximity.js';
 import type { Evidence } from './reason.js';
-import { chooseSuggestions } from './select.js';
-import type { Chosen, ScoredPair } from './select.js';
+import { pickUnderCaps } from './pick.js';
+import type { Chosen, ScoredPair } from './pick.js';
 import { factsByPage } from './facts-of.js';
 import type { SuggestInput } from './types.js';
 
@@ -36,7 +36,7 @@ export const KEY_TERMS = 5;
 export const STRONG_LEADERS = 3;
 
 /** The choice and the model behind it. */
-export interface ChooseResult {
+export interface RankedCandidates {
   /** In the order they were chosen (best score first, caps applied). */
   readonly chosen: Chosen[];
   readonly model: LogisticModel;
@@ -52,7 +52,7 @@ export interface ChooseResult {
  * The suggestions chosen for `targets`.
  * @param rankPct PageRank percentile per page id
  */
-export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, targets: readonly number[], rankPct: ArrayLike<number>): ChooseResult {
+export function rankCandidates(input: SuggestInput, options: ResolvedOptions, targets: readonly number[], rankPct: ArrayLike<number>): RankedCandidates {
   const { graph, ranking, index, related } = input;
   const n = graph.pages.length;
   const factsOf = factsByPage(input);
@@ -89,7 +89,7 @@ export function chooseForTargets(input: SuggestInput, options: ResolvedOptions, 
     }
   }
   const perSource = settings.perSource === 0 ? Number.POSITIVE_INFINITY : settings.perSource;
-  const chosen = fallbackAnchors(input, chooseSuggestions(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
+  const chosen = fallbackAnchors(input, pickUnderCaps(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
     const shared = sharedSegments(ctx.folders[s]!, ctx.folders[t]!);

@@ -5,9 +5,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Config } from '../../src/options.js';
-import { normalizeRoute, routeOfFile } from '../../src/parse/index.js';
+import { normalizeRoute, routeOfFile } from '../../src/routes/index.js';
 import type { PageMeta } from '../../src/types.js';
-import { md, options } from './helpers.js';
+import { md, options } from '../parse/helpers.js';
 
 const NO_META: Pick<PageMeta, 'slug' | 'permalink'> = {};
 

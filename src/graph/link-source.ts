@@ -3,8 +3,7 @@
  * against, computed once per page.
  */
 import type { FileKind } from '../types.js';
-import { encodeRouteSegment } from './normalize.js';
-import { DOT_SEGMENT } from './paths.js';
+import { DOT_SEGMENT, encodeRouteSegment } from '../routes/index.js';
 
 /** The synthetic origin routes are resolved against. `.invalid` is reserved (RFC 2606). */
 export const SITE_ORIGIN = 'https://linkweave.invalid';

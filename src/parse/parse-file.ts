@@ -9,12 +9,12 @@ import { findIncludes } from './includes.js';
 import { describeError } from './failure.js';
 import { EMPTY_META } from './frontmatter.js';
 import { readHtmlPage } from './html.js';
-import type { LineIndex } from './lines.js';
-import { buildLineIndex, positionOf } from './lines.js';
+import type { LineIndex } from '../util/line-index.js';
+import { buildLineIndex, positionOf } from '../util/line-index.js';
 import { readMarkdownPage } from './markdown-page.js';
 import { addPatternLinks } from './patterns.js';
 import { protectDraft } from './protect.js';
-import { routeOfFile } from './routes.js';
+import { routeOfFile } from '../routes/index.js';
 import type { PageDraft, Read } from './types.js';
 import { newDraft } from './types.js';
 

@@ -17,18 +17,13 @@
  *    (and `/a/b.html` for route style `html`), so a link to `/a/b` finds the page `/a/b/`.
  *
  * Dot segments are not handled here: WHATWG `URL` removes them before a path gets here.
- * This module is dependency-free so that the parse stage can use the same functions.
+ * This module is part of the ground floor, so that parse and graph use the same functions.
  */
-import type { ResolvedOptions } from '../options.js';
-
-/** The route options the normalisation reads. */
-export type RouteOptions = ResolvedOptions['routes'];
+import { extensionOf } from './extensions.js';
+import type { RouteOptions } from './types.js';
 
 /** A `%` to decode, or a character `encodeRouteSegment` encodes. */
 const NEEDS_CODING = /[%\\?#\u0000-\u001f\u007f]/;
-
-const SOURCE_EXTENSIONS = new Set(['.md', '.markdown', '.mdx', '.html', '.htm']);
-const MARKDOWN_EXTENSIONS = new Set(['.md', '.markdown', '.mdx']);
 
 /**
  * Encode one decoded path segment into its canonical form: only `%`, `/`, `\`, `?`, `#`, C0
@@ -147,25 +142,4 @@ export function lookupKey<T>(index: ReadonlyMap<string, T>, key: string, routes:
   if (folder !== undefined) return folder;
   if (routes.style === 'html' && extensionOf(key) === '') return index.get(key + '.html');
   return undefined;
-}
-
-/**
- * Extension of the last segment of a path, lower-cased, with its dot (`/a/b.PNG` -> `.png`);
- * '' when the last segment has none (or ends in a dot, or starts with its only dot).
- */
-export function extensionOf(path: string): string {
-  const slash = path.lastIndexOf('/');
-  const dot = path.lastIndexOf('.');
-  if (dot <= slash + 1 || dot === path.length - 1) return '';
-  return path.slice(dot).toLowerCase();
-}
-
-/** True for `.md`, `.markdown`, `.mdx`, `.html`, `.htm` (any case). */
-export function isSourceExtension(ext: string): boolean {
-  return SOURCE_EXTENSIONS.has(ext);
-}
-
-/** True for `.md`, `.markdown`, `.mdx` (any case). */
-export function isMarkdownExtension(ext: string): boolean {
-  return MARKDOWN_EXTENSIONS.has(ext);
 }

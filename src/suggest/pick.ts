@@ -40,7 +40,7 @@ interface Entry {
  * Choose suggestions greedily.
  * @returns chosen pairs in the order they were chosen
  */
-export function chooseSuggestions(pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): Chosen[] {
+export function pickUnderCaps(pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): Chosen[] {
   const before = (a: Entry, b: Entry): boolean => {
     if (a.score !== b.score) return a.score > b.score;
     const pa = pairs[a.pair]!;

@@ -1,22 +1,18 @@
 /**
  * Routes (URL paths) of source files, DESIGN section 3.
  *
- * Routes come out in the canonical form of `src/graph/normalize.ts` (the one normalisation the
- * parse and graph stages share, kept dependency-free there for this use): segments decoded, with
+ * Routes come out in the canonical form of `normalize.ts` (the one normalisation the
+ * parse and graph stages share): segments decoded, with
  * only `%`, `/`, `\`, `?`, `#` and control characters percent-encoded, so `/caf%C3%A9/` and
  * `/café/` are one route, shown `/café/`, and a file `a b.md` has the route `/a b/`. Case is
- * kept; with `routes.caseInsensitive` the graph folds case in its lookup keys (`normalizeRoute`,
- * re-exported here, gives that key).
+ * kept; with `routes.caseInsensitive` the graph folds case in its lookup keys (`normalizeRoute`
+ * gives that key).
  */
-import { canonicalPath, encodeRouteSegment, normalizedBasePath } from '../graph/normalize.js';
-import type { RouteOptions } from '../graph/normalize.js';
-import { removeDotSegments } from '../graph/paths.js';
 import type { PageMeta } from '../types.js';
-
-export { normalizeRoute } from '../graph/normalize.js';
-
-const MARKDOWN_EXT = /\.(?:md|markdown|mdx)$/i;
-const HTML_EXT = /\.html?$/i;
+import { HTML_EXTENSION_END as HTML_EXT, MARKDOWN_EXTENSION_END as MARKDOWN_EXT } from './extensions.js';
+import { canonicalPath, encodeRouteSegment, normalizedBasePath } from './normalize.js';
+import { removeDotSegments } from './paths.js';
+import type { RouteOptions } from './types.js';
 
 /**
  * The route of a source file (its URL path), in canonical form.
@@ -105,15 +101,4 @@ function completeRoute(route: string, style: RouteOptions['style']): string {
  */
 function canonicalUrlPath(path: string): string {
   return removeDotSegments(canonicalPath(path) ?? canonicalPath(path.split('/').map(encodeRouteSegment).join('/')) ?? path);
-}
-
-/**
- * True when a path names a source file by its extension (`.md`, `.markdown`, `.mdx`, `.html`,
- * `.htm`), ignoring any query or fragment.
- * @param href a link destination or route
- */
-export function hasSourceExtension(href: string): boolean {
-  const cut = href.search(/[?#]/);
-  const path = cut >= 0 ? href.slice(0, cut) : href;
-  return MARKDOWN_EXT.test(path) || HTML_EXT.test(path);
 }

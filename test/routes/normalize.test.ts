@@ -7,8 +7,8 @@ import {
   normalizeRoute,
   normalizedBasePath,
   withBasePath,
-} from '../../src/graph/index.js';
-import { options } from './facts.js';
+} from '../../src/routes/index.js';
+import { options } from '../graph/facts.js';
 
 const routes = options().routes;
 const folded = options({ routes: { caseInsensitive: true } }).routes;
