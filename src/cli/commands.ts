@@ -3,43 +3,21 @@
  * flags and the function that runs it.
  */
 import { resolve } from 'node:path';
-import { analyze } from '../analyze.js';
 import { readCachedOutput, saveCachedOutput } from '../cache/index.js';
 import type { ReportCacheInfo } from '../cache/index.js';
-import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
-import type { Config } from '../options.js';
+import { runPrepared } from '../pipeline/index.js';
 import { formatReportPieces, summaryLines } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
 import { FLAGS, SUGGEST_FLAGS } from './args.js';
-import type { CommandInfo, FlagSpec, FlagValues, FormatName } from './args.js';
+import type { CommandInfo, FlagSpec } from './args.js';
+import { BACKTEST_FLAGS } from './backtest-flags.js';
+import { BACKTEST_SUMMARY, runBacktestCommand } from './backtest.js';
+import type { CommandContext } from './context.js';
 import { colorEnabled } from './io.js';
-import type { CliIo } from './io.js';
 import { checkOutputPath, formatFromOutput } from './output.js';
 import { progressHooks } from './progress.js';
 import { APPLY_FLAGS, APPLY_SUMMARY, runApplyCommand } from './apply.js';
 import { readReviewInputs, withComparison, writeBaselineIfAsked, REVIEW_FLAGS } from './review.js';
-
-/** The flags every command shares, typed. */
-export interface CommonFlags {
-  readonly format: FormatName | null;
-  readonly output: string | null;
-  readonly quiet: boolean;
-  readonly progress: boolean;
-}
-
-/** Everything a command gets: the process, the content root, the configuration and the flags. */
-export interface CommandContext {
-  readonly io: CliIo;
-  /** Absolute content root. */
-  readonly root: string;
-  /** The configuration file's object with the flags merged over it (validated before). */
-  readonly config: Config;
-  /** Where the configuration came from, for messages. */
-  readonly configOrigin: string;
-  readonly flags: CommonFlags;
-  /** All flag values by name, including the command's own flags. */
-  readonly values: FlagValues;
-}
 
 /** A command: what the parser and help know, plus how it runs. Returns the exit code. */
 export interface Command extends CommandInfo {
@@ -125,7 +103,7 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
       if (!flags.quiet) io.stderr.write(`linkweave: ${message}\n`);
     };
     const hooks = { ...(progress?.hooks ?? {}), onNote, onReportCache: (info: ReportCacheInfo) => (cache.info = info) };
-    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, hooks);
+    report = await runPrepared({ ...ctx.run, command, ...baseline }, hooks);
   } finally {
     progress?.done();
   }

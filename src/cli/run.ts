@@ -4,13 +4,14 @@
  */
 import { resolve } from 'node:path';
 import { isEngineError } from '../errors.js';
-import { DEFAULT_OPTIONS, resolveOptions } from '../options.js';
+import { DEFAULT_OPTIONS } from '../options.js';
 import type { Config } from '../options.js';
+import { prepare } from '../pipeline/index.js';
 import { VERSION } from '../version.js';
 import { helpText, parseArgs } from './args.js';
 import type { FlagValues, FormatName } from './args.js';
 import { COMMANDS } from './commands.js';
-import type { CommonFlags } from './commands.js';
+import type { CommonFlags } from './context.js';
 import { loadConfig } from './config.js';
 import { debugEnabled } from './io.js';
 import type { CliIo } from './io.js';
@@ -38,16 +39,15 @@ export async function run(argv: readonly string[], io: CliIo): Promise<number> {
     const root = resolve(io.cwd, parsed.root ?? '.');
     const values = parsed.flags;
     const loaded = await loadConfig({ explicit: stringFlag(values, 'config'), root, cwd: io.cwd });
-    // Validate the file on its own first, so a bad key is reported against the file.
-    resolveOptions(loaded.config, root, loaded.origin);
-    return await command.run({
-      io,
-      root,
-      config: withCacheDir(withFlags(loaded.config as Config, values), io.cwd),
-      configOrigin: loaded.origin,
-      flags: commonFlags(values),
-      values,
-    });
+    const config = withCacheDir(withFlags(loaded.config as Config, values), io.cwd);
+    const flags = commonFlags(values);
+    // The pipeline's prepare stage, once for the whole command: options resolved (a bad key
+    // named against the file), the generator preset read (its summary on stderr), checks validated.
+    const onNote = (message: string): void => {
+      if (!flags.quiet) io.stderr.write(`linkweave: ${message}\n`);
+    };
+    const prepared = prepare({ ...config, root, command: command.name === 'suggest' ? 'suggest' : 'check', configOrigin: loaded.origin }, { onNote });
+    return await command.run({ io, root, config, configOrigin: loaded.origin, flags, values, run: prepared });
   } catch (error) {
     return reportError(error, io);
   }

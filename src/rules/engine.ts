@@ -72,13 +72,14 @@ function settingOf(
  * Run every rule whose level is not `none` and return their findings with rule id and severity,
  * sorted by file, line, column, rule and message. Findings on pages marked
  * `linkweave.exclude` are dropped.
+ * @param settings the settings `validateRuleConfig` gave for `known` (the pipeline validates once, in its prepare stage)
  * @throws EngineError `E_CONFIG_INVALID` for a bad `checks` configuration (see `validateRuleConfig`)
  */
 export function runRules(
   ctx: RuleContext,
   known: readonly Rule[] = builtinRules,
+  settings: readonly RuleSetting[] = validateRuleConfig(ctx.options, 'configuration', known),
 ): Finding[] {
-  const settings = validateRuleConfig(ctx.options, 'configuration', known);
   const excluded = new Set(ctx.facts.filter((f) => f.meta.exclude).map((f) => f.file));
   const findings: Finding[] = [];
   for (const { rule, level, options } of settings) {

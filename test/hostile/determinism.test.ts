@@ -11,7 +11,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { collectInputs, finishAnalysis } from '../../src/analyze.js';
+import { collectInputs, finishAnalysis } from '../../src/pipeline/index.js';
 import type { AnalyzeInput } from '../../src/analyze.js';
 import { resolveOptions } from '../../src/options.js';
 import { parseSource } from '../../src/parse/index.js';

@@ -6,7 +6,7 @@ import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { collectInputs, finishAnalysis } from '../../src/analyze.js';
+import { collectInputs, finishAnalysis } from '../../src/pipeline/index.js';
 import { readSource } from '../../src/collect/index.js';
 import type { CollectWarning } from '../../src/collect/index.js';
 import { resolveOptions } from '../../src/options.js';
