@@ -8,7 +8,7 @@ import type { ReportCacheInfo } from '../cache/index.js';
 import { runPrepared } from '../pipeline/index.js';
 import { formatReportPieces, summaryLines } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
-import { FLAGS, SUGGEST_FLAGS } from './args.js';
+import { applyArgsOf, FLAGS, SUGGEST_FLAGS } from './args.js';
 import type { CommandInfo, FlagSpec } from './args.js';
 import { BACKTEST_FLAGS } from './backtest-flags.js';
 import { BACKTEST_SUMMARY, runBacktestCommand } from './backtest.js';
@@ -61,7 +61,16 @@ export const COMMANDS: readonly Command[] = [
   {
     name: 'apply',
     summary: APPLY_SUMMARY,
-    flags: [...APPLY_FLAGS, FLAGS.config, FLAGS.quiet, FLAGS.noCache],
+    // The suggestion-shaping flags of `suggest`, so a printed apply command runs as printed.
+    flags: [
+      ...APPLY_FLAGS,
+      FLAGS.config,
+      { ...FLAGS.maxDepth, description: 'deepest click depth the depth-repair suggestions aim at, as given to suggest (config maxDepth)' },
+      FLAGS.preset,
+      ...SUGGEST_FLAGS,
+      FLAGS.quiet,
+      FLAGS.noCache,
+    ],
     exitCodes:
       '0 every chosen link was written (with --dry-run: could be); 1 some were refused (the file changed, overlapping anchors, no anchor phrase); 2 usage, an unknown id, a bad --from report or a file that could not be written.',
     run: runApplyCommand,
@@ -112,8 +121,11 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
   // The text report shows paths relative to the working folder, wrapped to the terminal.
-  // The printed apply command reads the same configuration file as this run.
-  const config = typeof ctx.values.config === 'string' ? { applyArgs: ['--config', ctx.values.config] } : {};
+  // The printed apply command reads the same configuration file and repeats the flags that
+  // shape the suggestions (--targets, --per-*, --max-depth, --preset), so its own suggest run
+  // makes the same suggestions and finds the printed ids.
+  const applyArgs = applyArgsOf(ctx.values);
+  const config = applyArgs.length > 0 ? { applyArgs } : {};
   const terminal = { color, cwd: io.cwd, ...config, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
   if (output === null) {
     for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);
