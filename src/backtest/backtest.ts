@@ -7,7 +7,7 @@
  * each run (seed, seed + 1, ...) holds a share of the content-link pairs out, rebuilds graph and
  * ranking, runs the suggestion stage and scores it and the baselines (run-once.ts).
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { graphOf, textOf } from '../pipeline/index.js';
 import type { CollectedInputs } from '../pipeline/index.js';
 import type { PageFacts } from '../types.js';

@@ -4,7 +4,7 @@
  * the same `chooseForTargets` that `suggestLinks` runs. test/backtest/choose.test.ts checks the
  * result equals `suggestLinks`' own suggestions on a generated site.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { chooseForTargets, pagerankPercentiles } from '../suggest/index.js';
 import type { ChooseResult, SuggestInput } from '../suggest/index.js';
 

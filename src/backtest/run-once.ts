@@ -9,7 +9,7 @@
  * once, backtest.ts) are used.
  */
 import { EngineError } from '../errors.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { graphOf, rankOf, textOf } from '../pipeline/index.js';
 import type { SiteInputs, TextResults } from '../pipeline/index.js';
 import { findCandidates, hasContentLink } from '../suggest/index.js';

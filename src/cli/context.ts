@@ -1,6 +1,6 @@
 /** What every command gets from the CLI (run.ts builds it; commands.ts and the command files read it). */
 import type { PreparedRun } from '../pipeline/index.js';
-import type { Config } from '../options.js';
+import type { Config } from '../config/options.js';
 import type { FlagValues, FormatName } from './args.js';
 import type { CliIo } from './io.js';
 

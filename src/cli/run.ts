@@ -4,15 +4,15 @@
  */
 import { resolve } from 'node:path';
 import { isEngineError } from '../errors.js';
-import { DEFAULT_OPTIONS } from '../options.js';
-import type { Config } from '../options.js';
+import { DEFAULT_OPTIONS } from '../config/options.js';
+import type { Config } from '../config/options.js';
 import { prepare } from '../pipeline/index.js';
 import { VERSION } from '../version.js';
 import { helpText, parseArgs } from './args.js';
 import type { FlagValues, FormatName } from './args.js';
 import { COMMANDS } from './commands.js';
 import type { CommonFlags } from './context.js';
-import { loadConfig } from './config.js';
+import { loadConfig } from '../config/discover.js';
 import { debugEnabled } from './io.js';
 import type { CliIo } from './io.js';
 

@@ -19,7 +19,7 @@
  * Dot segments are not handled here: WHATWG `URL` removes them before a path gets here.
  * This module is dependency-free so that the parse stage can use the same functions.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 
 /** The route options the normalisation reads. */
 export type RouteOptions = ResolvedOptions['routes'];

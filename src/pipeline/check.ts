@@ -1,5 +1,5 @@
 /** The check stage: every configured check run over the site (rules/), with the settings prepared once. */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { runRules, rules as builtinRules } from '../rules/index.js';
 import type { RuleSetting } from '../rules/index.js';
 import type { Finding, PageFacts, Ranking, SiteGraph } from '../types.js';

@@ -3,7 +3,7 @@
  * traffic), with what the generator preset adds (its navigation list and redirects).
  */
 import { collectSources, readAuxFile } from '../collect/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseNavigation, parseRedirects } from '../parse/index.js';
 import type { Redirect } from '../parse/index.js';
 import type { PresetRun } from '../preset/index.js';

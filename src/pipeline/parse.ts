@@ -7,7 +7,7 @@ import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { parseWithCache } from '../cache/index.js';
 import type { CollectResult } from '../collect/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseFiles } from '../parallel/index.js';
 import type { WorkerStats } from '../parallel/index.js';
 import type { PageFacts } from '../types.js';

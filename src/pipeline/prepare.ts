@@ -4,8 +4,8 @@
  * (check, suggest, apply, backtest, the plugins) starts here, once per run.
  */
 import { resolve } from 'node:path';
-import { resolveOptions } from '../options.js';
-import type { Config } from '../options.js';
+import { resolveOptions } from '../config/options.js';
+import type { Config } from '../config/options.js';
 import { configWithPreset, readPreset } from '../preset/index.js';
 import { validateRuleConfig } from '../rules/index.js';
 import type { AnalyzeHooks, AnalyzeInput, PreparedRun } from './types.js';

@@ -1,5 +1,5 @@
 /** The report stage: the report of a run from the stages' results (report/). */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { buildReport } from '../report/index.js';
 import type { SuggestResult } from '../suggest/index.js';
 import type { Finding, Ranking, Report, SiteGraph } from '../types.js';

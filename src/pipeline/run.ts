@@ -7,7 +7,7 @@
 import { resolve } from 'node:path';
 import { readResult, resultKey, writeResult } from '../cache/index.js';
 import type { ResultInputs } from '../cache/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { validateRuleConfig } from '../rules/index.js';
 import type { RuleSetting } from '../rules/index.js';
 import type { SuggestResult } from '../suggest/index.js';

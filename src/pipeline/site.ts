@@ -4,7 +4,7 @@
  */
 import { buildGraph } from '../graph/index.js';
 import type { GraphInput } from '../graph/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { rankGraph } from '../rank/index.js';
 import type { PageFacts, Ranking, SiteGraph } from '../types.js';
 import type { CollectedInputs } from './types.js';

@@ -1,5 +1,5 @@
 /** The suggest stage: importance, under-linked pages and the link model's suggestions (suggest/). */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { suggestLinks } from '../suggest/index.js';
 import type { SuggestResult } from '../suggest/index.js';
 import type { PageFacts, Ranking, SiteGraph } from '../types.js';

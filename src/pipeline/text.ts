@@ -2,7 +2,7 @@
  * The text stage: the term index of the pages' texts (TF-IDF), each page's related pages and
  * content centrality. The stem cache it fills is handed on to the suggest stage.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { buildTermIndex, contentCentrality, createStemCache, relatedPages } from '../text/index.js';
 import type { StemCache } from '../text/index.js';
 import type { PageFacts, RelatedList, TermIndex } from '../types.js';

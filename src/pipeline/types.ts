@@ -3,7 +3,7 @@
  * Plain values only; the stage functions are in this folder, one file each.
  */
 import type { CollectResult } from '../collect/index.js';
-import type { Config, ResolvedOptions } from '../options.js';
+import type { Config, ResolvedOptions } from '../config/options.js';
 import type { ParseHooks } from '../parallel/index.js';
 import type { Redirect } from '../parse/index.js';
 import type { PresetRun } from '../preset/index.js';

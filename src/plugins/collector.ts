@@ -8,7 +8,7 @@
 import fs from 'node:fs';
 import { isAbsolute, relative, resolve, sep } from 'node:path';
 import { EngineError } from '../errors.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseSource } from '../parse/index.js';
 import { collect, finishAnalysis, prepare } from '../pipeline/index.js';
 import type { AnalyzeInput, PreparedRun } from '../pipeline/index.js';

@@ -2,10 +2,10 @@
  * The rule engine: applies the configured level and options to each rule, runs it and
  * stamps its findings (as unified-lint-rule does for lint messages).
  */
-import { expectedGot } from '../config-issues.js';
+import { expectedGot } from '../config/issues.js';
 import { EngineError } from '../errors.js';
-import type { ResolvedOptions } from '../options.js';
-import type { Level } from '../config.js';
+import type { ResolvedOptions } from '../config/options.js';
+import type { Level } from '../config/config.js';
 import type { Finding, Severity } from '../types.js';
 import type { Rule, RuleContext, RuleFinding } from './types.js';
 import { rules as builtinRules } from './registry.js';

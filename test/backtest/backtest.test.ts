@@ -20,7 +20,7 @@ import type { BacktestResult, MethodId, MethodScores } from '../../src/backtest/
 import { formatBacktestJson } from '../../src/cli/backtest-format.js';
 import { run } from '../../src/cli/run.js';
 import { prepare, readSite } from '../../src/pipeline/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { tempDir } from '../collect/tree.js';
 
 let dir: string;

@@ -8,7 +8,7 @@ import { generateSiteInMemory } from '../../bench/generate.js';
 import { backtestOptions, chooseLikeSuggest } from '../../src/backtest/index.js';
 import { textOf } from '../../src/pipeline/index.js';
 import { buildGraph } from '../../src/graph/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import { rankGraph } from '../../src/rank/index.js';
 import { suggestLinks } from '../../src/suggest/index.js';

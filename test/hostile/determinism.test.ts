@@ -13,7 +13,7 @@ import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { collectInputs, finishAnalysis } from '../../src/pipeline/index.js';
 import type { AnalyzeInput } from '../../src/analyze.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { Report } from '../../src/types.js';
 import { allFormats, cleanupAll, run, scratch } from './helpers.js';

@@ -9,7 +9,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { collectInputs, finishAnalysis } from '../../src/pipeline/index.js';
 import { readSource } from '../../src/collect/index.js';
 import type { CollectWarning } from '../../src/collect/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { SourceFile } from '../../src/types.js';
 import { cleanupAll, expectHealthyRest, findingsOf, healthy, project, run } from './helpers.js';

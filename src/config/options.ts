@@ -4,10 +4,10 @@
  * `ResolvedOptions` with nothing optional.
  */
 import { z } from 'zod';
-import { describeIssue, oldFormProblem } from './config-issues.js';
-import { EngineError } from './errors.js';
-import { HEADING_ID_STYLES } from './parse/heading-ids.js';
-import { PRESET_NAMES } from './preset/names.js';
+import { describeIssue, oldFormProblem } from './issues.js';
+import { EngineError } from '../errors.js';
+import { HEADING_ID_STYLES } from '../parse/heading-ids.js';
+import { PRESET_NAMES } from '../preset/names.js';
 
 /** How much a check's findings weigh: SARIF's levels (`none` = the check does not run). */
 export const LEVELS = ['error', 'warning', 'none'] as const;
@@ -164,7 +164,7 @@ const schema = z.strictObject({
     .prefault({}),
 });
 
-/** Configuration as a user writes it (every key optional), documented key by key in src/config.ts. */
+/** Configuration as a user writes it (every key optional), documented key by key in config.ts. */
 export type { Config } from './config.js';
 
 /** The schema's input type; `test/types/config.test-d.ts` checks it equals `Config`. */
