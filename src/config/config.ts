@@ -129,7 +129,10 @@ export interface Config {
   include?: string[] | undefined;
   /** Extra globs to leave out (node_modules, dot-folders and the output file are always left out). @default [] */
   exclude?: string[] | undefined;
-  /** How file paths become routes. @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, headingIds: 'auto', headingIdsDefault: 'github' } */
+  /**
+   * How file paths become routes.
+   * @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, folders: {}, dated: [], absoluteLinksUnderBase: false, headingIds: 'auto', headingIdsDefault: 'github' }
+   */
   routes?: RoutesConfig | undefined;
   /**
    * Site generator whose own config files (book.toml, hugo.toml, mkdocs.yml, ...) set the content
