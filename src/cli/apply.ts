@@ -50,7 +50,7 @@ export const APPLY_FLAGS: readonly FlagSpec[] = [
 
 /** Run `apply`; returns the exit code. */
 export async function runApplyCommand(ctx: CommandContext): Promise<number> {
-  const { io, values, root } = ctx;
+  const { io, values } = ctx;
   for (const flag of ['format', 'output'] as const) {
     if (values[flag] !== undefined) throw new EngineError('E_USAGE', `flag --${flag} is not used by "apply" (it prints a summary, or a diff with --dry-run)`);
   }
