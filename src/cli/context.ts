@@ -1,6 +1,5 @@
 /** What every command gets from the CLI (run.ts builds it; commands.ts and the command files read it). */
 import type { PreparedRun } from '../pipeline/index.js';
-import type { Config } from '../config/options.js';
 import type { FlagValues, FormatName } from './args.js';
 import type { CliIo } from './io.js';
 
@@ -17,8 +16,6 @@ export interface CommandContext {
   readonly io: CliIo;
   /** Absolute content root, as given on the command line (a generator preset may move it: see `prepare`). */
   readonly root: string;
-  /** The configuration file's object with the flags merged over it (not yet resolved). */
-  readonly config: Config;
   /** Where the configuration came from, for messages. */
   readonly configOrigin: string;
   readonly flags: CommonFlags;

@@ -3,7 +3,8 @@
  * suggest, check, report) and the runner that calls them in order with the hooks. Every
  * command composes these; none reaches into another command's code.
  */
-export { prepare } from './prepare.js';
+export { prepare, prepareConfig } from './prepare.js';
+export type { OptionsOverride, RunSettings } from './prepare.js';
 export { collect, collectInputs } from './collect.js';
 export { parseAll } from './parse.js';
 export { graphOf, graphNotes, rankOf, siteInputs } from './site.js';
