@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { CONFIG_FILE } from './generate.js';
 import type { Built } from './lib.js';
-import type { Config, ResolvedOptions } from '../src/options.js';
+import type { Config, ResolvedOptions } from '../src/config/options.js';
 import type { PageFacts, SiteGraph, SourceFile } from '../src/types.js';
 
 /** The generated site's configuration, as the bench passes it to `analyze`. */

@@ -22,7 +22,7 @@
  * Edits are made from the end of the file backwards, so every offset still refers to the
  * original text; nothing but the link markup is inserted.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { buildLineIndex, parseSource, positionOf } from '../parse/index.js';
 import { NO_ANCHOR } from './select.js';
 import type { CodeSpan, ProtectedRegion, RawLink, SourceFile, Suggestion } from '../types.js';

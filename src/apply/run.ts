@@ -8,7 +8,7 @@
 import fs from 'node:fs';
 import { join } from 'node:path';
 import { collectSources, kindOfPath, readSource } from '../collect/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseSource } from '../parse/index.js';
 import type { TempFileTracker } from '../report/write.js';
 import { writeFileAtomic } from '../report/write.js';

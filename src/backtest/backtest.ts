@@ -5,15 +5,15 @@
  *
  * The site is built once as it is (graph, term index, related pages, content centrality); then
  * each run (seed, seed + 1, ...) holds a share of the content-link pairs out, rebuilds graph and
- * ranking, runs the suggestion stage and scores it and the two baselines (score.ts).
+ * ranking, runs the suggestion stage and scores it and the baselines (run-once.ts).
  */
-import type { CollectedInputs } from '../analyze.js';
-import { buildGraph } from '../graph/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
+import { graphOf, textOf } from '../pipeline/index.js';
+import type { CollectedInputs } from '../pipeline/index.js';
 import type { PageFacts } from '../types.js';
 import { contentPairs, eligiblePairs } from './holdout.js';
 import { spread } from './metrics.js';
-import { backtestOptions, runOnce, textStage } from './score.js';
+import { backtestOptions, runOnce } from './run-once.js';
 import type { BacktestResult, BacktestSettings, MethodId, MethodScores, MethodSummary, RunResult, Spread } from './types.js';
 
 /** What the backtest works from: what `analyze` would have collected and parsed. */
@@ -36,10 +36,10 @@ export const METHODS: readonly MethodId[] = ['linkweave', 'tfidf', 'title-phrase
 export function backtest(input: BacktestInput, settings: BacktestSettings, onRun?: (done: number, total: number) => void): BacktestResult {
   const { options, facts, collected } = input;
   const aux = { assets: collected.sources.assets, navigation: collected.navigation, redirects: collected.redirects };
-  const graph = buildGraph({ ...aux, pages: facts }, options);
+  const graph = graphOf(facts, aux, options);
   const n = graph.pages.length;
   // Needed as it is only when the held-out links' words stay in the pages.
-  const text = settings.keepLinkText ? textStage(graph.pages.map((p) => facts[p.factsIndex]!), options) : null;
+  const text = settings.keepLinkText ? textOf(graph.pages.map((p) => facts[p.factsIndex]!), options) : null;
   const pairs = contentPairs(graph);
   const texts = new Map(collected.sources.files.map((f) => [f.path, f.text] as const));
   const runOptions = backtestOptions(options, n);

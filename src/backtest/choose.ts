@@ -4,7 +4,7 @@
  * the same `rankCandidates` that `suggestLinks` runs. test/backtest/choose.test.ts checks the
  * result equals `suggestLinks`' own suggestions on a generated site.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { rankCandidates, pagerankPercentiles } from '../suggest/index.js';
 import type { RankedCandidates, SuggestInput } from '../suggest/index.js';
 

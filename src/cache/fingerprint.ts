@@ -1,5 +1,5 @@
 /** The one list of configuration keys that change what `parseSource` extracts from a file. */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 
 /**
  * Every option `src/parse/` reads (a test records the reads of `parseSource` and checks it

@@ -1,5 +1,5 @@
 /** The parse stage with the cache in front: lookups, then the misses parsed, then the cache saved. */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { PageFacts, SourceFile } from '../types.js';
 import { codeVersion } from './code.js';
 import { parseFingerprint } from './fingerprint.js';

@@ -19,15 +19,15 @@
  * what it found: the rest were applied; 2 usage (no `--ids`/`--all`, an unknown id), an
  * unreadable or invalid `--from` report, or a file that could not be written.
  */
-import { analyze } from '../analyze.js';
 import { applySuggestions, LINK_STYLES } from '../apply/index.js';
 import type { AppliedLink, ApplyResult, LinkStyle, Selection } from '../apply/index.js';
 import { parseReportFile } from '../compare/index.js';
 import { EngineError } from '../errors.js';
-import { resolveOptions } from '../options.js';
+import { runPrepared } from '../pipeline/index.js';
+import type { PreparedRun } from '../pipeline/index.js';
 import { displayPath } from '../report/formatters/common.js';
 import type { FlagSpec } from './args.js';
-import type { CommandContext } from './commands.js';
+import type { CommandContext } from './context.js';
 import { readUserFile } from './review.js';
 
 /** One line of help for `apply`. */
@@ -50,17 +50,18 @@ export const APPLY_FLAGS: readonly FlagSpec[] = [
 
 /** Run `apply`; returns the exit code. */
 export async function runApplyCommand(ctx: CommandContext): Promise<number> {
-  const { io, values, root } = ctx;
+  const { io, values } = ctx;
   for (const flag of ['format', 'output'] as const) {
     if (values[flag] !== undefined) throw new EngineError('E_USAGE', `flag --${flag} is not used by "apply" (it prints a summary, or a diff with --dry-run)`);
   }
   const selection = selectionOf(values);
   const dryRun = values['dry-run'] === true;
   const linkStyle = typeof values['link-style'] === 'string' ? (values['link-style'] as LinkStyle) : null;
-  const options = resolveOptions(ctx.config, root, ctx.configOrigin);
+  // Prepared once by the CLI: the same options (generator preset included) as check and suggest.
+  const { options } = ctx.run;
   const fromPath = typeof values.from === 'string' ? values.from : null;
-  const report = fromPath === null ? await suggestNow(ctx, dryRun) : parseReportFile(readUserFile(io.cwd, fromPath, 'from'), fromPath);
-  const show = (f: string) => displayPath(f, root, io.cwd);
+  const report = fromPath === null ? await suggestNow(ctx.run, dryRun) : parseReportFile(readUserFile(io.cwd, fromPath, 'from'), fromPath);
+  const show = (f: string) => displayPath(f, options.root, io.cwd);
   const result = await applySuggestions({
     options,
     report,
@@ -103,9 +104,9 @@ function selectionOf(values: CommandContext['values']): Selection {
 }
 
 /** A `suggest` run now; in a dry run without the cache, so nothing at all is written. */
-async function suggestNow(ctx: CommandContext, dryRun: boolean) {
-  const config = dryRun ? { ...ctx.config, cache: { ...ctx.config.cache, enabled: false } } : ctx.config;
-  return analyze({ ...config, root: ctx.root, command: 'suggest', configOrigin: ctx.configOrigin });
+async function suggestNow(run: PreparedRun, dryRun: boolean) {
+  const options = dryRun ? { ...run.options, cache: { ...run.options.cache, enabled: false } } : run.options;
+  return runPrepared({ ...run, options, command: 'suggest' });
 }
 
 const ORIGIN_WORDS = { flag: '--link-style', file: "the file's own links", site: "the site's links", default: 'default' } as const;

@@ -75,6 +75,26 @@ export const SUGGEST_FLAGS: readonly FlagSpec[] = [
   { name: 'per-source', kind: 'string', value: 'N', minInteger: 0, description: 'most new links per source page, 0 = no cap (config suggest.perSource)' },
 ];
 
+/**
+ * The flags that change which suggestions a run makes (and so their ids): `suggest` takes them,
+ * and `apply` takes them too, so the apply command a report prints repeats them and finds the
+ * same ids in its own suggest run.
+ */
+export const SELECTION_FLAG_NAMES: readonly string[] = ['max-depth', 'preset', 'targets', 'per-target', 'per-source'];
+
+/**
+ * The words to repeat in a printed apply command so it makes the same suggestions as this run:
+ * `--config FILE` and every selection flag given, in that order.
+ */
+export function applyArgsOf(values: FlagValues): string[] {
+  const args: string[] = [];
+  for (const name of ['config', ...SELECTION_FLAG_NAMES]) {
+    const v = values[name];
+    if (typeof v === 'string' || typeof v === 'number') args.push(`--${name}`, String(v));
+  }
+  return args;
+}
+
 /** `help` and `version`: taken by every command. */
 const ALWAYS: readonly FlagSpec[] = [FLAGS.help, FLAGS.version];
 

@@ -3,43 +3,21 @@
  * flags and the function that runs it.
  */
 import { resolve } from 'node:path';
-import { analyze } from '../analyze.js';
 import { readCachedOutput, saveCachedOutput } from '../cache/index.js';
 import type { ReportCacheInfo } from '../cache/index.js';
-import { BACKTEST_FLAGS, BACKTEST_SUMMARY, runBacktestCommand } from '../backtest/index.js';
-import type { Config } from '../options.js';
+import { runPrepared } from '../pipeline/index.js';
 import { formatReportPieces, summaryLines } from '../report/index.js';
 import { writeFileAtomic } from '../report/write.js';
-import { FLAGS, SUGGEST_FLAGS } from './args.js';
-import type { CommandInfo, FlagSpec, FlagValues, FormatName } from './args.js';
+import { applyArgsOf, FLAGS, SUGGEST_FLAGS } from './args.js';
+import type { CommandInfo, FlagSpec } from './args.js';
+import { BACKTEST_FLAGS } from './backtest-flags.js';
+import { BACKTEST_SUMMARY, runBacktestCommand } from './backtest.js';
+import type { CommandContext } from './context.js';
 import { colorEnabled } from './io.js';
-import type { CliIo } from './io.js';
 import { checkOutputPath, formatFromOutput } from './output.js';
 import { progressHooks } from './progress.js';
 import { APPLY_FLAGS, APPLY_SUMMARY, runApplyCommand } from './apply.js';
 import { readReviewInputs, withComparison, writeBaselineIfAsked, REVIEW_FLAGS } from './review.js';
-
-/** The flags every command shares, typed. */
-export interface CommonFlags {
-  readonly format: FormatName | null;
-  readonly output: string | null;
-  readonly quiet: boolean;
-  readonly progress: boolean;
-}
-
-/** Everything a command gets: the process, the content root, the configuration and the flags. */
-export interface CommandContext {
-  readonly io: CliIo;
-  /** Absolute content root. */
-  readonly root: string;
-  /** The configuration file's object with the flags merged over it (validated before). */
-  readonly config: Config;
-  /** Where the configuration came from, for messages. */
-  readonly configOrigin: string;
-  readonly flags: CommonFlags;
-  /** All flag values by name, including the command's own flags. */
-  readonly values: FlagValues;
-}
 
 /** A command: what the parser and help know, plus how it runs. Returns the exit code. */
 export interface Command extends CommandInfo {
@@ -83,7 +61,16 @@ export const COMMANDS: readonly Command[] = [
   {
     name: 'apply',
     summary: APPLY_SUMMARY,
-    flags: [...APPLY_FLAGS, FLAGS.config, FLAGS.quiet, FLAGS.noCache],
+    // The suggestion-shaping flags of `suggest`, so a printed apply command runs as printed.
+    flags: [
+      ...APPLY_FLAGS,
+      FLAGS.config,
+      { ...FLAGS.maxDepth, description: 'deepest click depth the depth-repair suggestions aim at, as given to suggest (config maxDepth)' },
+      FLAGS.preset,
+      ...SUGGEST_FLAGS,
+      FLAGS.quiet,
+      FLAGS.noCache,
+    ],
     exitCodes:
       '0 every chosen link was written (with --dry-run: could be); 1 some were refused (the file changed, overlapping anchors, no anchor phrase); 2 usage, an unknown id, a bad --from report or a file that could not be written.',
     run: runApplyCommand,
@@ -125,7 +112,7 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
       if (!flags.quiet) io.stderr.write(`linkweave: ${message}\n`);
     };
     const hooks = { ...(progress?.hooks ?? {}), onNote, onReportCache: (info: ReportCacheInfo) => (cache.info = info) };
-    report = await analyze({ ...ctx.config, root: ctx.root, command, configOrigin: ctx.configOrigin, ...baseline }, hooks);
+    report = await runPrepared({ ...ctx.run, command, ...baseline }, hooks);
   } finally {
     progress?.done();
   }
@@ -134,8 +121,11 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
   await writeBaselineIfAsked(report, ctx.values, io, flags.quiet);
 
   // The text report shows paths relative to the working folder, wrapped to the terminal.
-  // The printed apply command reads the same configuration file as this run.
-  const config = typeof ctx.values.config === 'string' ? { applyArgs: ['--config', ctx.values.config] } : {};
+  // The printed apply command reads the same configuration file and repeats the flags that
+  // shape the suggestions (--targets, --per-*, --max-depth, --preset), so its own suggest run
+  // makes the same suggestions and finds the printed ids.
+  const applyArgs = applyArgsOf(ctx.values);
+  const config = applyArgs.length > 0 ? { applyArgs } : {};
   const terminal = { color, cwd: io.cwd, ...config, ...(io.isTTY && io.columns !== undefined ? { width: io.columns } : {}) };
   if (output === null) {
     for (const piece of formatReportPieces(report, format, terminal)) io.stdout.write(piece);

@@ -1,5 +1,5 @@
-/** A one-line progress display on stderr (terminals only), fed by `analyze`'s hooks. */
-import type { AnalyzeHooks } from '../analyze.js';
+/** A one-line progress display on stderr (terminals only), fed by the pipeline's hooks. */
+import type { AnalyzeHooks } from '../pipeline/index.js';
 import type { TextSink } from './io.js';
 
 /**

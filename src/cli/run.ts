@@ -4,14 +4,16 @@
  */
 import { resolve } from 'node:path';
 import { isEngineError } from '../errors.js';
-import { DEFAULT_OPTIONS, resolveOptions } from '../options.js';
-import type { Config } from '../options.js';
+import type { Config, ResolvedOptions } from '../config/options.js';
+import { mergeConfig } from '../preset/index.js';
+import { prepareConfig } from '../pipeline/index.js';
+import type { OptionsOverride } from '../pipeline/index.js';
 import { VERSION } from '../version.js';
 import { helpText, parseArgs } from './args.js';
 import type { FlagValues, FormatName } from './args.js';
 import { COMMANDS } from './commands.js';
-import type { CommonFlags } from './commands.js';
-import { loadConfig } from './config.js';
+import type { CommonFlags } from './context.js';
+import { loadConfig } from '../config/discover.js';
 import { debugEnabled } from './io.js';
 import type { CliIo } from './io.js';
 
@@ -38,16 +40,16 @@ export async function run(argv: readonly string[], io: CliIo): Promise<number> {
     const root = resolve(io.cwd, parsed.root ?? '.');
     const values = parsed.flags;
     const loaded = await loadConfig({ explicit: stringFlag(values, 'config'), root, cwd: io.cwd });
-    // Validate the file on its own first, so a bad key is reported against the file.
-    resolveOptions(loaded.config, root, loaded.origin);
-    return await command.run({
-      io,
-      root,
-      config: withCacheDir(withFlags(loaded.config as Config, values), io.cwd),
-      configOrigin: loaded.origin,
-      flags: commonFlags(values),
-      values,
-    });
+    const flags = commonFlags(values);
+    // The pipeline's prepare stage, once for the whole command: the file resolved as written (a
+    // bad key named against the file), the flags over it, the generator preset read (its
+    // summary on stderr), the checks validated.
+    const onNote = (message: string): void => {
+      if (!flags.quiet) io.stderr.write(`linkweave: ${message}\n`);
+    };
+    const settings = { root, command: command.name === 'suggest' ? ('suggest' as const) : ('check' as const), configOrigin: loaded.origin };
+    const prepared = prepareConfig(loaded.config, settings, { onNote }, flagsOver(values, io.cwd));
+    return await command.run({ io, root, configOrigin: loaded.origin, flags, values, run: prepared });
   } catch (error) {
     return reportError(error, io);
   }
@@ -76,9 +78,16 @@ export function withFlags(config: Config, values: FlagValues): Config {
   return merged;
 }
 
-/** The cache folder is relative to the working folder: make it absolute against `io.cwd`. */
-function withCacheDir(config: Config, cwd: string): Config {
-  return { ...config, cache: { ...config.cache, dir: resolve(cwd, config.cache?.dir ?? DEFAULT_OPTIONS.cache.dir) } };
+/**
+ * The flags over the resolved options (they win over the file and the preset), and the cache
+ * folder made absolute against the working folder (`cache.dir` is relative to it).
+ */
+function flagsOver(values: FlagValues, cwd: string): OptionsOverride {
+  const fragment = withFlags({}, values);
+  return (options) => {
+    const merged = mergeConfig(options as unknown as Config, fragment) as unknown as ResolvedOptions;
+    return { ...merged, root: options.root, cache: { ...merged.cache, dir: resolve(cwd, merged.cache.dir) } };
+  };
 }
 
 function commonFlags(values: FlagValues): CommonFlags {

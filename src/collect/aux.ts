@@ -2,7 +2,7 @@
 import fs from 'node:fs';
 import { resolve } from 'node:path';
 import { EngineError } from '../errors.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { realRootOf } from './collect.js';
 import { isInside, toRelative } from './list.js';
 import { describeIoError } from '../util/index.js';

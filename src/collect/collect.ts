@@ -2,7 +2,7 @@
 import fs from 'node:fs';
 import { isAbsolute, join, normalize, resolve } from 'node:path';
 import { EngineError } from '../errors.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { SourceFile } from '../types.js';
 import { isInside, listFiles, toRelative, WarningLog } from './list.js';
 import { kindOfPath } from '../routes/index.js';

@@ -2,7 +2,7 @@
  * `buildGraph`: parsed facts -> the site's internal link graph (DESIGN sections 3-5).
  * Pure: every lookup is in indexes built here from the inputs.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { PageFacts, ResolvedLink, SiteGraph } from '../types.js';
 import type { GraphInput } from './types.js';
 import { createEdgeList, pushEdge, buildCsr, EDGE_CONTENT, EDGE_TEMPLATE } from './csr.js';

@@ -1,5 +1,5 @@
 /** Parse files on the main thread or in a worker pool, by `options.workers` and the file count. */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseSource } from '../parse/index.js';
 import type { PageFacts, SourceFile } from '../types.js';
 import { chooseThreads } from './plan.js';

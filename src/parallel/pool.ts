@@ -4,7 +4,7 @@
  * parse (no worker file, a crashed thread) is parsed on the main thread instead.
  */
 import { Piscina } from 'piscina';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseSource } from '../parse/index.js';
 import type { PageFacts, SourceFile } from '../types.js';
 import { makeBatches } from './plan.js';

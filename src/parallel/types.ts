@@ -1,6 +1,6 @@
 /** Types of the parallel parse. */
 import type { CacheStats } from '../cache/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { SourceFile } from '../types.js';
 
 /** One message to a worker: a batch of files and the options to parse them with. */

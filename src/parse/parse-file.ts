@@ -3,7 +3,7 @@
  * problem on the page and whatever could be read is still returned, so one bad file never stops
  * a run.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Heading, CodeSpan, IncludeRef, PageFacts, ProtectedRegion, RawLink, SourceFile, SourceProblem } from '../types.js';
 import { findIncludes } from './includes.js';
 import { describeError } from './failure.js';

@@ -7,7 +7,7 @@
  *
  * Link text: the named group `text` (or `name`) when the pattern has one, else the whole match.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { hasSourceExtension } from '../routes/index.js';
 import type { PageDraft } from './types.js';
 

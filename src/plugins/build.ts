@@ -6,8 +6,8 @@
  */
 import { dirname, isAbsolute, relative, resolve, sep } from 'node:path';
 import { analyze } from '../analyze.js';
-import { loadConfig } from '../cli/config.js';
-import type { Config } from '../config.js';
+import { loadConfig } from '../config/discover.js';
+import type { Config } from '../config/config.js';
 import { EngineError } from '../errors.js';
 import { FORMAT_IDS, formatReportPieces, isFormatId, writeFileAtomic } from '../report/index.js';
 import type { FormatId } from '../report/index.js';

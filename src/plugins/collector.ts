@@ -7,13 +7,11 @@
  */
 import fs from 'node:fs';
 import { isAbsolute, relative, resolve, sep } from 'node:path';
-import { collectInputs, finishAnalysis } from '../analyze.js';
-import type { AnalyzeInput } from '../analyze.js';
 import { EngineError } from '../errors.js';
-import { resolveOptions } from '../options.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import { parseSource } from '../parse/index.js';
-import { validateRuleConfig } from '../rules/index.js';
+import { collect, finishAnalysis, prepare } from '../pipeline/index.js';
+import type { AnalyzeInput, PreparedRun } from '../pipeline/index.js';
 import type { PageFacts, Report, SourceFile } from '../types.js';
 import { absolutePathOf, attachReport, MESSAGE_SOURCE } from './messages.js';
 import type { VFile, VFileMessage } from './messages.js';
@@ -21,7 +19,7 @@ import { sourceFileFrom } from './source.js';
 
 /** Collects page facts file by file and turns them into a report. */
 export interface Collector {
-  /** The resolved options (the same `resolveOptions` as every entry point). */
+  /** The resolved options (the pipeline's prepare stage, as every entry point). */
   readonly options: ResolvedOptions;
   /**
    * Add a file's page facts, replacing any earlier version of the same file.
@@ -68,9 +66,8 @@ interface Entry {
  * @throws EngineError `E_CONFIG_INVALID` for a bad configuration, naming the key
  */
 export function createCollector(input: AnalyzeInput): Collector {
-  const { root, command = 'check', configOrigin = 'configuration', ...config } = input;
-  const options = resolveOptions(config, resolve(root), configOrigin);
-  validateRuleConfig(options, configOrigin);
+  const run = prepare(input);
+  const { options } = run;
   const roots = rootsOf(options.root);
   const entries = new Map<string, Entry>();
   let cached: { generation: number; report: Promise<Report> } | null = null;
@@ -123,7 +120,7 @@ export function createCollector(input: AnalyzeInput): Collector {
     report() {
       if (cached === null || cached.generation !== generation) {
         const at = generation;
-        const report = build(options, command, [...entries.values()]).then(
+        const report = build(run, [...entries.values()]).then(
           (r) => {
             if (cached?.generation === at) last = r;
             return r;
@@ -141,11 +138,12 @@ export function createCollector(input: AnalyzeInput): Collector {
   };
 }
 
-async function build(options: ResolvedOptions, command: 'check' | 'suggest', added: readonly Entry[]): Promise<Report> {
+async function build(prepared: PreparedRun, added: readonly Entry[]): Promise<Report> {
   if (added.length === 0) {
     throw new EngineError('E_USAGE', 'collector.report(): no files were added; run the pipeline over the site first');
   }
-  const collected = await collectInputs(options);
+  const { run, collected } = await collect(prepared);
+  const { options, command, rules } = run;
   // Pages come from the files the build processed, in the order `collect` gives (by path).
   const sorted = added.slice().sort((a, b) => compare(a.source.path, b.source.path));
   const paths = new Set(sorted.map((e) => e.source.path));
@@ -154,7 +152,7 @@ async function build(options: ResolvedOptions, command: 'check' | 'suggest', add
     files: sorted.map((e) => e.source),
     assets: collected.sources.assets.filter((a) => !paths.has(a)),
   };
-  return finishAnalysis({ options, command, facts: sorted.map((e) => e.facts), collected: { ...collected, sources }, hooks: {} });
+  return finishAnalysis({ options, command, rules, facts: sorted.map((e) => e.facts), collected: { ...collected, sources }, hooks: {} });
 }
 
 /** The root as given and its real path (a vfile may name either). */

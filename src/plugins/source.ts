@@ -5,7 +5,7 @@
  */
 import { createHash } from 'node:crypto';
 import { decodeSource, kindOfPath } from '../collect/index.js';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { FileKind, SourceFile } from '../types.js';
 
 /**

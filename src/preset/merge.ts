@@ -1,5 +1,5 @@
 /** A preset's config fragment under the user's config: the user's keys win, key by key. */
-import type { Config } from '../config.js';
+import type { Config } from '../config/config.js';
 
 /**
  * Merge `over` onto `under`: plain objects merge key by key (recursively), every other value

@@ -6,7 +6,7 @@
  */
 import fs from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
-import type { Config } from '../config.js';
+import type { Config } from '../config/config.js';
 import { CONFIG_FILES, configFileOf, detectGenerator } from './detect.js';
 import type { FolderFiles } from './detect.js';
 import { readDocusaurus } from './docusaurus.js';

@@ -1,5 +1,5 @@
 /** Types of the preset stage: what a generator's config files say about the site. */
-import type { Config } from '../config.js';
+import type { Config } from '../config/config.js';
 import type { PresetName } from './names.js';
 
 /** A generator's site folder as the readers see it: paths relative to the folder holding the config file. */

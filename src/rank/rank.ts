@@ -1,7 +1,7 @@
 /**
  * `rankGraph`: the ranking stage (DESIGN section 5): PageRank, click depth, inlinks and outlinks.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Ranking, SiteGraph } from '../types.js';
 import { EDGE_CONTENT, EDGE_TEMPLATE } from '../graph/csr.js';
 import { clickDepth } from './depth.js';

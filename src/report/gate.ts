@@ -12,7 +12,7 @@
  * Failures are sorted by `rule`. The report keeps the result under its `gate` key (the report
  * contract, DESIGN section 8).
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Finding, GateFailure, Report } from '../types.js';
 import { compareText } from '../util/index.js';
 import type { GateStats } from './types.js';

@@ -1,5 +1,5 @@
 /** Types of the report stage: what `buildReport` takes and what formatters share. */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { LinkStyle } from '../routes/index.js';
 import type { Finding, Importance, LinkModelReport, Ranking, RepairPlan, Report, SiteGraph, Suggestion } from '../types.js';
 

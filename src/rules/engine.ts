@@ -2,10 +2,10 @@
  * The rule engine: applies the configured level and options to each rule, runs it and
  * stamps its findings (as unified-lint-rule does for lint messages).
  */
-import { expectedGot } from '../config-issues.js';
+import { expectedGot } from '../config/issues.js';
 import { EngineError } from '../errors.js';
-import type { ResolvedOptions } from '../options.js';
-import type { Level } from '../config.js';
+import type { ResolvedOptions } from '../config/options.js';
+import type { Level } from '../config/config.js';
 import type { Finding, Severity } from '../types.js';
 import type { Rule, RuleContext, RuleFinding } from './types.js';
 import { rules as builtinRules } from './registry.js';
@@ -72,13 +72,14 @@ function settingOf(
  * Run every rule whose level is not `none` and return their findings with rule id and severity,
  * sorted by file, line, column, rule and message. Findings on pages marked
  * `linkweave.exclude` are dropped.
+ * @param settings the settings `validateRuleConfig` gave for `known` (the pipeline validates once, in its prepare stage)
  * @throws EngineError `E_CONFIG_INVALID` for a bad `checks` configuration (see `validateRuleConfig`)
  */
 export function runRules(
   ctx: RuleContext,
   known: readonly Rule[] = builtinRules,
+  settings: readonly RuleSetting[] = validateRuleConfig(ctx.options, 'configuration', known),
 ): Finding[] {
-  const settings = validateRuleConfig(ctx.options, 'configuration', known);
   const excluded = new Set(ctx.facts.filter((f) => f.meta.exclude).map((f) => f.file));
   const findings: Finding[] = [];
   for (const { rule, level, options } of settings) {

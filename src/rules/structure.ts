@@ -2,7 +2,7 @@
  * Structural facts about pages shared by the rules and the report's counts, so that a finding
  * and the statistic a gate limit reads can never disagree on what an orphan or a dead end is.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Csr, Ranking, SiteGraph } from '../types.js';
 
 /** Ids of the entry pages, as a set. */

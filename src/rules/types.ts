@@ -2,7 +2,7 @@
  * Types of the rules stage: what a rule sees, what it returns, and how it describes itself.
  */
 import type { z } from 'zod';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { PageFacts, Ranking, Severity, SiteGraph } from '../types.js';
 
 /**

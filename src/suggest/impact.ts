@@ -11,7 +11,7 @@
  *   the edges click depth follows; {@link DepthState} does this locally (only improved pages
  *   are visited), which the tests check against a full BFS of the modified graph.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Csr, Ranking, SiteGraph } from '../types.js';
 import { compareText } from '../util/index.js';
 import { outWeightSums } from '../graph/csr.js';

@@ -13,7 +13,7 @@
  * explicit `low`, and clamped into [0.3, 0.9) for explicit `normal`.
  */
 import picomatch from 'picomatch';
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { SiteGraph } from '../types.js';
 import { lookupRoute } from '../routes/index.js';
 import { percentiles } from './percentile.js';

@@ -5,7 +5,7 @@
  * per-source and per-target caps (presentation limits, applied after ranking). Impact is not
  * part of it.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { LinkModelReport } from '../types.js';
 import { createStemCache } from '../text/tokenize.js';
 import { termLeaders, topTerms } from '../text/tfidf.js';

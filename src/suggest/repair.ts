@@ -7,7 +7,7 @@
  * for suggestions whose source page got closer to the entry pages, and for all before stopping);
  * ties go to the higher score, then the smaller id.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Ranking, SiteGraph } from '../types.js';
 import { DepthState, depthState } from './impact.js';
 import type { RepairPlan } from './types.js';

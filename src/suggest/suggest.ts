@@ -7,7 +7,7 @@
  * scores -> greedy choice under the per-source and per-target caps -> predicted PageRank and
  * depth per suggestion -> repair plan. Output sorted by file, line, column, target.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Suggestion } from '../types.js';
 import { compareSuggestions } from '../util/index.js';
 import { rankCandidates } from './rank-candidates.js';

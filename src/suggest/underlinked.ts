@@ -11,7 +11,7 @@
  *   (content centrality against PageRank).
  * Entry pages are reached directly, so they get no reason; pages with `linkweave.exclude` get none.
  */
-import type { ResolvedOptions } from '../options.js';
+import type { ResolvedOptions } from '../config/options.js';
 import type { Ranking, SiteGraph, UnderlinkedReason } from '../types.js';
 import type { Importance } from './importance.js';
 import { percentiles } from './percentile.js';

@@ -8,12 +8,12 @@
  * pages are dangling and keep the teleport share. The walk uses the ranking stage's PageRank
  * with the configured defaults for damping, iterations and tolerance.
  */
-import { DEFAULT_OPTIONS } from '../options.js';
+import { DEFAULT_OPTIONS } from '../config/options.js';
 import type { RelatedList } from '../types.js';
 import { buildCsr, createEdgeList, pushEdge } from '../graph/csr.js';
 import { pagerank } from '../rank/pagerank.js';
 
-/** Settings of the walk; the defaults are those of the link PageRank (`src/options.ts`). */
+/** Settings of the walk; the defaults are those of the link PageRank (`src/config/options.ts`). */
 export interface CentralityOptions {
   readonly damping: number;
   readonly maxIterations: number;

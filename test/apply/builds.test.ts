@@ -22,7 +22,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { applySuggestions } from '../../src/apply/index.js';
 import type { AppliedLink } from '../../src/apply/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import type { Report, Suggestion } from '../../src/types.js';
 import { tempDir } from '../collect/tree.js';
 import { linksOf, parseHtml, shapeWithoutLinks } from './built-html.js';

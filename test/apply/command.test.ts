@@ -14,7 +14,7 @@ import { analyze } from '../../src/analyze.js';
 import type { CliIo } from '../../src/cli/io.js';
 import { run } from '../../src/cli/run.js';
 import { parseSource } from '../../src/parse/index.js';
-import { DEFAULT_OPTIONS } from '../../src/options.js';
+import { DEFAULT_OPTIONS } from '../../src/config/options.js';
 import type { Report, Suggestion } from '../../src/types.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import type { Tree } from '../collect/tree.js';

@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { encodeText, hadBom, planFile } from '../../src/apply/index.js';
 import type { AppliedLink, PlanInput } from '../../src/apply/index.js';
 import { decodeSource } from '../../src/collect/index.js';
-import { DEFAULT_OPTIONS } from '../../src/options.js';
+import { DEFAULT_OPTIONS } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { FileKind, SourceFile, Suggestion } from '../../src/types.js';
 

@@ -12,7 +12,7 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../src/analyze.js';
 import { applySuggestions } from '../../src/apply/index.js';
 import type { AppliedLink, ApplyResult } from '../../src/apply/index.js';
-import { DEFAULT_OPTIONS } from '../../src/options.js';
+import { DEFAULT_OPTIONS } from '../../src/config/options.js';
 import type { Suggestion } from '../../src/types.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import { htmlPieces, layout, markdownPieces, mdxPieces, TARGETS } from './syntax-docs.js';

@@ -47,7 +47,7 @@ describe('the import rules of the stages', () => {
     write('src/text/b.ts', "import type { A } from './c.js';\nexport const b = 2;\nexport type B = A;\n");
     write('src/text/c.ts', "import { a } from './a.js';\nexport type A = typeof a;\n");
     // A named exception lets exactly its own import through.
-    write('src/options.ts', "import { STYLES } from './parse/heading-ids.js';\nimport { links } from './parse/links.js';\nexport const o = [STYLES, links];\n");
+    write('src/config/options.ts', "import { STYLES } from '../parse/heading-ids.js';\nimport { links } from '../parse/links.js';\nexport const o = [STYLES, links];\n");
     write('src/parse/heading-ids.ts', 'export const STYLES = [];\n');
     // A folder that is no stage.
     write('src/extra/thing.ts', "import { sortKey } from '../util/compare.js';\nexport const t = sortKey;\n");
@@ -56,7 +56,7 @@ describe('the import rules of the stages', () => {
       expect(await violations(tmp)).toEqual([
         'no-cycle: src/text/a.ts -> src/text/b.ts',
         'stage-known: src/extra/thing.ts -> src/util/compare.ts',
-        'stage-order: config (except options-heading-ids, options-preset-names): src/options.ts -> src/parse/links.ts',
+        'stage-order: config (except options-heading-ids, options-preset-names): src/config/options.ts -> src/parse/links.ts',
         'stage-order: parse: src/parse/links.ts -> src/graph/edges.ts',
       ]);
     });

@@ -15,17 +15,19 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { generateSite } from '../../bench/generate.js';
-import { backtest, formatBacktestJson, loadSite } from '../../src/backtest/index.js';
-import type { BacktestResult, LoadedSite, MethodId, MethodScores } from '../../src/backtest/index.js';
+import { backtest } from '../../src/backtest/index.js';
+import type { BacktestResult, MethodId, MethodScores } from '../../src/backtest/index.js';
+import { formatBacktestJson } from '../../src/cli/backtest-format.js';
 import { run } from '../../src/cli/run.js';
-import { resolveOptions } from '../../src/options.js';
+import { prepare, readSite } from '../../src/pipeline/index.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { tempDir } from '../collect/tree.js';
 
 let dir: string;
 let root: string;
 let cleanup: () => void;
 let before: Map<string, string>;
-let site: LoadedSite;
+let site: Awaited<ReturnType<typeof readSite>>;
 const options = () => resolveOptions({ navigation: 'nav.yml', cache: { enabled: false } }, root, 'test');
 
 /** sha256 of every file under `folder`, by relative path. */
@@ -50,7 +52,7 @@ beforeAll(async () => {
   root = path.join(dir, 'site');
   generateSite(root, { pages: 400, seed: 1 });
   before = hashes(root);
-  site = await loadSite(options());
+  site = await readSite(prepare({ navigation: 'nav.yml', cache: { enabled: false }, root, configOrigin: 'test' }));
 });
 
 afterAll(() => cleanup());

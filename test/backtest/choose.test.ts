@@ -5,9 +5,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { generateSiteInMemory } from '../../bench/generate.js';
-import { backtestOptions, chooseLikeSuggest, textStage } from '../../src/backtest/index.js';
+import { backtestOptions, chooseLikeSuggest } from '../../src/backtest/index.js';
+import { textOf } from '../../src/pipeline/index.js';
 import { buildGraph } from '../../src/graph/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import { rankGraph } from '../../src/rank/index.js';
 import { suggestLinks } from '../../src/suggest/index.js';
@@ -25,7 +26,7 @@ describe('chooseLikeSuggest', () => {
     const options = backtestOptions(base, graph.pages.length);
     const ranking = rankGraph(graph, options);
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
-    const input = { graph, facts: ordered, ranking, ...textStage(ordered, options), traffic: null };
+    const input = { graph, facts: ordered, ranking, ...textOf(ordered, options), traffic: null };
 
     const ours = chooseLikeSuggest(input, options).chosen.map((c) => ({
       source: graph.pages[c.pair.source]!.route,

@@ -6,7 +6,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { parseBacktestFlags } from '../../src/backtest/index.js';
+import { parseBacktestFlags } from '../../src/cli/backtest-flags.js';
 import { run } from '../../src/cli/run.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { holdOut, lineStarts, linkTextRange, positionOf, removeOnce, withoutWords, withSpans } from '../../src/backtest/index.js';
 import { buildGraph } from '../../src/graph/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { FileKind, PageFacts, SourceFile } from '../../src/types.js';
 

@@ -9,7 +9,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { analyze } from '../../src/analyze.js';
-import { loadConfig } from '../../src/cli/config.js';
+import { loadConfig } from '../../src/config/discover.js';
 import type { Report } from '../../src/types.js';
 import { launchReportBrowser, rowTexts } from './open-report.js';
 import type { ReportBrowser } from './open-report.js';

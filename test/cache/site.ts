@@ -1,4 +1,4 @@
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 
 /** A small invented site (Markdown and HTML) used by the cache tests. */
 

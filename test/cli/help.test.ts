@@ -47,11 +47,13 @@ describe.each(COMMANDS.map((c) => [c.name, c] as const))('%s', (name, command) =
 });
 
 describe('the flags of the commands', () => {
-  it('backtest offers only the formats it writes; apply has no report flags', () => {
+  it('backtest offers only the formats it writes; apply has no report flags but the suggestion-shaping ones', () => {
     const backtest = COMMANDS.find((c) => c.name === 'backtest')!;
     expect(backtest.flags.find((f) => f.name === 'format')?.choices).toEqual(['text', 'json']);
     const apply = flagsOf(COMMANDS.find((c) => c.name === 'apply')!).map((f) => f.name);
-    for (const flag of ['max-depth', 'fail-on', 'format', 'output', 'baseline']) expect(apply).not.toContain(flag);
+    for (const flag of ['fail-on', 'format', 'output', 'baseline']) expect(apply).not.toContain(flag);
+    // A printed apply command repeats these, so apply takes what suggest took.
+    expect(apply).toEqual(expect.arrayContaining(['max-depth', 'preset', 'targets', 'per-target', 'per-source']));
   });
 
   it('suggest takes --targets, --per-target and --per-source; check does not', () => {

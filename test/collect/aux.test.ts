@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { readAuxFile } from '../../src/collect/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { tempDir, writeTree } from './tree.js';
 
 const cleanups: (() => void)[] = [];

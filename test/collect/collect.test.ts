@@ -6,8 +6,8 @@ import { build } from 'rolldown';
 import { afterEach, describe, expect, it } from 'vitest';
 import { collectSources } from '../../src/collect/index.js';
 import { EngineError } from '../../src/errors.js';
-import { resolveOptions } from '../../src/options.js';
-import type { Config } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config } from '../../src/config/options.js';
 import { tempDir, writeTree } from './tree.js';
 import type { Tree } from './tree.js';
 

@@ -2,8 +2,8 @@
  * Hand-written PageFacts literals for the graph and rank tests (the graph stage is tested on its
  * own, without the parser).
  */
-import { resolveOptions } from '../../src/options.js';
-import type { Config, ResolvedOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config, ResolvedOptions } from '../../src/config/options.js';
 import type { FileKind, PageFacts, RawLink } from '../../src/types.js';
 
 /** A link as the parser would report it; `line` is the link's position in the page. */

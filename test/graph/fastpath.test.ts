@@ -7,7 +7,7 @@ import fc from 'fast-check';
 import { buildGraph, pageSource, navigationSource, resolveLink } from '../../src/graph/index.js';
 import type { ResolveContext } from '../../src/graph/index.js';
 import { joinPath, removeDotSegments } from '../../src/routes/index.js';
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 import { link, options, page } from './facts.js';
 
 function contextFor(config: Config) {

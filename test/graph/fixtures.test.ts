@@ -8,7 +8,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { buildGraph } from '../../src/graph/index.js';
 import { rankGraph } from '../../src/rank/index.js';
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 import type { FileKind, LinkContext, PageFacts, ResolvedLink, SiteGraph } from '../../src/types.js';
 import { link, options, page } from './facts.js';
 

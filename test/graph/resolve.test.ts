@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { buildGraph } from '../../src/graph/index.js';
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 import type { PageFacts, RawLink, ResolvedLink } from '../../src/types.js';
 import { link, options, page } from './facts.js';
 

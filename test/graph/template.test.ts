@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { buildGraph } from '../../src/graph/index.js';
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 import { link, options, page } from './facts.js';
 
 /** n pages; the first `withFooter` of them carry a footer link to /f/ with `text`. */

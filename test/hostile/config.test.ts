@@ -2,7 +2,7 @@
  * Issue 7, "configuration and flags": every wrong key, type, range or unknown flag exits 2 with
  * one line naming it and what it accepts. Run in-process through `run()` (the code bin.ts
  * runs; test/cli/cli.test.ts runs the built command for a few of these, plus --help and
- * --version). The accepted values in the messages come from the schema in src/options.ts.
+ * --version). The accepted values in the messages come from the schema in src/config/options.ts.
  */
 import { afterEach, describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/run.js';

@@ -15,7 +15,7 @@ import { describe, expect, it } from 'vitest';
 import { finishAnalysis } from '../../src/analyze.js';
 import type { CollectedInputs } from '../../src/analyze.js';
 import { buildGraph } from '../../src/graph/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import { formatReport } from '../../src/report/index.js';
 import type { SourceFile } from '../../src/types.js';

@@ -6,7 +6,7 @@
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { collectSources } from '../../src/collect/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { PageFacts } from '../../src/types.js';
 import { tempDir, writeTree } from '../cache/helpers.js';

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { analyze } from '../../src/analyze.js';
 import type { AnalyzeHooks } from '../../src/analyze.js';
 import { collectSources } from '../../src/collect/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { parseFiles, parseInPool, workerUrl } from '../../src/parallel/index.js';
 import type { ParseHooks, ParseStats } from '../../src/parallel/index.js';
 import { formatReport } from '../../src/report/index.js';

@@ -1,7 +1,7 @@
 /** Helpers for the parse tests: a SourceFile from a string, and resolved options. */
 import { createHash } from 'node:crypto';
-import { resolveOptions } from '../../src/options.js';
-import type { Config, ResolvedOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config, ResolvedOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { FileKind, PageFacts, SourceFile } from '../../src/types.js';
 

@@ -5,7 +5,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_OPTIONS } from '../../src/options.js';
+import { DEFAULT_OPTIONS } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import type { FileKind, PageFacts } from '../../src/types.js';
 import { htmlPieces, layout, markdownPieces, mdxPieces } from '../apply/syntax-docs.js';

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { buildGraph } from '../../src/graph/index.js';
 import { rankGraph } from '../../src/rank/index.js';
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 import { link, options, page } from '../graph/facts.js';
 
 function ranked(config: Config = {}) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { resolveOptions } from '../../src/options.js';
-import type { Config } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config } from '../../src/config/options.js';
 import { evaluateGate } from '../../src/report/index.js';
 import type { GateStats } from '../../src/report/index.js';
 import type { Finding } from '../../src/types.js';

@@ -9,7 +9,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../../src/analyze.js';
 import { applySuggestions } from '../../src/apply/index.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { suggestionLink, toSarif } from '../../src/report/index.js';
 import type { LinkStyle } from '../../src/routes/index.js';
 import { tempDir } from '../collect/tree.js';

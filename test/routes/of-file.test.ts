@@ -4,7 +4,7 @@
  * are common practice of static-site generators, no source.
  */
 import { describe, expect, it } from 'vitest';
-import type { Config } from '../../src/options.js';
+import type { Config } from '../../src/config/options.js';
 import { normalizeRoute, routeOfFile } from '../../src/routes/index.js';
 import type { PageMeta } from '../../src/types.js';
 import { md, options } from '../parse/helpers.js';

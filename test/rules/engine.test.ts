@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { EngineError } from '../../src/errors.js';
-import { resolveOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { rules, runRules, validateRuleConfig } from '../../src/rules/index.js';
 import { buildSite } from './helpers.js';
 

@@ -5,8 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { buildGraph } from '../../src/graph/index.js';
-import { resolveOptions } from '../../src/options.js';
-import type { Config } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
 import { rankGraph } from '../../src/rank/index.js';
 import {

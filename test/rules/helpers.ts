@@ -4,8 +4,8 @@
  * `rankGraph`) from facts as the parse stage gives them.
  */
 import { posix } from 'node:path';
-import { resolveOptions } from '../../src/options.js';
-import type { Config, ResolvedOptions } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config, ResolvedOptions } from '../../src/config/options.js';
 import { buildGraph } from '../../src/graph/index.js';
 import { rankGraph } from '../../src/rank/index.js';
 import type { LinkContext, PageFacts, PageMeta, RawLink, SourceProblem } from '../../src/types.js';

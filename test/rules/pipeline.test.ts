@@ -4,8 +4,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { buildGraph } from '../../src/graph/index.js';
-import { resolveOptions } from '../../src/options.js';
-import type { Config } from '../../src/options.js';
+import { resolveOptions } from '../../src/config/options.js';
+import type { Config } from '../../src/config/options.js';
 import { rankGraph } from '../../src/rank/index.js';
 import { buildReport } from '../../src/report/index.js';
 import { runRules } from '../../src/rules/index.js';

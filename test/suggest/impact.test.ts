@@ -6,7 +6,7 @@ import { DepthState, impactSelection, pagerankWithLinks, rankModel, targetRanksW
 import { suggestLinks } from '../../src/suggest/index.js';
 import { clickDepth, depthMask, pagerank, rankGraph, teleportVector } from '../../src/rank/index.js';
 import { impactOf } from '../../src/report/formatters/common.js';
-import type { ResolvedOptions } from '../../src/options.js';
+import type { ResolvedOptions } from '../../src/config/options.js';
 import type { SiteGraph, Suggestion } from '../../src/types.js';
 import { edgeGraph, markdownPage, random, randomGraph, siteInput, testOptions, withEdges } from './helpers.js';
 

@@ -1,9 +1,9 @@
 /**
  * Type test (compiled by `npm run typecheck`, not run): the documented `Config` interface of
- * src/config.ts is exactly the input type of the zod schema in src/options.ts. A key added to
+ * src/config/config.ts is exactly the input type of the zod schema in src/config/options.ts. A key added to
  * the schema without its documented twin (or with another type) fails this file.
  */
-import type { Config, SchemaInput } from '../../src/options.js';
+import type { Config, SchemaInput } from '../../src/config/options.js';
 
 /** True only when A and B are the same type (not merely assignable one way). */
 type Equal<A, B> = (<T>() => T extends A ? 1 : 2) extends <T>() => T extends B ? 1 : 2 ? true : false;

@@ -10,7 +10,7 @@
  * warnings, each in the report's order. Suggestions: the report's first ones (best first).
  */
 import { buildOverview } from './layout.js';
-import type { HtmlData, HtmlPage, SummaryLimits } from './data.js';
+import type { HtmlData, HtmlPage, SummaryLimits } from './types.js';
 
 /**
  * Cut full HTML data down to a summary.

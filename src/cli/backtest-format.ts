@@ -7,8 +7,8 @@
  */
 import { roundTo } from '../report/round.js';
 import { VERSION } from '../version.js';
-import { K_VALUES, LIST_LENGTH } from './metrics.js';
-import type { BacktestResult, MethodId, MethodScores, Spread } from './types.js';
+import { K_VALUES, LIST_LENGTH } from '../backtest/index.js';
+import type { BacktestResult, MethodId, MethodScores, Spread } from '../backtest/index.js';
 
 /** Schema id of the JSON output. */
 export const BACKTEST_SCHEMA = 'linkweave/backtest@1';

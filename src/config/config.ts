@@ -1,13 +1,13 @@
 /**
  * The configuration as a user writes it, documented key by key. One type for every entry
  * point: the CLI's `linkweave.config.json`, `analyze()`, the unified collector and the
- * Vite/Rollup plugin. The defaults are applied by `resolveOptions` (src/options.ts, the only
+ * Vite/Rollup plugin. The defaults are applied by `resolveOptions` (options.ts in this folder, the only
  * place that holds them); `test/types/config.test-d.ts` checks that this interface is exactly
  * the schema's input type, so the two cannot drift apart.
  */
 
-import type { HeadingIdStyle } from './parse/heading-ids.js';
-import type { PresetName } from './preset/names.js';
+import type { HeadingIdStyle } from '../parse/heading-ids.js';
+import type { PresetName } from '../preset/names.js';
 
 /** How much a check's findings weigh (SARIF's levels); `none`: the check does not run. */
 export type Level = 'error' | 'warning' | 'none';
@@ -129,7 +129,10 @@ export interface Config {
   include?: string[] | undefined;
   /** Extra globs to leave out (node_modules, dot-folders and the output file are always left out). @default [] */
   exclude?: string[] | undefined;
-  /** How file paths become routes. @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, headingIds: 'auto', headingIdsDefault: 'github' } */
+  /**
+   * How file paths become routes.
+   * @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, folders: {}, dated: [], absoluteLinksUnderBase: false, headingIds: 'auto', headingIdsDefault: 'github' }
+   */
   routes?: RoutesConfig | undefined;
   /**
    * Site generator whose own config files (book.toml, hugo.toml, mkdocs.yml, ...) set the content

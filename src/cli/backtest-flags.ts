@@ -4,8 +4,8 @@
  * parameters of one command run, not configuration keys, so their defaults live here.
  */
 import { EngineError } from '../errors.js';
-import type { FlagSpec, FlagValues } from '../cli/args.js';
-import type { BacktestSettings } from './types.js';
+import type { BacktestSettings } from '../backtest/index.js';
+import type { FlagSpec, FlagValues } from './args.js';
 
 /** Defaults of the backtest flags. */
 export const BACKTEST_DEFAULTS: BacktestSettings = { holdout: 0.1, seed: 42, runs: 1, keepLinkText: false };

@@ -1,6 +1,6 @@
 /**
  * Finding and loading the configuration file for the CLI. Validation itself is
- * `resolveOptions` (src/options.ts); this file only finds the file and reads its object.
+ * `resolveOptions` (options.ts in this folder); this file only finds the file and reads its object.
  */
 import fs from 'node:fs';
 import { extname, isAbsolute, join, relative, resolve } from 'node:path';

@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { loadConfig } from '../../src/cli/config.js';
-import { resolveOptions } from '../../src/options.js';
+import { loadConfig } from '../../src/config/discover.js';
+import { resolveOptions } from '../../src/config/options.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import type { Tree } from '../collect/tree.js';
 

@@ -3,31 +3,23 @@
  * run the suggestion stage's choice with every page as a target (choose.ts), and score the three methods' ranked
  * lists against the held-out pairs (metrics.ts has the definitions).
  *
- * The text stage (term index, related pages, content centrality) is run again on what remains
- * when the held-out links' words leave the pages; with `keepLinkText` the words stay, and the
- * site's own text stage results (computed once, backtest.ts) are used.
+ * The pipeline's site and text stages (src/pipeline/) run again on what remains: the text stage
+ * (term index, related pages, content centrality) when the held-out links' words leave the
+ * pages; with `keepLinkText` the words stay, and the site's own text stage results (computed
+ * once, backtest.ts) are used.
  */
 import { EngineError } from '../errors.js';
-import { buildGraph } from '../graph/index.js';
-import type { GraphInput } from '../graph/index.js';
-import type { ResolvedOptions } from '../options.js';
-import { rankGraph } from '../rank/index.js';
+import type { ResolvedOptions } from '../config/options.js';
+import { graphOf, rankOf, textOf } from '../pipeline/index.js';
+import type { SiteInputs, TextResults } from '../pipeline/index.js';
 import { findCandidates, hasContentLink } from '../suggest/index.js';
-import { buildTermIndex, contentCentrality, createStemCache, relatedPages } from '../text/index.js';
-import type { PageFacts, RelatedList, SiteGraph, TermIndex } from '../types.js';
+import type { PageFacts, SiteGraph } from '../types.js';
 import { chooseLikeSuggest } from './choose.js';
 import { holdOut } from './holdout.js';
 import type { ContentPair } from './holdout.js';
 import { randomLists, randomPageLists, similarityLists, suggestionLists, titlePhraseLists } from './methods.js';
 import { heldOutByTarget, LIST_LENGTH, scoreMethod } from './metrics.js';
 import type { RunResult } from './types.js';
-
-/** What the text stage gives the suggestion stage. */
-export interface TextResults {
-  readonly index: TermIndex;
-  readonly related: readonly RelatedList[];
-  readonly centrality: Float64Array;
-}
 
 /** Everything a run needs that does not depend on the seed. */
 export interface RunBase {
@@ -37,7 +29,8 @@ export interface RunBase {
   readonly graph: SiteGraph;
   /** The facts given to `buildGraph` for `graph`. */
   readonly facts: readonly PageFacts[];
-  readonly aux: Omit<GraphInput, 'pages'>;
+  /** What the graph is built from besides the pages. */
+  readonly aux: SiteInputs;
   readonly traffic: ReadonlyMap<string, number> | null;
   /** The text stage's results for the site as it is (used with `keepLinkText`; null: computed when needed). */
   readonly text: TextResults | null;
@@ -61,25 +54,18 @@ export function backtestOptions(options: ResolvedOptions, _pages: number): Resol
 const NO_ANCHORS = { overlap: false, inPlace: false } as const;
 const TITLE_ANCHORS = { overlap: true, inPlace: false } as const;
 
-/** The text stage as `analyze` runs it, over the facts in page order. */
-export function textStage(ordered: readonly PageFacts[], options: ResolvedOptions): TextResults {
-  const index = buildTermIndex(ordered.map((f) => f.text));
-  const related = relatedPages(index, options.suggest.relatedK);
-  return { index, related, centrality: contentCentrality(related, ordered.length) };
-}
-
 /** Run the backtest once with `seed` (`keepLinkText`: see `BacktestSettings`). */
 export function runOnce(base: RunBase, share: number, seed: number, keepLinkText = false): RunResult {
   const { graph, options } = base;
   const n = graph.pages.length;
   const { facts, heldOut } = holdOut({ graph, facts: base.facts, sourceText: base.sourceText, pairs: base.pairs, keepLinkText }, share, seed);
-  const reduced = buildGraph({ ...base.aux, pages: facts }, options);
+  const reduced = graphOf(facts, base.aux, options);
   checkReduced(graph, reduced, heldOut);
-  const ranking = rankGraph(reduced, options);
+  const ranking = rankOf(reduced, options);
   const ordered = reduced.pages.map((p) => facts[p.factsIndex]!);
-  const text = keepLinkText && base.text !== null ? base.text : textStage(ordered, options);
-  const cache = createStemCache();
-  const choice = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic, stems: cache }, options);
+  const text = keepLinkText && base.text !== null ? base.text : textOf(ordered, options);
+  const cache = text.stems;
+  const choice = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic }, options);
 
   const truth = heldOutByTarget(heldOut);
   const targets = [...truth.keys()];

@@ -1,0 +1,17 @@
+/** The suggest stage: importance, under-linked pages and the link model's suggestions (suggest/). */
+import type { ResolvedOptions } from '../config/options.js';
+import { suggestLinks } from '../suggest/index.js';
+import type { SuggestResult } from '../suggest/index.js';
+import type { PageFacts, Ranking, SiteGraph } from '../types.js';
+import type { TextResults } from './text.js';
+
+/** Suggestions for the site (`ordered[i]` are the facts of page i). */
+export function suggestFor(
+  site: { readonly graph: SiteGraph; readonly ranking: Ranking },
+  ordered: readonly PageFacts[],
+  text: TextResults,
+  traffic: ReadonlyMap<string, number> | null,
+  options: ResolvedOptions,
+): SuggestResult {
+  return suggestLinks({ graph: site.graph, facts: ordered, ranking: site.ranking, ...text, traffic }, options);
+}
