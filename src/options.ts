@@ -45,6 +45,10 @@ const schema = z.strictObject({
       dated: z.array(z.string().min(1)).default([]),
       /** Site-absolute links are written below the base path (the generator prepends it): an unresolved one is broken, never "outside". @default false */
       absoluteLinksUnderBase: z.boolean().default(false),
+      /** Whose rules turn frontmatter `permalink`/`slug`/`url`, `permalinks` and file names into routes ('none': permalink site-absolute, slug below basePath). @default 'none' */
+      generator: z.enum(['none', 'jekyll', 'hugo', 'docusaurus']).default('none'),
+      /** Permalink patterns of the generator: Hugo section -> pattern; Jekyll '*' (the site's permalink) or a collection -> pattern. @default {} */
+      permalinks: z.record(z.string().min(1), z.string().min(1)).default({}),
       /** How headings get their fragment ids: 'auto' picks the style under which most of the site's fragment links resolve. @default 'auto' */
       headingIds: z.enum(['auto', ...HEADING_ID_STYLES]).default('auto'),
       /** The style 'auto' keeps when styles tie (a preset sets its generator's). @default 'github' */

@@ -167,6 +167,12 @@ export interface PageText {
 export interface PageMeta {
   readonly slug?: string;
   readonly permalink?: string;
+  /** Hugo's `url`: the page's whole path. */
+  readonly url?: string;
+  /** `date` as written (a generator's permalink patterns read it). */
+  readonly date?: string;
+  /** `categories` (or `category`), for Jekyll's `:categories`. */
+  readonly categories?: readonly string[];
   readonly draft: boolean;
   readonly noindex: boolean;
   readonly aliases: readonly string[];

@@ -106,6 +106,17 @@ export function readFrontmatter(value: string, contentStart: number): Frontmatte
     if (t === undefined || t.trim() === '') wrong(key, record[key], 'a non-empty route text');
     else meta[key] = t;
   }
+  if ('url' in record) {
+    const t = textValue(record.url);
+    if (t === undefined || t.trim() === '') wrong('url', record.url, 'a non-empty route text');
+    else meta.url = t;
+  }
+  // Dates only feed permalink patterns: one that does not read is left out without a word.
+  const date = record.date instanceof Date ? record.date.toISOString() : textValue(record.date);
+  if (date !== undefined && /^\d{4}-\d{1,2}-\d{1,2}/.test(date.trim())) meta.date = date.trim();
+  const cats = record.categories ?? record.category;
+  if (typeof cats === 'string' && cats.trim() !== '') meta.categories = cats.trim().split(/\s+/);
+  else if (Array.isArray(cats)) meta.categories = cats.filter((c): c is string | number => typeof c === 'string' || typeof c === 'number').map(String);
   for (const key of ['draft', 'noindex'] as const) {
     if (!(key in record)) continue;
     if (typeof record[key] === 'boolean') meta[key] = record[key];

@@ -3,7 +3,8 @@
  * `content/`; a multilingual site's default language's own `contentDir` when it has one), pages
  * at `/a/b/` (`uglyURLs`: `/a/b.html`), `_index.md` and `index.md` stand for their folder, URLs
  * lower-cased, `baseURL`'s path is the base path, each section's `_index.md` lists its pages.
- * Relative links resolve against the page URL. `module.mounts` whose source folder is absent
+ * Relative links resolve against the page URL. Frontmatter `url` and `slug` and `[permalinks]`
+ * patterns give routes by Hugo's rules (`routes.generator: 'hugo'`). `module.mounts` whose source folder is absent
  * bring content in from elsewhere at build time: their targets are outside these sources.
  * Heading ids: `markup.goldmark.parser.autoHeadingIDType` (github, github-ascii, blackfriday).
  */
@@ -25,9 +26,10 @@ export const readHugo: PresetReader = (configFile, files) => {
   const parsed = parseConfigText(configFile, files.read(configFile) ?? '');
   const conf: Record<string, unknown> = parsed.ok ? { ...parsed.value } : {};
   if (!parsed.ok) notes.push(`${configFile} does not parse (${parsed.error}); Hugo's defaults used`);
-  // config/_default/ splits the config into one file per top-level key.
-  if (configFile.startsWith('config/_default/')) {
-    for (const key of ['languages', 'markup', 'module']) {
+  // config/_default/ splits the config into one file per top-level key; Hugo reads it beside a
+  // root config file too (its `configDir`), the root file's keys first.
+  {
+    for (const key of ['languages', 'markup', 'module', 'permalinks']) {
       for (const ext of ['toml', 'yaml', 'yml', 'json']) {
         const text = files.read(`config/_default/${key}.${ext}`);
         if (text === null) continue;
@@ -56,10 +58,16 @@ export const readHugo: PresetReader = (configFile, files) => {
       outside.push(`/${route}${route === '' || route.endsWith('/') ? '' : '/'}`);
     }
   }
-  if (isRecord(conf.permalinks)) notes.push('permalinks rules are not applied (pages keep their folder routes)');
+  // `[permalinks]`: section -> pattern (Hugo 0.111), or the same under `page` (later versions).
+  const permalinks: Record<string, string> = {};
+  if (isRecord(conf.permalinks)) {
+    const table = isRecord(conf.permalinks.page) ? conf.permalinks.page : conf.permalinks;
+    for (const [section, pattern] of Object.entries(table)) if (typeof pattern === 'string') permalinks[section] = pattern;
+  }
   const parts = [shownFolder(content)];
   if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
   if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
+  if (Object.keys(permalinks).length > 0) parts.push(count(Object.keys(permalinks).length, 'permalink pattern'));
   return {
     name: 'hugo',
     configFile,
@@ -69,6 +77,8 @@ export const readHugo: PresetReader = (configFile, files) => {
         style: conf.uglyURLs === true || conf.uglyurls === true ? 'html' : 'directory',
         indexNames: ['index', '_index'],
         caseInsensitive: conf.disablePathToLower !== true,
+        generator: 'hugo',
+        ...(Object.keys(permalinks).length === 0 ? {} : { permalinks }),
         headingIdsDefault: (idType !== undefined ? ID_TYPES[idType] : undefined) ?? 'hugo-github',
         ...(basePath === null ? {} : { basePath }),
       },
