@@ -69,6 +69,11 @@ export interface RawLink {
   readonly origin: LinkOrigin;
   /** True when `href` names a source file (from a link pattern whose route ends in a source extension). */
   readonly fileRelative?: boolean;
+  /**
+   * The file the link is written in, when it is not the page's own: a file the page includes
+   * (`line` and `column` are in that file). Set by the graph stage, never by the parse stage.
+   */
+  readonly file?: string;
 }
 
 /** A heading with its fragment slug. */

@@ -68,9 +68,14 @@ function candidates(written: string, folder: string, from: 'file' | 'root' | 'in
   }
   if (from === 'root' || absolute) {
     add(normalize(bare));
-    // Hugo reads include paths against the project folder, one above `content/`.
+    // Hugo reads include paths against the project folder, one above `content/`, or more when
+    // the content folder is deeper (`content/en/`): the path less its first segments.
     add(normalize(`../${bare}`));
     if (!absolute) add(normalize(folder + bare));
+    if (from === 'root') {
+      const segments = bare.split('/');
+      for (let i = 1; i < segments.length - 1; i++) add(normalize(segments.slice(i).join('/')));
+    }
     return out;
   }
   add(normalize(folder + bare));

@@ -64,6 +64,18 @@ export const readHugo: PresetReader = (configFile, files) => {
     const table = isRecord(conf.permalinks.page) ? conf.permalinks.page : conf.permalinks;
     for (const [section, pattern] of Object.entries(table)) if (typeof pattern === 'string') permalinks[section] = pattern;
   }
+  // Every top-level folder is a section: Hugo makes its list page even without `_index.md`.
+  const lists = new Set<string>();
+  const withIndex = new Set<string>();
+  for (const f of files.markdownFiles(content)) {
+    const rel = content === '' ? f : f.slice(content.length + 1);
+    const cut = rel.indexOf('/');
+    if (cut < 0) continue;
+    const top = rel.slice(0, cut);
+    lists.add(top);
+    if (/^_index\.[^/]+$/.test(rel.slice(cut + 1))) withIndex.add(top);
+  }
+  const listRoutes = [...lists].filter((t) => !withIndex.has(t)).sort().map((t) => `/${t}/`);
   const parts = [shownFolder(content)];
   if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
   if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
@@ -83,7 +95,7 @@ export const readHugo: PresetReader = (configFile, files) => {
         ...(basePath === null ? {} : { basePath }),
       },
       linkPatterns: [{ pattern: REF_PATTERN, route: '$1' }],
-      generated: { sectionLists: true },
+      generated: { sectionLists: true, ...(listRoutes.length === 0 ? {} : { routes: listRoutes }) },
       ...(outside.length === 0 ? {} : { outside }),
     },
     navigation: null,
