@@ -36,11 +36,13 @@ export const readJekyll: PresetReader = (configFile, files) => {
       permalinks[name] = str(value.permalink) ?? '/:collection/:path:output_ext';
     }
   }
-  // Every other `_folder` is no page.
+  // Every other `_folder` is no page (a collection without `output: true` too).
   const underscored = new Set<string>();
   for (const f of files.markdownFiles(source)) {
     const top = f.slice(source === '' ? 0 : source.length + 1).split('/');
-    if (top.length > 1 && top[0]!.startsWith('_') && top[0] !== '_posts' && !collections.includes(top[0]!.slice(1))) underscored.add(`${top[0]}/**`);
+    const name = top[0]!;
+    // `_includes/` stays: its files are part of the pages that include them, never pages.
+    if (top.length > 1 && name.startsWith('_') && name !== '_posts' && name !== '_includes' && !collections.includes(name.slice(1))) underscored.add(`${name}/**`);
   }
   const parts = [shownFolder(source)];
   if (hasPosts) parts.push('_posts/');

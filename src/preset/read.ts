@@ -145,7 +145,7 @@ function siteFiles(folder: string): SiteFiles {
         }
         for (const e of entries) {
           if (e.name.startsWith('.') || e.name === 'node_modules') continue;
-          const p = `${rel}/${e.name}`;
+          const p = rel === '' ? e.name : `${rel}/${e.name}`;
           if (e.isDirectory()) walk(p);
           else if (e.isFile() && /\.mdx?$/i.test(e.name)) out.push(p);
         }
