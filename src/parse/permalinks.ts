@@ -191,13 +191,22 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
 
 // ---------------------------------------------------------------- Hugo
 
-/** Hugo's `urlize` as paths use it: spaces to `-`, characters other than letters, digits and `-_./~` dropped, lower case. */
+/**
+ * Hugo's path sanitising as `:title` and `:slug` use it (its `UnicodeSanitize`, then lower case):
+ * letters, digits and `._/~#+` are kept, a run of spaces and hyphens becomes one `-` (none at the
+ * start or the end), every other character is dropped.
+ */
 export function hugoUrlize(text: string): string {
-  return text
-    .trim()
-    .replace(/\s+/g, '-')
-    .replace(/[^\p{L}\p{M}\p{Nd}\-_./~]/gu, '')
-    .toLowerCase();
+  let out = '';
+  let hyphen = false;
+  for (const ch of text) {
+    if (/[\p{L}\p{M}\p{Nd}._/~#+]/u.test(ch)) {
+      if (hyphen && out !== '') out += '-';
+      hyphen = false;
+      out += ch;
+    } else if (ch === '-' || /\s/u.test(ch)) hyphen = true;
+  }
+  return out.toLowerCase();
 }
 
 function hugoPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<string, string>>): string | null {
