@@ -4,9 +4,11 @@
  * `[output.html] site-url` is the base path, `[output.html.redirect]` maps old pages to new ones
  * (a relative target is read against the old page's folder). Chapters SUMMARY.md names that do
  * not exist are made by mdBook (`build.create-missing`): generated routes. A SUMMARY.md made at
- * build time from `SUMMARY.md.in` is read from the template. Heading ids: mdBook's.
+ * build time from `SUMMARY.md.in` is read from the template. Only the chapters it names are
+ * pages: other Markdown files are left out (unless another file includes them). Heading ids:
+ * mdBook's.
  */
-import type { PresetReader, PresetRedirect } from './types.js';
+import type { PresetReader, PresetRedirect, SiteFiles } from './types.js';
 import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
 
 export const readMdbook: PresetReader = (configFile, files) => {
@@ -52,20 +54,24 @@ export const readMdbook: PresetReader = (configFile, files) => {
       for (const r of [route, `/${file}`]) if (!missing.includes(r)) missing.push(r);
     }
   }
+  // Only the chapters SUMMARY.md names are built: another Markdown file is no page (a file
+  // another one includes is still read, as part of the page that includes it).
+  const unlisted = summary === null ? [] : unlistedFiles(summary, src, files);
   const parts = [shownFolder(src)];
   if (summary !== null) parts.push(summaryName);
+  if (unlisted.length > 0) parts.push(`${count(unlisted.length, 'file')} not in ${summaryName} left out`);
   if (missing.length > 0) parts.push(`${count(missing.length / 2, 'chapter')} made at build time`);
   if (redirects.length > 0) parts.push(count(redirects.length, 'redirect'));
   // The book opens on the first chapter of SUMMARY.md when there is no index page.
   const first = summary === null ? null : /\]\(\s*<?([^)\s>#]+\.md)/.exec(summary)?.[1] ?? null;
-  const hasIndex = files.exists(`${src === '' ? '' : `${src}/`}index.md`) || files.exists(`${src === '' ? '' : `${src}/`}README.md`);
+  const hasIndex = ['index.md', 'README.md'].some((f) => files.exists(inSrc(f)) && !unlisted.includes(f));
   return {
     name: 'mdbook',
     configFile,
     contentDir: src,
     config: {
       routes: { style: 'html', indexNames: ['index', 'README'], headingIdsDefault: 'mdbook', ...(basePath === null ? {} : { basePath }) },
-      exclude: ['SUMMARY.md', 'SUMMARY.md.in'],
+      exclude: ['SUMMARY.md', 'SUMMARY.md.in', ...unlisted],
       ...(hasIndex || first === null ? {} : { entry: [first.replace(/^\.\//, '')] }),
       ...(missing.length === 0 ? {} : { generated: { routes: missing } }),
     },
@@ -75,3 +81,45 @@ export const readMdbook: PresetReader = (configFile, files) => {
     notes,
   };
 };
+
+/** A glob character: such a file name cannot be left out by an exact-path glob. */
+const GLOB_CHARS = /[*?[\]{}()!]/;
+
+/**
+ * The Markdown files under `src` that SUMMARY.md does not name and no other file includes
+ * (`{{#include}}`, `{{#rustdoc_include}}`, `{{#playground}}`), relative to `src`, sorted.
+ */
+function unlistedFiles(summary: string, src: string, files: SiteFiles): string[] {
+  const chapters = new Set<string>();
+  for (const m of summary.matchAll(/\]\(\s*<?([^)>#\s]+?\.md)(?:#[^)>]*)?>?\s*\)/g)) {
+    chapters.add(joinPath('', safeDecode(m[1]!)));
+  }
+  const all = files.markdownFiles(src).map((f) => (src === '' ? f : f.slice(src.length + 1)));
+  const included = new Set<string>();
+  for (const f of all) {
+    const text = files.read(src === '' ? f : `${src}/${f}`) ?? '';
+    if (!text.includes('{{#')) continue;
+    const folder = f.includes('/') ? f.slice(0, f.lastIndexOf('/')) : '';
+    for (const m of text.matchAll(/\{\{#(?:include|rustdoc_include|playground)\s+([^\s}:]+)/g)) included.add(joinPath(folder, m[1]!));
+  }
+  return all.filter((f) => f !== 'SUMMARY.md' && !chapters.has(f) && !included.has(f) && !GLOB_CHARS.test(f)).sort();
+}
+
+/** `folder` joined with a relative path, dot segments removed ('' when it climbs above). */
+function joinPath(folder: string, rel: string): string {
+  const out: string[] = folder === '' ? [] : folder.split('/');
+  for (const seg of rel.replace(/^\/+/, '').split('/')) {
+    if (seg === '' || seg === '.') continue;
+    if (seg === '..') out.pop();
+    else out.push(seg);
+  }
+  return out.join('/');
+}
+
+function safeDecode(path: string): string {
+  try {
+    return decodeURI(path);
+  } catch {
+    return path;
+  }
+}
