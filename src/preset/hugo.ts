@@ -4,13 +4,18 @@
  * at `/a/b/` (`uglyURLs`: `/a/b.html`), `_index.md` and `index.md` stand for their folder, URLs
  * lower-cased, `baseURL`'s path is the base path, each section's `_index.md` lists its pages.
  * Relative links resolve against the page URL. Frontmatter `url` and `slug` and `[permalinks]`
- * patterns give routes by Hugo's rules (`routes.generator: 'hugo'`). `module.mounts` whose source folder is absent
+ * patterns give routes by Hugo's rules (`routes.generator: 'hugo'`). Top-level folders without
+ * `_index.md` still get a list page, and `staticDir` files are copied to the root: links to
+ * either are to pages the generator makes (`generated.routes`). `module.mounts` whose source folder is absent
  * bring content in from elsewhere at build time: their targets are outside these sources.
  * Heading ids: `markup.goldmark.parser.autoHeadingIDType` (github, github-ascii, blackfriday).
  */
 import type { HeadingIdStyle } from '../parse/heading-ids.js';
 import type { PresetReader } from './types.js';
 import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
+
+/** Static files known by their routes, at most. */
+const MAX_STATIC_FILES = 20000;
 
 const ID_TYPES: Readonly<Record<string, HeadingIdStyle>> = {
   github: 'hugo-github',
@@ -76,6 +81,15 @@ export const readHugo: PresetReader = (configFile, files) => {
     if (/^_index\.[^/]+$/.test(rel.slice(cut + 1))) withIndex.add(top);
   }
   const listRoutes = [...lists].filter((t) => !withIndex.has(t)).sort().map((t) => `/${t}/`);
+  // Files in `staticDir` (default `static/`) are copied to the site's root.
+  const staticDirs = Array.isArray(conf.staticDir) ? conf.staticDir.filter((d): d is string => typeof d === 'string') : [str(conf.staticDir) ?? 'static'];
+  const staticRoutes: string[] = [];
+  for (const dir of staticDirs.map(cleanFolder)) {
+    if (dir === '') continue;
+    for (const f of files.files(dir, MAX_STATIC_FILES)) staticRoutes.push(`/${f.slice(dir.length + 1)}`);
+  }
+  if (staticRoutes.length >= MAX_STATIC_FILES) notes.push(`more than ${MAX_STATIC_FILES} static files; the first ${MAX_STATIC_FILES} are known`);
+  const generatedRoutes = [...new Set([...listRoutes, ...staticRoutes])].sort();
   const parts = [shownFolder(content)];
   if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
   if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
@@ -95,7 +109,7 @@ export const readHugo: PresetReader = (configFile, files) => {
         ...(basePath === null ? {} : { basePath }),
       },
       linkPatterns: [{ pattern: REF_PATTERN, route: '$1' }],
-      generated: { sectionLists: true, ...(listRoutes.length === 0 ? {} : { routes: listRoutes }) },
+      generated: { sectionLists: true, ...(generatedRoutes.length === 0 ? {} : { routes: generatedRoutes }) },
       ...(outside.length === 0 ? {} : { outside }),
     },
     navigation: null,
