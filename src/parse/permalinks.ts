@@ -42,14 +42,15 @@ export const JEKYLL_STYLES: Readonly<Record<string, string>> = {
  * The path a generator's rules give the file, below the base path and without it (starting with
  * `/`), or null when its rules leave the folder route as it is.
  * @param path file path relative to the content root
- * @param rest the path after a `routes.folders` prefix was taken off (Docusaurus), else `path`
+ * @param generator `routes.generator`
+ * @param permalinks `routes.permalinks`
  */
-export function generatorPath(path: string, meta: RouteMeta, routes: RouteOptions): string | null {
-  switch (routes.generator) {
+export function generatorPath(path: string, meta: RouteMeta, generator: RouteOptions['generator'], permalinks: RouteOptions['permalinks']): string | null {
+  switch (generator) {
     case 'jekyll':
-      return jekyllPath(path, meta, routes.permalinks);
+      return jekyllPath(path, meta, permalinks);
     case 'hugo':
-      return hugoPath(path, meta, routes.permalinks);
+      return hugoPath(path, meta, permalinks);
     default:
       return null;
   }

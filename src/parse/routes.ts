@@ -35,8 +35,9 @@ const HTML_EXT = /\.html?$/i;
  */
 export function routeOfFile(path: string, meta: RouteMeta, routes: RouteOptions): string {
   const base = canonicalUrlPath(normalizedBasePath(routes));
-  if (routes.generator !== 'none') {
-    const own = generatorPath(path, meta, routes);
+  const { generator, permalinks } = routes;
+  if (generator !== 'none') {
+    const own = generatorPath(path, meta, generator, permalinks);
     if (own !== null) return canonicalUrlPath(completeRoute(base + own.replace(/^\/+/, ''), routes.style));
     return mapFolder(path, routes, meta) ?? base + fileRoutePath(path, routes);
   }
