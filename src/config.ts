@@ -57,7 +57,11 @@ export interface RoutesConfig {
    * the base path. @default 'none'
    */
   generator?: 'none' | 'jekyll' | 'hugo' | 'docusaurus' | undefined;
-  /** Permalink patterns: Hugo section -> pattern (`/:year/:month/:title/`); Jekyll `*` (the site's `permalink`) or a collection -> pattern. @default {} */
+  /**
+   * Permalink patterns: Hugo section -> pattern (`/:year/:month/:title/`); Jekyll `*` (the
+   * site's `permalink`), a collection, `path:FOLDER` or `type:TYPE` (frontmatter defaults) ->
+   * pattern. @default {}
+   */
   permalinks?: Record<string, string> | undefined;
   /**
    * How headings get their fragment ids. `auto` picks the style under which the most of the

@@ -168,10 +168,11 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
       name: jekyllSlugify(stem, 'default', false),
       collection: 'posts',
     };
-    return fillJekyll(jekyllPattern(meta.permalink ?? site), values);
+    return fillJekyll(jekyllPattern(meta.permalink ?? scoped(permalinks, path, 'posts') ?? site), values);
   }
   const collection = parts.length > 0 && parts[0]!.startsWith('_') ? parts[0]!.slice(1) : null;
-  if (collection !== null && permalinks[collection] === undefined && meta.permalink === undefined) return null;
+  const byDefault = scoped(permalinks, path, collection ?? 'pages');
+  if (collection !== null && permalinks[collection] === undefined && meta.permalink === undefined && byDefault === undefined) return null;
   const folder = collection === null ? parts : parts.slice(1);
   const index = collection === null && stem.toLowerCase() === 'index';
   const values: Record<string, string> = {
@@ -185,9 +186,29 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
     categories: (meta.categories ?? []).map((c) => c.toLowerCase()).join('/'),
   };
   if (meta.permalink !== undefined) return fillJekyll(meta.permalink, values);
+  if (byDefault !== undefined) return fillJekyll(byDefault, values);
   if (collection !== null) return fillJekyll(permalinks[collection]!, values);
   if (index) return fillJekyll('/:path/', values);
   return fillJekyll(jekyllPageTemplate(site), values);
+}
+
+/**
+ * A permalink set by the site's frontmatter defaults (`defaults:` in `_config.yml`): the key
+ * `path:FOLDER` (the longest folder holding the file wins) or `type:TYPE` (`posts`, `pages` or
+ * a collection), the path first.
+ */
+function scoped(permalinks: Readonly<Record<string, string>>, path: string, type: string): string | undefined {
+  let best: string | undefined;
+  let length = -1;
+  for (const [key, pattern] of Object.entries(permalinks)) {
+    if (!key.startsWith('path:')) continue;
+    const folder = key.slice(5).replace(/^\.?\/+|\/+$/g, '');
+    if ((folder === '' || path.startsWith(`${folder}/`)) && folder.length > length) {
+      best = pattern;
+      length = folder.length;
+    }
+  }
+  return best ?? permalinks[`type:${type}`];
 }
 
 // ---------------------------------------------------------------- Hugo

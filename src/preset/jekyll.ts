@@ -7,8 +7,8 @@
  * collections with `output: true` (`_name/`, `/:collection/:path:output_ext` unless the
  * collection says otherwise). Other folders starting with `_` are no pages (`_layouts/`,
  * `_data/`, `_site/`...; files in `_includes/` are part of the pages that include them).
- * `exclude:` is honoured. Heading ids: kramdown's GFM input (GitHub-like) unless
- * `kramdown.input` says otherwise.
+ * `defaults:` that set a permalink by folder or by type apply. `exclude:` is honoured. Heading
+ * ids: kramdown's GFM input (GitHub-like) unless `kramdown.input` says otherwise.
  */
 import type { PresetReader } from './types.js';
 import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
@@ -34,6 +34,19 @@ export const readJekyll: PresetReader = (configFile, files) => {
       if (name === 'posts' || !isRecord(value) || value.output !== true) continue;
       collections.push(name);
       permalinks[name] = str(value.permalink) ?? '/:collection/:path:output_ext';
+    }
+  }
+  // Frontmatter defaults that set a permalink, scoped by a folder or by a type alone.
+  if (Array.isArray(conf.defaults)) {
+    for (const d of conf.defaults) {
+      const permalink = str(dig(d, 'values', 'permalink'));
+      if (permalink === undefined) continue;
+      const path = str(dig(d, 'scope', 'path'));
+      const type = str(dig(d, 'scope', 'type'));
+      if (path !== undefined && path !== '' && type === undefined) permalinks[`path:${path}`] = permalink;
+      else if (type !== undefined && (path === undefined || path === '')) permalinks[`type:${type}`] = permalink;
+      else if (path === '' || path === undefined) permalinks['path:'] = permalink;
+      else notes.push(`a defaults permalink scoped by both path and type is not applied (${path}, ${type})`);
     }
   }
   // Every other `_folder` is no page (a collection without `output: true` too).

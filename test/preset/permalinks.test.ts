@@ -76,6 +76,15 @@ describe('Jekyll permalinks (jekyllrb.com/docs/permalinks/, from memory)', () =>
     expect(route('_cook/soups/leek.md', withCollections, { permalink: '/:collection/:name/' })).toBe('/cook/leek/');
   });
 
+  it('frontmatter defaults scoped by a folder or a type (checked with the installed jekyll 4.3 on the same three files)', () => {
+    const defaults: Config['routes'] = { generator: 'jekyll', style: 'html', permalinks: { '*': 'date', 'path:docs': '/manual/:basename/', 'type:posts': '/articles/:title/' } };
+    expect(route('docs/alpha.md', defaults)).toBe('/manual/alpha/');
+    expect(route('_posts/2020-01-02-news-item.md', defaults)).toBe('/articles/news-item/');
+    expect(route('index.md', defaults)).toBe('/');
+    // The page's own permalink still wins.
+    expect(route('docs/alpha.md', defaults, { permalink: '/a/' })).toBe('/a/');
+  });
+
   it('slugify modes, checked with the installed jekyll 4.3 (Jekyll::Utils.slugify)', () => {
     expect(jekyllSlugify("The _config.yml file's Title!", 'default', false)).toBe('the-config-yml-file-s-title');
     expect(jekyllSlugify("The _config.yml file's Title!", 'pretty', true)).toBe("The-_config.yml-file's-Title!");
