@@ -9,6 +9,12 @@
 #   npm-docs      npm package npm@10.9.9: docs/content, the npm CLI's Markdown documentation
 #   python-doc    Debian python3.11-doc 3.11.2-6+deb12u9: the Python 3.11 documentation, built HTML
 #   postgres-doc  Debian postgresql-doc-15 15.20-0+deb12u1: the PostgreSQL 15 manual, built HTML
+# Generator source trees (each lands in DIR/<name>/site with the generator's config at its root,
+# for a run with no linkweave config): Debian source packages, fetched with a private apt source
+# list (deb-src) so the machine's apt setup is left alone:
+#   nix-manual    Debian source nix 2.8.0-1.1: doc/manual, an mdBook (book.toml, src/SUMMARY.md.in)
+#   nlopt-docs    Debian source nlopt 2.7.1-5: mkdocs.yml and doc/docs, a MkDocs site
+#   hugo-docs     Debian source hugo 0.111.3-1: docs/, Hugo's own documentation site
 # Debian versions are pinned where apt still serves them; otherwise the current one is taken and
 # the script says which it got.
 set -euo pipefail
@@ -58,6 +64,39 @@ if [ ! -d postgres-doc/site ]; then
   cp -r postgresql-doc-15-deb/usr/share/doc/postgresql-doc-15/html postgres-doc/site
 fi
 
-for s in nodejs-doc npm-docs python-doc postgres-doc; do
+# Debian source packages: a private deb-src list under ./apt, `apt-get source --download-only`.
+APT_OPTS=(-o APT::Sandbox::User=root -o Dir::Etc::SourceList="$DIR/apt/src.sources" -o Dir::Etc::SourceParts=/nonexistent
+  -o Dir::State::Lists="$DIR/apt/lists" -o Dir::Cache="$DIR/apt/cache")
+debsrc() { # name version -> ./src/<name>_<upstream>.orig.tar.*
+  local name="$1" version="$2"
+  if ! ls "src/${name}_"*.orig.tar.* >/dev/null 2>&1; then
+    if [ ! -f apt/src.sources ]; then
+      mkdir -p apt/lists/partial apt/cache/archives/partial
+      printf 'Types: deb-src\nURIs: http://deb.debian.org/debian\nSuites: bookworm\nComponents: main\nSigned-By: /usr/share/keyrings/debian-archive-keyring.gpg\n' > apt/src.sources
+      apt-get "${APT_OPTS[@]}" update >/dev/null
+    fi
+    mkdir -p src
+    (cd src && apt-get "${APT_OPTS[@]}" source --download-only "$name=$version" >/dev/null)
+  fi
+  echo "$name $version (source)"
+}
+
+debsrc nix '2.8.0-1.1'
+if [ ! -d nix-manual/site ]; then
+  mkdir -p nix-manual && tar xJf src/nix_2.8.0.orig.tar.xz -C nix-manual nix-2.8.0/doc/manual
+  mv nix-manual/nix-2.8.0/doc/manual nix-manual/site && rm -rf nix-manual/nix-2.8.0
+fi
+
+debsrc nlopt '2.7.1-5'
+if [ ! -d nlopt-docs/site ]; then
+  mkdir -p nlopt-docs/site && tar xzf src/nlopt_2.7.1.orig.tar.gz -C nlopt-docs/site --strip-components=1 nlopt-2.7.1/mkdocs.yml nlopt-2.7.1/doc/docs
+fi
+
+debsrc hugo '0.111.3-1'
+if [ ! -d hugo-docs/site ]; then
+  mkdir -p hugo-docs/site && tar xzf src/hugo_0.111.3.orig.tar.gz -C hugo-docs/site --strip-components=2 hugo-0.111.3/docs
+fi
+
+for s in nodejs-doc npm-docs python-doc postgres-doc nix-manual nlopt-docs hugo-docs; do
   printf '%-13s %6d files  %s\n' "$s" "$(find "$s/site" -type f \( -name '*.md' -o -name '*.html' \) | wc -l)" "$DIR/$s/site"
 done

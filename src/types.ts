@@ -74,6 +74,11 @@ export interface RawLink {
   readonly fileRelative?: boolean;
   /** The visible text is one inline code span and nothing else (`` [`x()`](y) ``, `<a><code>x()</code></a>`). */
   readonly code?: true;
+  /**
+   * The file the link is written in, when it is not the page's own: a file the page includes
+   * (`line` and `column` are in that file). Set by the graph stage, never by the parse stage.
+   */
+  readonly file?: string;
 }
 
 /** A heading with its fragment slug. */
@@ -174,6 +179,12 @@ export interface PageText {
 export interface PageMeta {
   readonly slug?: string;
   readonly permalink?: string;
+  /** Hugo's `url`: the page's whole path. */
+  readonly url?: string;
+  /** `date` as written (a generator's permalink patterns read it). */
+  readonly date?: string;
+  /** `categories` (or `category`), for Jekyll's `:categories`. */
+  readonly categories?: readonly string[];
   readonly draft: boolean;
   readonly noindex: boolean;
   readonly aliases: readonly string[];

@@ -53,7 +53,8 @@ export function contentPairs(graph: SiteGraph): ContentPair[] {
 
 /** Pairs that may be held out: neither page excluded. */
 export function eligiblePairs(graph: SiteGraph, pairs: readonly ContentPair[]): ContentPair[] {
-  return pairs.filter((p) => !graph.pages[p.source]!.meta.exclude && !graph.pages[p.target]!.meta.exclude);
+  // A pair with a link written in an included file cannot be held out from the page's own text.
+  return pairs.filter((p) => !graph.pages[p.source]!.meta.exclude && !graph.pages[p.target]!.meta.exclude && !p.links.some((l) => l.raw.file !== undefined));
 }
 
 /** What `holdOut` needs. */

@@ -4,7 +4,8 @@ import type { ResolvedOptions } from '../config/options.js';
 /**
  * Every option `src/parse/` reads (a test records the reads of `parseSource` and checks it
  * against this list):
- * - `routes.style`, `routes.basePath`, `routes.indexNames`, `routes.folders`, `routes.dated`: the route and title of a page;
+ * - `routes.style`, `routes.basePath`, `routes.indexNames`, `routes.folders`, `routes.dated`,
+ *   `routes.generator`, `routes.permalinks`: the route and title of a page;
  * - `linkPatterns`: links found by the configured patterns;
  * - `maxLinksPerPage`: links kept per page (more are dropped with a problem).
  *
@@ -20,6 +21,8 @@ export const PARSE_OPTION_KEYS = [
   'routes.indexNames',
   'routes.folders',
   'routes.dated',
+  'routes.generator',
+  'routes.permalinks',
   'linkPatterns',
   'maxLinksPerPage',
 ] as const;

@@ -52,6 +52,18 @@ export interface RoutesConfig {
    */
   absoluteLinksUnderBase?: boolean | undefined;
   /**
+   * Whose rules turn frontmatter `permalink`/`slug`/`url`, `permalinks` and file names into
+   * routes; a preset sets its generator's. `none`: `permalink` is site-absolute, `slug` is below
+   * the base path. @default 'none'
+   */
+  generator?: 'none' | 'jekyll' | 'hugo' | 'docusaurus' | undefined;
+  /**
+   * Permalink patterns: Hugo section -> pattern (`/:year/:month/:title/`); Jekyll `*` (the
+   * site's `permalink`), a collection, `path:FOLDER` or `type:TYPE` (frontmatter defaults) ->
+   * pattern. @default {}
+   */
+  permalinks?: Record<string, string> | undefined;
+  /**
    * How headings get their fragment ids. `auto` picks the style under which the most of the
    * site's own fragment links resolve (`headingIdsDefault` breaks a tie). @default 'auto'
    */

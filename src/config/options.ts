@@ -39,6 +39,8 @@ const schema = z.strictObject({
       folders: z.record(z.string().min(1), z.string().startsWith('/')).default({}),
       dated: z.array(z.string().min(1)).default([]),
       absoluteLinksUnderBase: z.boolean().default(false),
+      generator: z.enum(['none', 'jekyll', 'hugo', 'docusaurus']).default('none'),
+      permalinks: z.record(z.string().min(1), z.string().min(1)).default({}),
       headingIds: z.enum(['auto', ...HEADING_ID_STYLES]).default('auto'),
       headingIdsDefault: z.enum(HEADING_ID_STYLES).default('github'),
     })

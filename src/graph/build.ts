@@ -16,6 +16,7 @@ import { markTemplateLinks } from './template.js';
 import { generatedEdges } from './generated.js';
 import { applyHeadingIdStyle, PageIds } from './heading-ids.js';
 import { resolveIncludes } from './includes.js';
+import { bundleResources } from './bundles.js';
 import { scopeContext } from './scope.js';
 
 /** Pages with more ids than this get a Set for fragment checks; smaller ones are scanned. */
@@ -31,7 +32,8 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
   const routes = options.routes;
   const basePath = normalizedBasePath(routes);
   const includes = resolveIncludes(input.pages, input.assets);
-  const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, includes.includedFiles);
+  const notPages = routes.generator === 'hugo' ? new Set([...includes.includedFiles, ...bundleResources(input.pages)]) : includes.includedFiles;
+  const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, notPages);
   const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]!);
   const unknownIds = new Set<number>();
   for (const p of pages) if (includes.unknown.has(p.factsIndex)) unknownIds.add(p.id);
@@ -85,6 +87,11 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
     const src = pageSource(id, f.kind, f.file, pages[id]!.route, f.baseHref);
     const start = resolved.length;
     for (const raw of f.links) resolved.push(resolveLink(raw, src, ctx));
+    // An included file's text is part of the page: its links are the page's, resolved from the
+    // page (the generator pastes the text in before it renders), placed in the included file.
+    for (const inc of includes.pulledIn.get(pages[id]!.factsIndex) ?? []) {
+      for (const raw of inc.links) resolved.push(resolveLink({ ...raw, file: inc.file }, src, ctx));
+    }
     if (resolved.length - start > 1) sortRange(resolved, start);
   }
   const marked = resolved.slice(0, navCount).concat(markTemplateLinks(resolved.slice(navCount), n, options.templateShare));
@@ -138,6 +145,9 @@ function withContext(link: ResolvedLink, context: 'template'): ResolvedLink {
 }
 
 function comparePosition(a: ResolvedLink, b: ResolvedLink): number {
+  const fa = a.raw.file ?? '';
+  const fb = b.raw.file ?? '';
+  if (fa !== fb) return fa < fb ? -1 : 1;
   return a.raw.line - b.raw.line || a.raw.column - b.raw.column;
 }
 

@@ -29,7 +29,11 @@ export function generatedEdges(pages: readonly PageNode[], sectionLists: boolean
       const folder = folderOf(p.file);
       const isSection = sections.get(folder) === p.id;
       // A page belongs to its folder's section; a section (and a leaf bundle's index.md) to its parent's.
-      const owner = isSection || /(^|\/)index\.[^/]+$/.test(p.file) ? sections.get(folderOf(folder.slice(0, -1))) : sections.get(folder);
+      const ownerFolder = isSection || /(^|\/)index\.[^/]+$/.test(p.file) ? folderOf(folder.slice(0, -1)) : folder;
+      let owner = sections.get(ownerFolder);
+      // A top-level folder is a section even without `_index.md`: its generated list page, which
+      // has no source, is reached from the home page, so the home page stands for it.
+      if (owner === undefined && /^[^/]+\/$/.test(ownerFolder)) owner = sections.get('');
       if (owner !== undefined && owner !== p.id) edges.push({ from: owner, to: p.id });
     }
   }

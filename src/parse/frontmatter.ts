@@ -1,10 +1,12 @@
 /**
  * YAML frontmatter (DESIGN section 3): the keys linkweave reads, each checked for its type.
+ * TOML frontmatter between `+++` fences (Hugo's) is read the same way.
  *
  * Invalid YAML gives one `frontmatter` problem at the line of the YAML error and the page is read
  * without frontmatter; a key of the wrong type gives a problem naming the key at its line and is
  * ignored; other keys are left alone (they belong to the site generator).
  */
+import { parse as parseToml } from 'smol-toml';
 import { isMap, isScalar, parseDocument } from 'yaml';
 import type { PageMeta } from '../types.js';
 import type { PageDraft, ProblemDraft, Read } from './types.js';
@@ -21,8 +23,10 @@ export interface FrontmatterResult {
 
 /** A frontmatter block found at the start of a text. */
 export interface FrontmatterBlock {
-  /** The YAML between the fences. */
+  /** The YAML (or TOML) between the fences. */
   readonly value: string;
+  /** `toml` for a `+++` block; absent for YAML. */
+  readonly format?: 'toml';
   /** Offset of the YAML's first character. */
   readonly contentStart: number;
   /** Offset just past the closing fence line (its line ending excluded). */
@@ -39,9 +43,10 @@ const LINKWEAVE_KEYS = new Set(['importance', 'exclude']);
  * @param text the source text (BOM removed)
  */
 export function findFrontmatter(text: string): FrontmatterBlock | null {
-  const open = /^---[ \t]*(?:\r\n|\r|\n)/.exec(text);
+  const open = /^(---|\+\+\+)[ \t]*(?:\r\n|\r|\n)/.exec(text);
   if (open === null) return null;
-  const fence = /^---[ \t]*$/gm;
+  const toml = open[1] === '+++';
+  const fence = toml ? /^\+\+\+[ \t]*$/gm : /^---[ \t]*$/gm;
   fence.lastIndex = open[0].length;
   // `^`/`$` with the m flag know \n and \r line ends.
   for (let m = fence.exec(text); m !== null; m = fence.exec(text)) {
@@ -51,7 +56,8 @@ export function findFrontmatter(text: string): FrontmatterBlock | null {
     let valueEnd = m.index;
     if (valueEnd > contentStart && text.charCodeAt(valueEnd - 1) === 10) valueEnd--;
     if (valueEnd > contentStart && text.charCodeAt(valueEnd - 1) === 13) valueEnd--;
-    return { value: text.slice(contentStart, Math.max(contentStart, valueEnd)), contentStart, end: m.index + m[0].length };
+    const value = text.slice(contentStart, Math.max(contentStart, valueEnd));
+    return toml ? { value, contentStart, end: m.index + m[0].length, format: 'toml' } : { value, contentStart, end: m.index + m[0].length };
   }
   return null;
 }
@@ -61,12 +67,23 @@ export function findFrontmatter(text: string): FrontmatterBlock | null {
  * @param value the YAML text between the fences
  * @param contentStart offset of the YAML's first character in the source (problem positions)
  */
-export function readFrontmatter(value: string, contentStart: number): FrontmatterResult {
+export function readFrontmatter(value: string, contentStart: number, format: 'yaml' | 'toml' = 'yaml'): FrontmatterResult {
   const problems: ProblemDraft[] = [];
   const fail = (offset: number, message: string): FrontmatterResult => {
     problems.push({ code: 'frontmatter', message, offset: contentStart + offset });
     return { meta: EMPTY_META, problems };
   };
+  if (format === 'toml') {
+    let data: Record<string, unknown>;
+    try {
+      data = parseToml(value) as Record<string, unknown>;
+    } catch (error) {
+      const e = error as Error & { line?: number; column?: number };
+      const offset = e.line === undefined ? 0 : lineOffset(value, e.line) + Math.max(0, (e.column ?? 1) - 1);
+      return fail(offset, `Invalid TOML frontmatter: ${e.message.split('\n')[0]}; the page is read without its frontmatter`);
+    }
+    return readRecord(data, contentStart, problems, tomlKeyOffsets(value), () => 0);
+  }
   const doc = parseDocument(value, { prettyErrors: false });
   if (doc.errors.length > 0) {
     const e = doc.errors[0]!;
@@ -82,14 +99,23 @@ export function readFrontmatter(value: string, contentStart: number): Frontmatte
   if (typeof data !== 'object' || Array.isArray(data)) {
     return fail(0, `The frontmatter is not a mapping of keys (found: ${describe(data)}); the page is read without it`);
   }
-  const record = data as Record<string, unknown>;
-  const offsets = keyOffsets(doc.contents);
+  return readRecord(data as Record<string, unknown>, contentStart, problems, keyOffsets(doc.contents), (key) => nestedOffset(doc.contents, key));
+}
+
+/** The keys linkweave reads from a parsed frontmatter mapping, YAML's or TOML's. */
+function readRecord(
+  record: Record<string, unknown>,
+  contentStart: number,
+  problems: ProblemDraft[],
+  offsets: ReadonlyMap<string, number>,
+  nested: (dotted: string) => number,
+): FrontmatterResult {
   const at = (key: string): number => contentStart + (offsets.get(key) ?? 0);
   const wrong = (key: string, got: unknown, expected: string): void => {
     problems.push({
       code: 'frontmatter',
       message: `Frontmatter key "${key}": unexpected ${describe(got)}, expected ${expected}; the key is ignored`,
-      offset: at(key.split('.')[0]!) + (key.includes('.') ? nestedOffset(doc.contents, key) : 0),
+      offset: at(key.split('.')[0]!) + (key.includes('.') ? nested(key) : 0),
     });
   };
 
@@ -106,6 +132,17 @@ export function readFrontmatter(value: string, contentStart: number): Frontmatte
     if (t === undefined || t.trim() === '') wrong(key, record[key], 'a non-empty route text');
     else meta[key] = t;
   }
+  if ('url' in record) {
+    const t = textValue(record.url);
+    if (t === undefined || t.trim() === '') wrong('url', record.url, 'a non-empty route text');
+    else meta.url = t;
+  }
+  // Dates only feed permalink patterns: one that does not read is left out without a word.
+  const date = record.date instanceof Date ? record.date.toISOString() : textValue(record.date);
+  if (date !== undefined && /^\d{4}-\d{1,2}-\d{1,2}/.test(date.trim())) meta.date = date.trim();
+  const cats = record.categories ?? record.category;
+  if (typeof cats === 'string' && cats.trim() !== '') meta.categories = cats.trim().split(/\s+/);
+  else if (Array.isArray(cats)) meta.categories = cats.filter((c): c is string | number => typeof c === 'string' || typeof c === 'number').map(String);
   for (const key of ['draft', 'noindex'] as const) {
     if (!(key in record)) continue;
     if (typeof record[key] === 'boolean') meta[key] = record[key];
@@ -167,6 +204,29 @@ function describe(v: unknown): string {
   return typeof v;
 }
 
+/** Offset of the start of a 1-based line. */
+function lineOffset(text: string, line: number): number {
+  let at = 0;
+  for (let l = 1; l < line; l++) {
+    const next = text.indexOf('\n', at);
+    if (next < 0) return at;
+    at = next + 1;
+  }
+  return at;
+}
+
+/** Offsets (within the TOML) of the top-level keys: `key =` lines before the first table header. */
+function tomlKeyOffsets(value: string): Map<string, number> {
+  const map = new Map<string, number>();
+  const re = /^[ \t]*(?:"([^"\n]*)"|'([^'\n]*)'|([A-Za-z0-9_-]+))[ \t]*=|^[ \t]*\[/gm;
+  for (let m = re.exec(value); m !== null; m = re.exec(value)) {
+    if (m[0].trimStart().startsWith('[')) break;
+    const key = m[1] ?? m[2] ?? m[3]!;
+    if (!map.has(key)) map.set(key, m.index + m[0].length - m[0].trimStart().length);
+  }
+  return map;
+}
+
 /** Offsets (within the YAML) of the top-level keys. */
 function keyOffsets(contents: unknown): Map<string, number> {
   const map = new Map<string, number>();
@@ -196,9 +256,9 @@ function nestedOffset(contents: unknown, dotted: string): number {
  * @param draft the page being collected
  * @param block the YAML and the offset of its first character, or null
  */
-export function applyFrontmatter(draft: PageDraft, block: { readonly value: string; readonly contentStart: number } | null): Read {
+export function applyFrontmatter(draft: PageDraft, block: { readonly value: string; readonly contentStart: number; readonly format?: 'toml' | undefined } | null): Read {
   if (block === null) return { draft, meta: EMPTY_META };
-  const result = readFrontmatter(block.value, block.contentStart);
+  const result = readFrontmatter(block.value, block.contentStart, block.format ?? 'yaml');
   draft.problems.push(...result.problems);
   return result.title === undefined ? { draft, meta: result.meta } : { draft, meta: result.meta, title: result.title };
 }

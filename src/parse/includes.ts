@@ -18,9 +18,10 @@ import type { LineIndex } from '../util/line-index.js';
 import { positionOf } from '../util/line-index.js';
 
 const QUICK = /\{\{#|--8<--|\{\{[<%]|\{%-?\s*include/;
-const DIRECTIVES: readonly { readonly re: RegExp; readonly from: 'file' | 'root' | 'includes' }[] = [
+type From = 'file' | 'root' | 'includes' | 'snippets';
+const DIRECTIVES: readonly { readonly re: RegExp; readonly from: From }[] = [
   { re: /\{\{#(?:include|rustdoc_include)\s+([^\s}]+)[^}]*\}\}/g, from: 'file' },
-  { re: /^[ \t]*-{2,}8<-{2,}[ \t]+["']([^"'\n]+)["']/gm, from: 'file' },
+  { re: /^[ \t]*-{2,}8<-{2,}[ \t]+["']([^"'\n]+)["']/gm, from: 'snippets' },
   { re: /\{\{[<%]\s*(?:include|readfile)\s+(?:file\s*=\s*)?["']([^"'\n]+)["'][^}]*[>%]\}\}/g, from: 'root' },
   { re: /\{%-?\s*include_relative\s+([^\s%]+)[^%]*-?%\}/g, from: 'file' },
   { re: /\{%-?\s*include\s+([^\s%{]+)[^%]*-?%\}/g, from: 'includes' },
@@ -42,7 +43,7 @@ export function findIncludes(src: string, path: string, code: readonly number[],
     for (let m = re.exec(src); m !== null; m = re.exec(src)) {
       if (inCode(code, m.index)) continue;
       let written = m[1]!.trim();
-      if (from === 'file' && written.startsWith('{{')) continue;
+      if (from !== 'root' && from !== 'includes' && written.startsWith('{{')) continue;
       // mdBook: `file.rs:anchor` or `file.rs:2:10` names a part of the file.
       if (m[0].startsWith('{{#')) written = written.replace(/:.*$/, '');
       if (written === '' || /[{}]/.test(written)) continue;
@@ -55,7 +56,7 @@ export function findIncludes(src: string, path: string, code: readonly number[],
   return found.map((f) => f.ref);
 }
 
-function candidates(written: string, folder: string, from: 'file' | 'root' | 'includes'): string[] {
+function candidates(written: string, folder: string, from: From): string[] {
   const out: string[] = [];
   const add = (p: string | null) => {
     if (p !== null && !out.includes(p)) out.push(p);
@@ -68,15 +69,25 @@ function candidates(written: string, folder: string, from: 'file' | 'root' | 'in
   }
   if (from === 'root' || absolute) {
     add(normalize(bare));
-    // Hugo reads include paths against the project folder, one above `content/`.
+    // Hugo reads include paths against the project folder, one above `content/`, or more when
+    // the content folder is deeper (`content/en/`): the path less its first segments.
     add(normalize(`../${bare}`));
     if (!absolute) add(normalize(folder + bare));
+    if (from === 'root') {
+      const segments = bare.split('/');
+      for (let i = 1; i < segments.length - 1; i++) add(normalize(segments.slice(i).join('/')));
+    }
     return out;
   }
   add(normalize(folder + bare));
-  // MkDocs snippets are read against the project folder too (its `base_path`, default `.`).
+  // MkDocs snippets are read against the project folder too (its `base_path`, default `.`),
+  // which holds the docs folder (`docs/`, or deeper: `doc/docs/`): the path less its first segments.
   add(normalize(bare));
   add(normalize(`../${bare}`));
+  if (from === 'snippets') {
+    const segments = bare.split('/');
+    for (let i = 1; i < segments.length - 1; i++) add(normalize(segments.slice(i).join('/')));
+  }
   return out;
 }
 

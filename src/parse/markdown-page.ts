@@ -35,7 +35,7 @@ export function readMarkdownPage(src: string, lines: LineIndex, mdx = false): Re
   const heavy = findHeavyRegions(src, lines, bodyLine);
   const esm = mdx ? esmLines(src, lines, bodyLine, heavy) : [];
   for (const r of esm) draft.code.push(lineStart(lines, r.from), lineContentEnd(lines, src, r.to - 1));
-  let fm: { value: string; contentStart: number } | null;
+  let fm: { value: string; contentStart: number; format?: 'toml' } | null;
   try {
     const cut = [...heavy, ...esm].sort((a, b) => a.from - b.from);
     fm = readMarkdown(src, blankRegions(src, lines, cut), lines, draft, slugger);

@@ -45,6 +45,8 @@ export interface MarkdownFrontmatter {
   readonly value: string;
   /** Offset of the YAML's first character. */
   readonly contentStart: number;
+  /** `toml` for a `+++` block. */
+  readonly format?: 'toml';
 }
 
 /**
@@ -67,9 +69,12 @@ export function readMarkdown(
   const w: Walk = { src, map: parsed.toSource, lines, draft, slugger, definitions: new Map(), references: [] };
   let frontmatter: MarkdownFrontmatter | null = null;
   const first = tree.children[0];
-  if (first !== undefined && first.type === 'yaml') {
+  // remark-frontmatter's `toml` node (a `+++` block) is not in mdast's node types; it has no children.
+  const fm = first as { type: string; value?: unknown } | undefined;
+  if (first !== undefined && fm !== undefined && (fm.type === 'yaml' || fm.type === 'toml') && typeof fm.value === 'string') {
     const start = startOf(w, first);
-    frontmatter = { value: first.value, contentStart: lineStart(lines, lineOf(lines, start) + 1) };
+    const contentStart = lineStart(lines, lineOf(lines, start) + 1);
+    frontmatter = fm.type === 'toml' ? { value: fm.value, contentStart, format: 'toml' } : { value: fm.value, contentStart };
     draft.code.push(start, endOf(w, first));
   }
   walkChildren(w, tree, 0);

@@ -128,7 +128,7 @@ function assemble(
     file: file.path,
     kind: file.kind,
     hash: file.hash,
-    route: routeOfFile(file.path, meta, options.routes),
+    route: routeOfFile(file.path, read.title === undefined ? meta : { ...meta, title: read.title }, options.routes),
     title,
     meta,
     headings,

@@ -29,7 +29,7 @@ function gfmWithoutLiteralLinks(this: Processor): void {
   (data.fromMarkdownExtensions ??= []).push([gfmFootnoteFromMarkdown(), gfmStrikethroughFromMarkdown(), gfmTableFromMarkdown(), gfmTaskListItemFromMarkdown()]);
 }
 
-const markdown = unified().use(remarkParse).use(gfmWithoutLiteralLinks).use(remarkFrontmatter, ['yaml']).freeze();
+const markdown = unified().use(remarkParse).use(gfmWithoutLiteralLinks).use(remarkFrontmatter, ['yaml', 'toml']).freeze();
 const htmlDocument = unified().use(rehypeParse).freeze();
 const htmlFragment = unified().use(rehypeParse, { fragment: true }).freeze();
 

@@ -3,13 +3,19 @@
  * `content/`; a multilingual site's default language's own `contentDir` when it has one), pages
  * at `/a/b/` (`uglyURLs`: `/a/b.html`), `_index.md` and `index.md` stand for their folder, URLs
  * lower-cased, `baseURL`'s path is the base path, each section's `_index.md` lists its pages.
- * Relative links resolve against the page URL. `module.mounts` whose source folder is absent
+ * Relative links resolve against the page URL. Frontmatter `url` and `slug` and `[permalinks]`
+ * patterns give routes by Hugo's rules (`routes.generator: 'hugo'`). Top-level folders without
+ * `_index.md` still get a list page, and `staticDir` files are copied to the root: links to
+ * either are to pages the generator makes (`generated.routes`). `module.mounts` whose source folder is absent
  * bring content in from elsewhere at build time: their targets are outside these sources.
  * Heading ids: `markup.goldmark.parser.autoHeadingIDType` (github, github-ascii, blackfriday).
  */
 import type { HeadingIdStyle } from '../parse/heading-ids.js';
 import type { PresetReader } from './types.js';
 import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
+
+/** Static files known by their routes, at most. */
+const MAX_STATIC_FILES = 20000;
 
 const ID_TYPES: Readonly<Record<string, HeadingIdStyle>> = {
   github: 'hugo-github',
@@ -25,9 +31,10 @@ export const readHugo: PresetReader = (configFile, files) => {
   const parsed = parseConfigText(configFile, files.read(configFile) ?? '');
   const conf: Record<string, unknown> = parsed.ok ? { ...parsed.value } : {};
   if (!parsed.ok) notes.push(`${configFile} does not parse (${parsed.error}); Hugo's defaults used`);
-  // config/_default/ splits the config into one file per top-level key.
-  if (configFile.startsWith('config/_default/')) {
-    for (const key of ['languages', 'markup', 'module']) {
+  // config/_default/ splits the config into one file per top-level key; Hugo reads it beside a
+  // root config file too (its `configDir`), the root file's keys first.
+  {
+    for (const key of ['languages', 'markup', 'module', 'permalinks']) {
       for (const ext of ['toml', 'yaml', 'yml', 'json']) {
         const text = files.read(`config/_default/${key}.${ext}`);
         if (text === null) continue;
@@ -56,10 +63,37 @@ export const readHugo: PresetReader = (configFile, files) => {
       outside.push(`/${route}${route === '' || route.endsWith('/') ? '' : '/'}`);
     }
   }
-  if (isRecord(conf.permalinks)) notes.push('permalinks rules are not applied (pages keep their folder routes)');
+  // `[permalinks]`: section -> pattern (Hugo 0.111), or the same under `page` (later versions).
+  const permalinks: Record<string, string> = {};
+  if (isRecord(conf.permalinks)) {
+    const table = isRecord(conf.permalinks.page) ? conf.permalinks.page : conf.permalinks;
+    for (const [section, pattern] of Object.entries(table)) if (typeof pattern === 'string') permalinks[section] = pattern;
+  }
+  // Every top-level folder is a section: Hugo makes its list page even without `_index.md`.
+  const lists = new Set<string>();
+  const withIndex = new Set<string>();
+  for (const f of files.markdownFiles(content)) {
+    const rel = content === '' ? f : f.slice(content.length + 1);
+    const cut = rel.indexOf('/');
+    if (cut < 0) continue;
+    const top = rel.slice(0, cut);
+    lists.add(top);
+    if (/^_index\.[^/]+$/.test(rel.slice(cut + 1))) withIndex.add(top);
+  }
+  const listRoutes = [...lists].filter((t) => !withIndex.has(t)).sort().map((t) => `/${t}/`);
+  // Files in `staticDir` (default `static/`) are copied to the site's root.
+  const staticDirs = Array.isArray(conf.staticDir) ? conf.staticDir.filter((d): d is string => typeof d === 'string') : [str(conf.staticDir) ?? 'static'];
+  const staticRoutes: string[] = [];
+  for (const dir of staticDirs.map(cleanFolder)) {
+    if (dir === '') continue;
+    for (const f of files.files(dir, MAX_STATIC_FILES)) staticRoutes.push(`/${f.slice(dir.length + 1)}`);
+  }
+  if (staticRoutes.length >= MAX_STATIC_FILES) notes.push(`more than ${MAX_STATIC_FILES} static files; the first ${MAX_STATIC_FILES} are known`);
+  const generatedRoutes = [...new Set([...listRoutes, ...staticRoutes])].sort();
   const parts = [shownFolder(content)];
   if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
   if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
+  if (Object.keys(permalinks).length > 0) parts.push(count(Object.keys(permalinks).length, 'permalink pattern'));
   return {
     name: 'hugo',
     configFile,
@@ -69,11 +103,13 @@ export const readHugo: PresetReader = (configFile, files) => {
         style: conf.uglyURLs === true || conf.uglyurls === true ? 'html' : 'directory',
         indexNames: ['index', '_index'],
         caseInsensitive: conf.disablePathToLower !== true,
+        generator: 'hugo',
+        ...(Object.keys(permalinks).length === 0 ? {} : { permalinks }),
         headingIdsDefault: (idType !== undefined ? ID_TYPES[idType] : undefined) ?? 'hugo-github',
         ...(basePath === null ? {} : { basePath }),
       },
       linkPatterns: [{ pattern: REF_PATTERN, route: '$1' }],
-      generated: { sectionLists: true },
+      generated: { sectionLists: true, ...(generatedRoutes.length === 0 ? {} : { routes: generatedRoutes }) },
       ...(outside.length === 0 ? {} : { outside }),
     },
     navigation: null,

@@ -2,9 +2,13 @@
  * mdBook (`book.toml`): content in `[book] src` (default `src/`), pages at `name.html`,
  * `README.md` is its folder's index, `SUMMARY.md` is the sidebar of every page (and no page),
  * `[output.html] site-url` is the base path, `[output.html.redirect]` maps old pages to new ones
- * (a relative target is read against the old page's folder). Heading ids: mdBook's.
+ * (a relative target is read against the old page's folder). Chapters SUMMARY.md names that do
+ * not exist are made by mdBook (`build.create-missing`): generated routes. A SUMMARY.md made at
+ * build time from `SUMMARY.md.in` is read from the template. Only the chapters it names are
+ * pages: other Markdown files are left out (unless another file includes them). Heading ids:
+ * mdBook's.
  */
-import type { PresetReader, PresetRedirect } from './types.js';
+import type { PresetReader, PresetRedirect, SiteFiles } from './types.js';
 import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
 
 export const readMdbook: PresetReader = (configFile, files) => {
@@ -24,26 +28,98 @@ export const readMdbook: PresetReader = (configFile, files) => {
       redirects.push({ from: source, to: /^[a-z][a-z0-9+.-]*:|^\//i.test(to) ? to : folder + to });
     }
   }
-  const summaryPath = src === '' ? 'SUMMARY.md' : `${src}/SUMMARY.md`;
-  const summary = files.read(summaryPath);
+  const inSrc = (p: string): string => (src === '' ? p : `${src}/${p}`);
+  let summary = files.read(inSrc('SUMMARY.md'));
+  let summaryName = 'SUMMARY.md';
+  // A project that makes SUMMARY.md at build time from a template (`SUMMARY.md.in`) keeps its
+  // chapters there; the template's placeholders stay unread.
+  if (summary === null) {
+    const template = files.read(inSrc('SUMMARY.md.in'));
+    if (template !== null) {
+      summary = template;
+      summaryName = 'SUMMARY.md.in';
+      notes.push('SUMMARY.md is made at build time; SUMMARY.md.in read in its place');
+    }
+  }
+  // mdBook creates the chapters SUMMARY.md names that do not exist (`build.create-missing`,
+  // default true): they are pages with no source here.
+  const createMissing = dig(conf, 'build', 'create-missing') !== false;
+  const missing: string[] = [];
+  if (summary !== null && createMissing) {
+    for (const m of summary.matchAll(/\]\(\s*<?([^)\s>#]+\.md)>?\s*\)/g)) {
+      const file = m[1]!.replace(/^\.\//, '');
+      if (/^[a-z][a-z0-9+.-]*:/i.test(file) || files.exists(inSrc(file))) continue;
+      const route = `/${file.replace(/\.md$/, '.html')}`;
+      // The route, and the file path for links that name the chapter's source file.
+      for (const r of [route, `/${file}`]) if (!missing.includes(r)) missing.push(r);
+    }
+  }
+  // Only the chapters SUMMARY.md names are built: another Markdown file is no page (a file
+  // another one includes is still read, as part of the page that includes it).
+  const unlisted = summary === null ? [] : unlistedFiles(summary, src, files);
   const parts = [shownFolder(src)];
-  if (summary !== null) parts.push('SUMMARY.md');
+  if (summary !== null) parts.push(summaryName);
+  if (unlisted.length > 0) parts.push(`${count(unlisted.length, 'file')} not in ${summaryName} left out`);
+  if (missing.length > 0) parts.push(`${count(missing.length / 2, 'chapter')} made at build time`);
   if (redirects.length > 0) parts.push(count(redirects.length, 'redirect'));
   // The book opens on the first chapter of SUMMARY.md when there is no index page.
   const first = summary === null ? null : /\]\(\s*<?([^)\s>#]+\.md)/.exec(summary)?.[1] ?? null;
-  const hasIndex = files.exists(`${src === '' ? '' : `${src}/`}index.md`) || files.exists(`${src === '' ? '' : `${src}/`}README.md`);
+  const hasIndex = ['index.md', 'README.md'].some((f) => files.exists(inSrc(f)) && !unlisted.includes(f));
   return {
     name: 'mdbook',
     configFile,
     contentDir: src,
     config: {
       routes: { style: 'html', indexNames: ['index', 'README'], headingIdsDefault: 'mdbook', ...(basePath === null ? {} : { basePath }) },
-      exclude: ['SUMMARY.md'],
+      exclude: ['SUMMARY.md', 'SUMMARY.md.in', ...unlisted],
       ...(hasIndex || first === null ? {} : { entry: [first.replace(/^\.\//, '')] }),
+      ...(missing.length === 0 ? {} : { generated: { routes: missing } }),
     },
-    navigation: summary === null ? null : { file: 'SUMMARY.md', text: summary, format: 'markdown' },
+    navigation: summary === null ? null : { file: summaryName, text: summary, format: 'markdown' },
     redirects,
     parts,
     notes,
   };
 };
+
+/** A glob character: such a file name cannot be left out by an exact-path glob. */
+const GLOB_CHARS = /[*?[\]{}()!]/;
+
+/**
+ * The Markdown files under `src` that SUMMARY.md does not name and no other file includes
+ * (`{{#include}}`, `{{#rustdoc_include}}`, `{{#playground}}`), relative to `src`, sorted.
+ */
+function unlistedFiles(summary: string, src: string, files: SiteFiles): string[] {
+  const chapters = new Set<string>();
+  for (const m of summary.matchAll(/\]\(\s*<?([^)>#\s]+?\.md)(?:#[^)>]*)?>?\s*\)/g)) {
+    chapters.add(joinPath('', safeDecode(m[1]!)));
+  }
+  const all = files.markdownFiles(src).map((f) => (src === '' ? f : f.slice(src.length + 1)));
+  const included = new Set<string>();
+  for (const f of all) {
+    const text = files.read(src === '' ? f : `${src}/${f}`) ?? '';
+    if (!text.includes('{{#')) continue;
+    const folder = f.includes('/') ? f.slice(0, f.lastIndexOf('/')) : '';
+    for (const m of text.matchAll(/\{\{#(?:include|rustdoc_include|playground)\s+([^\s}:]+)/g)) included.add(joinPath(folder, m[1]!));
+  }
+  return all.filter((f) => f !== 'SUMMARY.md' && !chapters.has(f) && !included.has(f) && !GLOB_CHARS.test(f)).sort();
+}
+
+/** `folder` joined with a relative path, dot segments removed ('' when it climbs above). */
+function joinPath(folder: string, rel: string): string {
+  const out: string[] = folder === '' ? [] : folder.split('/');
+  for (const seg of rel.replace(/^\/+/, '').split('/')) {
+    if (seg === '' || seg === '.') continue;
+    if (seg === '..') out.pop();
+    else out.push(seg);
+  }
+  return out.join('/');
+}
+
+function safeDecode(path: string): string {
+  try {
+    return decodeURI(path);
+  } catch {
+    return path;
+  }
+}

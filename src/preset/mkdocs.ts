@@ -1,7 +1,7 @@
 /**
  * MkDocs (`mkdocs.yml`): content in `docs_dir` (default `docs/`), `use_directory_urls` (default
- * true) picks `/a/b/` or `/a/b.html`, `site_url`'s path is the base path, `nav:` is the sidebar
- * of every page, the redirects plugin's `redirect_maps` (old page -> new page or URL) are
+ * true) picks `/a/b/` or `/a/b.html`, `site_url`'s path is the base path, `nav:` (or its old
+ * name `pages:`) is the sidebar of every page, the redirects plugin's `redirect_maps` (old page -> new page or URL) are
  * redirects. Heading ids: Python-Markdown's toc.
  */
 import type { PresetReader, PresetRedirect } from './types.js';
@@ -26,9 +26,12 @@ export const readMkdocs: PresetReader = (configFile, files) => {
       redirects.push({ from: pageRoute(from, directory), to: /^[a-z][a-z0-9+.-]*:/i.test(to) ? to : pageRoute(to, directory) });
     }
   }
-  const nav = Array.isArray(conf.nav) ? yamlBlock(text, 'nav') : null;
+  // `pages:` is the name `nav:` had before MkDocs 1.0; sites written then still carry it.
+  const navKey = Array.isArray(conf.nav) ? 'nav' : Array.isArray(conf.pages) ? 'pages' : null;
+  const nav = navKey === null ? null : yamlBlock(text, navKey);
+  if (navKey === 'pages') notes.push('pages: (the name nav: had before MkDocs 1.0) read as the navigation');
   const parts = [shownFolder(docs)];
-  if (nav !== null) parts.push('nav');
+  if (nav !== null) parts.push(navKey!);
   if (redirects.length > 0) parts.push(count(redirects.length, 'redirect'));
   return {
     name: 'mkdocs',

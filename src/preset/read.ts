@@ -135,25 +135,34 @@ function siteFiles(folder: string): SiteFiles {
     },
     exists: (path) => fs.existsSync(resolve(folder, path)),
     markdownFiles(sub) {
-      const out: string[] = [];
-      const walk = (rel: string): void => {
-        let entries: fs.Dirent[];
-        try {
-          entries = fs.readdirSync(resolve(folder, rel), { withFileTypes: true });
-        } catch {
-          return;
-        }
-        for (const e of entries) {
-          if (e.name.startsWith('.') || e.name === 'node_modules') continue;
-          const p = `${rel}/${e.name}`;
-          if (e.isDirectory()) walk(p);
-          else if (e.isFile() && /\.mdx?$/i.test(e.name)) out.push(p);
-        }
-      };
-      walk(sub.replace(/\/+$/, ''));
-      return out.sort();
+      return walkFiles(folder, sub, (name) => /\.mdx?$/i.test(name), Infinity);
+    },
+    files(sub, limit) {
+      return walkFiles(folder, sub, () => true, limit);
     },
   };
+}
+
+/** Files under `sub` (relative to `folder`) whose names pass `keep`, relative to `folder`, sorted; at most `limit`. */
+function walkFiles(folder: string, sub: string, keep: (name: string) => boolean, limit: number): string[] {
+  const out: string[] = [];
+  const walk = (rel: string): void => {
+    let entries: fs.Dirent[];
+    try {
+      entries = fs.readdirSync(resolve(folder, rel), { withFileTypes: true });
+    } catch {
+      return;
+    }
+    for (const e of entries) {
+      if (e.name.startsWith('.') || e.name === 'node_modules') continue;
+      const p = rel === '' ? e.name : `${rel}/${e.name}`;
+      if (out.length >= limit) return;
+      if (e.isDirectory()) walk(p);
+      else if (e.isFile() && keep(e.name)) out.push(p);
+    }
+  };
+  walk(sub.replace(/\/+$/, ''));
+  return out.sort();
 }
 
 function isFile(p: string): boolean {

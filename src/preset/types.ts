@@ -10,6 +10,8 @@ export interface SiteFiles {
   exists(path: string): boolean;
   /** Markdown files (`.md`, `.mdx`) under a folder, recursively, relative to the site folder, sorted. */
   markdownFiles(folder: string): string[];
+  /** Every file under a folder (dot-files and node_modules left out), relative to the site folder, sorted; at most `limit`. */
+  files(folder: string, limit: number): string[];
 }
 
 /** One redirect the generator serves: `from` (a route) still leads to `to`. */

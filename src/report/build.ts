@@ -82,7 +82,7 @@ function reportLink(link: ResolvedLink, from: { route: string; file: string }): 
   return {
     from: from.route,
     to: to === '' ? link.raw.href : to,
-    file: from.file,
+    file: link.raw.file ?? from.file,
     line: link.raw.line,
     column: link.raw.column,
     text: link.raw.text,

@@ -13,6 +13,8 @@ import { HTML_EXTENSION_END as HTML_EXT, MARKDOWN_EXTENSION_END as MARKDOWN_EXT 
 import { canonicalPath, encodeRouteSegment, normalizedBasePath } from './normalize.js';
 import { removeDotSegments } from './paths.js';
 import type { RouteOptions } from './types.js';
+import { docusaurusRest, generatorPath } from './permalinks.js';
+import type { RouteMeta } from './permalinks.js';
 
 /**
  * The route of a source file (its URL path), in canonical form.
@@ -22,13 +24,20 @@ import type { RouteOptions } from './types.js';
  * files keep their own path and `index.html` stands for its folder; frontmatter `permalink`
  * (site-absolute) wins over `slug` (site-absolute when it starts with `/`, else relative to
  * `basePath`); a slug or permalink without a trailing slash or `.html` ending gets the route
- * style's ending; everything else is prefixed with `basePath`.
+ * style's ending; everything else is prefixed with `basePath`. With `routes.generator` set, that
+ * generator's rules read the frontmatter and `routes.permalinks` instead (`./permalinks.ts`).
  * @param path file path relative to the content root, `/`-separated
- * @param meta the page's frontmatter (only `slug` and `permalink` are read)
+ * @param meta the page's frontmatter (`slug`, `permalink`, `url`, `date`, `categories`, `title`)
  * @param routes route options
  */
-export function routeOfFile(path: string, meta: Pick<PageMeta, 'slug' | 'permalink'>, routes: RouteOptions): string {
+export function routeOfFile(path: string, meta: RouteMeta, routes: RouteOptions): string {
   const base = canonicalUrlPath(normalizedBasePath(routes));
+  const { generator, permalinks } = routes;
+  if (generator !== 'none') {
+    const own = generatorPath(path, meta, generator, permalinks);
+    if (own !== null) return canonicalUrlPath(completeRoute(base + own.replace(/^\/+/, ''), routes.style));
+    return mapFolder(path, routes, meta) ?? base + fileRoutePath(path, routes);
+  }
   if (meta.permalink !== undefined) {
     const p = meta.permalink.trim();
     return canonicalUrlPath(completeRoute(p.startsWith('/') ? p : `/${p}`, routes.style));
@@ -47,7 +56,7 @@ export function routeOfFile(path: string, meta: Pick<PageMeta, 'slug' | 'permali
  * `src/pages/` served at `/`, `docs/` at `/docs/`); a file in a folder of `routes.dated` named
  * `YYYY-MM-DD-name` gets `YYYY/MM/DD/name` (dated posts). Null when neither applies.
  */
-function mapFolder(path: string, routes: RouteOptions): string | null {
+function mapFolder(path: string, routes: RouteOptions, meta: RouteMeta = {}): string | null {
   const folders = routes.folders;
   const dated = routes.dated;
   if (Object.keys(folders).length === 0 && dated.length === 0) return null;
@@ -70,6 +79,11 @@ function mapFolder(path: string, routes: RouteOptions): string | null {
   let start = prefix.startsWith('/') ? prefix : `/${prefix}`;
   const base = normalizedBasePath(routes);
   if (base !== '/' && !start.startsWith(base)) start = base + start.slice(1);
+  if (routes.generator === 'docusaurus' && !isDated) {
+    const doc = docusaurusRest(rest, meta);
+    if (doc.slug !== null) return canonicalUrlPath(completeRoute((start.endsWith('/') ? start : `${start}/`) + doc.slug, routes.style));
+    rest = doc.rest;
+  }
   return canonicalUrlPath((start.endsWith('/') ? start : `${start}/`) + fileRoutePath(rest, routes));
 }
 

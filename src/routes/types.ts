@@ -14,4 +14,8 @@ export interface RouteOptions {
   readonly dated: readonly string[];
   /** Site-absolute links are written below the base path. */
   readonly absoluteLinksUnderBase: boolean;
+  /** Whose rules turn frontmatter permalinks, slugs and file names into routes. */
+  readonly generator: 'none' | 'jekyll' | 'hugo' | 'docusaurus';
+  /** Permalink patterns of the generator (Hugo section or Jekyll collection -> pattern). */
+  readonly permalinks: Readonly<Record<string, string>>;
 }

@@ -15,7 +15,7 @@ export function pageFinding(page: PageNode, message: string, target?: string): R
 export function linkSource(ctx: RuleContext, link: ResolvedLink): { file: string; route: string } {
   if (link.from < 0) return { file: navigationFile(ctx.options), route: '' };
   const page = ctx.graph.pages[link.from]!;
-  return { file: page.file, route: page.route };
+  return { file: link.raw.file ?? page.file, route: page.route };
 }
 
 /** Fragment without its leading `#`. */

@@ -62,6 +62,8 @@ describe('PARSE_OPTION_KEYS', () => {
       { routes: { style: 'html' as const } },
       { routes: { basePath: '/docs/' } },
       { routes: { indexNames: ['index'] } },
+      { routes: { generator: 'hugo' as const } },
+      { routes: { permalinks: { posts: '/:year/:title/' } } },
       { linkPatterns: [{ pattern: 'x', route: '/x/' }] },
       { maxLinksPerPage: 9 },
     ]) {

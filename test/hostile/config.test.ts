@@ -34,7 +34,7 @@ describe('a wrong configuration exits 2 with one line naming the key and what it
   it.each([
     ['unknown top-level key', { maxDepht: 3 }, `key "maxDepht": unknown key; accepted keys: ${TOP_KEYS},`],
     ['two unknown keys', { a: 1, b: 2 }, `key "a": unknown key \\(also unknown: "b"\\); accepted keys: ${TOP_KEYS},`],
-    ['unknown nested key', { routes: { styel: 'html' } }, 'key "routes.styel": unknown key; accepted keys of "routes": style, basePath, indexNames, caseInsensitive, folders, dated, absoluteLinksUnderBase, headingIds, headingIdsDefault$'],
+    ['unknown nested key', { routes: { styel: 'html' } }, 'key "routes.styel": unknown key; accepted keys of "routes": style, basePath, indexNames, caseInsensitive, folders, dated, absoluteLinksUnderBase, generator, permalinks, headingIds, headingIdsDefault$'],
     ['unknown key in a list item', { linkPatterns: [{ pattern: 'x', route: 'y', flags: 'i' }] }, 'key "linkPatterns.0.flags": unknown key; accepted keys of "linkPatterns.0": pattern, route$'],
     ['unknown limits key', { limits: { orphan: 1 } }, 'key "limits.orphan": unknown key; accepted keys of "limits": brokenLinks, brokenFragments, orphans, '],
     ['enum value', { routes: { style: 'htm' } }, 'key "routes.style": expected one of "directory", "html", got "htm"$'],
