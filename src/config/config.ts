@@ -143,7 +143,7 @@ export interface Config {
   exclude?: string[] | undefined;
   /**
    * How file paths become routes.
-   * @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, folders: {}, dated: [], absoluteLinksUnderBase: false, headingIds: 'auto', headingIdsDefault: 'github' }
+   * @default { style: 'directory', basePath: '/', indexNames: ['index', 'README', '_index'], caseInsensitive: false, folders: {}, dated: [], absoluteLinksUnderBase: false, generator: 'none', permalinks: {}, headingIds: 'auto', headingIdsDefault: 'github' }
    */
   routes?: RoutesConfig | undefined;
   /**
