@@ -6,7 +6,7 @@
  */
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { parseWithCache, readResult, resultKey, writeResult } from './cache/index.js';
+import { linkModelStore, parseWithCache, readResult, resultKey, writeResult } from './cache/index.js';
 import type { ReportCacheInfo, ResultInputs } from './cache/index.js';
 import { collectSources, readAuxFile } from './collect/index.js';
 import type { CollectResult } from './collect/index.js';
@@ -18,6 +18,7 @@ import { buildGraph } from './graph/index.js';
 import { rankGraph } from './rank/index.js';
 import { buildTermIndex, createStemCache, relatedPages, contentCentrality } from './text/index.js';
 import { suggestLinks, parseTraffic } from './suggest/index.js';
+import type { FitMemo } from './suggest/model.js';
 import { runRules, validateRuleConfig } from './rules/index.js';
 import type { AuxProblem } from './rules/index.js';
 import { buildReport } from './report/index.js';
@@ -241,7 +242,7 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
     facts = withoutBodies(facts);
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
     const result = await stage('suggest', () =>
-      suggestLinks({ graph, facts: ordered, ranking, ...text, traffic: collected.traffic }, options),
+      suggestLinks({ graph, facts: ordered, ranking, ...text, traffic: collected.traffic, ...fitMemo(options) }, options),
     );
     suggestions = result.suggestions;
     importance = result.importance;
@@ -266,6 +267,11 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
       ...(baseline === undefined ? {} : { baseline }),
     }),
   );
+}
+
+/** The cache folder's store of fitted link models, when the cache is on (issue 16: speed). */
+function fitMemo(options: ResolvedOptions): { fitMemo?: FitMemo } {
+  return options.cache.enabled ? { fitMemo: linkModelStore(resolve(options.cache.dir), VERSION) } : {};
 }
 
 /** Copies of the facts with an empty `text.body` (title and headings kept). */
