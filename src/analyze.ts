@@ -6,7 +6,7 @@
  */
 import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
-import { linkModelStore, parseWithCache, readResult, resultKey, writeResult } from './cache/index.js';
+import { linkModelStore, parseWithCache, readResult, relatedStore, resultKey, writeResult } from './cache/index.js';
 import type { ReportCacheInfo, ResultInputs } from './cache/index.js';
 import { collectSources, readAuxFile } from './collect/index.js';
 import type { CollectResult } from './collect/index.js';
@@ -16,7 +16,8 @@ import { parseFiles } from './parallel/index.js';
 import type { ParseHooks, WorkerStats } from './parallel/index.js';
 import { buildGraph } from './graph/index.js';
 import { rankGraph } from './rank/index.js';
-import { buildTermIndex, createStemCache, relatedPages, contentCentrality } from './text/index.js';
+import { buildTermIndex, createStemCache, relatedPagesMemo, contentCentrality } from './text/index.js';
+import type { RelatedMemo } from './text/index.js';
 import { suggestLinks, parseTraffic } from './suggest/index.js';
 import type { FitMemo } from './suggest/model.js';
 import { runRules, validateRuleConfig } from './rules/index.js';
@@ -236,7 +237,7 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
     const text = await stage('text', () => {
       const stems = createStemCache();
       const index = buildTermIndex(graph.pages.map((p) => facts[p.factsIndex]!.text), stems);
-      const related = relatedPages(index, options.suggest.relatedK);
+      const related = relatedPagesMemo(index, options.suggest.relatedK, relatedMemo(options));
       return { index, related, centrality: contentCentrality(related, graph.pages.length), stems };
     });
     facts = withoutBodies(facts);
@@ -269,9 +270,12 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
   );
 }
 
-/** The cache folder's store of fitted link models, when the cache is on (issue 16: speed). */
+/** The cache folder's stores of fitted link models and related pages, when the cache is on (issue 16: speed). */
 function fitMemo(options: ResolvedOptions): { fitMemo?: FitMemo } {
   return options.cache.enabled ? { fitMemo: linkModelStore(resolve(options.cache.dir), VERSION) } : {};
+}
+function relatedMemo(options: ResolvedOptions): RelatedMemo | undefined {
+  return options.cache.enabled ? relatedStore(resolve(options.cache.dir), VERSION) : undefined;
 }
 
 /** Copies of the facts with an empty `text.body` (title and headings kept). */
