@@ -17,9 +17,7 @@ import type { ParseHooks, WorkerStats } from './parallel/index.js';
 import { buildGraph } from './graph/index.js';
 import { rankGraph } from './rank/index.js';
 import { buildTermIndex, createStemCache, relatedPagesMemo, contentCentrality } from './text/index.js';
-import type { RelatedMemo } from './text/index.js';
 import { suggestLinks, parseTraffic } from './suggest/index.js';
-import type { FitMemo } from './suggest/model.js';
 import { runRules, validateRuleConfig } from './rules/index.js';
 import type { AuxProblem } from './rules/index.js';
 import { buildReport } from './report/index.js';
@@ -93,6 +91,7 @@ export async function analyze(input: AnalyzeInput, hooks: AnalyzeHooks = {}): Pr
     collected,
     hooks,
     ...(baseline === undefined ? {} : { baseline }),
+    memoDir: cacheDir,
   });
   if (cacheDir !== null) writeResult(cacheDir, command, key, report);
   return report;
@@ -208,8 +207,9 @@ export async function finishAnalysis(input: FinishInput): Promise<Report> {
  * letting them go before the suggest, rules and report stages lowers the run's peak. The caller's
  * own facts are never changed.
  */
-async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K] }): Promise<Report> {
+async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K] } & { memoDir?: string | null }): Promise<Report> {
   const { options, command, collected, hooks, baseline } = input;
+  const memoDir = input.memoDir ?? null;
   let facts = input.facts;
   input.facts = [];
   const stage = stageTimer(hooks);
@@ -237,13 +237,13 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
     const text = await stage('text', () => {
       const stems = createStemCache();
       const index = buildTermIndex(graph.pages.map((p) => facts[p.factsIndex]!.text), stems);
-      const related = relatedPagesMemo(index, options.suggest.relatedK, relatedMemo(options));
+      const related = relatedPagesMemo(index, options.suggest.relatedK, memoDir === null ? undefined : relatedStore(memoDir, VERSION));
       return { index, related, centrality: contentCentrality(related, graph.pages.length), stems };
     });
     facts = withoutBodies(facts);
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
     const result = await stage('suggest', () =>
-      suggestLinks({ graph, facts: ordered, ranking, ...text, traffic: collected.traffic, ...fitMemo(options) }, options),
+      suggestLinks({ graph, facts: ordered, ranking, ...text, traffic: collected.traffic, ...(memoDir === null ? {} : { fitMemo: linkModelStore(memoDir, VERSION) }) }, options),
     );
     suggestions = result.suggestions;
     importance = result.importance;
@@ -268,14 +268,6 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
       ...(baseline === undefined ? {} : { baseline }),
     }),
   );
-}
-
-/** The cache folder's stores of fitted link models and related pages, when the cache is on (issue 16: speed). */
-function fitMemo(options: ResolvedOptions): { fitMemo?: FitMemo } {
-  return options.cache.enabled ? { fitMemo: linkModelStore(resolve(options.cache.dir), VERSION) } : {};
-}
-function relatedMemo(options: ResolvedOptions): RelatedMemo | undefined {
-  return options.cache.enabled ? relatedStore(resolve(options.cache.dir), VERSION) : undefined;
 }
 
 /** Copies of the facts with an empty `text.body` (title and headings kept). */
