@@ -140,3 +140,14 @@ export function generateSiteInMemory(options: GenerateOptions): InMemorySite {
 export function editForPage(plan: SitePlan, id: number, salt = 1): string {
   return extraParagraph(plan, id, salt);
 }
+
+/**
+ * `text` with its first relative `.md` link that does not point at `index.md` pointed at
+ * `index.md` instead, fragment dropped, link text unchanged (for the bench's "one link target
+ * changed" run), or null when it has none.
+ */
+export function relinkOne(text: string): string | null {
+  const link = /\]\((?!index\.md[)#])([^)\s#:]+\.md)(#[^)\s]*)?\)/.exec(text);
+  if (link === null) return null;
+  return `${text.slice(0, link.index)}](index.md)${text.slice(link.index + link[0].length)}`;
+}

@@ -7,7 +7,8 @@
  * - `rss`: one cold run of the pipeline in this fresh process; reports its time and the
  *   process's peak RSS (`process.resourceUsage().maxRSS`).
  * - `measure`: the references (bare parse, PageRank against graphology, sequential-read rate)
- *   and the pipeline cold, warm with no change, and warm with one file changed; medians of R.
+ *   and the pipeline cold, warm with no change, warm with one link target changed, and warm with
+ *   one file changed (a paragraph added); medians of R.
  * - `related`: the inverted-index top-10 against brute force on the site's term index.
  * Without `--dir`, the site is generated into a temporary folder and removed afterwards.
  */
@@ -17,7 +18,7 @@ import { join } from 'node:path';
 import { parseArgs } from 'node:util';
 import { bruteForceRelated, compareRelated } from './brute-force.js';
 import { runFront } from './front.js';
-import { generateSite } from './generate.js';
+import { generateSite, relinkOne } from './generate.js';
 import { loadBuilt } from './lib.js';
 import type { Built } from './lib.js';
 import type { RunTiming } from './pipeline.js';
@@ -48,6 +49,8 @@ export interface MeasureResult {
   /** Empty when the cache wrote nothing (not built yet). */
   readonly warm: RunTiming[];
   readonly warmChanged: RunTiming[];
+  /** Warm, after one content link of one page was pointed at another page (no text changed). */
+  readonly warmRelinked?: RunTiming[];
   readonly cacheBytes: number;
   readonly bareParse: Span[];
   readonly pagerank: PagerankComparison[];
@@ -115,6 +118,7 @@ async function measure(lib: Built, root: string, work: string, size: number, run
   const coldCheck: RunTiming[] = [];
   const warm: RunTiming[] = [];
   const warmChanged: RunTiming[] = [];
+  const warmRelinked: RunTiming[] = [];
   const bare: Span[] = [];
   let cacheBytes = 0;
   const original = readFileSync(changed, 'utf8');
@@ -134,6 +138,17 @@ async function measure(lib: Built, root: string, work: string, size: number, run
     if (cacheBytes > 0) {
       warm.push(await runPipeline(lib, root, { cacheDir, outFile }));
       gc();
+      // A pull request that only fixes a link: one link target changed, the words stay.
+      const relinked = relinkOne(original);
+      if (relinked !== null) {
+        writeFileSync(changed, relinked);
+        try {
+          warmRelinked.push(await runPipeline(lib, root, { cacheDir, outFile }));
+        } finally {
+          writeFileSync(changed, original);
+        }
+        gc();
+      }
       appendFileSync(changed, `\nThis paragraph was added by the benchmark run ${r + 1} to change one file; see [the section index](index.md).\n`);
       try {
         warmChanged.push(await runPipeline(lib, root, { cacheDir, outFile }));
@@ -145,7 +160,7 @@ async function measure(lib: Built, root: string, work: string, size: number, run
     rmSync(cacheDir, { recursive: true, force: true });
   }
   return {
-    mode: 'measure', size, runs, files: paths.length, sourceBytes, cold, coldCheck, warm, warmChanged, cacheBytes,
+    mode: 'measure', size, runs, files: paths.length, sourceBytes, cold, coldCheck, warm, warmChanged, warmRelinked, cacheBytes,
     bareParse: bare, pagerank, bandwidth,
   };
 }

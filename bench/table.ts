@@ -127,6 +127,7 @@ export function renderTable(results: readonly SizeResult[], related: readonly (R
     return `${v.toFixed(3)}${marked(x.size) ? ` ${mark(v <= limit)}` : ''} (CPU ${c.toFixed(3)})`;
   });
   row('warm, no change / cold suggest', warmRatio((x) => x.warm, TARGETS.warmOverCold, (n) => n === 5000 || n === 10_000), '<= 0.03 at 5,000 and 10,000');
+  row('warm, one link target changed / cold suggest', warmRatio((x) => x.warmRelinked ?? [], TARGETS.warmChangedOverCold, () => false));
   row('warm, one file changed / cold suggest', warmRatio((x) => x.warmChanged, TARGETS.warmChangedOverCold, (n) => n === 10_000), '<= 0.08 at 10,000');
   const largest = (pick: (x: Measured) => readonly RunTiming[]) => m((x) => {
     const runs = pick(x);
@@ -135,6 +136,7 @@ export function renderTable(results: readonly SizeResult[], related: readonly (R
     return top.map(([st, v]) => `${st} ${num(v)}`).join(', ');
   });
   row('warm, no change: largest stages ms', largest((x) => x.warm));
+  row('warm, one link target changed: largest stages ms', largest((x) => x.warmRelinked ?? []));
   row('warm, one file changed: largest stages ms', largest((x) => x.warmChanged));
   row('PageRank graph: nodes / edges', m((x) => `${int.format(x.pagerank[0]!.nodes)} / ${int.format(x.pagerank[0]!.edges)}`));
   row('PageRank ms, ours (CSR build + iterate)', m((x) => num(median(x.pagerank.map((p) => p.ours.ms)))));

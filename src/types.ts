@@ -335,3 +335,34 @@ export interface RelatedList {
   readonly page: number;
   readonly related: readonly { readonly page: number; readonly similarity: number }[];
 }
+
+/** A fitted logistic regression. `weights[j]` is the weight of feature j on the standardised scale. */
+export interface LogisticModel {
+  readonly intercept: number;
+  readonly weights: readonly number[];
+  readonly means: readonly number[];
+  readonly scales: readonly number[];
+  readonly iterations: number;
+  readonly converged: boolean;
+}
+
+/**
+ * Where the suggest stage keeps its last fit (the cache folder's, `src/cache/model.ts`), under
+ * `fitKey` of the rows and labels: the fit is a function of those alone, so the model is the
+ * same with or without one. `get` returns null for an unknown key (or a store it cannot read).
+ */
+export interface FitMemo {
+  get(key: string): LogisticModel | null;
+  set(key: string, model: LogisticModel): void;
+}
+
+/**
+ * Where the text stage keeps the related lists of its last term index (the cache folder's,
+ * `src/cache/related.ts`), under `relatedKey`: the lists are a function of the index and k alone,
+ * so they are the same with or without one. `get` returns null for an unknown key (or a store it
+ * cannot read).
+ */
+export interface RelatedMemo {
+  get(key: string, pages: number): RelatedList[] | null;
+  set(key: string, lists: readonly RelatedList[]): void;
+}

@@ -12,3 +12,5 @@ export { readResult, resultKey, writeResult } from './result.js';
 export type { ResultInputs } from './result.js';
 export { readCachedOutput, saveCachedOutput } from './output.js';
 export type { ReportCacheInfo } from './output.js';
+export { linkModelStore } from './model.js';
+export { relatedStore } from './related.js';

@@ -5,7 +5,7 @@
  * the backtest runs its stages one by one.
  */
 import { resolve } from 'node:path';
-import { readResult, resultKey, writeResult } from '../cache/index.js';
+import { linkModelStore, readResult, relatedStore, resultKey, writeResult } from '../cache/index.js';
 import type { ResultInputs } from '../cache/index.js';
 import type { ResolvedOptions } from '../config/options.js';
 import { validateRuleConfig } from '../rules/index.js';
@@ -64,6 +64,7 @@ export async function runPrepared(prepared: PreparedRun, hooks: AnalyzeHooks = {
     collected,
     hooks,
     ...(baseline === undefined ? {} : { baseline }),
+    ...(cacheDir === null ? {} : { memoDir: cacheDir }),
   });
   if (cacheDir !== null) writeResult(cacheDir, command, key, report);
   return report;
@@ -99,6 +100,11 @@ export interface FinishInput {
   /** The checks' settings from the prepare stage. @default validated from `options` */
   readonly rules?: readonly RuleSetting[];
   readonly baseline?: BaselineInput;
+  /**
+   * The cache folder, where the text and suggest stages keep their last related lists and fit
+   * (exact: the same report with or without them). Only a run with the cache on passes it.
+   */
+  readonly memoDir?: string;
 }
 
 /** The stages after parsing (site, text, suggest, check, report) over facts parsed elsewhere (the unified collector's). */
@@ -114,7 +120,7 @@ export async function finishAnalysis(input: FinishInput): Promise<Report> {
  * caller's own facts are never changed.
  */
 async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K] }): Promise<Report> {
-  const { options, command, collected, hooks, baseline, rules } = input;
+  const { options, command, collected, hooks, baseline, rules, memoDir } = input;
   let facts = input.facts;
   input.facts = [];
   if (command === 'check') facts = withoutBodies(facts);
@@ -123,10 +129,13 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
   const ranking = await stage(hooks, 'rank', () => rankOf(graph, options));
   let suggested: SuggestResult | null = null;
   if (command === 'suggest') {
-    const text = await stage(hooks, 'text', () => textOf(graph.pages.map((p) => facts[p.factsIndex]!), options));
+    const text = await stage(hooks, 'text', () =>
+      textOf(graph.pages.map((p) => facts[p.factsIndex]!), options, undefined, memoDir === undefined ? undefined : relatedStore(memoDir, VERSION)),
+    );
     facts = withoutBodies(facts);
     const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
-    suggested = await stage(hooks, 'suggest', () => suggestFor({ graph, ranking }, ordered, text, collected.traffic, options));
+    const fitMemo = memoDir === undefined ? undefined : linkModelStore(memoDir, VERSION);
+    suggested = await stage(hooks, 'suggest', () => suggestFor({ graph, ranking }, ordered, text, collected.traffic, options, fitMemo));
   }
   const site = { graph, ranking, facts };
   const findings = await stage(hooks, 'rules', () => checkSite(site, collected, options, rules ?? validateRuleConfig(options)));

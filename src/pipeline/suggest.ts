@@ -2,16 +2,17 @@
 import type { ResolvedOptions } from '../config/options.js';
 import { suggestLinks } from '../suggest/index.js';
 import type { SuggestResult } from '../suggest/index.js';
-import type { PageFacts, Ranking, SiteGraph } from '../types.js';
+import type { FitMemo, PageFacts, Ranking, SiteGraph } from '../types.js';
 import type { TextResults } from './text.js';
 
-/** Suggestions for the site (`ordered[i]` are the facts of page i). */
+/** Suggestions for the site (`ordered[i]` are the facts of page i; `fitMemo`: the cache folder's last fit, `linkModelStore`). */
 export function suggestFor(
   site: { readonly graph: SiteGraph; readonly ranking: Ranking },
   ordered: readonly PageFacts[],
   text: TextResults,
   traffic: ReadonlyMap<string, number> | null,
   options: ResolvedOptions,
+  fitMemo?: FitMemo,
 ): SuggestResult {
-  return suggestLinks({ graph: site.graph, facts: ordered, ranking: site.ranking, ...text, traffic }, options);
+  return suggestLinks({ graph: site.graph, facts: ordered, ranking: site.ranking, ...text, traffic, ...(fitMemo === undefined ? {} : { fitMemo }) }, options);
 }

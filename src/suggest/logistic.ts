@@ -9,15 +9,8 @@
  * The fit maximises log-likelihood - (l2 / 2) * sum_j b_j^2 (the intercept is not penalised).
  */
 
-/** A fitted model. `weights[j]` is the weight of feature j on the standardised scale. */
-export interface LogisticModel {
-  readonly intercept: number;
-  readonly weights: readonly number[];
-  readonly means: readonly number[];
-  readonly scales: readonly number[];
-  readonly iterations: number;
-  readonly converged: boolean;
-}
+export type { LogisticModel } from '../types.js';
+import type { LogisticModel } from '../types.js';
 
 /** Fit settings. */
 export interface LogisticSettings {

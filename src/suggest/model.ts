@@ -12,10 +12,15 @@
  *   Deterministic: the sample is seeded, the fit has no random start.
  * - Quality: one pair in {@link HOLDOUT_EVERY} (by a hash of the pair, so the same pairs every
  *   run) is kept out of the fit; the model's AUC on them is reported.
+ * - Fit cache: the fit is a function of the fitted rows and labels alone, so a {@link FitMemo}
+ *   (the cache folder's, `src/cache/model.ts`) keeps the last fit under a sha256 of exactly
+ *   those ({@link fitKey}); a run whose training rows are the same to the bit (no link and no
+ *   feature input changed) takes it instead of fitting again, and gets the same model.
  * - Too few links to learn from (fewer than {@link MIN_POSITIVES} positives or negatives): the
  *   fixed weights {@link FIXED_WEIGHTS} are used instead, and the report says so.
  */
-import type { LinkModelReport } from '../types.js';
+import { createHash } from 'node:crypto';
+import type { FitMemo, LinkModelReport } from '../types.js';
 import { shuffle, streamFor } from '../util/prng.js';
 import { FEATURES } from './features.js';
 import type { FeatureName } from './features.js';
@@ -144,7 +149,7 @@ export function heldOutForAuc(p: TrainingPair): boolean {
  * candidates as they are.
  * @param featuresOf the feature vector of a pair
  */
-export function fitLinkModel(sample: TrainingSample, featuresOf: (source: number, target: number) => number[]): LinkModel {
+export function fitLinkModel(sample: TrainingSample, featuresOf: (source: number, target: number) => number[], memo?: FitMemo): LinkModel {
   const { pairs } = sample;
   const fitRows: number[][] = [];
   const fitLabels: number[] = [];
@@ -164,7 +169,7 @@ export function fitLinkModel(sample: TrainingSample, featuresOf: (source: number
   const positives = count(fitLabels, 1);
   const negatives = count(fitLabels, 0);
   const enough = positives >= MIN_POSITIVES && negatives >= MIN_POSITIVES;
-  const fit = enough ? fitLogistic(fitRows, fitLabels, { l2: L2 }) : fixedModel();
+  const fit = enough ? memoFit(fitRows, fitLabels, memo) : fixedModel();
   const model = enough ? { ...fit, intercept: fit.intercept + Math.log(sample.notLinkedRate / sample.linkedRate) } : fit;
   const auc = areaUnderCurve(testRows.map((x) => linearScore(model, x)), testLabels);
   return {
@@ -183,4 +188,42 @@ export function fitLinkModel(sample: TrainingSample, featuresOf: (source: number
       converged: model.converged,
     },
   };
+}
+
+export type { FitMemo } from '../types.js';
+
+/**
+ * The key of a fit: a sha256 of the fit's settings, the feature names and the rows and labels
+ * as the fit reads them (each feature value as its 8 bytes, so equal keys mean equal input to
+ * the bit). The code itself is not in it: the store keys on the code hash (`codeVersion`).
+ */
+export function fitKey(rows: readonly (readonly number[])[], labels: readonly number[]): string {
+  const hash = createHash('sha256');
+  hash.update(`link-model\nl2=${L2}\n${FEATURES.join(',')}\n${rows.length}\n`);
+  const d = FEATURES.length;
+  const chunk = new Float64Array(1024 * (d + 1));
+  let at = 0;
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i]!;
+    if (row.length !== d) throw new Error(`fitKey: row ${i} has ${row.length} features, expected ${d}`);
+    for (let j = 0; j < d; j++) chunk[at++] = row[j]!;
+    chunk[at++] = labels[i]!;
+    if (at === chunk.length) {
+      hash.update(new Uint8Array(chunk.buffer, 0, at * 8));
+      at = 0;
+    }
+  }
+  hash.update(new Uint8Array(chunk.buffer, 0, at * 8));
+  return hash.digest('hex');
+}
+
+/** `fitLogistic` on the rows, or the memo's model for the same rows. */
+function memoFit(rows: number[][], labels: number[], memo: FitMemo | undefined): LogisticModel {
+  if (memo === undefined) return fitLogistic(rows, labels, { l2: L2 });
+  const key = fitKey(rows, labels);
+  const kept = memo.get(key);
+  if (kept !== null) return kept;
+  const fit = fitLogistic(rows, labels, { l2: L2 });
+  memo.set(key, fit);
+  return fit;
 }

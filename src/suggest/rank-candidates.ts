@@ -68,7 +68,7 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
   const linked = (s: number, t: number): boolean => hasContentLink(graph.forward, s, t);
 
   const eligible = graph.pages.filter((p) => !p.meta.exclude).map((p) => p.id);
-  const fitted = fitLinkModel(trainingPairs(eligible, pool, linked), (s, t) => pairFeatures(ctx, s, t));
+  const fitted = fitLinkModel(trainingPairs(eligible, pool, linked), (s, t) => pairFeatures(ctx, s, t), input.fitMemo);
   const model = fitted.model;
 
   const scored: ScoredPair[] = [];

@@ -1,5 +1,6 @@
 /** Types of the suggest stage (contracts.md). */
 import type { StemCache } from '../text/tokenize.js';
+import type { FitMemo } from './model.js';
 import type { Importance, LinkModelReport, PageFacts, Ranking, RelatedList, SiteGraph, Suggestion, TermIndex, UnderlinkedReason } from '../types.js';
 
 /** What `suggestLinks` works from. Arrays are indexed by page id (the graph's order). */
@@ -22,6 +23,8 @@ export interface SuggestInput {
    * search does not stem the same words again. A memo: results do not depend on it. @default a new one
    */
   readonly stems?: StemCache;
+  /** Fitted link models kept between runs (the cache folder's). A memo: results do not depend on it. @default none */
+  readonly fitMemo?: FitMemo;
 }
 
 

@@ -7,3 +7,5 @@ export type { RelatedResult } from './related.js';
 export { relatedPagesBruteForce } from './brute.js';
 export { contentCentrality } from './centrality.js';
 export type { CentralityOptions } from './centrality.js';
+export { relatedKey, relatedPagesMemo } from './related-memo.js';
+export type { RelatedMemo } from './related-memo.js';

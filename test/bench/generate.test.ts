@@ -8,7 +8,7 @@ import { unified } from 'unified';
 import remarkParse from 'remark-parse';
 import { visit } from 'unist-util-visit';
 import type { Link } from 'mdast';
-import { CONFIG_FILE, NAV_FILE, generateSite, generateSiteInMemory } from '../../bench/generate.js';
+import { CONFIG_FILE, NAV_FILE, generateSite, generateSiteInMemory, relinkOne } from '../../bench/generate.js';
 import { COMMON_WORDS, FUNCTION_WORDS } from '../../bench/site/words.js';
 
 const dirs: string[] = [];
@@ -202,5 +202,13 @@ describe('generateSite', () => {
 
   it('rejects a page count that is not a positive integer', () => {
     expect(() => generateSiteInMemory({ pages: 0 })).toThrow(/"pages"/);
+  });
+});
+
+describe('relinkOne (the bench run where one link target changes)', () => {
+  it('points the first relative link that is not to index.md at index.md, words and other links unchanged', () => {
+    const text = 'See [home](index.md#top) and [Install the tool](../guide/install.md#steps), then [x](other.md).\n';
+    expect(relinkOne(text)).toBe('See [home](index.md#top) and [Install the tool](index.md), then [x](other.md).\n');
+    expect(relinkOne('Only [home](index.md) and [site](https://example.org/a.md).\n')).toBeNull();
   });
 });
