@@ -191,7 +191,7 @@ function edit(text: string, sorted: readonly Suggestion[], input: PlanInput): { 
   const parts: string[] = [];
   let at = text.length;
   for (let i = sorted.length - 1; i >= 0; i--) {
-    const s = sorted[i]!;
+    const s = sorted[i];
     const { open, close } = linkMarkup(input.file.kind, input.hrefs.get(s.id)!);
     parts.push(text.slice(s.endOffset, at), close, text.slice(s.offset, s.endOffset), open);
     at = s.offset;

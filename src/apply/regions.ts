@@ -31,7 +31,7 @@ export function overlappingRegion(regions: readonly ProtectedRegion[], start: nu
   let hi = regions.length;
   while (lo < hi) {
     const mid = (lo + hi) >> 1;
-    if (regions[mid]![1] <= start) lo = mid + 1;
+    if (regions[mid][1] <= start) lo = mid + 1;
     else hi = mid;
   }
   const r = regions[lo];

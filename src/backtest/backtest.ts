@@ -39,7 +39,7 @@ export function backtest(input: BacktestInput, settings: BacktestSettings, onRun
   const graph = graphOf(facts, aux, options);
   const n = graph.pages.length;
   // Needed as it is only when the held-out links' words stay in the pages.
-  const text = settings.keepLinkText ? textOf(graph.pages.map((p) => facts[p.factsIndex]!), options) : null;
+  const text = settings.keepLinkText ? textOf(graph.pages.map((p) => facts[p.factsIndex]), options) : null;
   const pairs = contentPairs(graph);
   const texts = new Map(collected.sources.files.map((f) => [f.path, f.text] as const));
   const runOptions = backtestOptions(options, n);

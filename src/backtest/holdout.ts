@@ -54,7 +54,7 @@ export function contentPairs(graph: SiteGraph): ContentPair[] {
 /** Pairs that may be held out: neither page excluded. */
 export function eligiblePairs(graph: SiteGraph, pairs: readonly ContentPair[]): ContentPair[] {
   // A pair with a link written in an included file cannot be held out from the page's own text.
-  return pairs.filter((p) => !graph.pages[p.source]!.meta.exclude && !graph.pages[p.target]!.meta.exclude && !p.links.some((l) => l.raw.file !== undefined));
+  return pairs.filter((p) => !graph.pages[p.source].meta.exclude && !graph.pages[p.target].meta.exclude && !p.links.some((l) => l.raw.file !== undefined));
 }
 
 /** What `holdOut` needs. */
@@ -90,17 +90,17 @@ export function holdOut(input: HoldoutInput, share: number, seed: number): Holdo
   const want = eligible.length === 0 ? 0 : Math.max(1, Math.round(share * eligible.length));
 
   const inlinksLeft = new Int32Array(graph.pages.length);
-  for (const p of all) inlinksLeft[p.target]!++;
+  for (const p of all) inlinksLeft[p.target]++;
   const chosen: number[] = [];
   for (const i of shuffle(streamFor(seed, 0), eligible.map((_, i) => i))) {
     if (chosen.length >= want) break;
-    const t = eligible[i]!.target;
-    if (inlinksLeft[t]! < 2) continue;
-    inlinksLeft[t]!--;
+    const t = eligible[i].target;
+    if (inlinksLeft[t] < 2) continue;
+    inlinksLeft[t]--;
     chosen.push(i);
   }
   chosen.sort((a, b) => a - b);
-  return removePairs(input, chosen.map((i) => eligible[i]!));
+  return removePairs(input, chosen.map((i) => eligible[i]));
 }
 
 /** Remove every content link of the given pairs from the facts (pure; the input is not changed). */
@@ -108,7 +108,7 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
   const { graph } = input;
   const removed = new Map<number, Set<RawLink>>();
   for (const p of pairs) {
-    const f = graph.pages[p.source]!.factsIndex;
+    const f = graph.pages[p.source].factsIndex;
     const set = removed.get(f) ?? new Set<RawLink>();
     for (const l of p.links) set.add(l.raw);
     removed.set(f, set);
@@ -117,7 +117,7 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
   const located = new Map<RawLink, TextRange | null>();
   const startsOf = new Map<number, number[]>();
   for (const [f, set] of removed) {
-    const page = input.facts[f]!;
+    const page = input.facts[f];
     const source = input.sourceText(page.file);
     const starts = source === undefined ? [] : lineStarts(source);
     startsOf.set(f, starts);
@@ -143,7 +143,7 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
     target: p.target,
     links: p.links.map((l): HeldOutLink => {
       const range = located.get(l.raw) ?? null;
-      const starts = startsOf.get(graph.pages[p.source]!.factsIndex) ?? [];
+      const starts = startsOf.get(graph.pages[p.source].factsIndex) ?? [];
       return {
         textLine: range === null || starts.length === 0 ? l.raw.line : positionOf(starts, range.start).line,
         line: l.raw.line,

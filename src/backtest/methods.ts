@@ -93,7 +93,7 @@ export function randomLists(candidates: readonly CandidatePair[], seed: number):
 export function randomPageLists(graph: SiteGraph, targets: readonly number[], seed: number): Map<number, RankedSource[]> {
   const rnd = streamFor(seed, RANDOM_PAGE_STREAM);
   const n = graph.pages.length;
-  const mayLink = (s: number, t: number): boolean => s !== t && !graph.pages[s]!.meta.exclude && !hasContentLink(graph.forward, s, t);
+  const mayLink = (s: number, t: number): boolean => s !== t && !graph.pages[s].meta.exclude && !hasContentLink(graph.forward, s, t);
   const out = new Map<number, RankedSource[]>();
   for (const t of [...targets].sort((a, b) => a - b)) {
     const drawn: number[] = [];
@@ -131,7 +131,7 @@ export function titlePhraseLists(
   const byTitle = new Map<string, number[]>();
   let longest = 0;
   for (const t of wanted) {
-    const stems = tokenize(graph.pages[t]!.title, cache);
+    const stems = tokenize(graph.pages[t].title, cache);
     if (stems.length === 0) continue;
     const key = stems.join(' ');
     byTitle.set(key, [...(byTitle.get(key) ?? []), t]);
@@ -145,7 +145,7 @@ export function titlePhraseLists(
       for (let i = 0; i < words.length; i++) {
         let key = '';
         for (let len = 1; len <= longest && i + len <= words.length; len++) {
-          key = len === 1 ? words[i]!.stem : `${key} ${words[i + len - 1]!.stem}`;
+          key = len === 1 ? words[i].stem : `${key} ${words[i + len - 1].stem}`;
           for (const t of byTitle.get(key) ?? []) {
             if (t === s || hasContentLink(graph.forward, s, t)) continue;
             const m = found.get(t) ?? new Map<number, { count: number; first: RankedSource }>();
@@ -155,8 +155,8 @@ export function titlePhraseLists(
               prev.count++;
               continue;
             }
-            const start = words[i]!.start;
-            const end = words[i + len - 1]!.end;
+            const start = words[i].start;
+            const end = words[i + len - 1].end;
             const { line } = positionInSpan(span, start);
             m.set(s, { count: 1, first: { source: s, anchor: span.text.slice(start, end), offset: span.offset + start, endOffset: span.offset + end, line } });
           }

@@ -84,9 +84,9 @@ export function scoreMethod(
     let first = -1;
     K_VALUES.forEach((k, ki) => {
       let hits = 0;
-      for (let r = 0; r < Math.min(k, list.length); r++) if (truth.has(list[r]!.source)) hits++;
-      recall[ki]! += hits / truth.size;
-      precision[ki]! += hits / k;
+      for (let r = 0; r < Math.min(k, list.length); r++) if (truth.has(list[r].source)) hits++;
+      recall[ki] += hits / truth.size;
+      precision[ki] += hits / k;
     });
     list.forEach((item, r) => {
       const pair = truth.get(item.source);
@@ -106,8 +106,8 @@ export function scoreMethod(
   const share = (x: number, on: boolean): number | null => (!on || recovered === 0 ? null : x / recovered);
   return {
     method,
-    recall: [mean(recall[0]!), mean(recall[1]!), mean(recall[2]!)],
-    precision: [mean(precision[0]!), mean(precision[1]!), mean(precision[2]!)],
+    recall: [mean(recall[0]), mean(recall[1]), mean(recall[2])],
+    precision: [mean(precision[0]), mean(precision[1]), mean(precision[2])],
     mrr: mean(rr),
     recovered,
     anchorOverlap: share(overlap, withAnchors),

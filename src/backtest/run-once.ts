@@ -62,7 +62,7 @@ export function runOnce(base: RunBase, share: number, seed: number, keepLinkText
   const reduced = graphOf(facts, base.aux, options);
   checkReduced(graph, reduced, heldOut);
   const ranking = rankOf(reduced, options);
-  const ordered = reduced.pages.map((p) => facts[p.factsIndex]!);
+  const ordered = reduced.pages.map((p) => facts[p.factsIndex]);
   const text = keepLinkText && base.text !== null ? base.text : textOf(ordered, options);
   const cache = text.stems;
   const choice = chooseLikeSuggest({ graph: reduced, facts: ordered, ranking, ...text, traffic: base.traffic }, options);
@@ -102,11 +102,11 @@ export function runOnce(base: RunBase, share: number, seed: number, keepLinkText
  * content link left between a held-out pair; anything else is a bug, not a user error.
  */
 function checkReduced(graph: SiteGraph, reduced: SiteGraph, heldOut: readonly { source: number; target: number }[]): void {
-  const same = reduced.pages.length === graph.pages.length && reduced.pages.every((p, i) => p.route === graph.pages[i]!.route);
+  const same = reduced.pages.length === graph.pages.length && reduced.pages.every((p, i) => p.route === graph.pages[i].route);
   if (!same) throw new EngineError('E_INTERNAL', 'backtest: holding links out changed the set of pages');
   for (const p of heldOut) {
     if (hasContentLink(reduced.forward, p.source, p.target)) {
-      throw new EngineError('E_INTERNAL', `backtest: the held-out link ${graph.pages[p.source]!.route} -> ${graph.pages[p.target]!.route} is still in the graph`);
+      throw new EngineError('E_INTERNAL', `backtest: the held-out link ${graph.pages[p.source].route} -> ${graph.pages[p.target].route} is still in the graph`);
     }
   }
 }

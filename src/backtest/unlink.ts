@@ -28,10 +28,10 @@ export function positionOf(starts: readonly number[], offset: number): { line: n
   let hi = starts.length - 1;
   while (lo < hi) {
     const mid = (lo + hi + 1) >> 1;
-    if (starts[mid]! <= offset) lo = mid;
+    if (starts[mid] <= offset) lo = mid;
     else hi = mid - 1;
   }
-  return { line: lo + 1, column: offset - starts[lo]! + 1 };
+  return { line: lo + 1, column: offset - starts[lo] + 1 };
 }
 
 /** Where a held-out link's words are in the source; `code` (the code as it reads) when they are one inline code span. */
@@ -55,7 +55,7 @@ const CODE_SPAN = /^(`+)(?!`)[^\r\n]*?[^`\r\n]\1(?!`)/;
 export function linkTextRange(source: string, starts: readonly number[], raw: RawLink, kind: FileKind): TextRange | null {
   if (raw.origin === 'pattern' || raw.origin === 'navigation' || raw.text.trim() === '') return null;
   if (raw.line < 1 || raw.line > starts.length || raw.column < 1) return null;
-  const at = starts[raw.line - 1]! + raw.column - 1;
+  const at = starts[raw.line - 1] + raw.column - 1;
   if (at >= source.length) return null;
   let start = -1;
   if (source[at] === '[' && kind === 'markdown') start = at + 1;
@@ -112,8 +112,8 @@ const WORD_CHAR = /[\p{L}\p{N}]/u;
 export function removeOnce(text: string, phrase: string): string {
   if (phrase.trim() === '') return text;
   for (let at = text.indexOf(phrase); at >= 0; at = text.indexOf(phrase, at + 1)) {
-    const before = at > 0 ? text[at - 1]! : ' ';
-    const after = at + phrase.length < text.length ? text[at + phrase.length]! : ' ';
+    const before = at > 0 ? text[at - 1] : ' ';
+    const after = at + phrase.length < text.length ? text[at + phrase.length] : ' ';
     if (!WORD_CHAR.test(before) && !WORD_CHAR.test(after)) return `${text.slice(0, at)} ${text.slice(at + phrase.length)}`;
   }
   return text;

@@ -32,7 +32,7 @@ function errorOffset(message: string, text: string): { line: number; column: num
   if (offset === null) return null;
   const before = text.slice(0, offset);
   const lines = before.split(/\r\n|\r|\n/);
-  return { line: lines.length, column: lines[lines.length - 1]!.length + 1 };
+  return { line: lines.length, column: lines[lines.length - 1].length + 1 };
 }
 
 /**
@@ -43,7 +43,7 @@ function errorOffset(message: string, text: string): { line: number; column: num
 export function checkShape<S extends z.ZodType>(schema: S, value: unknown, label: string, what: string): z.output<S> {
   const result = schema.safeParse(value);
   if (result.success) return result.data;
-  const issue = result.error.issues[0]!;
+  const issue = result.error.issues[0];
   const key = issue.path.length > 0 ? `key "${issue.path.join('.')}"` : 'top level';
   throw new EngineError('E_REPORT_INVALID', `${label}: ${key}: ${issue.message}; expected ${what}`);
 }

@@ -71,8 +71,8 @@ export function matchFindings(current: readonly Finding[], previous: readonly Fi
     const left = then.filter((_, i) => !pairedThen.has(i));
     const pairs = Math.min(rest.length, left.length);
     // One by one: a spread of a large site's findings would overflow the call stack.
-    for (let i = 0; i < rest.length; i++) (i < pairs ? known : added).push(rest[i]!);
-    for (let i = pairs; i < left.length; i++) fixed.push(left[i]!);
+    for (let i = 0; i < rest.length; i++) (i < pairs ? known : added).push(rest[i]);
+    for (let i = pairs; i < left.length; i++) fixed.push(left[i]);
   }
   return { known: known.sort(compareFindings), new: added.sort(compareFindings), fixed: fixed.sort(compareFindings) };
 }

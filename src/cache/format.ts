@@ -87,10 +87,10 @@ export function unpackFacts(stored: StoredFacts, source: string): PageFacts | nu
   const numbers = spans as readonly number[];
   const out: TextSpan[] = new Array(numbers.length / 4);
   for (let i = 0, j = 0; i < numbers.length; i += 4, j++) {
-    const offset = numbers[i]!;
-    const length = numbers[i + 1]!;
+    const offset = numbers[i];
+    const length = numbers[i + 1];
     if (offset < 0 || length < 0 || offset + length > source.length) return null;
-    out[j] = { text: source.slice(offset, offset + length), offset, line: numbers[i + 2]!, column: numbers[i + 3]! };
+    out[j] = { text: source.slice(offset, offset + length), offset, line: numbers[i + 2], column: numbers[i + 3] };
   }
   return { ...stored, spans: out };
 }
@@ -98,7 +98,7 @@ export function unpackFacts(stored: StoredFacts, source: string): PageFacts | nu
 function packSpans(spans: readonly TextSpan[], source: string): number[] | null {
   const out: number[] = new Array(spans.length * 4);
   for (let i = 0; i < spans.length; i++) {
-    const s = spans[i]!;
+    const s = spans[i];
     if (!hasSpanKeys(s)) return null;
     if (!Number.isInteger(s.offset) || source.slice(s.offset, s.offset + s.text.length) !== s.text) return null;
     out[i * 4] = s.offset;

@@ -37,7 +37,7 @@ export async function parseWithCache(
   let rejected = 0;
   let uncacheable = 0;
   for (let i = 0; i < total; i++) {
-    const file = files[i]!;
+    const file = files[i];
     if (!isCacheable(file)) {
       uncacheable++;
       missIndex.push(i);
@@ -54,12 +54,12 @@ export async function parseWithCache(
   let done = hits;
   if (hits > 0 || total === 0) report?.(done, total);
 
-  const misses = missIndex.map((i) => files[i]!);
+  const misses = missIndex.map((i) => files[i]);
   const parsed = await settings.parseMisses(misses, (n) => report?.((done += n), total));
   for (let j = 0; j < missIndex.length; j++) {
-    const i = missIndex[j]!;
-    const file = files[i]!;
-    const f = parsed[j]!;
+    const i = missIndex[j];
+    const file = files[i];
+    const f = parsed[j];
     facts[i] = f;
     // Facts are keyed by their own file and hash; a mismatch (never expected) is simply not cached.
     if (isCacheable(file) && f.file === file.path && f.hash === file.hash && f.kind === file.kind) session.store(file, f);

@@ -61,15 +61,15 @@ function encode(lists: readonly RelatedList[], code: string, key: string): Buffe
   const n = lists.length;
   let entries = 0;
   for (let i = 0; i < n; i++) {
-    if (lists[i]!.page !== i) return null;
-    entries += lists[i]!.related.length;
+    if (lists[i].page !== i) return null;
+    entries += lists[i].related.length;
   }
   const offsets = new Int32Array(n + 1);
   const ids = new Int32Array(entries);
   const sims = new Float64Array(entries);
   let at = 0;
   for (let i = 0; i < n; i++) {
-    for (const r of lists[i]!.related) {
+    for (const r of lists[i].related) {
       if (!Number.isFinite(r.similarity)) return null;
       ids[at] = r.page;
       sims[at] = r.similarity;
@@ -105,13 +105,13 @@ function decode(bytes: Buffer, code: string, key: string, pages: number): Relate
   if (offsets[0] !== 0 || offsets[pages] !== entries) return null;
   const lists: RelatedList[] = new Array(pages);
   for (let i = 0; i < pages; i++) {
-    const from = offsets[i]!;
-    const to = offsets[i + 1]!;
+    const from = offsets[i];
+    const to = offsets[i + 1];
     if (to < from || to > entries!) return null;
     const related: { page: number; similarity: number }[] = [];
     for (let e = from; e < to; e++) {
-      const page = ids[e]!;
-      const similarity = sims[e]!;
+      const page = ids[e];
+      const similarity = sims[e];
       if (page < 0 || page >= pages || page === i || !Number.isFinite(similarity)) return null;
       related.push({ page, similarity });
     }

@@ -57,7 +57,7 @@ export function readResult(dir: string, command: string, key: string): Report | 
     const lines = splitLines(fs.readFileSync(file));
     const report: Record<string, unknown> = {};
     for (let i = 1; i < lines.length; i++) {
-      const [name, value, more] = JSON.parse(lines[i]!) as [string, unknown, boolean?];
+      const [name, value, more] = JSON.parse(lines[i]) as [string, unknown, boolean?];
       if (more === true) (report[name] as unknown[]).push(...(value as unknown[]));
       else report[name] = value;
     }

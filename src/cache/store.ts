@@ -77,7 +77,7 @@ export function openCache(dir: string, key: CacheKey): CacheSession {
   return {
     ignored,
     lookup(file) {
-      const shard = shards[shardOfPath(file.path)]!;
+      const shard = shards[shardOfPath(file.path)];
       const entry = shard.loaded.get(file.path);
       if (entry === undefined) return { miss: 'absent' };
       if (entry.hash !== file.hash) return { miss: 'changed' };
@@ -88,14 +88,14 @@ export function openCache(dir: string, key: CacheKey): CacheSession {
       return { facts };
     },
     store(file, facts) {
-      const shard = shards[shardOfPath(file.path)]!;
+      const shard = shards[shardOfPath(file.path)];
       shard.next.set(file.path, new Unpacked(facts, file.text));
       shard.stored++;
     },
     save() {
       let written = 0;
       for (let i = 0; i < SHARDS; i++) {
-        const shard = shards[i]!;
+        const shard = shards[i];
         const changed = shard.ignored || shard.stored > 0 || shard.next.size !== shard.loaded.size;
         if (!changed) continue;
         const problem = writeShard(dir, i, key, shard.next);
@@ -173,7 +173,7 @@ function serializeShard(index: number, key: CacheKey, entries: ReadonlyMap<strin
   const parts: string[] = [JSON.stringify(header), '\n[\n'];
   for (let i = 0; i < paths.length; i++) {
     if (i > 0) parts.push(',\n');
-    const entry = entries.get(paths[i]!)!;
+    const entry = entries.get(paths[i])!;
     parts.push(JSON.stringify(entry instanceof Unpacked ? packFacts(entry.facts, entry.source) : entry));
   }
   parts.push('\n]\n');

@@ -138,13 +138,13 @@ export function parseArgs(argv: readonly string[], commands: readonly CommandInf
   const positionals: string[] = [];
   const seen: { flag: string; value: string | null }[] = [];
   for (let i = 0; i < argv.length; i++) {
-    const arg = argv[i]!;
+    const arg = argv[i];
     if (arg === '--') {
       positionals.push(...argv.slice(i + 1));
       break;
     }
     if (arg in ALIASES) {
-      seen.push({ flag: ALIASES[arg]!, value: null });
+      seen.push({ flag: ALIASES[arg], value: null });
     } else if (arg.startsWith('--')) {
       const eq = arg.indexOf('=');
       seen.push(eq < 0 ? { flag: arg.slice(2), value: null } : { flag: arg.slice(2, eq), value: arg.slice(eq + 1) });
@@ -155,10 +155,10 @@ export function parseArgs(argv: readonly string[], commands: readonly CommandInf
       continue;
     }
     // A string flag takes the next argument as its value unless it is written --flag=value.
-    const last = seen[seen.length - 1]!;
+    const last = seen[seen.length - 1];
     const spec = findFlag(last.flag, commands);
-    if (spec?.kind === 'string' && last.value === null && i + 1 < argv.length && !argv[i + 1]!.startsWith('--')) {
-      last.value = argv[++i]!;
+    if (spec?.kind === 'string' && last.value === null && i + 1 < argv.length && !argv[i + 1].startsWith('--')) {
+      last.value = argv[++i];
     }
   }
 

@@ -37,8 +37,8 @@ const rs = (s: Spread) => ({ mean: r(s.mean), sd: r(s.sd) });
 function methodJson(m: MethodScores) {
   return {
     method: m.method,
-    ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, r(m.recall[i]!)])),
-    ...Object.fromEntries(K_VALUES.map((k, i) => [`precisionAt${k}`, r(m.precision[i]!)])),
+    ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, r(m.recall[i])])),
+    ...Object.fromEntries(K_VALUES.map((k, i) => [`precisionAt${k}`, r(m.precision[i])])),
     mrr: r(m.mrr),
     recovered: m.recovered,
     anchorOverlap: r(m.anchorOverlap),
@@ -72,8 +72,8 @@ export function formatBacktestJson(result: BacktestResult): string {
     runs: result.runs.map((run) => ({ ...run, candidateCoverage: r(run.candidateCoverage), bestRecallAt1: r(run.bestRecallAt1), methods: run.methods.map(methodJson) })),
     summary: result.summary.map((s) => ({
       method: s.method,
-      ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, rs(s.recall[i]!)])),
-      ...Object.fromEntries(K_VALUES.map((k, i) => [`precisionAt${k}`, rs(s.precision[i]!)])),
+      ...Object.fromEntries(K_VALUES.map((k, i) => [`recallAt${k}`, rs(s.recall[i])])),
+      ...Object.fromEntries(K_VALUES.map((k, i) => [`precisionAt${k}`, rs(s.precision[i])])),
       mrr: rs(s.mrr),
       anchorOverlap: rs(s.anchorOverlap),
       anchorInPlace: rs(s.anchorInPlace),
@@ -121,11 +121,11 @@ const pct = (x: number): string => `${(100 * x).toFixed(1)}%`;
 function verdict(result: BacktestResult): string {
   const k = K_VALUES.length > 1 ? 1 : 0;
   const ours = result.summary.find((s) => s.method === 'linkweave');
-  const baselines = result.summary.filter((s) => s.method !== 'linkweave' && s.recall[k]!.mean !== null);
-  if (ours === undefined || ours.recall[k]!.mean === null || baselines.length === 0) return 'Verdict: nothing to compare.';
-  const best = baselines.reduce((a, b) => (b.recall[k]!.mean! > a.recall[k]!.mean! ? b : a));
-  const mine = ours.recall[k]!.mean!;
-  const theirs = best.recall[k]!.mean!;
+  const baselines = result.summary.filter((s) => s.method !== 'linkweave' && s.recall[k].mean !== null);
+  if (ours === undefined || ours.recall[k].mean === null || baselines.length === 0) return 'Verdict: nothing to compare.';
+  const best = baselines.reduce((a, b) => (b.recall[k].mean! > a.recall[k].mean! ? b : a));
+  const mine = ours.recall[k].mean!;
+  const theirs = best.recall[k].mean!;
   const points = Math.abs(100 * (mine - theirs));
   const standing = points < 0.05 ? 'level with it' : `${points.toFixed(1)} points ${mine > theirs ? 'ahead' : 'behind'}`;
   const over = result.settings.runs > 1 ? ` (means over ${result.settings.runs} runs)` : '';
@@ -196,8 +196,8 @@ export function formatBacktestText(result: BacktestResult): string {
     cell(s.anchorOverlap, settings.runs),
     cell(s.lineMatch, settings.runs),
   ]);
-  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i]!.length)));
-  const line = (row: readonly string[]) => `  ${row.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ')}`.trimEnd();
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
+  const line = (row: readonly string[]) => `  ${row.map((c, i) => (i === 0 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ')}`.trimEnd();
   lines.push(line(header), ...rows.map(line), '');
   const ours = result.summary.find((s) => s.method === 'linkweave');
   const place = settings.keepLinkText && ours !== undefined ? ` On the original link's own place: ${cell(ours.anchorInPlace, settings.runs)}.` : '';

@@ -50,7 +50,7 @@ export async function collectSources(options: ResolvedOptions, extraExclude: rea
   const ctx = { realRoot, maxFileBytes: options.maxFileBytes };
   const files: SourceFile[] = [];
   for (let i = 0; i < sources.length; i++) {
-    const { rel, kind } = sources[i]!;
+    const { rel, kind } = sources[i];
     const outcome = readSource(join(realRoot, rel), rel, kind, ctx);
     if ('file' in outcome) files.push(outcome.file);
     else warnings.add(outcome.warning);

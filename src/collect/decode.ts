@@ -61,7 +61,7 @@ export function firstInvalidUtf8(bytes: Uint8Array): number {
   const n = bytes.length;
   let i = 0;
   while (i < n) {
-    const b = bytes[i]!;
+    const b = bytes[i];
     if (b < 0x80) {
       i++;
       continue;
@@ -81,7 +81,7 @@ export function firstInvalidUtf8(bytes: Uint8Array): number {
     // The second byte has the narrowed range; later ones are plain continuation bytes.
     for (let k = 1; k <= need; k++) {
       if (i + k >= n) return i;
-      const c = bytes[i + k]!;
+      const c = bytes[i + k];
       const min = k === 1 ? lo : 0x80;
       const max = k === 1 ? hi : 0xbf;
       if (c < min || c > max) return i;
@@ -99,7 +99,7 @@ export function positionOfByte(bytes: Uint8Array, offset: number): { line: numbe
   let line = 1;
   let lineStart = 0;
   for (let i = 0; i < offset; i++) {
-    const b = bytes[i]!;
+    const b = bytes[i];
     if (b === 0x0a || (b === 0x0d && bytes[i + 1] !== 0x0a)) {
       line++;
       lineStart = i + 1;

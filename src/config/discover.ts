@@ -48,7 +48,7 @@ export async function loadConfig(input: { explicit: string | null; root: string;
       );
     }
     if (present.length === 1) {
-      const file = present[0]!;
+      const file = present[0];
       return { config: await readConfigFile(file, shown(cwd, file)), origin: shown(cwd, file), file };
     }
   }
@@ -109,5 +109,5 @@ export function shown(cwd: string, file: string): string {
 }
 
 function firstLine(text: string): string {
-  return text.split('\n', 1)[0]!;
+  return text.split('\n', 1)[0];
 }

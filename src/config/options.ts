@@ -136,7 +136,7 @@ export function resolveOptions(input: unknown, root: string, origin = 'configura
   if (old !== null) throw new EngineError('E_CONFIG_INVALID', `${origin}: ${old}`);
   const result = schema.safeParse(input ?? {}, { reportInput: true });
   if (!result.success) {
-    throw new EngineError('E_CONFIG_INVALID', `${origin}: ${describeIssue(schema, result.error.issues[0]!)}`);
+    throw new EngineError('E_CONFIG_INVALID', `${origin}: ${describeIssue(schema, result.error.issues[0])}`);
   }
   const options = { ...result.data, root };
   for (const [i, p] of options.linkPatterns.entries()) {

@@ -34,7 +34,7 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
   const includes = resolveIncludes(input.pages, input.assets);
   const notPages = routes.generator === 'hugo' ? new Set([...includes.includedFiles, ...bundleResources(input.pages)]) : includes.includedFiles;
   const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, notPages);
-  const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]!);
+  const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]);
   const unknownIds = new Set<number>();
   for (const p of pages) if (includes.unknown.has(p.factsIndex)) unknownIds.add(p.id);
   const pageIds = new PageIds(facts, pages.map((p) => includes.pulledIn.get(p.factsIndex) ?? []), unknownIds);
@@ -61,8 +61,8 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
     pageRoutes: pages.map((p) => p.route),
     scope: scopeContext(basePath, options.outside, options.generated.routes, routes.absoluteLinksUnderBase),
     hasId(page, id) {
-      if (unknownIds.has(page) || includes.pulledIn.has(pages[page]!.factsIndex)) return pageIds.has(page, id, 'github');
-      const ids = facts[page]!.ids;
+      if (unknownIds.has(page) || includes.pulledIn.has(pages[page].factsIndex)) return pageIds.has(page, id, 'github');
+      const ids = facts[page].ids;
       if (ids.length <= ID_SET_THRESHOLD) return ids.includes(id);
       let set = idSets[page];
       if (set === undefined) idSets[page] = set = new Set(ids);
@@ -83,13 +83,13 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
   }
   const navCount = resolved.length;
   for (let id = 0; id < n; id++) {
-    const f = facts[id]!;
-    const src = pageSource(id, f.kind, f.file, pages[id]!.route, f.baseHref);
+    const f = facts[id];
+    const src = pageSource(id, f.kind, f.file, pages[id].route, f.baseHref);
     const start = resolved.length;
     for (const raw of f.links) resolved.push(resolveLink(raw, src, ctx));
     // An included file's text is part of the page: its links are the page's, resolved from the
     // page (the generator pastes the text in before it renders), placed in the included file.
-    for (const inc of includes.pulledIn.get(pages[id]!.factsIndex) ?? []) {
+    for (const inc of includes.pulledIn.get(pages[id].factsIndex) ?? []) {
       for (const raw of inc.links) resolved.push(resolveLink({ ...raw, file: inc.file }, src, ctx));
     }
     if (resolved.length - start > 1) sortRange(resolved, start);
@@ -158,8 +158,8 @@ function sortByPosition(links: ResolvedLink[]): void {
 /** Sort `links[start..]` by position in place (stable), skipping the copy when already sorted. */
 function sortRange(links: ResolvedLink[], start: number): void {
   let sorted = true;
-  for (let i = start + 1; i < links.length && sorted; i++) if (comparePosition(links[i - 1]!, links[i]!) > 0) sorted = false;
+  for (let i = start + 1; i < links.length && sorted; i++) if (comparePosition(links[i - 1], links[i]) > 0) sorted = false;
   if (sorted) return;
   const part = links.slice(start).sort(comparePosition);
-  for (let i = 0; i < part.length; i++) links[start + i] = part[i]!;
+  for (let i = 0; i < part.length; i++) links[start + i] = part[i];
 }

@@ -43,7 +43,7 @@ export function generatedEdges(pages: readonly PageNode[], sectionLists: boolean
     posts.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
     for (const entry of entries) for (const p of posts) if (p.id !== entry) edges.push({ from: entry, to: p.id });
     for (let i = 1; i < posts.length; i++) {
-      edges.push({ from: posts[i - 1]!.id, to: posts[i]!.id }, { from: posts[i]!.id, to: posts[i - 1]!.id });
+      edges.push({ from: posts[i - 1].id, to: posts[i].id }, { from: posts[i].id, to: posts[i - 1].id });
     }
   }
   return edges;

@@ -38,15 +38,15 @@ export class PageIds {
     let set = this.cache.get(key);
     if (set === undefined) {
       set = null;
-      const own = idsUnder(this.facts[page]!, style);
+      const own = idsUnder(this.facts[page], style);
       const extra = this.included[page] ?? [];
-      if (style !== 'github' || extra.length > 0 || own !== this.facts[page]!.ids) {
+      if (style !== 'github' || extra.length > 0 || own !== this.facts[page].ids) {
         set = new Set(own);
         for (const f of extra) for (const x of idsUnder(f, style)) set.add(x);
       }
       this.cache.set(key, set);
     }
-    return set === null ? this.facts[page]!.ids.includes(id) : set.has(id);
+    return set === null ? this.facts[page].ids.includes(id) : set.has(id);
   }
 }
 
@@ -73,7 +73,7 @@ export function applyHeadingIdStyle(
 ): { links: ResolvedLink[]; choice: HeadingIdChoice } {
   const fragmentLinks: number[] = [];
   for (let i = 0; i < links.length; i++) {
-    const l = links[i]!;
+    const l = links[i];
     if (l.to < 0 || (l.status !== 'ok' && l.status !== 'self' && l.status !== 'broken-fragment')) continue;
     if (l.fragment === '' || l.fragment.toLowerCase() === 'top') continue;
     fragmentLinks.push(i);
@@ -89,7 +89,7 @@ export function applyHeadingIdStyle(
     const order = [fallback, ...HEADING_ID_STYLES.filter((s) => s !== fallback)];
     for (const s of order) {
       let n = 0;
-      for (const i of fragmentLinks) if (resolves(links[i]!, s)) n++;
+      for (const i of fragmentLinks) if (resolves(links[i], s)) n++;
       if (n > best) {
         best = n;
         style = s;
@@ -99,7 +99,7 @@ export function applyHeadingIdStyle(
   const out = links.slice();
   let resolved = 0;
   for (const i of fragmentLinks) {
-    const l = links[i]!;
+    const l = links[i];
     const ok = resolves(l, style);
     if (ok) resolved++;
     const status: LinkStatus = ok ? (l.to === l.from ? 'self' : 'ok') : 'broken-fragment';

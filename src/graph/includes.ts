@@ -54,7 +54,7 @@ export function resolveIncludes(facts: readonly PageFacts[], assets: readonly st
       const next = queue.shift()!;
       if (seen.has(next)) continue;
       seen.add(next);
-      out.push(facts[next]!);
+      out.push(facts[next]);
       if (unknown.has(next)) unknown.add(start);
       queue.push(...(direct.get(next) ?? []));
     }

@@ -37,7 +37,7 @@ export function canonicalRoute(route: string): string {
 export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, notPages: ReadonlySet<string> = new Set()): PageSelection {
   const candidates: { index: number; route: string; key: string; file: string }[] = [];
   for (let index = 0; index < facts.length; index++) {
-    const f = facts[index]!;
+    const f = facts[index];
     if (f.meta.draft || notPages.has(f.file)) continue;
     const route = canonicalRoute(f.route);
     candidates.push({ index, route, key: routeKeyOf(route, routes), file: f.file });
@@ -52,12 +52,12 @@ export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, n
     else kept.push(c);
   }
   const order = kept.map((_, i) => i);
-  order.sort((a, b) => compareText(kept[a]!.route, kept[b]!.route) || compareText(kept[a]!.file, kept[b]!.file));
+  order.sort((a, b) => compareText(kept[a].route, kept[b].route) || compareText(kept[a].file, kept[b].file));
   const idOfKept = new Int32Array(kept.length);
   const pages: PageNode[] = order.map((k, id) => {
     idOfKept[k] = id;
-    const c = kept[k]!;
-    const f = facts[c.index]!;
+    const c = kept[k];
+    const f = facts[c.index];
     return { id, factsIndex: c.index, route: c.route, file: f.file, title: f.title, meta: f.meta };
   });
 
@@ -65,7 +65,7 @@ export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, n
   for (const p of pages) if (!fileToPage.has(p.file)) fileToPage.set(p.file, p.id);
   const duplicates: DuplicateRoute[] = [];
   for (const d of lost) {
-    const keptPage = pages[idOfKept[d.keptIndex]!]!;
+    const keptPage = pages[idOfKept[d.keptIndex]];
     duplicates.push({ file: d.file, route: d.route, keptFile: keptPage.file });
     if (!fileToPage.has(d.file)) fileToPage.set(d.file, keptPage.id);
   }

@@ -141,7 +141,7 @@ function resolveInSources(raw: RawLink, src: LinkSource, ctx: ResolveContext, fa
 
 /** A link that resolved to a page: check its fragment. */
 function toPage(raw: RawLink, src: LinkSource, ctx: ResolveContext, page: number, fragment: string, rawHash: string): ResolvedLink {
-  const target = ctx.pageRoutes[page]!;
+  const target = ctx.pageRoutes[page];
   const status: LinkStatus = fragmentExists(ctx, page, fragment, rawHash) ? (page === src.page ? 'self' : 'ok') : 'broken-fragment';
   return make(raw, src, page, target, fragment, 'internal', status);
 }
@@ -185,7 +185,7 @@ function resolveFileLink(raw: RawLink, href: string, src: LinkSource, ctx: Resol
     if (file === null) return broken(raw, src, raw.href, 'internal');
     files.push(file);
   }
-  return fileCandidates(raw, src, ctx, files, candidates[0]!.hash, markdownLink);
+  return fileCandidates(raw, src, ctx, files, candidates[0].hash, markdownLink);
 }
 
 /** `resolveFileLink` for a plain href (see `PLAIN_HREF`): the same candidates without `URL`. */

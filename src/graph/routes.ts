@@ -59,12 +59,12 @@ export function buildRouteIndex(
 ): RouteIndexes {
   const routeIndex = new Map<string, number>();
   for (let id = 0; id < pages.length; id++) {
-    const key = routeKeyOf(pages[id]!.route, routes);
+    const key = routeKeyOf(pages[id].route, routes);
     if (!routeIndex.has(key)) routeIndex.set(key, id);
   }
   for (let id = 0; id < pages.length; id++) {
-    for (const alias of pages[id]!.aliases) {
-      const value = resolveRouteValue(alias, basePath, pages[id]!.route);
+    for (const alias of pages[id].aliases) {
+      const value = resolveRouteValue(alias, basePath, pages[id].route);
       if (value === null || value.kind !== 'path') continue;
       const key = routeKeyOf(value.path, routes);
       if (lookupKey(routeIndex, key, routes) !== undefined) continue;

@@ -81,7 +81,7 @@ function climb(path: string): number {
   let lowest = 0;
   const parts = path.split(/[\\/]/);
   for (let i = 0; i < parts.length; i++) {
-    const s = parts[i]!;
+    const s = parts[i];
     if (s === '..' || s.toLowerCase() === '%2e%2e') level--;
     else if (s !== '' && s !== '.' && i < parts.length - 1) level++;
     lowest = Math.min(lowest, level);

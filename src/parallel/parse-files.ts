@@ -34,7 +34,7 @@ export async function parseFiles(
   const facts: PageFacts[] = new Array(files.length);
   for (let i = 0; i < files.length; i += MAIN_STEP) {
     const end = Math.min(files.length, i + MAIN_STEP);
-    for (let j = i; j < end; j++) facts[j] = parseSource(files[j]!, options);
+    for (let j = i; j < end; j++) facts[j] = parseSource(files[j], options);
     onParsed(end - i);
     if (end < files.length) await new Promise<void>((resolve) => setImmediate(resolve));
   }

@@ -63,7 +63,7 @@ export function makeBatches(files: readonly SourceFile[], threads: number): Batc
   let start = 0;
   let size = 0;
   for (let i = 0; i < files.length; i++) {
-    size += files[i]!.text.length;
+    size += files[i].text.length;
     if (size >= target || i + 1 - start >= MAX_BATCH_FILES) {
       batches.push({ start, end: i + 1 });
       start = i + 1;

@@ -61,7 +61,7 @@ export async function parseInPool(
           fallback ??= error instanceof Error ? error.message : String(error);
           out = batch.map((f) => parseSource(f, options));
         }
-        for (let i = 0; i < out.length; i++) facts[start + i] = out[i]!;
+        for (let i = 0; i < out.length; i++) facts[start + i] = out[i];
         onParsed(batch.length);
       }),
     );

@@ -9,6 +9,6 @@ import type { ParseTask } from './types.js';
 /** Parse every file of the batch with `parseSource` (which never throws). */
 export default function parseBatch(task: ParseTask): PageFacts[] {
   const out: PageFacts[] = new Array(task.files.length);
-  for (let i = 0; i < task.files.length; i++) out[i] = parseSource(task.files[i]!, task.options);
+  for (let i = 0; i < task.files.length; i++) out[i] = parseSource(task.files[i], task.options);
   return out;
 }

@@ -122,7 +122,7 @@ function regions(flags: Uint8Array, complex: Map<number, string>): HeavyRegion[]
   const out: HeavyRegion[] = [];
   let l = 0;
   while (l < flags.length) {
-    const f = flags[l]!;
+    const f = flags[l];
     if (f === 0) {
       l++;
       continue;
@@ -216,12 +216,12 @@ export function blankRegions(src: string, lines: LineIndex, heavy: readonly Line
     let k = -1;
     while (lo <= hi) {
       const mid = (lo + hi) >>> 1;
-      if (cuts[mid]! <= o) {
+      if (cuts[mid] <= o) {
         k = mid;
         lo = mid + 1;
       } else hi = mid - 1;
     }
-    return k < 0 ? o : o + shifts[k]!;
+    return k < 0 ? o : o + shifts[k];
   };
   return { text: parts.join(''), toSource };
 }

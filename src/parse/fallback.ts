@@ -41,7 +41,7 @@ export function scanMarkdownLines(src: string, lines: LineIndex, from: number, t
     const rest = line.slice(prefix.length);
     const fenceMark = /^(`{3,}|~{3,})/.exec(rest);
     if (fence !== null || fenceMark !== null) {
-      if (fence === null) fence = fenceMark![1]!;
+      if (fence === null) fence = fenceMark![1];
       else if (rest.startsWith(fence) && /^(`+|~+)[ \t]*$/.test(rest)) fence = null;
       draft.code.push(s, e);
       continue;
@@ -50,15 +50,15 @@ export function scanMarkdownLines(src: string, lines: LineIndex, from: number, t
     if (atx !== null) {
       const raw = rest.slice(atx[0].length).replace(/[ \t]+#+[ \t]*$/, '').trim();
       const text = collapseSpace(stripMarkup(raw));
-      draft.headings.push({ depth: atx[1]!.length, text, slug: slugger.slug(text), offset: s + prefix.length });
-      if (atx[1]!.length === 1 && draft.firstH1 === undefined && text !== '') draft.firstH1 = text;
+      draft.headings.push({ depth: atx[1].length, text, slug: slugger.slug(text), offset: s + prefix.length });
+      if (atx[1].length === 1 && draft.firstH1 === undefined && text !== '') draft.firstH1 = text;
     }
     // Odd pieces between backticks are code.
     const pieces = rest.split('`');
     let at = s + prefix.length;
     let body = '';
     for (let k = 0; k < pieces.length; k++) {
-      const piece = pieces[k]!;
+      const piece = pieces[k];
       const code = k % 2 === 1 && k < pieces.length - 1;
       if (code) draft.code.push(at, at + piece.length);
       else {
@@ -75,12 +75,12 @@ function scanPieceLinks(piece: string, base: number, draft: PageDraft): void {
   if (piece.indexOf('](') >= 0) {
     for (const m of piece.matchAll(MD_LINK)) {
       if (m[1] === '!') continue;
-      draft.links.push({ offset: base + m.index, href: m[3] ?? m[4] ?? '', text: collapseSpace(m[2]!), context: 'content', nofollow: false, origin: 'markdown' });
+      draft.links.push({ offset: base + m.index, href: m[3] ?? m[4] ?? '', text: collapseSpace(m[2]), context: 'content', nofollow: false, origin: 'markdown' });
     }
   }
   if (piece.indexOf('<') >= 0) {
     for (const m of piece.matchAll(AUTOLINK)) {
-      draft.links.push({ offset: base + m.index, href: m[1]!, text: m[1]!, context: 'content', nofollow: false, origin: 'markdown' });
+      draft.links.push({ offset: base + m.index, href: m[1], text: m[1], context: 'content', nofollow: false, origin: 'markdown' });
     }
     scanHtmlLinks(piece, base, draft);
   }
@@ -94,11 +94,11 @@ function scanPieceLinks(piece: string, base: number, draft: PageDraft): void {
 export function scanHtml(src: string, draft: PageDraft): void {
   scanHtmlLinks(src, 0, draft);
   const title = /<title[^<>]*>([^<]*)/i.exec(src);
-  if (title !== null) draft.htmlTitle = collapseSpace(decodeBasicEntities(title[1]!));
+  if (title !== null) draft.htmlTitle = collapseSpace(decodeBasicEntities(title[1]));
   const base = /<base\s[^<>]*?\bhref\s*=\s*(?:"([^"<>]*)"|'([^'<>]*)'|([^\s"'<>`=]+))/i.exec(src);
   if (base !== null) draft.baseHref = base[1] ?? base[2] ?? base[3] ?? '';
   for (const m of src.matchAll(/<h([1-6])(?=[\s>])[^<>]*>([^<]*)/gi)) {
-    const text = collapseSpace(decodeBasicEntities(m[2]!));
+    const text = collapseSpace(decodeBasicEntities(m[2]));
     const depth = Number(m[1]);
     draft.headings.push({ depth, text, slug: '', offset: m.index });
     if (depth === 1 && draft.firstH1 === undefined && text !== '') draft.firstH1 = text;

@@ -86,7 +86,7 @@ export function readFrontmatter(value: string, contentStart: number, format: 'ya
   }
   const doc = parseDocument(value, { prettyErrors: false });
   if (doc.errors.length > 0) {
-    const e = doc.errors[0]!;
+    const e = doc.errors[0];
     return fail(e.pos[0], `Invalid YAML frontmatter: ${e.message}; the page is read without its frontmatter`);
   }
   let data: unknown;
@@ -115,7 +115,7 @@ function readRecord(
     problems.push({
       code: 'frontmatter',
       message: `Frontmatter key "${key}": unexpected ${describe(got)}, expected ${expected}; the key is ignored`,
-      offset: at(key.split('.')[0]!) + (key.includes('.') ? nested(key) : 0),
+      offset: at(key.split('.')[0]) + (key.includes('.') ? nested(key) : 0),
     });
   };
 
@@ -221,7 +221,7 @@ function tomlKeyOffsets(value: string): Map<string, number> {
   const re = /^[ \t]*(?:"([^"\n]*)"|'([^'\n]*)'|([A-Za-z0-9_-]+))[ \t]*=|^[ \t]*\[/gm;
   for (let m = re.exec(value); m !== null; m = re.exec(value)) {
     if (m[0].trimStart().startsWith('[')) break;
-    const key = m[1] ?? m[2] ?? m[3]!;
+    const key = m[1] ?? m[2] ?? m[3];
     if (!map.has(key)) map.set(key, m.index + m[0].length - m[0].trimStart().length);
   }
   return map;

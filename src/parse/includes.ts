@@ -42,7 +42,7 @@ export function findIncludes(src: string, path: string, code: readonly number[],
     re.lastIndex = 0;
     for (let m = re.exec(src); m !== null; m = re.exec(src)) {
       if (inCode(code, m.index)) continue;
-      let written = m[1]!.trim();
+      let written = m[1].trim();
       if (from !== 'root' && from !== 'includes' && written.startsWith('{{')) continue;
       // mdBook: `file.rs:anchor` or `file.rs:2:10` names a part of the file.
       if (m[0].startsWith('{{#')) written = written.replace(/:.*$/, '');
@@ -107,6 +107,6 @@ function normalize(path: string): string | null {
 }
 
 function inCode(code: readonly number[], offset: number): boolean {
-  for (let i = 0; i + 1 < code.length; i += 2) if (offset >= code[i]! && offset < code[i + 1]!) return true;
+  for (let i = 0; i + 1 < code.length; i += 2) if (offset >= code[i] && offset < code[i + 1]) return true;
   return false;
 }

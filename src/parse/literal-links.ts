@@ -73,17 +73,17 @@ function urlsIn(text: string): LiteralLink[] {
 
 function urlAt(text: string, m: RegExpExecArray): LiteralLink | null {
   const index = m.index;
-  const www = m[1]![0] === 'w' || m[1]![0] === 'W';
-  const before = index === 0 ? ' ' : text[index - 1]!;
+  const www = m[1][0] === 'w' || m[1][0] === 'W';
+  const before = index === 0 ? ' ' : text[index - 1];
   // remark-gfm's tokenizer reads an address after a space or `(*_[]~` (`www.`) or after
   // anything but a letter (`http://`); failing that, its tree pass reads it after a space or
   // punctuation, and wants a letter or digit in the last two labels.
   const tokenizer = www ? /[\s(*_[\]~]/.test(before) : !/[A-Za-z]/.test(before);
   if (!tokenizer && !SPACE.test(before) && !PUNCTUATION.test(before)) return null;
-  const protocol = www ? '' : m[1]!;
-  const domain = www ? m[1]! + m[2]! : m[2]!;
+  const protocol = www ? '' : m[1];
+  const domain = www ? m[1] + m[2] : m[2];
   if (PUNCTUATION.test(domain[0] ?? '') || !isDomain(domain, !tokenizer)) return null;
-  let kept = withoutTrail(domain + m[3]!);
+  let kept = withoutTrail(domain + m[3]);
   // A domain ends before trailing dots and underscores.
   if (kept.length <= domain.length) kept = kept.replace(/[._]+$/, '');
   return { index, text: protocol + kept, href: (www ? 'http://' : '') + protocol + kept };
@@ -92,7 +92,7 @@ function urlAt(text: string, m: RegExpExecArray): LiteralLink | null {
 function emailsIn(text: string): LiteralLink[] {
   const out: LiteralLink[] = [];
   for (const m of text.matchAll(EMAIL)) {
-    if (LABEL_BAD_END.test(m[2]!)) continue;
+    if (LABEL_BAD_END.test(m[2])) continue;
     out.push({ index: m.index, text: m[0], href: `mailto:${m[0]}` });
   }
   return out;

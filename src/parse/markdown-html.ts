@@ -37,7 +37,7 @@ export interface InlineOpen {
 export function inlineOpenTag(value: string): InlineOpen | null {
   const m = INLINE_OPEN.exec(value);
   if (m === null || value.endsWith('/>')) return null;
-  const tag = m[1]!.toLowerCase();
+  const tag = m[1].toLowerCase();
   return {
     tag,
     link: tag === 'a' && /\shref\s*=/i.test(value),
@@ -85,7 +85,7 @@ function fragmentMapper(src: string, lines: LineIndex, value: string, start: num
   const firstLine = lineOf(lines, start);
   const base: number[] = [start];
   for (let k = 1; k < local.count; k++) {
-    const vs = local.starts[k]!;
+    const vs = local.starts[k];
     const ve = lineContentEnd(local, value, k);
     const line = firstLine + k;
     const anchor = k === local.count - 1 ? end : lineContentEnd(lines, src, line);
@@ -94,6 +94,6 @@ function fragmentMapper(src: string, lines: LineIndex, value: string, start: num
   }
   return (o) => {
     const k = Math.min(lineOf(local, o), base.length - 1);
-    return base[k]! + (o - local.starts[k]!);
+    return base[k] + (o - local.starts[k]);
   };
 }

@@ -65,8 +65,8 @@ function esmLines(src: string, lines: LineIndex, from: number, heavy: readonly H
     const text = textOf(l);
     const mark = /^ {0,3}(`{3,}|~{3,})/.exec(text);
     if (mark !== null) {
-      if (fence === null) fence = mark[1]!;
-      else if (mark[1]!.startsWith(fence)) fence = null;
+      if (fence === null) fence = mark[1];
+      else if (mark[1].startsWith(fence)) fence = null;
       continue;
     }
     if (fence !== null || !MDX_ESM.test(text)) continue;

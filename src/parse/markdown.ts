@@ -91,7 +91,7 @@ function walkChildren(w: Walk, parent: Parents, flags: number): void {
   const children = parent.children as RootContent[];
   const phrasing = PHRASING_PARENTS.has(parent.type);
   for (let i = 0; i < children.length; i++) {
-    const child = children[i]!;
+    const child = children[i];
     if (child.type === 'html') i = html(w, children, i, flags, phrasing);
     else visit(w, child, flags);
   }
@@ -129,7 +129,7 @@ function visit(w: Walk, node: Nodes, flags: number): void {
         nofollow: false,
         origin: 'markdown',
       };
-      if (node.children.length === 1 && node.children[0]!.type === 'inlineCode') link.code = true;
+      if (node.children.length === 1 && node.children[0].type === 'inlineCode') link.code = true;
       if (node.type === 'link') draft.links.push(link);
       else w.references.push({ link, id: node.identifier });
       draft.protected.push([link.offset, endOf(w, node), 'link']);
@@ -219,7 +219,7 @@ function heading(w: Walk, node: Heading, flags: number): void {
   const custom = CUSTOM_ID.exec(raw);
   const slugText = custom === null ? raw : raw.slice(0, custom.index);
   const text = collapseSpace(slugText);
-  const slug = custom === null ? w.slugger.slug(slugText) : custom[1]!;
+  const slug = custom === null ? w.slugger.slug(slugText) : custom[1];
   const offset = startOf(w, node);
   if (custom !== null) w.draft.headings.push({ depth: node.depth, text, slug, offset, explicit: true });
   else if (slugText !== text) w.draft.headings.push({ depth: node.depth, text, slug, offset, raw: slugText });
@@ -240,22 +240,22 @@ function html(w: Walk, children: RootContent[], i: number, flags: number, phrasi
   const open = phrasing ? inlineOpenTag(node.value) : blockTemplateOpen(node.value);
   if (open === null) return i;
   let j = i + 1;
-  while (j < children.length && !isClosing(children[j]!, open.tag, phrasing)) j++;
+  while (j < children.length && !isClosing(children[j], open.tag, phrasing)) j++;
   let f = flags;
   if (open.link) f |= IN_LINK | NO_SPAN;
   if (open.code) f |= NO_SPAN | NO_BODY;
   if (open.template) f |= TEMPLATE | NO_SPAN | NO_BODY;
   if (/^h[1-6]$/.test(open.tag)) f |= NO_SPAN;
-  if (open.code && j > i + 1) w.draft.code.push(endOf(w, node), endOf(w, children[j - 1]!));
+  if (open.code && j > i + 1) w.draft.code.push(endOf(w, node), endOf(w, children[j - 1]));
   if (open.link && added > 0) {
     let text = '';
-    for (let k = i + 1; k < j; k++) text += plainText(children[k]!, true);
-    const link = w.draft.links[w.draft.links.length - 1]!;
+    for (let k = i + 1; k < j; k++) text += plainText(children[k], true);
+    const link = w.draft.links[w.draft.links.length - 1];
     if (link.text === '') link.text = collapseSpace(text);
     if (looksLikeUrl(link.text, link.href)) f |= NO_BODY;
   }
   for (let k = i + 1; k < j; k++) {
-    const child = children[k]!;
+    const child = children[k];
     if (child.type === 'html') readRawHtml(child, startOf(w, child), endOf(w, child), w.src, w.lines, w.draft, (f & TEMPLATE) !== 0);
     else visit(w, child, f);
   }
@@ -265,7 +265,7 @@ function html(w: Walk, children: RootContent[], i: number, flags: number, phrasi
 function blockTemplateOpen(value: string): { tag: string; link: false; code: false; template: true } | null {
   const m = BLOCK_TEMPLATE_OPEN.exec(value);
   if (m === null) return null;
-  const tag = m[1]!.toLowerCase();
+  const tag = m[1].toLowerCase();
   if (new RegExp(`</${tag}\\s*>`, 'i').test(value)) return null;
   return { tag, link: false, code: false, template: true };
 }

@@ -46,7 +46,7 @@ function markdownLinks(src: string, lines: LineIndex): RawLink[] {
 function yamlLinks(file: string, src: string, lines: LineIndex): RawLink[] {
   const doc = parseDocument(src, { prettyErrors: false });
   if (doc.errors.length > 0) {
-    const e = doc.errors[0]!;
+    const e = doc.errors[0];
     const at = positionOf(lines, e.pos[0]);
     throw new EngineError('E_CONFIG_INVALID', `${file}:${at.line}:${at.column}: navigation file is not valid YAML (${e.message})`);
   }
@@ -79,10 +79,10 @@ function walk(node: unknown, add: (href: string, label: string, offset: number) 
       const label = textPair === undefined ? '' : String((textPair.value as { value: unknown }).value ?? '');
       add(String(value).trim(), label.trim(), offsetOf(linkPair.value as YamlNode));
     }
-  } else if (pairs.length === 1 && !TEXT_KEYS.includes(keyOf(pairs[0]!)) && isScalar(pairs[0]!.value)) {
+  } else if (pairs.length === 1 && !TEXT_KEYS.includes(keyOf(pairs[0])) && isScalar(pairs[0].value)) {
     // `Title: path/to/page.md`
-    const value = (pairs[0]!.value as { value: unknown }).value;
-    if (typeof value === 'string' && value.trim() !== '') add(value.trim(), keyOf(pairs[0]!), offsetOf(pairs[0]!.value as YamlNode));
+    const value = (pairs[0].value as { value: unknown }).value;
+    if (typeof value === 'string' && value.trim() !== '') add(value.trim(), keyOf(pairs[0]), offsetOf(pairs[0].value as YamlNode));
   }
   for (const p of pairs) {
     if (isSeq(p.value) || isMap(p.value)) walk(p.value, add);

@@ -75,11 +75,11 @@ function assemble(
   const problems: SourceProblem[] = [...file.problems];
   const links = draft.links.slice().sort((a, b) => a.offset - b.offset);
   if (links.length > options.maxLinksPerPage) {
-    const first = positionOf(lines, links[options.maxLinksPerPage]!.offset);
+    const first = positionOf(lines, links[options.maxLinksPerPage].offset);
     draft.problems.push({
       code: 'too-many-links',
       message: `${links.length} links on one page, more than maxLinksPerPage (${options.maxLinksPerPage}); links from line ${first.line} on are dropped`,
-      offset: links[options.maxLinksPerPage]!.offset,
+      offset: links[options.maxLinksPerPage].offset,
     });
     links.length = options.maxLinksPerPage;
   }
@@ -153,7 +153,7 @@ function pickTitle(fromFrontmatter: string | undefined, draft: PageDraft, path: 
   if (draft.firstH1 !== undefined) return draft.firstH1;
   if (draft.htmlTitle !== undefined && draft.htmlTitle !== '') return draft.htmlTitle;
   const parts = path.split('/');
-  const stem = parts[parts.length - 1]!.replace(/\.[^.]+$/, '');
+  const stem = parts[parts.length - 1].replace(/\.[^.]+$/, '');
   const isIndex = stem.toLowerCase() === 'index' || options.routes.indexNames.some((n) => n.toLowerCase() === stem.toLowerCase());
-  return isIndex && parts.length > 1 ? parts[parts.length - 2]! : stem;
+  return isIndex && parts.length > 1 ? parts[parts.length - 2] : stem;
 }

@@ -36,8 +36,8 @@ export function addPatternLinks(src: string, patterns: ResolvedOptions['linkPatt
         continue;
       }
       const at = m.index;
-      while (r < ranges.length && ranges[r]![0] <= at) {
-        maxEnd = Math.max(maxEnd, ranges[r]![1]);
+      while (r < ranges.length && ranges[r][0] <= at) {
+        maxEnd = Math.max(maxEnd, ranges[r][1]);
         r++;
       }
       if (maxEnd > at) continue;
@@ -60,7 +60,7 @@ export function addPatternLinks(src: string, patterns: ResolvedOptions['linkPatt
 /** `[start, end)` pairs sorted by start. */
 function sortedRanges(code: readonly number[]): [number, number][] {
   const out: [number, number][] = [];
-  for (let i = 0; i + 1 < code.length; i += 2) out.push([code[i]!, code[i + 1]!]);
+  for (let i = 0; i + 1 < code.length; i += 2) out.push([code[i], code[i + 1]]);
   out.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
   return out;
 }

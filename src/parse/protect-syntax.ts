@@ -137,9 +137,9 @@ const SHORTCODE_BLOCKS = new Set(['highlight']);
  */
 export function blockCloser(tag: string): RegExp | null {
   const liquid = /^\{%-?\s*([a-z]+)/.exec(tag);
-  if (liquid !== null && TEMPLATE_BLOCKS.has(liquid[1]!)) return new RegExp(String.raw`\{%-?\s*end${liquid[1]!}\s*-?%\}`, 'g');
+  if (liquid !== null && TEMPLATE_BLOCKS.has(liquid[1])) return new RegExp(String.raw`\{%-?\s*end${liquid[1]}\s*-?%\}`, 'g');
   const hugo = /^\{\{[<%]\s*([\w-]+)/.exec(tag);
-  if (hugo !== null && SHORTCODE_BLOCKS.has(hugo[1]!)) return new RegExp(String.raw`\{\{[<%]\s*\/${hugo[1]!}\s*[>%]\}\}`, 'g');
+  if (hugo !== null && SHORTCODE_BLOCKS.has(hugo[1])) return new RegExp(String.raw`\{\{[<%]\s*\/${hugo[1]}\s*[>%]\}\}`, 'g');
   return null;
 }
 
@@ -151,7 +151,7 @@ export function blockCloser(tag: string): RegExp | null {
 export function matchContainerMarker(src: string, at: number): number {
   CONTAINER.lastIndex = at;
   const m = CONTAINER.exec(src);
-  return m === null ? -1 : at + m[1]!.length;
+  return m === null ? -1 : at + m[1].length;
 }
 
 const CONTAINER = /([ \t]*)(?::{3,}|!!!|\?\?\?\+?)(?=[\s{A-Za-z]|$)/y;

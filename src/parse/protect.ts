@@ -57,7 +57,7 @@ export function protectDraft(input: ProtectInput, draft: PageDraft): ProtectedRe
   const code = pairs(draft.code);
   const found: ProtectedRegion[] = [...frontMatter(input.src), ...draft.protected];
   scan(input, code, found);
-  for (let i = 0; i < code.length; i++) found.push([code[i]![0], code[i]![1], 'code']);
+  for (let i = 0; i < code.length; i++) found.push([code[i][0], code[i][1], 'code']);
   const regions = normalize(input.src, found);
   const cut = cutSpansByRanges(draft.spans, regions);
   draft.spans.length = 0;
@@ -95,10 +95,10 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
     let hi = blank.length;
     while (lo < hi) {
       const mid = (lo + hi) >> 1;
-      if (blank[mid]! <= at) lo = mid + 1;
+      if (blank[mid] <= at) lo = mid + 1;
       else hi = mid;
     }
-    return lo < blank.length ? blank[lo]! : n;
+    return lo < blank.length ? blank[lo] : n;
   };
   const lineEnd = (at: number): number => lineContentEnd(lines, src, lineOf(lines, at));
   const push = (start: number, end: number, k: ProtectedKind) => {
@@ -110,9 +110,9 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
     const ch = src.charCodeAt(i);
     const atLineStart = markdown && (i === 0 || src.charCodeAt(i - 1) === 10 || src.charCodeAt(i - 1) === 13);
     if (ch !== 123 && ch !== 60 && !atLineStart) continue;
-    while (c < code.length && code[c]![1] <= i) c++;
-    if (c < code.length && code[c]![0] <= i) {
-      i = code[c]![1] - 1;
+    while (c < code.length && code[c][1] <= i) c++;
+    if (c < code.length && code[c][0] <= i) {
+      i = code[c][1] - 1;
       continue;
     }
     if (atLineStart) {
@@ -166,7 +166,7 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
       // kramdown's {::comment} and {::nomarkdown} extensions: the body up to {:/name} or {:/}.
       const extension = KRAMDOWN_BLOCK.exec(group);
       if (extension !== null) {
-        const close = new RegExp(String.raw`\{:\/(?:${extension[1]!})?\}`, 'g');
+        const close = new RegExp(String.raw`\{:\/(?:${extension[1]})?\}`, 'g');
         close.lastIndex = end;
         const m = close.exec(src);
         const bodyEnd = m === null ? n : m.index;
@@ -237,7 +237,7 @@ function isBlank(src: string, from: number, to: number): boolean {
 /** `[start, end)` pairs from a flat list, sorted by start. */
 function pairs(flat: readonly number[]): [number, number][] {
   const out: [number, number][] = [];
-  for (let i = 0; i + 1 < flat.length; i += 2) if (flat[i + 1]! > flat[i]!) out.push([flat[i]!, flat[i + 1]!]);
+  for (let i = 0; i + 1 < flat.length; i += 2) if (flat[i + 1] > flat[i]) out.push([flat[i], flat[i + 1]]);
   return out.sort((a, b) => a[0] - b[0] || b[1] - a[1]);
 }
 

@@ -19,12 +19,12 @@ export function parseRedirects(_file: string, text: string): { redirects: Redire
   const src = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const rows = src.split(/\r\n|\r|\n/);
   for (let i = 0; i < rows.length; i++) {
-    const row = rows[i]!.replace(/(?:^|\s)#.*$/, '').trim();
+    const row = rows[i].replace(/(?:^|\s)#.*$/, '').trim();
     if (row === '') continue;
     const fields = row.split(/\s+/);
     const line = i + 1;
-    if (fields.length === 2 || (fields.length === 3 && STATUS.test(fields[2]!))) {
-      redirects.push({ from: fields[0]!, to: fields[1]!, line });
+    if (fields.length === 2 || (fields.length === 3 && STATUS.test(fields[2]))) {
+      redirects.push({ from: fields[0], to: fields[1], line });
     } else {
       problems.push({
         line,

@@ -69,12 +69,12 @@ export function addMarkdownTextSpans(
     return;
   }
   const parts = value.split(LINE_BREAK);
-  const first = parts[0]!;
+  const first = parts[0];
   if (src.startsWith(first, start)) addSourceSpans(draft, first, start);
   if (parts.length === 1) return;
   const firstLine = lineOf(lines, start);
   for (let k = 1; k < parts.length; k++) {
-    const part = parts[k]!;
+    const part = parts[k];
     if (part === '') continue;
     let at: number;
     if (k === parts.length - 1) {
@@ -107,8 +107,8 @@ export function cutSpans(draft: PageDraft, first: number, cuts: readonly number[
     const spanEnd = span.offset + span.text.length;
     let from = span.offset;
     for (let c = 0; c < cuts.length; c += 2) {
-      const cutStart = cuts[c]!;
-      const cutEnd = cuts[c + 1]!;
+      const cutStart = cuts[c];
+      const cutEnd = cuts[c + 1];
       if (cutEnd <= from || cutStart >= spanEnd) continue;
       if (cutStart > from) pushTrimmed(draft, span.text, from - span.offset, cutStart - span.offset, span.offset);
       from = Math.max(from, cutEnd);
@@ -131,10 +131,10 @@ export function cutSpansByRanges(spans: readonly SpanDraft[], ranges: readonly (
   let r = 0;
   for (const span of sorted) {
     const spanEnd = span.offset + span.text.length;
-    while (r < ranges.length && ranges[r]![1] <= span.offset) r++;
+    while (r < ranges.length && ranges[r][1] <= span.offset) r++;
     let from = span.offset;
-    for (let k = r; k < ranges.length && ranges[k]![0] < spanEnd; k++) {
-      const [cutStart, cutEnd] = ranges[k]!;
+    for (let k = r; k < ranges.length && ranges[k][0] < spanEnd; k++) {
+      const [cutStart, cutEnd] = ranges[k];
       if (cutEnd <= from) continue;
       if (cutStart > from) pushTrimmed(out, span.text, from - span.offset, cutStart - span.offset, span.offset);
       from = Math.max(from, cutEnd);

@@ -130,10 +130,10 @@ async function finish(input: { -readonly [K in keyof FinishInput]: FinishInput[K
   let suggested: SuggestResult | null = null;
   if (command === 'suggest') {
     const text = await stage(hooks, 'text', () =>
-      textOf(graph.pages.map((p) => facts[p.factsIndex]!), options, undefined, memoDir === undefined ? undefined : relatedStore(memoDir, VERSION)),
+      textOf(graph.pages.map((p) => facts[p.factsIndex]), options, undefined, memoDir === undefined ? undefined : relatedStore(memoDir, VERSION)),
     );
     facts = withoutBodies(facts);
-    const ordered = graph.pages.map((p) => facts[p.factsIndex]!);
+    const ordered = graph.pages.map((p) => facts[p.factsIndex]);
     const fitMemo = memoDir === undefined ? undefined : linkModelStore(memoDir, VERSION);
     suggested = await stage(hooks, 'suggest', () => suggestFor({ graph, ranking }, ordered, text, collected.traffic, options, fitMemo));
   }

@@ -53,7 +53,7 @@ export const readJekyll: PresetReader = (configFile, files) => {
   const underscored = new Set<string>();
   for (const f of files.markdownFiles(source)) {
     const top = f.slice(source === '' ? 0 : source.length + 1).split('/');
-    const name = top[0]!;
+    const name = top[0];
     // `_includes/` stays: its files are part of the pages that include them, never pages.
     if (top.length > 1 && name.startsWith('_') && name !== '_posts' && name !== '_includes' && !collections.includes(name.slice(1))) underscored.add(`${name}/**`);
   }

@@ -47,7 +47,7 @@ export const readMdbook: PresetReader = (configFile, files) => {
   const missing: string[] = [];
   if (summary !== null && createMissing) {
     for (const m of summary.matchAll(/\]\(\s*<?([^)\s>#]+\.md)>?\s*\)/g)) {
-      const file = m[1]!.replace(/^\.\//, '');
+      const file = m[1].replace(/^\.\//, '');
       if (/^[a-z][a-z0-9+.-]*:/i.test(file) || files.exists(inSrc(file))) continue;
       const route = `/${file.replace(/\.md$/, '.html')}`;
       // The route, and the file path for links that name the chapter's source file.
@@ -92,7 +92,7 @@ const GLOB_CHARS = /[*?[\]{}()!]/;
 function unlistedFiles(summary: string, src: string, files: SiteFiles): string[] {
   const chapters = new Set<string>();
   for (const m of summary.matchAll(/\]\(\s*<?([^)>#\s]+?\.md)(?:#[^)>]*)?>?\s*\)/g)) {
-    chapters.add(joinPath('', safeDecode(m[1]!)));
+    chapters.add(joinPath('', safeDecode(m[1])));
   }
   const all = files.markdownFiles(src).map((f) => (src === '' ? f : f.slice(src.length + 1)));
   const included = new Set<string>();
@@ -100,7 +100,7 @@ function unlistedFiles(summary: string, src: string, files: SiteFiles): string[]
     const text = files.read(src === '' ? f : `${src}/${f}`) ?? '';
     if (!text.includes('{{#')) continue;
     const folder = f.includes('/') ? f.slice(0, f.lastIndexOf('/')) : '';
-    for (const m of text.matchAll(/\{\{#(?:include|rustdoc_include|playground)\s+([^\s}:]+)/g)) included.add(joinPath(folder, m[1]!));
+    for (const m of text.matchAll(/\{\{#(?:include|rustdoc_include|playground)\s+([^\s}:]+)/g)) included.add(joinPath(folder, m[1]));
   }
   return all.filter((f) => f !== 'SUMMARY.md' && !chapters.has(f) && !included.has(f) && !GLOB_CHARS.test(f)).sort();
 }

@@ -9,7 +9,7 @@
 export function stripComments(src: string): string {
   let out = '';
   for (let i = 0; i < src.length; i++) {
-    const c = src[i]!;
+    const c = src[i];
     if (c === '"' || c === "'" || c === '`') {
       const end = stringEnd(src, i);
       out += src.slice(i, end);
@@ -51,7 +51,7 @@ export function staticValue(src: string, key: string): StaticValue {
   if (m === null) return null;
   const at = m.index + m[0].length;
   const parsed = literalAt(code, at);
-  if (parsed === null) return { kind: 'dynamic', text: code.slice(at, at + 40).split('\n')[0]!.trim() };
+  if (parsed === null) return { kind: 'dynamic', text: code.slice(at, at + 40).split('\n')[0].trim() };
   return { kind: 'literal', value: parsed.value };
 }
 
@@ -93,7 +93,7 @@ export function literalAt(src: string, at: number): { value: unknown; end: numbe
       if (key === null) return null;
       const value = literalAt(src, i + key[0].length);
       if (value === null) return null;
-      obj[key[1] ?? key[2] ?? key[3]!] = value.value;
+      obj[key[1] ?? key[2] ?? key[3]] = value.value;
       i = skipSpace(src, value.end);
       if (src[i] === ',') i++;
       else if (src[i] !== '}') return null;
@@ -105,7 +105,7 @@ export function literalAt(src: string, at: number): { value: unknown; end: numbe
 }
 
 function skipSpace(src: string, i: number): number {
-  while (i < src.length && /\s/.test(src[i]!)) i++;
+  while (i < src.length && /\s/.test(src[i])) i++;
   return i;
 }
 

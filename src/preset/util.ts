@@ -19,7 +19,7 @@ export function parseConfigText(file: string, text: string): Parsed {
     else value = parseYaml(text, { logLevel: 'silent', uniqueKeys: false, customTags: pythonTags as never });
     return isRecord(value) ? { ok: true, value } : { ok: true, value: {} };
   } catch (error) {
-    return { ok: false, error: (error as Error).message.split('\n')[0]! };
+    return { ok: false, error: (error as Error).message.split('\n')[0] };
   }
 }
 
@@ -91,6 +91,6 @@ export function yamlBlock(text: string, key: string): string | null {
   const start = lines.findIndex((l) => new RegExp(`^${key}\\s*:`).test(l));
   if (start < 0) return null;
   let end = start + 1;
-  while (end < lines.length && (lines[end]!.trim() === '' || /^[\s#-]/.test(lines[end]!))) end++;
+  while (end < lines.length && (lines[end].trim() === '' || /^[\s#-]/.test(lines[end]))) end++;
   return lines.map((l, i) => (i >= start && i < end ? l : '')).join('\n');
 }

@@ -36,7 +36,7 @@ export function clickDepth(forward: Csr, entries: readonly number[], flagMask: n
     extraNext = new Int32Array(extraEdges.length);
     extraTo = new Int32Array(extraEdges.length);
     for (let k = 0; k < extraEdges.length; k++) {
-      const { from, to } = extraEdges[k]!;
+      const { from, to } = extraEdges[k];
       if (!(from >= 0 && from < n && to >= 0 && to < n)) continue;
       extraTo[k] = to;
       extraNext[k] = extraHead[from];

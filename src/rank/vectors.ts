@@ -18,12 +18,12 @@ export function distribution(who: string, v: Float64Array, n: number, what: stri
   checkLength(who, v.length, n, what);
   let sum = 0;
   for (let i = 0; i < n; i++) {
-    const value = v[i]!;
+    const value = v[i];
     if (!(value >= 0)) throw new EngineError('E_INTERNAL', `${who}: ${what}[${i}] is ${value}, expected a non-negative number`);
     sum += value;
   }
   if (!(sum > 0) || !Number.isFinite(sum)) return null;
   const out = new Float64Array(n);
-  for (let i = 0; i < n; i++) out[i] = v[i]! / sum;
+  for (let i = 0; i < n; i++) out[i] = v[i] / sum;
   return out;
 }

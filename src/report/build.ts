@@ -33,25 +33,25 @@ export function buildReport(input: ReportInput): Report {
   const importance: Importance[] = graph.pages.map((p) => input.importance?.[p.id] ?? p.meta.importance ?? 'normal');
   const pages: ReportPage[] = graph.pages
     .map((p) => {
-      const depth = ranking.depth[p.id]!;
+      const depth = ranking.depth[p.id];
       return {
         route: p.route,
         file: p.file,
         title: p.title,
-        pagerank: roundTo(ranking.pagerank[p.id]!, PAGERANK_DECIMALS),
-        rank: roundTo(ranking.pagerank[p.id]! * n, RATIO_DECIMALS),
+        pagerank: roundTo(ranking.pagerank[p.id], PAGERANK_DECIMALS),
+        rank: roundTo(ranking.pagerank[p.id] * n, RATIO_DECIMALS),
         depth: depth < 0 ? null : depth,
-        inlinks: ranking.inlinks[p.id]!,
-        contentInlinks: ranking.contentInlinks[p.id]!,
-        outlinks: ranking.outlinks[p.id]!,
-        importance: importance[p.id]!,
+        inlinks: ranking.inlinks[p.id],
+        contentInlinks: ranking.contentInlinks[p.id],
+        outlinks: ranking.outlinks[p.id],
+        importance: importance[p.id],
       };
     })
     .sort((a, b) => compareText(a.route, b.route) || compareText(a.file, b.file));
 
   const navFile = navigationFile(options);
   const links = graph.links
-    .map((l) => reportLink(l, l.from < 0 ? { route: '', file: navFile } : graph.pages[l.from]!))
+    .map((l) => reportLink(l, l.from < 0 ? { route: '', file: navFile } : graph.pages[l.from]))
     .sort(compareLinks);
 
   const findings: Finding[] = [...input.findings].sort(compareFindings);

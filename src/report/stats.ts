@@ -28,9 +28,9 @@ export function computeStats(input: {
     if (isOrphan(graph, ranking, entries, page.id)) orphans++;
     if (isDeadEnd(graph, ranking, page.id)) deadEnds++;
     if (isUnreachable(ranking, page.id)) unreachable++;
-    else deepest = Math.max(deepest ?? 0, ranking.depth[page.id]!);
+    else deepest = Math.max(deepest ?? 0, ranking.depth[page.id]);
     if (importance[page.id] === 'high') {
-      const inlinks = ranking.contentInlinks[page.id]!;
+      const inlinks = ranking.contentInlinks[page.id];
       fewestImportantInlinks = Math.min(fewestImportantInlinks ?? inlinks, inlinks);
     }
   }

@@ -66,7 +66,7 @@ export function decodePathSegments(path: string): string[] | null {
   const parts = path.split('/');
   if (parts[0] === '') parts.shift();
   for (let i = 0; i < parts.length; i++) {
-    const d = decodeRouteSegment(parts[i]!);
+    const d = decodeRouteSegment(parts[i]);
     if (d === null) return null;
     parts[i] = d;
   }

@@ -17,7 +17,7 @@ export function removeDotSegments(path: string): string {
   const out: string[] = [];
   const last = parts.length - 1;
   for (let i = 1; i <= last; i++) {
-    const s = parts[i]!;
+    const s = parts[i];
     if (s === '.') {
       if (i === last) out.push('');
     } else if (s === '..') {

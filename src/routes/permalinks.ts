@@ -71,7 +71,7 @@ function parseDate(text: string | undefined): DateParts | null {
   if (text === undefined) return null;
   const m = /^(\d{4})-(\d{1,2})-(\d{1,2})(?:[T ](\d{1,2}):(\d{2})(?::(\d{2}))?)?/.exec(text.trim());
   if (m === null) return null;
-  return { year: +m[1]!, month: +m[2]!, day: +m[3]!, hour: +(m[4] ?? 0), minute: +(m[5] ?? 0), second: +(m[6] ?? 0) };
+  return { year: +m[1], month: +m[2], day: +m[3], hour: +(m[4] ?? 0), minute: +(m[5] ?? 0), second: +(m[6] ?? 0) };
 }
 
 const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
@@ -113,7 +113,7 @@ function fillJekyll(pattern: string, values: Readonly<Record<string, string>>): 
   const names = Object.keys(values).sort((a, b) => b.length - a.length);
   const re = new RegExp(`:(${names.join('|')})`, 'g');
   // Jekyll drops empty segments and doubled slashes.
-  return pattern.replace(re, (_, name: string) => values[name]!).replace(/\/{2,}/g, '/');
+  return pattern.replace(re, (_, name: string) => values[name]).replace(/\/{2,}/g, '/');
 }
 
 /** The pattern of a permalink value: a built-in style name or the pattern itself. */
@@ -138,23 +138,23 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
   if (postAt >= 0) {
     const m = /^(\d{4})-(\d{1,2})-(\d{1,2})-(.+)$/.exec(stem);
     if (m === null) return null;
-    const date = parseDate(meta.date) ?? { year: +m[1]!, month: +m[2]!, day: +m[3]!, hour: 0, minute: 0, second: 0 };
-    const name = m[4]!;
+    const date = parseDate(meta.date) ?? { year: +m[1], month: +m[2], day: +m[3], hour: 0, minute: 0, second: 0 };
+    const name = m[4];
     const categories = [...parts.slice(0, postAt), ...(meta.categories ?? [])];
     const values: Record<string, string> = {
       year: String(date.year),
       month: pad(date.month),
       i_month: String(date.month),
-      short_month: MONTHS[date.month - 1]!.slice(0, 3),
-      long_month: MONTHS[date.month - 1]!,
+      short_month: MONTHS[date.month - 1].slice(0, 3),
+      long_month: MONTHS[date.month - 1],
       day: pad(date.day),
       i_day: String(date.day),
       y_day: pad(yearDay(date), 3),
       short_year: pad(date.year % 100),
       week: pad(isoWeek(date)),
       w_year: String(date.year),
-      short_day: WEEKDAYS[weekday(date)]!.slice(0, 3),
-      long_day: WEEKDAYS[weekday(date)]!,
+      short_day: WEEKDAYS[weekday(date)].slice(0, 3),
+      long_day: WEEKDAYS[weekday(date)],
       hour: pad(date.hour),
       minute: pad(date.minute),
       second: pad(date.second),
@@ -170,7 +170,7 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
     };
     return fillJekyll(jekyllPattern(meta.permalink ?? scoped(permalinks, path, 'posts') ?? site), values);
   }
-  const collection = parts.length > 0 && parts[0]!.startsWith('_') ? parts[0]!.slice(1) : null;
+  const collection = parts.length > 0 && parts[0].startsWith('_') ? parts[0].slice(1) : null;
   const byDefault = scoped(permalinks, path, collection ?? 'pages');
   if (collection !== null && permalinks[collection] === undefined && meta.permalink === undefined && byDefault === undefined) return null;
   const folder = collection === null ? parts : parts.slice(1);
@@ -187,7 +187,7 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
   };
   if (meta.permalink !== undefined) return fillJekyll(meta.permalink, values);
   if (byDefault !== undefined) return fillJekyll(byDefault, values);
-  if (collection !== null) return fillJekyll(permalinks[collection]!, values);
+  if (collection !== null) return fillJekyll(permalinks[collection], values);
   if (index) return fillJekyll('/:path/', values);
   return fillJekyll(jekyllPageTemplate(site), values);
 }
@@ -254,10 +254,10 @@ function hugoPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<str
     const values: Record<string, string> = {
       year: pad(date.year, 4),
       month: pad(date.month),
-      monthname: MONTHS[date.month - 1]!.toLowerCase(),
+      monthname: MONTHS[date.month - 1].toLowerCase(),
       day: pad(date.day),
       weekday: String(weekday(date)),
-      weekdayname: WEEKDAYS[weekday(date)]!.toLowerCase(),
+      weekdayname: WEEKDAYS[weekday(date)].toLowerCase(),
       yearday: String(yearDay(date)),
       section,
       sections: folders.join('/'),
@@ -266,7 +266,7 @@ function hugoPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<str
       filename: name,
     };
     const names = Object.keys(values).sort((a, b) => b.length - a.length);
-    const filled = pattern.replace(new RegExp(`:(${names.join('|')})`, 'g'), (_, n: string) => values[n]!).replace(/\/{2,}/g, '/');
+    const filled = pattern.replace(new RegExp(`:(${names.join('|')})`, 'g'), (_, n: string) => values[n]).replace(/\/{2,}/g, '/');
     return filled.startsWith('/') ? filled : `/${filled}`;
   }
   if (meta.slug !== undefined) {
@@ -286,7 +286,7 @@ function hugoPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<str
 export function stripNumberPrefix(name: string): string {
   if (/^\d+[-_.]\d+(?:[-_.]\d+)?(?:$|[-_.\s])/.test(name)) return name;
   const m = /^\d+\s*[-_.]+\s*([^-_.\s].*)$/.exec(name);
-  return m === null ? name : m[1]!;
+  return m === null ? name : m[1];
 }
 
 /**

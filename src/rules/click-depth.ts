@@ -25,7 +25,7 @@ export const clickDepth: Rule = {
     const max = ctx.options.maxDepth;
     const findings: RuleFinding[] = [];
     for (const page of ctx.graph.pages) {
-      const depth = ctx.ranking.depth[page.id]!;
+      const depth = ctx.ranking.depth[page.id];
       if (depth <= max) continue;
       findings.push(
         pageFinding(page, `${page.route} is ${depth} clicks from an entry page, over the limit of ${max}; link it from a page nearer the top`),

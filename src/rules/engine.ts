@@ -58,9 +58,9 @@ function settingOf(
   }
   const parsed = rule.optionsSchema.safeParse(merged, { reportInput: true });
   if (!parsed.success) {
-    const issue = parsed.error.issues[0]!;
+    const issue = parsed.error.issues[0];
     const path = [rule.id, ...issue.path.map(String)];
-    if (issue.code === 'unrecognized_keys') path.push(issue.keys[0]!);
+    if (issue.code === 'unrecognized_keys') path.push(issue.keys[0]);
     const accepted = ['level', ...Object.keys(rule.defaultOptions)].map((k) => `"${k}"`).join(', ');
     const problem = issue.code === 'unrecognized_keys' ? `unknown option; this check takes ${accepted}` : expectedGot(rule.optionsSchema, issue);
     throw new EngineError('E_CONFIG_INVALID', `${origin}: key "checks.${path.join('.')}": ${problem}`);

@@ -34,13 +34,13 @@ export function boundedDistance(a: string, b: string, max: number, scratch?: Row
     const lo = Math.max(1, i - max);
     const hi = Math.min(b.length, i + max);
     cur[lo - 1] = lo === 1 ? (i <= max ? i : over) : over;
-    let rowMin = cur[lo - 1]!;
+    let rowMin = cur[lo - 1];
     const ca = a.charCodeAt(i - 1);
     for (let j = lo; j <= hi; j++) {
       const cost = ca === b.charCodeAt(j - 1) ? 0 : 1;
-      let v = prev[j - 1]! + cost;
-      const up = prev[j]! + 1;
-      const left = cur[j - 1]! + 1;
+      let v = prev[j - 1] + cost;
+      const up = prev[j] + 1;
+      const left = cur[j - 1] + 1;
       if (up < v) v = up;
       if (left < v) v = left;
       if (v > over) v = over;
@@ -53,7 +53,7 @@ export function boundedDistance(a: string, b: string, max: number, scratch?: Row
     prev = cur;
     cur = t;
   }
-  const d = prev[b.length]!;
+  const d = prev[b.length];
   return d > max ? over : d;
 }
 

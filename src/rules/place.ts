@@ -14,7 +14,7 @@ export function pageFinding(page: PageNode, message: string, target?: string): R
  */
 export function linkSource(ctx: RuleContext, link: ResolvedLink): { file: string; route: string } {
   if (link.from < 0) return { file: navigationFile(ctx.options), route: '' };
-  const page = ctx.graph.pages[link.from]!;
+  const page = ctx.graph.pages[link.from];
   return { file: link.raw.file ?? page.file, route: page.route };
 }
 
@@ -34,12 +34,12 @@ export function listRoutes(routes: readonly string[]): string {
  * `/`), as a place to link the page from; null when there is none.
  */
 export function parentPage(ctx: RuleContext, page: number): string | null {
-  const route = ctx.graph.pages[page]!.route;
+  const route = ctx.graph.pages[page].route;
   const parts = route.split('/').filter((p) => p !== '');
   for (let n = parts.length - 1; n >= 0; n--) {
     const up = n === 0 ? '/' : `/${parts.slice(0, n).join('/')}/`;
     const id = ctx.graph.routeIndex.get(up) ?? ctx.graph.routeIndex.get(up.toLowerCase());
-    if (id !== undefined && id !== page && ctx.ranking.depth[id]! >= 0) return ctx.graph.pages[id]!.route;
+    if (id !== undefined && id !== page && ctx.ranking.depth[id] >= 0) return ctx.graph.pages[id].route;
   }
   return null;
 }

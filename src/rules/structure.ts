@@ -12,14 +12,14 @@ export function entrySet(graph: SiteGraph): ReadonlySet<number> {
 
 /** Pages that take part in findings: not excluded by `linkweave.exclude`. */
 export function isChecked(graph: SiteGraph, page: number): boolean {
-  return !graph.pages[page]!.meta.exclude;
+  return !graph.pages[page].meta.exclude;
 }
 
 /** Number of distinct pages `page` links to with at least one content link. */
 export function contentOutlinks(forward: Csr, page: number): number {
   let count = 0;
-  for (let e = forward.offsets[page]!; e < forward.offsets[page + 1]!; e++) {
-    if ((forward.flags[e]! & 1) !== 0) count++;
+  for (let e = forward.offsets[page]; e < forward.offsets[page + 1]; e++) {
+    if ((forward.flags[e] & 1) !== 0) count++;
   }
   return count;
 }
@@ -36,7 +36,7 @@ export function isOrphan(
   countTemplateLinks = true,
 ): boolean {
   if (entries.has(page)) return false;
-  const inlinks = countTemplateLinks ? ranking.inlinks[page]! : ranking.contentInlinks[page]!;
+  const inlinks = countTemplateLinks ? ranking.inlinks[page] : ranking.contentInlinks[page];
   return inlinks === 0;
 }
 
@@ -46,11 +46,11 @@ export function isOrphan(
  */
 export function isDeadEnd(graph: SiteGraph, ranking: Ranking, page: number, countTemplateLinks = false): boolean {
   if (graph.pages.length < 2) return false;
-  const outlinks = countTemplateLinks ? ranking.outlinks[page]! : contentOutlinks(graph.forward, page);
+  const outlinks = countTemplateLinks ? ranking.outlinks[page] : contentOutlinks(graph.forward, page);
   return outlinks === 0;
 }
 
 /** Unreachable: no path of links from any entry page. */
 export function isUnreachable(ranking: Ranking, page: number): boolean {
-  return ranking.depth[page]! < 0;
+  return ranking.depth[page] < 0;
 }

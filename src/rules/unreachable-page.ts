@@ -27,15 +27,15 @@ export const unreachablePage: Rule = {
   defaultOptions: {},
   check(ctx) {
     if (ctx.graph.entries.length === 0) return [];
-    const entries = listRoutes(ctx.graph.entries.map((id) => ctx.graph.pages[id]!.route));
+    const entries = listRoutes(ctx.graph.entries.map((id) => ctx.graph.pages[id].route));
     const entryIds = entrySet(ctx.graph);
     const findings: RuleFinding[] = [];
     const { reverse } = ctx.graph;
     for (const page of ctx.graph.pages) {
       if (!isUnreachable(ctx.ranking, page.id) || isOrphan(ctx.graph, ctx.ranking, entryIds, page.id)) continue;
       const from: string[] = [];
-      for (let e = reverse.offsets[page.id]!; e < reverse.offsets[page.id + 1]!; e++) {
-        if (reverse.targets[e] !== page.id) from.push(ctx.graph.pages[reverse.targets[e]!]!.route);
+      for (let e = reverse.offsets[page.id]; e < reverse.offsets[page.id + 1]; e++) {
+        if (reverse.targets[e] !== page.id) from.push(ctx.graph.pages[reverse.targets[e]].route);
       }
       findings.push(
         pageFinding(

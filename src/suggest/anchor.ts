@@ -140,13 +140,13 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
   const found: Candidate[] = [];
   const own = (first: number, words: number): boolean => {
     if (source.ownTitle.size === 0) return false;
-    for (let k = first; k < first + words; k++) if (!source.ownTitle.has(source.stem[k]!)) return false;
+    for (let k = first; k < first + words; k++) if (!source.ownTitle.has(source.stem[k])) return false;
     return true;
   };
   const sequence = (name: TargetName, kind: 'title' | 'alias'): void => {
     const pattern = name.stems;
     for (let j = 0; j < pattern.length; j++) {
-      for (const i of source.positions.get(pattern[j]!) ?? []) {
+      for (const i of source.positions.get(pattern[j]) ?? []) {
         // Start only where the match cannot be extended to the left.
         if (j > 0 && i > 0 && source.joinNext[i - 1] && source.stem[i - 1] === pattern[j - 1]) continue;
         let len = 1;
@@ -155,7 +155,7 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
         if (!whole) {
           if (len === 1) continue;
           let rare = false;
-          for (let k = 0; k < len && !rare; k++) rare = name.rarest.has(pattern[j + k]!);
+          for (let k = 0; k < len && !rare; k++) rare = name.rarest.has(pattern[j + k]);
           if (!rare) continue;
         }
         if (own(i, len)) continue;
@@ -168,9 +168,9 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
   for (const alias of names.aliases) sequence(alias, 'alias');
   for (const key of names.keyTerms) {
     for (const i of source.positions.get(key) ?? []) {
-      if (i > 0 && source.joinDirect[i - 1] && names.keyTerms.has(source.stem[i - 1]!)) continue;
+      if (i > 0 && source.joinDirect[i - 1] && names.keyTerms.has(source.stem[i - 1])) continue;
       let len = 1;
-      while (source.joinDirect[i + len - 1] && names.keyTerms.has(source.stem[i + len]!)) len++;
+      while (source.joinDirect[i + len - 1] && names.keyTerms.has(source.stem[i + len])) len++;
       if (len < 2 || !anyOf(source, i, len, names.strongTerms) || !anyOf(source, i, len, names.nameWords)) continue;
       if (own(i, len)) continue;
       found.push({ first: i, words: len, kind: 'key-terms', quality: len });
@@ -191,15 +191,15 @@ export function findAnchors(source: SourceTokens, names: TargetNames, avoid: rea
 }
 
 function anyOf(source: SourceTokens, first: number, words: number, set: ReadonlySet<string>): boolean {
-  for (let k = first; k < first + words; k++) if (set.has(source.stem[k]!)) return true;
+  for (let k = first; k < first + words; k++) if (set.has(source.stem[k])) return true;
   return false;
 }
 
 function toMatch(source: SourceTokens, c: Candidate): AnchorMatch {
   const last = c.first + c.words - 1;
-  const span = source.spans[source.span[c.first]!]!;
-  const start = source.start[c.first]!;
-  const end = source.end[last]!;
+  const span = source.spans[source.span[c.first]];
+  const start = source.start[c.first];
+  const end = source.end[last];
   const { line, column } = positionInSpan(span, start);
   return {
     offset: span.offset + start,

@@ -35,12 +35,12 @@ export interface CandidatePair {
 
 /** True when `forward` has an edge from -> to carrying a content link (rows are sorted by target). */
 export function hasContentLink(forward: Csr, from: number, to: number): boolean {
-  let lo = forward.offsets[from]!;
-  let hi = forward.offsets[from + 1]! - 1;
+  let lo = forward.offsets[from];
+  let hi = forward.offsets[from + 1] - 1;
   while (lo <= hi) {
     const mid = (lo + hi) >> 1;
-    const t = forward.targets[mid]!;
-    if (t === to) return (forward.flags[mid]! & EDGE_CONTENT) !== 0;
+    const t = forward.targets[mid];
+    if (t === to) return (forward.flags[mid] & EDGE_CONTENT) !== 0;
     if (t < to) lo = mid + 1;
     else hi = mid - 1;
   }
@@ -51,7 +51,7 @@ export function hasContentLink(forward: Csr, from: number, to: number): boolean 
 function listedBy(related: readonly RelatedList[], n: number): { page: number; similarity: number }[][] {
   const out: { page: number; similarity: number }[][] = Array.from({ length: n }, () => []);
   for (const list of related) {
-    for (const r of list.related) if (r.page >= 0 && r.page < n) out[r.page]!.push({ page: list.page, similarity: r.similarity });
+    for (const r of list.related) if (r.page >= 0 && r.page < n) out[r.page].push({ page: list.page, similarity: r.similarity });
   }
   return out;
 }
@@ -68,12 +68,12 @@ export function findCandidates(graph: SiteGraph, related: readonly RelatedList[]
   for (const target of targets) {
     const seen = new Map<number, number>();
     for (const r of related[target]?.related ?? []) seen.set(r.page, r.similarity);
-    for (const r of by[target]!) if (!seen.has(r.page)) seen.set(r.page, r.similarity);
+    for (const r of by[target]) if (!seen.has(r.page)) seen.set(r.page, r.similarity);
     const sources = [...seen.keys()].sort((a, b) => a - b);
     for (const source of sources) {
       const similarity = seen.get(source)!;
       if (source === target || source < 0 || source >= n || !(similarity >= minSimilarity)) continue;
-      if (graph.pages[source]!.meta.exclude || hasContentLink(graph.forward, source, target)) continue;
+      if (graph.pages[source].meta.exclude || hasContentLink(graph.forward, source, target)) continue;
       out.push({ source, target, similarity });
     }
   }
@@ -99,12 +99,12 @@ export function candidatePool(input: PoolInput): (target: number) => number[] {
   // Mention candidates per target, most mentions first.
   const mentioned: { source: number; count: number }[][] = Array.from({ length: n }, () => []);
   mentions.bySource.forEach((hits, s) => {
-    for (const [t, hit] of hits) mentioned[t]!.push({ source: s, count: hit.count });
+    for (const [t, hit] of hits) mentioned[t].push({ source: s, count: hit.count });
   });
   const fromLinkText: number[][] = Array.from({ length: n }, () => []);
   mentions.linkMatches.forEach((matches, s) => {
     for (const m of matches) {
-      if (mentions.phrases[m.phrase]!.names.some((r) => r.target === m.target)) fromLinkText[m.target]!.push(s);
+      if (mentions.phrases[m.phrase].names.some((r) => r.target === m.target)) fromLinkText[m.target].push(s);
     }
   });
   // Most mentions first, at most MENTION_LIMIT, once for all calls.
@@ -117,13 +117,13 @@ export function candidatePool(input: PoolInput): (target: number) => number[] {
   const hubDegree = Math.max(HUB_DEGREE, Math.ceil(Math.sqrt(n)));
   const scratch = neighbourhoodScratch(n);
   return (t: number): number[] => {
-    const set = new Set<number>(mentionedBest[t]!);
-    for (const s of fromLinkText[t]!) set.add(s);
+    const set = new Set<number>(mentionedBest[t]);
+    for (const s of fromLinkText[t]) set.add(s);
     for (const r of related[t]?.related ?? []) if (r.similarity >= minSimilarity) set.add(r.page);
-    for (const r of by[t]!) if (r.similarity >= minSimilarity) set.add(r.page);
+    for (const r of by[t]) if (r.similarity >= minSimilarity) set.add(r.page);
     for (const s of graphNeighbourhood(neighbours, t, GRAPH_LIMIT, hubDegree, scratch)) set.add(s);
     const out: number[] = [];
-    for (const s of set) if (s !== t && s >= 0 && s < n && !graph.pages[s]!.meta.exclude) out.push(s);
+    for (const s of set) if (s !== t && s >= 0 && s < n && !graph.pages[s].meta.exclude) out.push(s);
     return out.sort((a, b) => a - b);
   };
 }

@@ -8,6 +8,6 @@ import type { SuggestInput } from './types.js';
  */
 export function factsByPage(input: Pick<SuggestInput, 'graph' | 'facts'>): (page: number) => PageFacts | undefined {
   const { graph, facts } = input;
-  const ordered = facts.length === graph.pages.length && facts.every((f, i) => f.file === graph.pages[i]!.file);
-  return ordered ? (i) => facts[i] : (i) => facts[graph.pages[i]!.factsIndex];
+  const ordered = facts.length === graph.pages.length && facts.every((f, i) => f.file === graph.pages[i].file);
+  return ordered ? (i) => facts[i] : (i) => facts[graph.pages[i].factsIndex];
 }

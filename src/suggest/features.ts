@@ -115,7 +115,7 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
     for (const m of mentions.linkMatches[s] ?? []) {
       if (m.target !== t) continue;
       if (m.exact) ownExact.set(m.phrase, (ownExact.get(m.phrase) ?? 0) + 1);
-      if (!mentions.phrases[m.phrase]!.names.some((r) => r.target === t)) continue;
+      if (!mentions.phrases[m.phrase].names.some((r) => r.target === t)) continue;
       all.add(m.phrase);
       count++;
     }
@@ -123,30 +123,30 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   }
   let validCount = 0;
   for (const p of phrases) {
-    const phrase = mentions.phrases[p]!;
+    const phrase = mentions.phrases[p];
     const kinds = nameKindsFor(phrase, s, t);
     if (kinds.length === 0) continue;
     validCount++;
     for (const k of kinds) x[kindFeature(k)] = 1;
-    x[F['name-words']] = Math.max(x[F['name-words']]!, phrase.stems.length);
+    x[F['name-words']] = Math.max(x[F['name-words']], phrase.stems.length);
     const own = ownExact?.get(p) ?? 0;
     const linkedOcc = phrase.linked - own;
     const total = phrase.prose + phrase.linked;
-    if (total > 0) x[F['link-probability']] = Math.max(x[F['link-probability']]!, linkedOcc / total);
+    if (total > 0) x[F['link-probability']] = Math.max(x[F['link-probability']], linkedOcc / total);
     const toTarget = (phrase.linkedTo.get(t) ?? 0) - own;
-    if (linkedOcc > 0) x[F.commonness] = Math.max(x[F.commonness]!, toTarget / linkedOcc);
+    if (linkedOcc > 0) x[F.commonness] = Math.max(x[F.commonness], toTarget / linkedOcc);
   }
   x[F.mentions] = validCount === 0 ? 0 : Math.log1p(count);
 
   const aa = adamicAdar(ctx.neighbours, s, t);
   x[F['adamic-adar']] = Math.log1p(aa.adamicAdar);
   x[F['two-step-paths']] = Math.log1p(twoStepPaths(graph, s, t));
-  x[F['shared-folders']] = sharedSegments(ctx.folders[s]!, ctx.folders[t]!);
-  x[F['target-inlinks']] = Math.log1p(ranking.contentInlinks[t]! - (linked ? 1 : 0));
-  x[F['source-outlinks']] = Math.log1p(ctx.outlinks[s]! - (linked ? 1 : 0));
-  const pct = ctx.rankPct[s]!;
+  x[F['shared-folders']] = sharedSegments(ctx.folders[s], ctx.folders[t]);
+  x[F['target-inlinks']] = Math.log1p(ranking.contentInlinks[t] - (linked ? 1 : 0));
+  x[F['source-outlinks']] = Math.log1p(ctx.outlinks[s] - (linked ? 1 : 0));
+  const pct = ctx.rankPct[s];
   x[F['source-rank']] = Number.isNaN(pct) ? 0 : pct;
-  const d = linked ? depthWithout(graph, ranking, ctx.isEntry, s, t) : ranking.depth[t]!;
+  const d = linked ? depthWithout(graph, ranking, ctx.isEntry, s, t) : ranking.depth[t];
   x[F['target-depth']] = d < 0 ? DEPTH_CAP : Math.min(d, DEPTH_CAP);
   return x;
 }
@@ -171,7 +171,7 @@ export function contentOutlinks(graph: SiteGraph): Int32Array {
   const n = graph.pages.length;
   const out = new Int32Array(n);
   for (let s = 0; s < n; s++) {
-    for (let e = graph.forward.offsets[s]!; e < graph.forward.offsets[s + 1]!; e++) if ((graph.forward.flags[e]! & EDGE_CONTENT) !== 0) out[s]!++;
+    for (let e = graph.forward.offsets[s]; e < graph.forward.offsets[s + 1]; e++) if ((graph.forward.flags[e] & EDGE_CONTENT) !== 0) out[s]++;
   }
   return out;
 }

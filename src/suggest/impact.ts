@@ -70,7 +70,7 @@ export function targetRanksWithLinks(model: RankModel, links: readonly { from: n
     links.map((l) => [l.to]),
   );
   const after = new Float64Array(links.length);
-  for (let i = 0; i < links.length; i++) after[i] = result.values[i]![0]!;
+  for (let i = 0; i < links.length; i++) after[i] = result.values[i][0];
   return after;
 }
 
@@ -86,8 +86,8 @@ export function targetRanksWithLinks(model: RankModel, links: readonly { from: n
 export function impactSelection(items: readonly { readonly id: string; readonly score: number }[], planIds: readonly string[], limit: number): Uint8Array {
   const selected = new Uint8Array(items.length);
   if (limit === 0 || limit >= items.length) return selected.fill(1);
-  const order = items.map((_, i) => i).sort((a, b) => items[b]!.score - items[a]!.score || compareText(items[a]!.id, items[b]!.id));
-  for (let k = 0; k < limit; k++) selected[order[k]!] = 1;
+  const order = items.map((_, i) => i).sort((a, b) => items[b].score - items[a].score || compareText(items[a].id, items[b].id));
+  for (let k = 0; k < limit; k++) selected[order[k]] = 1;
   const inPlan = new Set(planIds.slice(0, limit));
   items.forEach((item, i) => {
     if (inPlan.has(item.id)) selected[i] = 1;
@@ -125,8 +125,8 @@ export class DepthState {
 
   /** Depth of `target` with the link source -> target added (the only page whose depth matters for a report row). */
   depthWith(source: number, target: number): number {
-    const ds = this.depth[source]!;
-    const dt = this.depth[target]!;
+    const ds = this.depth[source];
+    const dt = this.depth[target];
     if (ds < 0) return dt;
     return dt < 0 ? ds + 1 : Math.min(dt, ds + 1);
   }
@@ -136,10 +136,10 @@ export class DepthState {
    * within it if the link source -> target were added. Nothing changes.
    */
   gain(source: number, target: number, limit: number, counts: (page: number) => boolean): number {
-    const ds = this.depth[source]!;
+    const ds = this.depth[source];
     if (ds < 0 || ds + 1 > limit) return 0;
     const epoch = ++this.epoch;
-    const get = (u: number): number => (this.stamp[u] === epoch ? this.scratch[u]! : this.depth[u]!);
+    const get = (u: number): number => (this.stamp[u] === epoch ? this.scratch[u] : this.depth[u]);
     let fixed = 0;
     let head = 0;
     let tail = 0;
@@ -148,13 +148,13 @@ export class DepthState {
       if (cur >= 0 && cur <= d) return;
       this.stamp[v] = epoch;
       this.scratch[v] = d;
-      const before = this.depth[v]!;
+      const before = this.depth[v];
       if ((before < 0 || before > limit) && counts(v)) fixed++;
       if (d < limit) this.queue[tail++] = v;
     };
     visit(target, ds + 1);
     while (head < tail) {
-      const u = this.queue[head++]!;
+      const u = this.queue[head++];
       const d = get(u) + 1;
       this.eachNext(u, (v) => visit(v, d));
     }
@@ -169,13 +169,13 @@ export class DepthState {
     const list = this.added.get(source);
     if (list === undefined) this.added.set(source, [target]);
     else list.push(target);
-    const ds = this.depth[source]!;
+    const ds = this.depth[source];
     const changed: number[] = [];
     if (ds < 0) return changed;
     let head = 0;
     let tail = 0;
     const visit = (v: number, d: number): void => {
-      const cur = this.depth[v]!;
+      const cur = this.depth[v];
       if (cur >= 0 && cur <= d) return;
       this.depth[v] = d;
       changed.push(v);
@@ -183,8 +183,8 @@ export class DepthState {
     };
     visit(target, ds + 1);
     while (head < tail) {
-      const u = this.queue[head++]!;
-      const d = this.depth[u]! + 1;
+      const u = this.queue[head++];
+      const d = this.depth[u] + 1;
       this.eachNext(u, (v) => visit(v, d));
     }
     return changed;
@@ -192,7 +192,7 @@ export class DepthState {
 
   private eachNext(u: number, fn: (v: number) => void): void {
     const { offsets, targets, flags } = this.forward;
-    for (let e = offsets[u]!; e < offsets[u + 1]!; e++) if ((flags[e]! & this.mask) !== 0) fn(targets[e]!);
+    for (let e = offsets[u]; e < offsets[u + 1]; e++) if ((flags[e] & this.mask) !== 0) fn(targets[e]);
     for (const v of this.added.get(u) ?? []) fn(v);
   }
 }

@@ -70,8 +70,8 @@ export function computeImportance(
   const level: ImportanceLevel[] = new Array(n);
   const source: ImportanceSource[] = new Array(n);
   for (let i = 0; i < n; i++) {
-    const page = graph.pages[i]!;
-    const p = Number.isNaN(base[i]!) ? 0.5 : base[i]!;
+    const page = graph.pages[i];
+    const p = Number.isNaN(base[i]) ? 0.5 : base[i];
     const explicit = page.meta.importance;
     if (explicit !== undefined) {
       level[i] = explicit;

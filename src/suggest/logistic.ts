@@ -32,15 +32,15 @@ export function fitLogistic(rows: readonly (readonly number[])[], labels: ArrayL
   const maxIterations = settings.maxIterations ?? 100;
   const tolerance = settings.tolerance ?? 1e-9;
   const n = rows.length;
-  const d = n === 0 ? 0 : rows[0]!.length;
+  const d = n === 0 ? 0 : rows[0].length;
   const means = new Array<number>(d).fill(0);
   const scales = new Array<number>(d).fill(1);
   for (let j = 0; j < d; j++) {
     let sum = 0;
-    for (let i = 0; i < n; i++) sum += rows[i]![j]!;
+    for (let i = 0; i < n; i++) sum += rows[i][j];
     const mean = n === 0 ? 0 : sum / n;
     let ss = 0;
-    for (let i = 0; i < n; i++) ss += (rows[i]![j]! - mean) ** 2;
+    for (let i = 0; i < n; i++) ss += (rows[i][j] - mean) ** 2;
     const sd = n > 1 ? Math.sqrt(ss / (n - 1)) : 0;
     means[j] = mean;
     scales[j] = sd > 1e-12 ? sd : 1;
@@ -50,7 +50,7 @@ export function fitLogistic(rows: readonly (readonly number[])[], labels: ArrayL
   const z = new Float64Array(n * p);
   for (let i = 0; i < n; i++) {
     z[i * p] = 1;
-    for (let j = 0; j < d; j++) z[i * p + 1 + j] = (rows[i]![j]! - means[j]!) / scales[j]!;
+    for (let j = 0; j < d; j++) z[i * p + 1 + j] = (rows[i][j] - means[j]) / scales[j];
   }
   const beta = new Float64Array(p);
   let iterations = 0;
@@ -64,40 +64,40 @@ export function fitLogistic(rows: readonly (readonly number[])[], labels: ArrayL
     for (let i = 0; i < n; i++) {
       const o = i * p;
       let eta = 0;
-      for (let j = 0; j < p; j++) eta += beta[j]! * z[o + j]!;
+      for (let j = 0; j < p; j++) eta += beta[j] * z[o + j];
       const mu = sigmoid(eta);
       const w = mu * (1 - mu);
-      const r = labels[i]! - mu;
+      const r = labels[i] - mu;
       for (let j = 0; j < p; j++) {
-        const zj = z[o + j]!;
-        g[j]! += zj * r;
+        const zj = z[o + j];
+        g[j] += zj * r;
         const wz = w * zj;
-        for (let k = 0; k <= j; k++) h[j * p + k]! += wz * z[o + k]!;
+        for (let k = 0; k <= j; k++) h[j * p + k] += wz * z[o + k];
       }
     }
     for (let j = 1; j < p; j++) {
-      g[j]! -= l2 * beta[j]!;
-      h[j * p + j]! += l2;
+      g[j] -= l2 * beta[j];
+      h[j * p + j] += l2;
     }
-    for (let j = 0; j < p; j++) for (let k = j + 1; k < p; k++) h[j * p + k] = h[k * p + j]!;
+    for (let j = 0; j < p; j++) for (let k = j + 1; k < p; k++) h[j * p + k] = h[k * p + j];
     const step = solveSymmetric(h, g, p);
     let move = 0;
     for (let j = 0; j < p; j++) {
-      beta[j]! += step[j]!;
-      move = Math.max(move, Math.abs(step[j]!));
+      beta[j] += step[j];
+      move = Math.max(move, Math.abs(step[j]));
     }
     if (!(move > tolerance)) {
       converged = Number.isFinite(move);
       break;
     }
   }
-  return { intercept: beta[0]!, weights: Array.from(beta.subarray(1)), means, scales, iterations, converged };
+  return { intercept: beta[0], weights: Array.from(beta.subarray(1)), means, scales, iterations, converged };
 }
 
 /** The linear score b0 + sum_j b_j z_j of a feature vector. */
 export function linearScore(model: LogisticModel, x: readonly number[]): number {
   let eta = model.intercept;
-  for (let j = 0; j < model.weights.length; j++) eta += (model.weights[j]! * (x[j]! - model.means[j]!)) / model.scales[j]!;
+  for (let j = 0; j < model.weights.length; j++) eta += (model.weights[j] * (x[j] - model.means[j])) / model.scales[j];
   return eta;
 }
 
@@ -108,7 +108,7 @@ export function predictLogistic(model: LogisticModel, x: readonly number[]): num
 
 /** Each feature's part of the linear score: b_j (x_j - mean_j) / scale_j. */
 export function contributions(model: LogisticModel, x: readonly number[]): number[] {
-  return model.weights.map((w, j) => (w * (x[j]! - model.means[j]!)) / model.scales[j]!);
+  return model.weights.map((w, j) => (w * (x[j] - model.means[j])) / model.scales[j]);
 }
 
 /** 1 / (1 + e^-x), without overflow for large |x|. */
@@ -124,15 +124,15 @@ export function sigmoid(x: number): number {
  * Null when either class is empty.
  */
 export function areaUnderCurve(scores: readonly number[], labels: ArrayLike<number>): number | null {
-  const order = scores.map((_, i) => i).sort((a, b) => scores[a]! - scores[b]! || a - b);
+  const order = scores.map((_, i) => i).sort((a, b) => scores[a] - scores[b] || a - b);
   let positives = 0;
   let rankSum = 0;
   for (let i = 0; i < order.length; ) {
     let j = i;
-    while (j + 1 < order.length && scores[order[j + 1]!] === scores[order[i]!]) j++;
+    while (j + 1 < order.length && scores[order[j + 1]] === scores[order[i]]) j++;
     const midRank = (i + j) / 2 + 1;
     for (let k = i; k <= j; k++) {
-      if (labels[order[k]!] === 1) {
+      if (labels[order[k]] === 1) {
         positives++;
         rankSum += midRank;
       }
@@ -151,27 +151,27 @@ export function areaUnderCurve(scores: readonly number[], labels: ArrayLike<numb
 function solveSymmetric(h: Float64Array, g: Float64Array, p: number): Float64Array {
   const l = new Float64Array(p * p);
   for (let j = 0; j < p; j++) {
-    let sum = h[j * p + j]!;
-    for (let k = 0; k < j; k++) sum -= l[j * p + k]! ** 2;
+    let sum = h[j * p + j];
+    for (let k = 0; k < j; k++) sum -= l[j * p + k] ** 2;
     const pivot = sum > 1e-12 ? sum : sum + 1e-8 > 1e-12 ? sum + 1e-8 : 1e-8;
     l[j * p + j] = Math.sqrt(pivot);
     for (let i = j + 1; i < p; i++) {
-      let s = h[i * p + j]!;
-      for (let k = 0; k < j; k++) s -= l[i * p + k]! * l[j * p + k]!;
-      l[i * p + j] = s / l[j * p + j]!;
+      let s = h[i * p + j];
+      for (let k = 0; k < j; k++) s -= l[i * p + k] * l[j * p + k];
+      l[i * p + j] = s / l[j * p + j];
     }
   }
   const y = new Float64Array(p);
   for (let i = 0; i < p; i++) {
-    let s = g[i]!;
-    for (let k = 0; k < i; k++) s -= l[i * p + k]! * y[k]!;
-    y[i] = s / l[i * p + i]!;
+    let s = g[i];
+    for (let k = 0; k < i; k++) s -= l[i * p + k] * y[k];
+    y[i] = s / l[i * p + i];
   }
   const x = new Float64Array(p);
   for (let i = p - 1; i >= 0; i--) {
-    let s = y[i]!;
-    for (let k = i + 1; k < p; k++) s -= l[k * p + i]! * x[k]!;
-    x[i] = s / l[i * p + i]!;
+    let s = y[i];
+    for (let k = i + 1; k < p; k++) s -= l[k * p + i] * x[k];
+    x[i] = s / l[i * p + i];
   }
   return x;
 }

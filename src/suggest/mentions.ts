@@ -53,7 +53,7 @@ export interface PlacementHabit {
 
 /** The share of a placement's occurrences that are links, with one link and one mention added (so an unseen placement is 1/2). */
 export function placementRate(habit: PlacementHabit, place: number): number {
-  return (habit.linked[place]! + 1) / (habit.linked[place]! + habit.mentioned[place]! + 2);
+  return (habit.linked[place] + 1) / (habit.linked[place] + habit.mentioned[place] + 2);
 }
 
 /** One page's claim on a phrase. */
@@ -138,7 +138,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   };
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
-    const phrase = phrases[phraseOf(stems)]!;
+    const phrase = phrases[phraseOf(stems)];
     let ref = phrase.names.find((r) => r.target === target && r.kind === kind);
     if (ref === undefined) {
       ref = { target, kind, users: kind === 'anchor-text' ? new Map() : null };
@@ -192,7 +192,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   for (const link of contentLinks) {
     const exact = link.stems.length > 0 && link.stems.length <= MAX_NAME_WORDS ? byKey.get(link.stems.join(' ')) : undefined;
     if (exact !== undefined) {
-      const p = phrases[exact]!;
+      const p = phrases[exact];
       p.linked++;
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
       const on = linesOf(link.from);
@@ -202,8 +202,8 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const joins = link.stems.map(() => true);
     scanStems(link.stems, joins, root, (phraseId, _first, words) => {
       const whole = words === link.stems.length;
-      if (!whole) phrases[phraseId]!.prose++;
-      linkMatches[link.from]!.push({ target: link.to, phrase: phraseId, exact: whole });
+      if (!whole) phrases[phraseId].prose++;
+      linkMatches[link.from].push({ target: link.to, phrase: phraseId, exact: whole });
     });
   }
 
@@ -220,9 +220,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (facts.spans.length > 0) {
       const tokens = prepareSource(facts.spans, cache);
       scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
-        const span = tokens.spans[tokens.span[first]!]!;
-        const start = tokens.start[first]!;
-        const end = tokens.end[first + words - 1]!;
+        const span = tokens.spans[tokens.span[first]];
+        const start = tokens.start[first];
+        const end = tokens.end[first + words - 1];
         const alone = on.markdown && on.words.get(span.line) === 1 && !on.code.has(span.line) && !on.links.has(span.line) && !WORD.test(span.text.slice(0, start) + span.text.slice(end));
         found.push({ offset: span.offset + start, phrase: phraseId, place: alone ? ALONE : 0, anchor: () => match(span, start, end, words) });
       });
@@ -232,11 +232,11 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       const phraseId = wholeMatch(tokenize(code.code, cache), root);
       if (phraseId < 0) continue;
       const alone = on.markdown && !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
-      found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId]!.stems.length) });
+      found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId].stems.length) });
     }
     if (found.length > prose) found.sort((a, b) => a.offset - b.offset);
     for (const f of found) {
-      const phrase = phrases[f.phrase]!;
+      const phrase = phrases[f.phrase];
       phrase.prose++;
       habit.mentioned[f.place]++;
       let made: AnchorMatch | null = null;
@@ -272,21 +272,21 @@ const PHRASE_PRIOR = 0.05;
 function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number, habit: PlacementHabit): void {
   const order = hit.anchors.map((_, k) => k);
   const odds = (k: number): number => {
-    const p = phrases[hit.anchorPhrases[k]!]!;
+    const p = phrases[hit.anchorPhrases[k]];
     const total = p.prose + p.linked;
     const phraseOdds = total === 0 ? 0 : (p.linkedTo.get(target) ?? 0) / total;
-    return (phraseOdds + PHRASE_PRIOR) * placementRate(habit, hit.anchorPlaces[k]!);
+    return (phraseOdds + PHRASE_PRIOR) * placementRate(habit, hit.anchorPlaces[k]);
   };
   const kind = (k: number): number => {
-    const p = phrases[hit.anchorPhrases[k]!]!;
+    const p = phrases[hit.anchorPhrases[k]];
     let best = KIND_ORDER.length;
     for (const r of p.names) if (r.target === target) best = Math.min(best, KIND_ORDER.indexOf(r.kind));
     return best;
   };
-  order.sort((a, b) => odds(b) - odds(a) || kind(a) - kind(b) || hit.anchors[b]!.words - hit.anchors[a]!.words || hit.anchors[a]!.offset - hit.anchors[b]!.offset);
-  const anchors = order.map((k) => hit.anchors[k]!);
-  const ids = order.map((k) => hit.anchorPhrases[k]!);
-  const places = order.map((k) => hit.anchorPlaces[k]!);
+  order.sort((a, b) => odds(b) - odds(a) || kind(a) - kind(b) || hit.anchors[b].words - hit.anchors[a].words || hit.anchors[a].offset - hit.anchors[b].offset);
+  const anchors = order.map((k) => hit.anchors[k]);
+  const ids = order.map((k) => hit.anchorPhrases[k]);
+  const places = order.map((k) => hit.anchorPlaces[k]);
   hit.anchors.splice(0, anchors.length, ...anchors);
   hit.anchorPhrases.splice(0, ids.length, ...ids);
   hit.anchorPlaces.splice(0, places.length, ...places);
@@ -298,7 +298,7 @@ function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number
  */
 function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: TrieNode, visit: (phrase: number, first: number, words: number) => void): void {
   for (let i = 0; i < stem.length; ) {
-    let node = root.next.get(stem[i]!);
+    let node = root.next.get(stem[i]);
     let words = 1;
     let best = -1;
     let bestWords = 0;
@@ -308,7 +308,7 @@ function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: 
         bestWords = words;
       }
       if (words >= MAX_NAME_WORDS || !joinNext[i + words - 1]) break;
-      node = node.next.get(stem[i + words]!);
+      node = node.next.get(stem[i + words]);
       words++;
     }
     if (best >= 0) {
@@ -336,7 +336,7 @@ function wholeMatch(stems: readonly string[], root: TrieNode): number {
 function keepAnchor(hit: MentionHit, phrase: number, place: Placement, m: AnchorMatch): void {
   for (let k = 0; k < hit.anchorPhrases.length; k++) if (hit.anchorPhrases[k] === phrase && hit.anchorPlaces[k] === place) return;
   for (let k = 0; k < hit.anchors.length; k++) {
-    const a = hit.anchors[k]!;
+    const a = hit.anchors[k];
     if (m.offset < a.endOffset && a.offset < m.endOffset) {
       // Same place: keep the longer phrase.
       if (a.offset === m.offset && m.endOffset > a.endOffset) {
@@ -363,11 +363,11 @@ function keepAnchor(hit: MentionHit, phrase: number, place: Placement, m: Anchor
  */
 export function headingNames(text: string): string[] {
   const label = /^[\p{L} ]{1,24}:\s+(.+)$/u.exec(text);
-  const rest = label === null ? text : label[1]!;
+  const rest = label === null ? text : label[1];
   if (!CODE_NAME.test(rest)) return [];
   const out = rest === text ? [text] : [text, rest];
   const call = /^([^\s(]+)\(.*\)$/.exec(rest);
-  if (call !== null) out.push(call[1]!);
+  if (call !== null) out.push(call[1]);
   return out;
 }
 

@@ -204,10 +204,10 @@ export function fitKey(rows: readonly (readonly number[])[], labels: readonly nu
   const chunk = new Float64Array(1024 * (d + 1));
   let at = 0;
   for (let i = 0; i < rows.length; i++) {
-    const row = rows[i]!;
+    const row = rows[i];
     if (row.length !== d) throw new Error(`fitKey: row ${i} has ${row.length} features, expected ${d}`);
-    for (let j = 0; j < d; j++) chunk[at++] = row[j]!;
-    chunk[at++] = labels[i]!;
+    for (let j = 0; j < d; j++) chunk[at++] = row[j];
+    chunk[at++] = labels[i];
     if (at === chunk.length) {
       hash.update(new Uint8Array(chunk.buffer, 0, at * 8));
       at = 0;

@@ -12,15 +12,15 @@ export function percentiles(values: ArrayLike<number>, include: (i: number) => b
   const ids: number[] = [];
   for (let i = 0; i < values.length; i++) if (include(i)) ids.push(i);
   const out = new Float64Array(values.length).fill(Number.NaN);
-  if (ids.length === 1) out[ids[0]!] = 0.5;
+  if (ids.length === 1) out[ids[0]] = 0.5;
   if (ids.length <= 1) return out;
-  ids.sort((a, b) => values[a]! - values[b]! || a - b);
+  ids.sort((a, b) => values[a] - values[b] || a - b);
   let i = 0;
   while (i < ids.length) {
     let j = i;
-    while (j + 1 < ids.length && values[ids[j + 1]!] === values[ids[i]!]) j++;
+    while (j + 1 < ids.length && values[ids[j + 1]] === values[ids[i]]) j++;
     const p = (i + (j - i) / 2) / (ids.length - 1);
-    for (let x = i; x <= j; x++) out[ids[x]!] = p;
+    for (let x = i; x <= j; x++) out[ids[x]] = p;
     i = j + 1;
   }
   return out;

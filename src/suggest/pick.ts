@@ -43,8 +43,8 @@ interface Entry {
 export function pickUnderCaps(pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): Chosen[] {
   const before = (a: Entry, b: Entry): boolean => {
     if (a.score !== b.score) return a.score > b.score;
-    const pa = pairs[a.pair]!;
-    const pb = pairs[b.pair]!;
+    const pa = pairs[a.pair];
+    const pb = pairs[b.pair];
     return pa.target !== pb.target ? pa.target < pb.target : pa.source < pb.source;
   };
   const heap = new Heap<Entry>(before);
@@ -54,19 +54,19 @@ export function pickUnderCaps(pairs: readonly ScoredPair[], maxPerSource: number
   const used = new Map<number, [number, number][]>();
   const out: Chosen[] = [];
   for (let e = heap.pop(); e !== undefined; e = heap.pop()) {
-    const pair = pairs[e.pair]!;
+    const pair = pairs[e.pair];
     if ((perSource.get(pair.source) ?? 0) >= maxPerSource || (perTarget.get(pair.target) ?? 0) >= maxPerTarget) continue;
     let anchor: AnchorMatch | null = null;
     if (e.option >= 0) {
       const taken = used.get(pair.source) ?? [];
       const free = (a: AnchorMatch): boolean => !taken.some(([s, t]) => a.offset < t && s < a.endOffset);
       let k = e.option;
-      while (k < pair.anchors.length && !free(pair.anchors[k]!)) k++;
+      while (k < pair.anchors.length && !free(pair.anchors[k])) k++;
       if (k === pair.anchors.length) {
         heap.push({ pair: e.pair, score: Math.min(pair.score, pair.scoreWithoutAnchor), option: -1 });
         continue;
       }
-      anchor = pair.anchors[k]!;
+      anchor = pair.anchors[k];
       taken.push([anchor.offset, anchor.endOffset]);
       used.set(pair.source, taken);
     }
@@ -89,8 +89,8 @@ class Heap<T> {
     let i = items.length - 1;
     while (i > 0) {
       const parent = (i - 1) >> 1;
-      if (!this.before(items[i]!, items[parent]!)) break;
-      [items[i], items[parent]] = [items[parent]!, items[i]!];
+      if (!this.before(items[i], items[parent])) break;
+      [items[i], items[parent]] = [items[parent], items[i]];
       i = parent;
     }
   }
@@ -98,7 +98,7 @@ class Heap<T> {
   pop(): T | undefined {
     const items = this.items;
     if (items.length === 0) return undefined;
-    const top = items[0]!;
+    const top = items[0];
     const last = items.pop()!;
     if (items.length > 0) {
       items[0] = last;
@@ -107,10 +107,10 @@ class Heap<T> {
         const l = 2 * i + 1;
         const r = l + 1;
         let best = i;
-        if (l < items.length && this.before(items[l]!, items[best]!)) best = l;
-        if (r < items.length && this.before(items[r]!, items[best]!)) best = r;
+        if (l < items.length && this.before(items[l], items[best])) best = l;
+        if (r < items.length && this.before(items[r], items[best])) best = r;
         if (best === i) break;
-        [items[i], items[best]] = [items[best]!, items[i]!];
+        [items[i], items[best]] = [items[best], items[i]];
         i = best;
       }
     }

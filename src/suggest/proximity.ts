@@ -30,8 +30,8 @@ export function contentNeighbours(graph: SiteGraph): Neighbours {
   const rows: number[][] = Array.from({ length: n }, () => []);
   const add = (csr: Csr): void => {
     for (let i = 0; i < n; i++) {
-      for (let e = csr.offsets[i]!; e < csr.offsets[i + 1]!; e++) {
-        if ((csr.flags[e]! & EDGE_CONTENT) !== 0) rows[i]!.push(csr.targets[e]!);
+      for (let e = csr.offsets[i]; e < csr.offsets[i + 1]; e++) {
+        if ((csr.flags[e] & EDGE_CONTENT) !== 0) rows[i].push(csr.targets[e]);
       }
     }
   };
@@ -40,34 +40,34 @@ export function contentNeighbours(graph: SiteGraph): Neighbours {
   const offsets = new Int32Array(n + 1);
   let total = 0;
   for (let i = 0; i < n; i++) {
-    const row = rows[i]!.sort((a, b) => a - b);
+    const row = rows[i].sort((a, b) => a - b);
     let w = 0;
-    for (let k = 0; k < row.length; k++) if (k === 0 || row[k] !== row[k - 1]) row[w++] = row[k]!;
+    for (let k = 0; k < row.length; k++) if (k === 0 || row[k] !== row[k - 1]) row[w++] = row[k];
     row.length = w;
     total += w;
     offsets[i + 1] = total;
   }
   const targets = new Int32Array(total);
-  for (let i = 0; i < n; i++) targets.set(rows[i]!, offsets[i]!);
+  for (let i = 0; i < n; i++) targets.set(rows[i], offsets[i]);
   return { offsets, targets };
 }
 
 /** Degree of a page in the undirected content graph. */
 export function degree(nb: Neighbours, page: number): number {
-  return nb.offsets[page + 1]! - nb.offsets[page]!;
+  return nb.offsets[page + 1] - nb.offsets[page];
 }
 
 /** Adamic-Adar and common-neighbour counts of s and t (sorted-row merge). */
 export function adamicAdar(nb: Neighbours, s: number, t: number): { adamicAdar: number; common: number } {
-  let i = nb.offsets[s]!;
-  const iEnd = nb.offsets[s + 1]!;
-  let j = nb.offsets[t]!;
-  const jEnd = nb.offsets[t + 1]!;
+  let i = nb.offsets[s];
+  const iEnd = nb.offsets[s + 1];
+  let j = nb.offsets[t];
+  const jEnd = nb.offsets[t + 1];
   let aa = 0;
   let common = 0;
   while (i < iEnd && j < jEnd) {
-    const a = nb.targets[i]!;
-    const b = nb.targets[j]!;
+    const a = nb.targets[i];
+    const b = nb.targets[j];
     if (a === b) {
       if (a !== s && a !== t) {
         common++;
@@ -85,16 +85,16 @@ export function adamicAdar(nb: Neighbours, s: number, t: number): { adamicAdar: 
 export function twoStepPaths(graph: SiteGraph, s: number, t: number): number {
   const f = graph.forward;
   const r = graph.reverse;
-  let i = f.offsets[s]!;
-  const iEnd = f.offsets[s + 1]!;
-  let j = r.offsets[t]!;
-  const jEnd = r.offsets[t + 1]!;
+  let i = f.offsets[s];
+  const iEnd = f.offsets[s + 1];
+  let j = r.offsets[t];
+  const jEnd = r.offsets[t + 1];
   let count = 0;
   while (i < iEnd && j < jEnd) {
-    const a = f.targets[i]!;
-    const b = r.targets[j]!;
+    const a = f.targets[i];
+    const b = r.targets[j];
     if (a === b) {
-      if (a !== s && a !== t && (f.flags[i]! & EDGE_CONTENT) !== 0 && (r.flags[j]! & EDGE_CONTENT) !== 0) count++;
+      if (a !== s && a !== t && (f.flags[i] & EDGE_CONTENT) !== 0 && (r.flags[j] & EDGE_CONTENT) !== 0) count++;
       i++;
       j++;
     } else if (a < b) i++;
@@ -111,10 +111,10 @@ export function depthWithout(graph: SiteGraph, ranking: Ranking, isEntry: Uint8A
   if (isEntry[t] === 1) return 0;
   const r = graph.reverse;
   let best = -1;
-  for (let e = r.offsets[t]!; e < r.offsets[t + 1]!; e++) {
-    const u = r.targets[e]!;
+  for (let e = r.offsets[t]; e < r.offsets[t + 1]; e++) {
+    const u = r.targets[e];
     if (u === s) continue;
-    const du = ranking.depth[u]!;
+    const du = ranking.depth[u];
     if (du >= 0 && (best < 0 || du + 1 < best)) best = du + 1;
   }
   return best;
@@ -159,21 +159,21 @@ export function neighbourhoodScratch(n: number): NeighbourhoodScratch {
 export function graphNeighbourhood(nb: Neighbours, t: number, limit: number, hubDegree: number, scratch: NeighbourhoodScratch = neighbourhoodScratch(nb.offsets.length - 1)): number[] {
   const { score, touched } = scratch;
   let count = 0;
-  for (let e = nb.offsets[t]!; e < nb.offsets[t + 1]!; e++) {
-    const z = nb.targets[e]!;
+  for (let e = nb.offsets[t]; e < nb.offsets[t + 1]; e++) {
+    const z = nb.targets[e];
     const dz = degree(nb, z);
     if (dz > hubDegree || dz < 2) continue;
     const w = 1 / Math.log(dz);
-    for (let f = nb.offsets[z]!; f < nb.offsets[z + 1]!; f++) {
-      const s = nb.targets[f]!;
+    for (let f = nb.offsets[z]; f < nb.offsets[z + 1]; f++) {
+      const s = nb.targets[f];
       if (s === t) continue;
       if (score[s] === 0) touched[count++] = s;
       score[s] += w;
     }
   }
   const ids = Array.from(touched.subarray(0, count));
-  ids.sort((a, b) => score[b]! - score[a]! || a - b);
+  ids.sort((a, b) => score[b] - score[a] || a - b);
   const out = ids.slice(0, limit);
-  for (let k = 0; k < count; k++) score[touched[k]!] = 0;
+  for (let k = 0; k < count; k++) score[touched[k]] = 0;
   return out;
 }

@@ -76,11 +76,11 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
     for (const s of pool(t)) {
       if (linked(s, t)) continue;
       const features = pairFeatures(ctx, s, t);
-      const hit = mentions.bySource[s]!.get(t);
+      const hit = mentions.bySource[s].get(t);
       scored.push({
         source: s,
         target: t,
-        similarity: features[0]!,
+        similarity: features[0],
         score: predictLogistic(model, features),
         scoreWithoutAnchor: predictLogistic(model, withoutNames(features)),
         anchors: hit === undefined ? [] : hit.anchors,
@@ -92,15 +92,15 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
   const chosen = fallbackAnchors(input, pickUnderCaps(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
-    const shared = sharedSegments(ctx.folders[s]!, ctx.folders[t]!);
+    const shared = sharedSegments(ctx.folders[s], ctx.folders[t]);
     return {
       features: c.pair.features,
       contributions: contributions(model, [...c.pair.features]),
-      above: c.pair.features.map((v, j) => v > model.means[j]!),
+      above: c.pair.features.map((v, j) => v > model.means[j]),
       anchor: c.anchor,
       commonNeighbours: adamicAdar(neighbours, s, t).common,
       twoStep: twoStepPaths(graph, s, t),
-      folder: shared === 0 ? '' : `/${ctx.folders[t]!.slice(0, shared).join('/')}/`,
+      folder: shared === 0 ? '' : `/${ctx.folders[t].slice(0, shared).join('/')}/`,
     };
   };
   return { chosen, model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };
@@ -115,9 +115,9 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
 function fallbackAnchors(input: SuggestInput, chosen: Chosen[], cache: ReturnType<typeof createStemCache>): Chosen[] {
   const { graph, index } = input;
   const factsOf = factsByPage(input);
-  const need = chosen.map((_, i) => i).filter((i) => chosen[i]!.anchor === null);
+  const need = chosen.map((_, i) => i).filter((i) => chosen[i].anchor === null);
   if (need.length === 0) return chosen;
-  need.sort((a, b) => chosen[a]!.pair.source - chosen[b]!.pair.source || a - b);
+  need.sort((a, b) => chosen[a].pair.source - chosen[b].pair.source || a - b);
   const taken = new Map<number, [number, number][]>();
   for (const c of chosen) {
     if (c.anchor === null) continue;
@@ -131,8 +131,8 @@ function fallbackAnchors(input: SuggestInput, chosen: Chosen[], cache: ReturnTyp
     let hi = index.terms.length - 1;
     while (lo <= hi) {
       const mid = (lo + hi) >> 1;
-      const t = index.terms[mid]!;
-      if (t === stem) return index.df[mid]!;
+      const t = index.terms[mid];
+      if (t === stem) return index.df[mid];
       if (t < stem) lo = mid + 1;
       else hi = mid - 1;
     }
@@ -142,13 +142,13 @@ function fallbackAnchors(input: SuggestInput, chosen: Chosen[], cache: ReturnTyp
   const namesOf = (t: number): TargetNames => {
     let v = names.get(t);
     if (v === undefined) {
-      const page = graph.pages[t]!;
+      const page = graph.pages[t];
       const ids = t < index.docOffsets.length - 1 ? topTerms(index, t, KEY_TERMS) : [];
       const leads = (id: number): boolean => {
         for (let k = 0; k < STRONG_LEADERS; k++) if (leaders[id * STRONG_LEADERS + k] === t) return true;
         return false;
       };
-      const keys = { all: ids.map((id) => index.terms[id]!), strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]!) };
+      const keys = { all: ids.map((id) => index.terms[id]), strong: ids.filter((id) => leads(id)).map((id) => index.terms[id]) };
       v = targetNames(page.title, [page.route, ...page.meta.aliases], keys, cache, df);
       names.set(t, v);
     }
@@ -156,16 +156,16 @@ function fallbackAnchors(input: SuggestInput, chosen: Chosen[], cache: ReturnTyp
   };
   const out = [...chosen];
   for (let k = 0; k < need.length; ) {
-    const source = chosen[need[k]!]!.pair.source;
-    const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source]!.title);
+    const source = chosen[need[k]].pair.source;
+    const tokens = prepareSource(factsOf(source)?.spans ?? [], cache, graph.pages[source].title);
     const avoid = taken.get(source) ?? [];
-    for (; k < need.length && chosen[need[k]!]!.pair.source === source; k++) {
-      const i = need[k]!;
-      const c = chosen[i]!;
+    for (; k < need.length && chosen[need[k]].pair.source === source; k++) {
+      const i = need[k];
+      const c = chosen[i];
       const anchors: AnchorMatch[] = findAnchors(tokens, namesOf(c.pair.target), avoid);
       if (anchors.length === 0) continue;
-      avoid.push([anchors[0]!.offset, anchors[0]!.endOffset]);
-      out[i] = { ...c, anchor: anchors[0]!, pair: { ...c.pair, anchors } };
+      avoid.push([anchors[0].offset, anchors[0].endOffset]);
+      out[i] = { ...c, anchor: anchors[0], pair: { ...c.pair, anchors } };
     }
   }
   return out;

@@ -70,9 +70,9 @@ export function evidenceWords(e: Evidence): string[] {
   const c = e.contributions;
   const x = e.features;
   const items: { weight: number; words: string }[] = [];
-  const names = NAME_FEATURES.reduce((a, j) => a + (x[j]! !== 0 ? c[j]! : 0), 0);
-  if (x[F.mentions]! > 0 && e.anchor !== null) {
-    const times = Math.round(Math.expm1(x[F.mentions]!));
+  const names = NAME_FEATURES.reduce((a, j) => a + (x[j] !== 0 ? c[j] : 0), 0);
+  if (x[F.mentions] > 0 && e.anchor !== null) {
+    const times = Math.round(Math.expm1(x[F.mentions]));
     const which =
       x[F['anchor-text-mention']] === 1
         ? 'the words other pages link it with'
@@ -86,21 +86,21 @@ export function evidenceWords(e: Evidence): string[] {
     items.push({ weight: names, words: `mentions "${anchorForReading(e.anchor.text)}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
   }
   // Only what raised the score because the pair has more of it than the usual pair.
-  if (x[F.mentions]! === 0 && e.anchor !== null && e.anchor.kind !== 'name' && e.anchor.kind !== 'code') {
+  if (x[F.mentions] === 0 && e.anchor !== null && e.anchor.kind !== 'name' && e.anchor.kind !== 'code') {
     // An anchor from the fallback search: part of a name, not one of the names the model weighed.
     const part = e.anchor.kind === 'title' ? 'part of its title' : e.anchor.kind === 'alias' ? "the words of its route" : 'its key terms';
     items.push({ weight: Number.POSITIVE_INFINITY, words: `"${e.anchor.text}" is ${part}` });
   }
   const add = (j: number, words: string): void => {
-    if (e.above[j] === true) items.push({ weight: c[j]!, words });
+    if (e.above[j] === true) items.push({ weight: c[j], words });
   };
-  add(F.similarity, `similar text (cosine ${x[F.similarity]!.toFixed(2)}, where 1 = the same words)`);
+  add(F.similarity, `similar text (cosine ${x[F.similarity].toFixed(2)}, where 1 = the same words)`);
   if (e.commonNeighbours > 0) add(F['adamic-adar'], `${count(e.commonNeighbours, 'page')} ${e.commonNeighbours === 1 ? 'is' : 'are'} linked with both`);
   if (e.twoStep > 0) add(F['two-step-paths'], `links to ${count(e.twoStep, 'page')} that link to it`);
   if (e.folder !== '') add(F['shared-folders'], `same folder ${e.folder}`);
-  add(F['target-inlinks'], `a page others link to often (${count(Math.round(Math.expm1(x[F['target-inlinks']]!)), 'page')})`);
-  add(F['source-rank'], `the source ranks high (PageRank percentile ${pct(x[F['source-rank']]!)})`);
-  add(F['source-outlinks'], `the source links out a lot (${count(Math.round(Math.expm1(x[F['source-outlinks']]!)), 'page')})`);
+  add(F['target-inlinks'], `a page others link to often (${count(Math.round(Math.expm1(x[F['target-inlinks']])), 'page')})`);
+  add(F['source-rank'], `the source ranks high (PageRank percentile ${pct(x[F['source-rank']])})`);
+  add(F['source-outlinks'], `the source links out a lot (${count(Math.round(Math.expm1(x[F['source-outlinks']])), 'page')})`);
   return items
     .filter((i) => i.weight > 0.05)
     .sort((a, b) => b.weight - a.weight)

@@ -24,8 +24,8 @@ export interface PlanCandidate {
 export function repairPlan(graph: SiteGraph, ranking: Ranking, options: ResolvedOptions, candidates: readonly PlanCandidate[]): RepairPlan {
   const { maxDepth } = options;
   const state: DepthState = depthState(graph, ranking, options);
-  const counts = (p: number): boolean => !graph.pages[p]!.meta.exclude;
-  const isBad = (p: number): boolean => counts(p) && (state.depth[p]! < 0 || state.depth[p]! > maxDepth);
+  const counts = (p: number): boolean => !graph.pages[p].meta.exclude;
+  const isBad = (p: number): boolean => counts(p) && (state.depth[p] < 0 || state.depth[p] > maxDepth);
   let bad = 0;
   for (let p = 0; p < graph.pages.length; p++) if (isBad(p)) bad++;
   const tooDeepBefore = bad;
@@ -41,8 +41,8 @@ export function repairPlan(graph: SiteGraph, ranking: Ranking, options: Resolved
   type Entry = { i: number; gain: number; version: number };
   const better = (a: Entry, b: Entry): boolean => {
     if (a.gain !== b.gain) return a.gain > b.gain;
-    const ca = candidates[a.i]!;
-    const cb = candidates[b.i]!;
+    const ca = candidates[a.i];
+    const cb = candidates[b.i];
     if (ca.score !== cb.score) return ca.score > cb.score;
     return ca.id < cb.id;
   };
@@ -50,8 +50,8 @@ export function repairPlan(graph: SiteGraph, ranking: Ranking, options: Resolved
   const push = (e: Entry): void => {
     heap.push(e);
     let i = heap.length - 1;
-    while (i > 0 && better(heap[i]!, heap[(i - 1) >> 1]!)) {
-      [heap[i], heap[(i - 1) >> 1]] = [heap[(i - 1) >> 1]!, heap[i]!];
+    while (i > 0 && better(heap[i], heap[(i - 1) >> 1])) {
+      [heap[i], heap[(i - 1) >> 1]] = [heap[(i - 1) >> 1], heap[i]];
       i = (i - 1) >> 1;
     }
   };
@@ -63,19 +63,19 @@ export function repairPlan(graph: SiteGraph, ranking: Ranking, options: Resolved
       let i = 0;
       for (;;) {
         let b = i;
-        for (const c of [2 * i + 1, 2 * i + 2]) if (c < heap.length && better(heap[c]!, heap[b]!)) b = c;
+        for (const c of [2 * i + 1, 2 * i + 2]) if (c < heap.length && better(heap[c], heap[b])) b = c;
         if (b === i) break;
-        [heap[i], heap[b]] = [heap[b]!, heap[i]!];
+        [heap[i], heap[b]] = [heap[b], heap[i]];
         i = b;
       }
     }
     return top;
   };
   const evaluate = (i: number): void => {
-    const c = candidates[i]!;
+    const c = candidates[i];
     const gain = state.gain(c.source, c.target, maxDepth, counts);
-    version[i]! += 1;
-    if (gain > 0) push({ i, gain, version: version[i]! });
+    version[i] += 1;
+    if (gain > 0) push({ i, gain, version: version[i] });
   };
   candidates.forEach((_, i) => evaluate(i));
 
@@ -91,7 +91,7 @@ export function repairPlan(graph: SiteGraph, ranking: Ranking, options: Resolved
       if (e === undefined) break;
     }
     if (chosen[e.i] === 1 || e.version !== version[e.i]) continue;
-    const c = candidates[e.i]!;
+    const c = candidates[e.i];
     const gain = state.gain(c.source, c.target, maxDepth, counts);
     if (gain <= 0) continue;
     if (gain < e.gain) {

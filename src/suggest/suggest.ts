@@ -43,9 +43,9 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
   const made = chosen.map((c): { suggestion: Suggestion; source: number; target: number } => {
     const { pair, anchor, score } = c;
     const { source, target } = pair;
-    const sourcePage = graph.pages[source]!;
-    const targetPage = graph.pages[target]!;
-    const depthBefore = ranking.depth[target]!;
+    const sourcePage = graph.pages[source];
+    const targetPage = graph.pages[target];
+    const depthBefore = ranking.depth[target];
     const depthAfter = depths.depthWith(source, target);
     const anchorText = anchor === null ? null : anchor.text;
     const suggestion: Suggestion = {
@@ -60,7 +60,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
       anchor: anchorText,
       similarity: pair.similarity,
       score,
-      targetRankBefore: ranking.pagerank[target]! * n,
+      targetRankBefore: ranking.pagerank[target] * n,
       targetRankAfter: null, // filled in below for the suggestions within the impact budget
       depthBefore: depthBefore < 0 ? null : depthBefore,
       depthAfter: depthAfter < 0 ? null : depthAfter,
@@ -69,10 +69,10 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
           reasons: reasonsOf.get(target) ?? [],
           depth: depthBefore,
           maxDepth,
-          contentInlinks: ranking.contentInlinks[target]!,
+          contentInlinks: ranking.contentInlinks[target],
           minInlinks: settings.minInlinks,
-          rankPercentile: rankPct[target]!,
-          importancePercentile: importance.score[target]!,
+          rankPercentile: rankPct[target],
+          importancePercentile: importance.score[target],
         },
         choice.evidenceOf(c),
       ),
@@ -93,7 +93,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
   const predict = made.filter((_, i) => selected[i] === 1);
   const after = targetRanksWithLinks(model, predict.map((m) => ({ from: m.source, to: m.target })));
   predict.forEach((m, j) => {
-    m.suggestion = { ...m.suggestion, targetRankAfter: after[j]! * n };
+    m.suggestion = { ...m.suggestion, targetRankAfter: after[j] * n };
   });
   return { suggestions: made.map((m) => m.suggestion), underlinked, plan, importance: importance.level, model: choice.modelReport };
 }

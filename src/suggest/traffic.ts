@@ -26,7 +26,7 @@ export function parseTraffic(_file: string, text: string): TrafficResult {
   let seenRow = false;
   for (let i = 0; i < lines.length; i++) {
     const line = i + 1;
-    const raw = lines[i]!;
+    const raw = lines[i];
     if (raw.trim() === '' || raw.trimStart().startsWith('#')) continue;
     const fields = splitCsvLine(raw);
     if (fields === null) {

@@ -19,7 +19,7 @@ import type { UnderlinkedPage } from './types.js';
 
 /** PageRank percentile of every page among the pages that are not excluded (NaN for excluded pages). */
 export function pagerankPercentiles(graph: SiteGraph, ranking: Ranking): Float64Array {
-  return percentiles(ranking.pagerank, (i) => !graph.pages[i]!.meta.exclude);
+  return percentiles(ranking.pagerank, (i) => !graph.pages[i].meta.exclude);
 }
 
 /**
@@ -39,14 +39,14 @@ export function findUnderlinked(
   const { minInlinks, rankGap } = options.suggest;
   const out: UnderlinkedPage[] = [];
   for (let i = 0; i < graph.pages.length; i++) {
-    if (graph.pages[i]!.meta.exclude || entries.has(i)) continue;
+    if (graph.pages[i].meta.exclude || entries.has(i)) continue;
     const reasons: UnderlinkedReason[] = [];
-    const depth = ranking.depth[i]!;
+    const depth = ranking.depth[i];
     if (ranking.inlinks[i] === 0) reasons.push('orphan');
     if (depth < 0) reasons.push('unreachable');
     else if (depth > maxDepth) reasons.push('too-deep');
-    if (importance.level[i] === 'high' && ranking.contentInlinks[i]! < minInlinks) reasons.push('few-inlinks');
-    if (importance.level[i] === 'high' && importance.score[i]! - rankPercentile[i]! > rankGap) reasons.push('rank-below-importance');
+    if (importance.level[i] === 'high' && ranking.contentInlinks[i] < minInlinks) reasons.push('few-inlinks');
+    if (importance.level[i] === 'high' && importance.score[i] - rankPercentile[i] > rankGap) reasons.push('rank-below-importance');
     if (reasons.length > 0) out.push({ page: i, reasons });
   }
   return out;

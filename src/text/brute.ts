@@ -22,14 +22,14 @@ export function relatedPagesBruteForce(index: TermIndex, k: number): RelatedList
     ids.length = 0;
     for (let p = 0; p < n; p++) {
       if (p === q) continue;
-      let i = docOffsets[q]!;
-      let j = docOffsets[p]!;
+      let i = docOffsets[q];
+      let j = docOffsets[p];
       let s = 0;
-      while (i < docOffsets[q + 1]! && j < docOffsets[p + 1]!) {
-        const ti = docTerms[i]!;
-        const tj = docTerms[j]!;
+      while (i < docOffsets[q + 1] && j < docOffsets[p + 1]) {
+        const ti = docTerms[i];
+        const tj = docTerms[j];
         if (ti === tj) {
-          if (relating[ti] === 1) s += docWeights[i]! * docWeights[j]!;
+          if (relating[ti] === 1) s += docWeights[i] * docWeights[j];
           i++;
           j++;
         } else if (ti < tj) i++;
@@ -41,7 +41,7 @@ export function relatedPagesBruteForce(index: TermIndex, k: number): RelatedList
       }
     }
     const best = topKByScore(ids, ids.length, score, k);
-    out.push({ page: q, related: best.map((p) => ({ page: p, similarity: score[p]! })) });
+    out.push({ page: q, related: best.map((p) => ({ page: p, similarity: score[p] })) });
   }
   return out;
 }

@@ -31,8 +31,8 @@ export function buildPostings(index: TermIndex, relating: Uint8Array): Postings 
   const { docOffsets, docTerms, docWeights } = index;
   const t = index.terms.length;
   const postOffsets = new Int32Array(t + 1);
-  for (let term = 0; term < t; term++) postOffsets[term + 1] = postOffsets[term]! + (relating[term] === 1 ? index.df[term]! : 0);
-  const entries = postOffsets[t]!;
+  for (let term = 0; term < t; term++) postOffsets[term + 1] = postOffsets[term] + (relating[term] === 1 ? index.df[term] : 0);
+  const entries = postOffsets[t];
   const postDocs = new Int32Array(entries);
   const postWeights = new Float32Array(entries);
   const rowOffsets = new Int32Array(n + 1);
@@ -43,21 +43,21 @@ export function buildPostings(index: TermIndex, relating: Uint8Array): Postings 
   let longestRow = 0;
   let r = 0;
   for (let d = 0; d < n; d++) {
-    for (let e = docOffsets[d]!; e < docOffsets[d + 1]!; e++) {
-      const term = docTerms[e]!;
+    for (let e = docOffsets[d]; e < docOffsets[d + 1]; e++) {
+      const term = docTerms[e];
       if (relating[term] === 0) continue;
-      const w = docWeights[e]!;
-      const at = fill[term]!;
+      const w = docWeights[e];
+      const at = fill[term];
       fill[term] = at + 1;
       postDocs[at] = d;
       postWeights[at] = w;
       rowTerms[r] = term;
       rowWeights[r] = w;
       r++;
-      if (w > maxWeight[term]!) maxWeight[term] = w;
+      if (w > maxWeight[term]) maxWeight[term] = w;
     }
     rowOffsets[d + 1] = r;
-    longestRow = Math.max(longestRow, r - rowOffsets[d]!);
+    longestRow = Math.max(longestRow, r - rowOffsets[d]);
   }
   return { postOffsets, postDocs, postWeights, maxWeight, rowOffsets, rowTerms, rowWeights, longestRow };
 }

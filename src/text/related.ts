@@ -47,7 +47,7 @@ export function relatingTerms(index: TermIndex): Uint8Array {
   const n = index.docOffsets.length - 1;
   const maxDf = maxRelatingDf(n);
   const mask = new Uint8Array(index.terms.length);
-  for (let t = 0; t < mask.length; t++) mask[t] = index.df[t]! >= 2 && index.df[t]! <= maxDf ? 1 : 0;
+  for (let t = 0; t < mask.length; t++) mask[t] = index.df[t] >= 2 && index.df[t] <= maxDf ? 1 : 0;
   return mask;
 }
 
@@ -101,8 +101,8 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
   // Exact scores are symmetric: what page q's search learnt of page p bounds p's k-th best.
   const known = new KnownScores(n, k);
   let base = 0;
-  const byImpact = (a: number, b: number): number => impact[b]! - impact[a]! || rowTerms[base + a]! - rowTerms[base + b]!;
-  const byBound = (a: number, b: number): number => bound[b]! - bound[a]! || a - b;
+  const byImpact = (a: number, b: number): number => impact[b] - impact[a] || rowTerms[base + a] - rowTerms[base + b];
+  const byBound = (a: number, b: number): number => bound[b] - bound[a] || a - b;
   const out: RelatedList[] = new Array(n);
   let postingsRead = 0;
   let postingsSkipped = 0;
@@ -110,17 +110,17 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
   let entriesScored = 0;
 
   for (let q = 0; q < n; q++) {
-    base = rowOffsets[q]!;
-    const m = rowOffsets[q + 1]! - base;
+    base = rowOffsets[q];
+    const m = rowOffsets[q + 1] - base;
     if (m === 0 || k <= 0) {
       out[q] = { page: q, related: [] };
       continue;
     }
     for (let i = 0; i < m; i++) {
-      const w = rowWeights[base + i]!;
-      impact[i] = w * maxWeight[rowTerms[base + i]!]!;
+      const w = rowWeights[base + i];
+      impact[i] = w * maxWeight[rowTerms[base + i]];
       order[i] = i;
-      qDense[rowTerms[base + i]!] = w;
+      qDense[rowTerms[base + i]] = w;
     }
     const sorted = order.subarray(0, m).sort(byImpact);
     suffixImpact[m] = 0;
@@ -128,17 +128,17 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
     suffixMaxSq[m] = 0;
     suffixPostings[m] = 0;
     for (let i = m - 1; i >= 0; i--) {
-      const e = base + sorted[i]!;
-      const w = rowWeights[e]!;
-      const mw = maxWeight[rowTerms[e]!]!;
-      suffixImpact[i] = suffixImpact[i + 1]! + w * mw;
-      suffixSq[i] = suffixSq[i + 1]! + w * w;
-      suffixMaxSq[i] = suffixMaxSq[i + 1]! + mw * mw;
-      suffixPostings[i] = suffixPostings[i + 1]! + postOffsets[rowTerms[e]! + 1]! - postOffsets[rowTerms[e]!]!;
+      const e = base + sorted[i];
+      const w = rowWeights[e];
+      const mw = maxWeight[rowTerms[e]];
+      suffixImpact[i] = suffixImpact[i + 1] + w * mw;
+      suffixSq[i] = suffixSq[i + 1] + w * w;
+      suffixMaxSq[i] = suffixMaxSq[i + 1] + mw * mw;
+      suffixPostings[i] = suffixPostings[i + 1] + postOffsets[rowTerms[e] + 1] - postOffsets[rowTerms[e]];
     }
     // The most a page not yet touched can collect from terms i.. (slack for summation order).
     const restBound = (i: number): number =>
-      Math.min(suffixImpact[i]!, Math.sqrt(suffixSq[i]! * Math.min(1, suffixMaxSq[i]!))) * (1 + EPS) + EPS;
+      Math.min(suffixImpact[i], Math.sqrt(suffixSq[i] * Math.min(1, suffixMaxSq[i]))) * (1 + EPS) + EPS;
     best.reset();
     let nScored = 0;
     // Exact score: p's relating row against q's dense weights, ascending term order (as brute
@@ -146,9 +146,9 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
     const score = (p: number): void => {
       if (scoredStamp[p] === q) return;
       scoredStamp[p] = q;
-      entriesScored += rowOffsets[p + 1]! - rowOffsets[p]!;
+      entriesScored += rowOffsets[p + 1] - rowOffsets[p];
       let s = 0;
-      for (let e = rowOffsets[p]!; e < rowOffsets[p + 1]!; e++) s += qDense[rowTerms[e]!]! * rowWeights[e]!;
+      for (let e = rowOffsets[p]; e < rowOffsets[p + 1]; e++) s += qDense[rowTerms[e]] * rowWeights[e];
       exact[p] = s;
       scored[nScored++] = p;
       best.add(s);
@@ -158,12 +158,12 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
     // phase 1 stopped before term i.
     const scoringCost = (i: number, count: number, theta: number): number => {
       const rest = restBound(i);
-      const qRest = Math.sqrt(suffixSq[i]!);
+      const qRest = Math.sqrt(suffixSq[i]);
       let cost = 0;
       for (let c = 0; c < count; c++) {
-        const p = touched[c]!;
-        const own = qRest * Math.sqrt(Math.max(0, 1 + NORM_SLACK - accSq[p]!));
-        if (acc[p]! + Math.min(rest, own) >= theta) cost += rowOffsets[p + 1]! - rowOffsets[p]!;
+        const p = touched[c];
+        const own = qRest * Math.sqrt(Math.max(0, 1 + NORM_SLACK - accSq[p]));
+        if (acc[p] + Math.min(rest, own) >= theta) cost += rowOffsets[p + 1] - rowOffsets[p];
       }
       return cost;
     };
@@ -174,9 +174,9 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
     let cutoff = m;
     let refreshedAt = 0;
     for (let i = 0; i < m; i++) {
-      const term = rowTerms[base + sorted[i]!]!;
-      const from = postOffsets[term]!;
-      const to = postOffsets[term + 1]!;
+      const term = rowTerms[base + sorted[i]];
+      const from = postOffsets[term];
+      const to = postOffsets[term + 1];
       if (count >= k && (to - from) * 4 >= count) {
         const rest = restBound(i);
         let theta = lower(count);
@@ -188,18 +188,18 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
         }
         // Untouched pages are out; stop unless reading this posting (which tightens every touched
         // page's bound) costs less than scoring the pages that could still reach theta.
-        if (theta > rest && suffixPostings[i]! * READ_VS_SCORE >= scoringCost(i, count, theta)) {
+        if (theta > rest && suffixPostings[i] * READ_VS_SCORE >= scoringCost(i, count, theta)) {
           cutoff = i;
-          for (let j = i; j < m; j++) postingsSkipped += postOffsets[rowTerms[base + sorted[j]!]! + 1]! - postOffsets[rowTerms[base + sorted[j]!]!]!;
+          for (let j = i; j < m; j++) postingsSkipped += postOffsets[rowTerms[base + sorted[j]] + 1] - postOffsets[rowTerms[base + sorted[j]]];
           break;
         }
       }
-      const w = qDense[term]!;
+      const w = qDense[term];
       postingsRead += to - from;
       for (let a = from; a < to; a++) {
-        const p = postDocs[a]!;
+        const p = postDocs[a];
         if (p === q) continue;
-        const pw = postWeights[a]!;
+        const pw = postWeights[a];
         if (stamp[p] !== q) {
           stamp[p] = q;
           acc[p] = 0;
@@ -213,28 +213,28 @@ export function relatedPagesWithStats(index: TermIndex, k: number): RelatedResul
 
     // Upper bounds of the touched pages; score them best first while they can reach theta.
     const rest = restBound(cutoff);
-    const qRest = Math.sqrt(suffixSq[cutoff]!);
+    const qRest = Math.sqrt(suffixSq[cutoff]);
     let theta = lower(count);
     let kept = 0;
     for (let i = 0; i < count; i++) {
-      const p = touched[i]!;
-      const own = qRest * Math.sqrt(Math.max(0, 1 + NORM_SLACK - accSq[p]!)) * (1 + EPS) + EPS;
-      const ub = acc[p]! * (1 + EPS) + EPS + Math.min(rest, own);
+      const p = touched[i];
+      const own = qRest * Math.sqrt(Math.max(0, 1 + NORM_SLACK - accSq[p])) * (1 + EPS) + EPS;
+      const ub = acc[p] * (1 + EPS) + EPS + Math.min(rest, own);
       if (ub < theta) continue;
       bound[p] = ub;
       touched[kept++] = p;
     }
     const candidates = touched.subarray(0, kept).sort(byBound);
     for (let i = 0; i < kept; i++) {
-      const p = candidates[i]!;
-      if (bound[p]! < theta) break;
+      const p = candidates[i];
+      if (bound[p] < theta) break;
       score(p);
       theta = Math.max(theta, best.kth());
     }
     pagesScored += nScored;
     const top = topKByScore(scored, nScored, exact, k);
-    out[q] = { page: q, related: top.map((p) => ({ page: p, similarity: exact[p]! })) };
-    for (let i = 0; i < m; i++) qDense[rowTerms[base + i]!] = 0;
+    out[q] = { page: q, related: top.map((p) => ({ page: p, similarity: exact[p] })) };
+    for (let i = 0; i < m; i++) qDense[rowTerms[base + i]] = 0;
   }
   return { lists: out, postingsRead, postingsSkipped, pagesScored, entriesScored };
 }

@@ -48,10 +48,10 @@ export class WordTable {
     const n = end - start;
     let slot = h & this.mask;
     for (;;) {
-      const k = this.slots[slot]!;
+      const k = this.slots[slot];
       if (k < 0) break;
       if (this.hashes[slot] === h) {
-        const key = this.keys[k]!;
+        const key = this.keys[k];
         if (key.length === n) {
           let same = true;
           for (let j = 0; j < n; j++) {
@@ -60,7 +60,7 @@ export class WordTable {
               break;
             }
           }
-          if (same) return this.values[k]!;
+          if (same) return this.values[k];
         }
       }
       slot = (slot + 1) & this.mask;
@@ -82,12 +82,12 @@ export class WordTable {
     const hashes = new Int32Array(size);
     const mask = size - 1;
     for (let s = 0; s <= this.mask; s++) {
-      const k = this.slots[s]!;
+      const k = this.slots[s];
       if (k < 0) continue;
-      let slot = this.hashes[s]! & mask;
-      while (slots[slot]! >= 0) slot = (slot + 1) & mask;
+      let slot = this.hashes[s] & mask;
+      while (slots[slot] >= 0) slot = (slot + 1) & mask;
       slots[slot] = k;
-      hashes[slot] = this.hashes[s]!;
+      hashes[slot] = this.hashes[s];
     }
     this.slots = slots;
     this.hashes = hashes;

@@ -96,12 +96,12 @@ export function buildTermIndex(texts: readonly PageText[], cache: StemCache = cr
   const addBody = (id: number): void => add(id, FIELD_BOOSTS.body);
 
   for (let d = 0; d < n; d++) {
-    const text = texts[d]!;
+    const text = texts[d];
     words.scan(text.title, addTitle);
     words.scan(text.headings, addHeading);
     words.scan(text.body, addBody);
     for (const id of touched) {
-      entries.push(id, counts[id]!);
+      entries.push(id, counts[id]);
       counts[id] = 0;
     }
     touched.length = 0;
@@ -110,29 +110,29 @@ export function buildTermIndex(texts: readonly PageText[], cache: StemCache = cr
 
   // Final term ids: stems in code-unit order.
   const t = stems.length;
-  const byStem = Array.from({ length: t }, (_, i) => i).sort((a, b) => (stems[a]! < stems[b]! ? -1 : stems[a]! > stems[b]! ? 1 : 0));
+  const byStem = Array.from({ length: t }, (_, i) => i).sort((a, b) => (stems[a] < stems[b] ? -1 : stems[a] > stems[b] ? 1 : 0));
   const finalId = new Int32Array(t);
   const terms: string[] = new Array(t);
   for (let i = 0; i < t; i++) {
-    finalId[byStem[i]!] = i;
-    terms[i] = stems[byStem[i]!]!;
+    finalId[byStem[i]] = i;
+    terms[i] = stems[byStem[i]];
   }
 
   const nnz = entries.length;
   const entryTerm = entries.terms;
-  for (let e = 0; e < nnz; e++) entryTerm[e] = finalId[entryTerm[e]!]!;
+  for (let e = 0; e < nnz; e++) entryTerm[e] = finalId[entryTerm[e]];
   const df = new Int32Array(t);
-  for (let e = 0; e < nnz; e++) df[entryTerm[e]!]! += 1;
+  for (let e = 0; e < nnz; e++) df[entryTerm[e]] += 1;
   const idf = new Float64Array(t);
-  for (let i = 0; i < t; i++) idf[i] = inverseDocumentFrequency(n, df[i]!);
-  const weightOf = (e: number): number => termFrequency(entries.counts[e]!) * idf[entryTerm[e]!]!;
+  for (let i = 0; i < t; i++) idf[i] = inverseDocumentFrequency(n, df[i]);
+  const weightOf = (e: number): number => termFrequency(entries.counts[e]) * idf[entryTerm[e]];
 
   // Each page's norm; the weight of an entry is computed again where it is stored (cheaper in
   // memory than keeping a weight per entry, and the same double each time).
   const scales = new Float64Array(n);
   let start = 0;
   for (let d = 0; d < n; d++) {
-    const end = rowEnds[d]!;
+    const end = rowEnds[d];
     let norm = 0;
     for (let e = start; e < end; e++) {
       const w = weightOf(e);
@@ -145,32 +145,32 @@ export function buildTermIndex(texts: readonly PageText[], cache: StemCache = cr
   // A counting sort by term (stable, so pages stay in ascending order within a term), then the
   // entries dealt back to their rows in term order: every row ends up sorted by term id, O(nnz).
   const termStart = new Int32Array(t + 1);
-  for (let i = 0; i < t; i++) termStart[i + 1] = termStart[i]! + df[i]!;
+  for (let i = 0; i < t; i++) termStart[i + 1] = termStart[i] + df[i];
   const cursor = termStart.slice(0, t);
   const byTerm = new Int32Array(nnz);
   for (let e = 0; e < nnz; e++) {
-    const term = entryTerm[e]!;
-    byTerm[cursor[term]!] = e;
-    cursor[term] = cursor[term]! + 1;
+    const term = entryTerm[e];
+    byTerm[cursor[term]] = e;
+    cursor[term] = cursor[term] + 1;
   }
   const docOffsets = new Int32Array(n + 1);
-  for (let d = 0; d < n; d++) docOffsets[d + 1] = rowEnds[d]!;
+  for (let d = 0; d < n; d++) docOffsets[d + 1] = rowEnds[d];
   const rowOf = new Int32Array(nnz);
   start = 0;
   for (let d = 0; d < n; d++) {
-    for (let e = start; e < rowEnds[d]!; e++) rowOf[e] = d;
-    start = rowEnds[d]!;
+    for (let e = start; e < rowEnds[d]; e++) rowOf[e] = d;
+    start = rowEnds[d];
   }
   const rowCursor = docOffsets.slice(0, n);
   const docTerms = new Int32Array(nnz);
   const docWeights = new Float32Array(nnz);
   for (let at = 0; at < nnz; at++) {
-    const e = byTerm[at]!;
-    const d = rowOf[e]!;
-    const slot = rowCursor[d]!;
+    const e = byTerm[at];
+    const d = rowOf[e];
+    const slot = rowCursor[d];
     rowCursor[d] = slot + 1;
-    docTerms[slot] = entryTerm[e]!;
-    docWeights[slot] = weightOf(e) * scales[d]!;
+    docTerms[slot] = entryTerm[e];
+    docWeights[slot] = weightOf(e) * scales[d];
   }
   return { terms, df, docOffsets, docTerms, docWeights };
 }
@@ -180,16 +180,16 @@ export function buildTermIndex(texts: readonly PageText[], cache: StemCache = cr
  * the dot product). Used for checks and explanations; relatedness uses {@link relatedPages}.
  */
 export function cosine(index: TermIndex, a: number, b: number): number {
-  let i = index.docOffsets[a]!;
-  const iEnd = index.docOffsets[a + 1]!;
-  let j = index.docOffsets[b]!;
-  const jEnd = index.docOffsets[b + 1]!;
+  let i = index.docOffsets[a];
+  const iEnd = index.docOffsets[a + 1];
+  let j = index.docOffsets[b];
+  const jEnd = index.docOffsets[b + 1];
   let sum = 0;
   while (i < iEnd && j < jEnd) {
-    const ti = index.docTerms[i]!;
-    const tj = index.docTerms[j]!;
+    const ti = index.docTerms[i];
+    const tj = index.docTerms[j];
     if (ti === tj) {
-      sum += index.docWeights[i]! * index.docWeights[j]!;
+      sum += index.docWeights[i] * index.docWeights[j];
       i++;
       j++;
     } else if (ti < tj) i++;
@@ -204,9 +204,9 @@ export function cosine(index: TermIndex, a: number, b: number): number {
  */
 export function topTerms(index: TermIndex, page: number, count: number): number[] {
   const ids: number[] = [];
-  for (let e = index.docOffsets[page]!; e < index.docOffsets[page + 1]!; e++) ids.push(e);
-  ids.sort((x, y) => index.docWeights[y]! - index.docWeights[x]! || index.docTerms[x]! - index.docTerms[y]!);
-  return ids.slice(0, count).map((e) => index.docTerms[e]!);
+  for (let e = index.docOffsets[page]; e < index.docOffsets[page + 1]; e++) ids.push(e);
+  ids.sort((x, y) => index.docWeights[y] - index.docWeights[x] || index.docTerms[x] - index.docTerms[y]);
+  return ids.slice(0, count).map((e) => index.docTerms[e]);
 }
 
 /**
@@ -220,16 +220,16 @@ export function termLeaders(index: TermIndex, count: number): Int32Array {
   const weights = new Float64Array(t * count).fill(-1);
   const n = index.docOffsets.length - 1;
   for (let d = 0; d < n; d++) {
-    for (let e = index.docOffsets[d]!; e < index.docOffsets[d + 1]!; e++) {
-      const base = index.docTerms[e]! * count;
-      const w = index.docWeights[e]!;
+    for (let e = index.docOffsets[d]; e < index.docOffsets[d + 1]; e++) {
+      const base = index.docTerms[e] * count;
+      const w = index.docWeights[e];
       // pages arrive in ascending id, so an equal weight never displaces an earlier page
       let slot = count;
-      while (slot > 0 && w > weights[base + slot - 1]!) slot--;
+      while (slot > 0 && w > weights[base + slot - 1]) slot--;
       if (slot === count) continue;
       for (let k = count - 1; k > slot; k--) {
-        pages[base + k] = pages[base + k - 1]!;
-        weights[base + k] = weights[base + k - 1]!;
+        pages[base + k] = pages[base + k - 1];
+        weights[base + k] = weights[base + k - 1];
       }
       pages[base + slot] = d;
       weights[base + slot] = w;

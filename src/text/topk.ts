@@ -18,25 +18,25 @@ export function topKByScore(ids: ArrayLike<number>, length: number, score: Array
   if (k <= 0 || length === 0) return [];
   const heap: number[] = [];
   for (let i = 0; i < length; i++) {
-    const id = ids[i]!;
-    const s = score[id]!;
+    const id = ids[i];
+    const s = score[id];
     if (heap.length < k) {
       heap.push(id);
       siftUp(heap, heap.length - 1, score);
-    } else if (worse(score[heap[0]!]!, heap[0]!, s, id)) {
+    } else if (worse(score[heap[0]], heap[0], s, id)) {
       heap[0] = id;
       siftDown(heap, 0, score);
     }
   }
-  return heap.sort((a, b) => score[b]! - score[a]! || a - b);
+  return heap.sort((a, b) => score[b] - score[a] || a - b);
 }
 
 function siftUp(heap: number[], at: number, score: ArrayLike<number>): void {
   let i = at;
   while (i > 0) {
     const parent = (i - 1) >> 1;
-    if (!worse(score[heap[i]!]!, heap[i]!, score[heap[parent]!]!, heap[parent]!)) break;
-    [heap[i], heap[parent]] = [heap[parent]!, heap[i]!];
+    if (!worse(score[heap[i]], heap[i], score[heap[parent]], heap[parent])) break;
+    [heap[i], heap[parent]] = [heap[parent], heap[i]];
     i = parent;
   }
 }
@@ -47,10 +47,10 @@ function siftDown(heap: number[], at: number, score: ArrayLike<number>): void {
     const l = 2 * i + 1;
     const r = l + 1;
     let min = i;
-    if (l < heap.length && worse(score[heap[l]!]!, heap[l]!, score[heap[min]!]!, heap[min]!)) min = l;
-    if (r < heap.length && worse(score[heap[r]!]!, heap[r]!, score[heap[min]!]!, heap[min]!)) min = r;
+    if (l < heap.length && worse(score[heap[l]], heap[l], score[heap[min]], heap[min])) min = l;
+    if (r < heap.length && worse(score[heap[r]], heap[r], score[heap[min]], heap[min])) min = r;
     if (min === i) return;
-    [heap[i], heap[min]] = [heap[min]!, heap[i]!];
+    [heap[i], heap[min]] = [heap[min], heap[i]];
     i = min;
   }
 }
@@ -64,11 +64,11 @@ export function kthLargest(ids: ArrayLike<number>, length: number, score: ArrayL
   if (length < k || k <= 0) return -Infinity;
   let size = 0;
   for (let i = 0; i < length; i++) {
-    const s = score[ids[i]!]!;
+    const s = score[ids[i]];
     if (size < k) minHeapPush(heap, 0, size++, s);
-    else if (s > heap[0]!) minHeapReplaceTop(heap, 0, k, s);
+    else if (s > heap[0]) minHeapReplaceTop(heap, 0, k, s);
   }
-  return heap[0]!;
+  return heap[0];
 }
 
 /** The k-th best of the exact scores met so far for one query (a min-heap of the k best values). */
@@ -87,14 +87,14 @@ export class ExactTopK {
 
   /** The k-th best score so far, or -Infinity while fewer than k were added. */
   kth(): number {
-    return this.size < this.k ? -Infinity : this.heap[0]!;
+    return this.size < this.k ? -Infinity : this.heap[0];
   }
 
   /** Offer one score. */
   add(s: number): void {
     const { heap, k } = this;
     if (this.size < k) minHeapPush(heap, 0, this.size++, s);
-    else if (s > heap[0]!) minHeapReplaceTop(heap, 0, k, s);
+    else if (s > heap[0]) minHeapReplaceTop(heap, 0, k, s);
   }
 }
 
@@ -114,18 +114,18 @@ export class KnownScores {
 
   /** The k-th best known score of `page`, or -Infinity while fewer than k are known. */
   kth(page: number): number {
-    return this.sizes[page]! < this.k ? -Infinity : this.heaps[page * this.k]!;
+    return this.sizes[page] < this.k ? -Infinity : this.heaps[page * this.k];
   }
 
   /** Offer a score of `page` with some other page (offered once per pair and search). */
   offer(page: number, s: number): void {
     const { heaps, k } = this;
     const at = page * k;
-    const size = this.sizes[page]!;
+    const size = this.sizes[page];
     if (size < k) {
       this.sizes[page] = size + 1;
       minHeapPush(heaps, at, size, s);
-    } else if (s > heaps[at]!) minHeapReplaceTop(heaps, at, k, s);
+    } else if (s > heaps[at]) minHeapReplaceTop(heaps, at, k, s);
   }
 }
 
@@ -135,9 +135,9 @@ function minHeapPush(heap: Float64Array, at: number, size: number, s: number): v
   heap[at + j] = s;
   while (j > 0) {
     const p = (j - 1) >> 1;
-    if (heap[at + p]! <= heap[at + j]!) return;
-    const tmp = heap[at + p]!;
-    heap[at + p] = heap[at + j]!;
+    if (heap[at + p] <= heap[at + j]) return;
+    const tmp = heap[at + p];
+    heap[at + p] = heap[at + j];
     heap[at + j] = tmp;
     j = p;
   }
@@ -151,11 +151,11 @@ function minHeapReplaceTop(heap: Float64Array, at: number, k: number, s: number)
     const l = 2 * j + 1;
     const r = l + 1;
     let m = j;
-    if (l < k && heap[at + l]! < heap[at + m]!) m = l;
-    if (r < k && heap[at + r]! < heap[at + m]!) m = r;
+    if (l < k && heap[at + l] < heap[at + m]) m = l;
+    if (r < k && heap[at + r] < heap[at + m]) m = r;
     if (m === j) return;
-    const tmp = heap[at + m]!;
-    heap[at + m] = heap[at + j]!;
+    const tmp = heap[at + m];
+    heap[at + m] = heap[at + j];
     heap[at + j] = tmp;
     j = m;
   }

@@ -51,7 +51,7 @@ export function lineOf(index: LineIndex, offset: number): number {
   let hi = index.count - 1;
   while (lo < hi) {
     const mid = (lo + hi + 1) >>> 1;
-    if (starts[mid]! <= offset) lo = mid;
+    if (starts[mid] <= offset) lo = mid;
     else hi = mid - 1;
   }
   return lo;
@@ -64,7 +64,7 @@ export function lineOf(index: LineIndex, offset: number): number {
  */
 export function positionOf(index: LineIndex, offset: number): { line: number; column: number } {
   const line = lineOf(index, offset);
-  return { line: line + 1, column: offset - index.starts[line]! + 1 };
+  return { line: line + 1, column: offset - index.starts[line] + 1 };
 }
 
 /**
@@ -73,7 +73,7 @@ export function positionOf(index: LineIndex, offset: number): { line: number; co
  * @param line 0-based line number
  */
 export function lineStart(index: LineIndex, line: number): number {
-  return index.starts[Math.min(Math.max(line, 0), index.count - 1)]!;
+  return index.starts[Math.min(Math.max(line, 0), index.count - 1)];
 }
 
 /**
@@ -84,7 +84,7 @@ export function lineStart(index: LineIndex, line: number): number {
  */
 export function lineContentEnd(index: LineIndex, text: string, line: number): number {
   if (line + 1 >= index.count) return index.length;
-  let end = index.starts[line + 1]!;
+  let end = index.starts[line + 1];
   if (end > 0 && text.charCodeAt(end - 1) === 10) end--;
   if (end > 0 && text.charCodeAt(end - 1) === 13) end--;
   return end;

@@ -41,8 +41,8 @@ export function streamFor(seed: number, purpose: number): Random {
 export function shuffle<T>(rnd: Random, items: T[]): T[] {
   for (let i = items.length - 1; i > 0; i--) {
     const j = Math.floor(rnd() * (i + 1));
-    const t = items[i]!;
-    items[i] = items[j]!;
+    const t = items[i];
+    items[i] = items[j];
     items[j] = t;
   }
   return items;

@@ -65,7 +65,7 @@ function findingResult(f: Finding, ruleIndex: number | undefined, baselineState:
 function endOf(line: number, column: number, text: string): { endLine: number; endColumn: number } {
   const parts = text.split(/\r\n|\r|\n/);
   if (parts.length === 1) return { endLine: line, endColumn: column + text.length };
-  return { endLine: line + parts.length - 1, endColumn: parts[parts.length - 1]!.length + 1 };
+  return { endLine: line + parts.length - 1, endColumn: parts[parts.length - 1].length + 1 };
 }
 
 /**

@@ -96,7 +96,7 @@ function groupByFile<T extends { readonly file: string }>(items: readonly T[]): 
   const groups: T[][] = [];
   for (const item of items) {
     const last = groups[groups.length - 1];
-    if (last !== undefined && last[0]!.file === item.file) last.push(item);
+    if (last !== undefined && last[0].file === item.file) last.push(item);
     else groups.push([item]);
   }
   return groups;

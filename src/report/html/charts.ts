@@ -128,8 +128,8 @@ export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], 
     out.push('<desc id="lw-rank-desc">No pages.</desc></svg>');
     return out.join('\n');
   }
-  const lo = Math.floor(Math.log10(ranks[ranks.length - 1]!));
-  let hi = Math.ceil(Math.log10(ranks[0]!));
+  const lo = Math.floor(Math.log10(ranks[ranks.length - 1]));
+  let hi = Math.ceil(Math.log10(ranks[0]));
   if (hi <= lo) hi = lo + 1;
   const y = (r: number): number => base - ((Math.log10(Math.max(r, 10 ** lo)) - lo) / (hi - lo)) * plotH;
   const x = (i: number): number => left + (ranks.length === 1 ? plotW / 2 : (i / (ranks.length - 1)) * plotW);
@@ -146,10 +146,10 @@ export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], 
   const pts: string[] = [];
   for (let c = 0; c < cols; c++) {
     const i = Math.floor((c * ranks.length) / cols);
-    pts.push(`${n1(x(i))},${n1(y(ranks[i]!))}`);
+    pts.push(`${n1(x(i))},${n1(y(ranks[i]))}`);
   }
   const lastX = n1(x(ranks.length - 1));
-  pts.push(`${lastX},${n1(y(ranks[ranks.length - 1]!))}`);
+  pts.push(`${lastX},${n1(y(ranks[ranks.length - 1]))}`);
   out.push(
     `<polygon class="lw-rank-area" points="${n1(left)},${n1(base)} ${pts.join(' ')} ${lastX},${n1(base)}"/>`,
     `<polyline class="lw-rank-line" points="${pts.join(' ')}"/>`,
@@ -163,12 +163,12 @@ export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], 
   }
   // Three pages named along the curve, spread across the chart: the highest, the middle one
   // and the lowest, each above its own point (the list below the chart names the top ten).
-  const order = pages.map((_, i) => i).filter((i) => pages[i]!.rank > 0);
-  order.sort((a, b) => pages[b]!.rank - pages[a]!.rank || a - b);
+  const order = pages.map((_, i) => i).filter((i) => pages[i].rank > 0);
+  order.sort((a, b) => pages[b].rank - pages[a].rank || a - b);
   const marks = [...new Set([0, Math.floor((order.length - 1) / 2), order.length - 1])].slice(0, named);
   const what = ['highest', 'middle', 'lowest'];
   marks.forEach((k, m) => {
-    const p = pages[order[k]!]!;
+    const p = pages[order[k]];
     const px = x(k);
     const py = y(p.rank);
     const anchor = k === 0 ? 'start' : k === order.length - 1 ? 'end' : 'middle';
@@ -195,6 +195,6 @@ export function pagerankSvg(pages: readonly HtmlPage[], top: readonly number[], 
 }
 
 function describeTop(pages: readonly HtmlPage[], top: readonly number[]): string {
-  const names = top.slice(0, 5).map((id) => `${pages[id]!.title || pages[id]!.route} (${formatNumber(pages[id]!.rank)})`);
+  const names = top.slice(0, 5).map((id) => `${pages[id].title || pages[id].route} (${formatNumber(pages[id].rank)})`);
   return `${pages.length} pages. Highest: ${names.join('; ')}.`;
 }

@@ -132,7 +132,7 @@ function depthHistogram(pages: readonly HtmlPage[], maxDepth: number): DepthHist
   let unreachable = 0;
   for (const p of pages) {
     if (p.depth === null) unreachable++;
-    else counts[p.depth]!++;
+    else counts[p.depth]++;
   }
   return { counts, unreachable, maxDepth };
 }
@@ -144,15 +144,15 @@ function depthHistogram(pages: readonly HtmlPage[], maxDepth: number): DepthHist
  */
 export function topPages(pages: readonly HtmlPage[], k: number): number[] {
   const ids = pages.map((_, i) => i);
-  ids.sort((a, b) => pages[b]!.pagerank - pages[a]!.pagerank || a - b);
+  ids.sort((a, b) => pages[b].pagerank - pages[a].pagerank || a - b);
   return ids.slice(0, k);
 }
 
 function deepestPage(pages: readonly HtmlPage[]): number {
   let best = -1;
   for (let i = 0; i < pages.length; i++) {
-    const d = pages[i]!.depth;
-    if (d !== null && (best < 0 || d > pages[best]!.depth!)) best = i;
+    const d = pages[i].depth;
+    if (d !== null && (best < 0 || d > pages[best].depth!)) best = i;
   }
   return best;
 }

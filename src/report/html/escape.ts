@@ -18,7 +18,7 @@ const HTML_ESCAPES: Readonly<Record<string, string>> = {
  * @returns the text with `& < > " '` replaced by character references
  */
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => HTML_ESCAPES[c]!);
+  return text.replace(/[&<>"']/g, (c) => HTML_ESCAPES[c]);
 }
 
 /**

@@ -102,16 +102,16 @@ function pageOverview(pages: readonly LayoutPage[], edges: readonly number[], ma
   // Parent = in-neighbour one click closer with the highest PageRank (ties: lower id).
   const parent = new Int32Array(n).fill(-1);
   for (let e = 0; e < edges.length; e += 3) {
-    const from = edges[e]!;
-    const to = edges[e + 1]!;
+    const from = edges[e];
+    const to = edges[e + 1];
     const df = depth[from];
     const dt = depth[to];
     if (df === null || dt === null || dt === 0 || df !== dt - 1) continue;
-    const cur = parent[to]!;
-    if (cur < 0 || pages[from]!.pagerank > pages[cur]!.pagerank) parent[to] = from;
+    const cur = parent[to];
+    if (cur < 0 || pages[from].pagerank > pages[cur].pagerank) parent[to] = from;
   }
   const unreachable = pages.map((p, i) => (p.depth === null ? i : -1)).filter((i) => i >= 0);
-  unreachable.sort((a, b) => Number(pages[b]!.orphan) - Number(pages[a]!.orphan) || a - b);
+  unreachable.sort((a, b) => Number(pages[b].orphan) - Number(pages[a].orphan) || a - b);
   const { rings, box } = frame(depth, maxDepth, unreachable.length > 0);
   const positions = new Array<number>(2 * n).fill(0);
   radialTree(depth, parent, rings, positions);
@@ -131,17 +131,17 @@ function folderOverview(pages: readonly LayoutPage[], edges: readonly number[], 
   const orphans = new Int32Array(f);
   const minDepth: (number | null)[] = new Array<number | null>(f).fill(null);
   pages.forEach((p, i) => {
-    const k = pageFolder[i]!;
-    count[k]!++;
-    pr[k]! += p.pagerank;
-    if (p.depth === null || p.depth > maxDepth) over[k]!++;
-    if (p.orphan) orphans[k]!++;
-    if (p.depth !== null && (minDepth[k] === null || p.depth < minDepth[k]!)) minDepth[k] = p.depth;
+    const k = pageFolder[i];
+    count[k]++;
+    pr[k] += p.pagerank;
+    if (p.depth === null || p.depth > maxDepth) over[k]++;
+    if (p.orphan) orphans[k]++;
+    if (p.depth !== null && (minDepth[k] === null || p.depth < minDepth[k])) minDepth[k] = p.depth;
   });
   const links = new Map<number, number>();
   for (let e = 0; e < edges.length; e += 3) {
-    const a = pageFolder[edges[e]!]!;
-    const b = pageFolder[edges[e + 1]!]!;
+    const a = pageFolder[edges[e]];
+    const b = pageFolder[edges[e + 1]];
     if (a !== b) links.set(a * f + b, (links.get(a * f + b) ?? 0) + 1);
   }
   const keys = [...links.keys()].sort((a, b) => a - b);
@@ -151,9 +151,9 @@ function folderOverview(pages: readonly LayoutPage[], edges: readonly number[], 
   const parent = new Int32Array(f).fill(-1);
   const best = new Int32Array(f);
   for (let e = 0; e < folderEdges.length; e += 3) {
-    const [a, b, c] = [folderEdges[e]!, folderEdges[e + 1]!, folderEdges[e + 2]!];
-    if (minDepth[a] === null || minDepth[b] === null || minDepth[b] !== minDepth[a]! + 1) continue;
-    if (parent[b]! < 0 || c > best[b]!) {
+    const [a, b, c] = [folderEdges[e], folderEdges[e + 1], folderEdges[e + 2]];
+    if (minDepth[a] === null || minDepth[b] === null || minDepth[b] !== minDepth[a] + 1) continue;
+    if (parent[b] < 0 || c > best[b]) {
       parent[b] = a;
       best[b] = c;
     }
@@ -165,13 +165,13 @@ function folderOverview(pages: readonly LayoutPage[], edges: readonly number[], 
   if (box !== null) gridInBox(unreachable, box, positions);
   const folders: FolderNode[] = names.map((name, i) => ({
     name,
-    pages: count[i]!,
-    pagerank: pr[i]!,
+    pages: count[i],
+    pagerank: pr[i],
     minDepth: minDepth[i] ?? null,
-    overLimit: over[i]!,
-    orphans: orphans[i]!,
-    x: round1(positions[2 * i]!),
-    y: round1(positions[2 * i + 1]!),
+    overLimit: over[i],
+    orphans: orphans[i],
+    x: round1(positions[2 * i]),
+    y: round1(positions[2 * i + 1]),
   }));
   return { kind: 'folders', level, rings, box, folders, pageFolder, edges: folderEdges };
 }
@@ -204,19 +204,19 @@ function frame(depth: readonly (number | null)[], maxDepth: number, withBox: boo
   for (const d of depth) if (d !== null && d > deepest) deepest = d;
   const count = Math.max(deepest, Math.min(maxDepth + 1, deepest + 1));
   const perRing = new Array<number>(count + 1).fill(0);
-  for (const d of depth) if (d !== null) perRing[d]!++;
+  for (const d of depth) if (d !== null) perRing[d]++;
   const radius = OVERVIEW_HEIGHT / 2 - 40;
   const gaps = perRing.map((c, d) => (d === 0 ? 0 : (d === 1 ? 2.5 : 1.5) + Math.sqrt(c)));
   const total = gaps.reduce((a, b) => a + b, 0);
   const radii: number[] = [];
   let sum = 0;
   for (let d = 0; d <= count; d++) {
-    sum += gaps[d]!;
+    sum += gaps[d];
     radii.push((radius * sum) / total);
   }
-  if (perRing[0]! > 1) radii[0] = radii[1]! * 0.35;
-  const half = (d: number): number => (radius * gaps[d]!) / total / 2;
-  const limit = maxDepth + 1 <= count ? radii[maxDepth]! + half(maxDepth + 1) : radii[count]! + half(count);
+  if (perRing[0] > 1) radii[0] = radii[1] * 0.35;
+  const half = (d: number): number => (radius * gaps[d]) / total / 2;
+  const limit = maxDepth + 1 <= count ? radii[maxDepth] + half(maxDepth + 1) : radii[count] + half(count);
   const cx = withBox ? radius + 50 : OVERVIEW_WIDTH / 2;
   const rings: Rings = { cx, cy: OVERVIEW_HEIGHT / 2, radii: radii.map(round1), limit: round1(limit), outer: round1(radius + half(count)) };
   const left = cx + radius + 60;
@@ -235,14 +235,14 @@ function radialTree(depth: readonly (number | null)[], parent: Int32Array, rings
   for (let i = 0; i < n; i++) {
     if (depth[i] === null) continue;
     order.push(i);
-    children[parent[i]! < 0 ? n : parent[i]!]!.push(i);
+    children[parent[i] < 0 ? n : parent[i]].push(i);
   }
   order.sort((a, b) => depth[a]! - depth[b]! || a - b);
   const leaves = new Float64Array(n + 1);
   for (let k = order.length - 1; k >= 0; k--) {
-    const i = order[k]!;
+    const i = order[k];
     let sum = 0;
-    for (const c of children[i]!) sum += leaves[c]!;
+    for (const c of children[i]) sum += leaves[c];
     leaves[i] = Math.max(1, sum);
   }
   const start = new Float64Array(n + 1);
@@ -250,12 +250,12 @@ function radialTree(depth: readonly (number | null)[], parent: Int32Array, rings
   start[n] = -Math.PI / 2;
   span[n] = 2 * Math.PI;
   const assign = (node: number): void => {
-    const kids = children[node]!;
+    const kids = children[node];
     let total = 0;
-    for (const c of kids) total += leaves[c]!;
-    let a = start[node]!;
+    for (const c of kids) total += leaves[c];
+    let a = start[node];
     for (const c of kids) {
-      const share = total > 0 ? (span[node]! * leaves[c]!) / total : 0;
+      const share = total > 0 ? (span[node] * leaves[c]) / total : 0;
       start[c] = a;
       span[c] = share;
       a += share;
@@ -265,7 +265,7 @@ function radialTree(depth: readonly (number | null)[], parent: Int32Array, rings
   for (const i of order) {
     assign(i);
     const r = rings.radii[depth[i]!]!;
-    const angle = start[i]! + span[i]! / 2;
+    const angle = start[i] + span[i] / 2;
     out[2 * i] = rings.cx + r * Math.cos(angle);
     out[2 * i + 1] = rings.cy + r * Math.sin(angle);
   }

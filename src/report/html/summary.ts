@@ -37,30 +37,30 @@ export function selectSummary(full: HtmlData, limits: SummaryLimits, overviewLim
   for (const id of worstPages(pages, limits.worstPages)) keep[id] = 1;
   for (const id of full.topPages) keep[id] = 1;
   if (full.deepestPage >= 0) keep[full.deepestPage] = 1;
-  const byRank = pages.map((_, i) => i).sort((a, b) => pages[b]!.pagerank - pages[a]!.pagerank || a - b);
+  const byRank = pages.map((_, i) => i).sort((a, b) => pages[b].pagerank - pages[a].pagerank || a - b);
   const samples = Math.min(limits.rankSamples, byRank.length);
-  for (let c = 0; c < samples; c++) keep[byRank[Math.floor((c * byRank.length) / samples)]!] = 1;
-  if (byRank.length > 0) keep[byRank[byRank.length - 1]!] = 1;
+  for (let c = 0; c < samples; c++) keep[byRank[Math.floor((c * byRank.length) / samples)]] = 1;
+  if (byRank.length > 0) keep[byRank[byRank.length - 1]] = 1;
 
   const newId = new Int32Array(pages.length).fill(-1);
   const kept: HtmlPage[] = [];
   for (let i = 0; i < pages.length; i++) {
     if (keep[i] === 0) continue;
     newId[i] = kept.length;
-    kept.push(pages[i]!);
+    kept.push(pages[i]);
   }
   const edges: number[] = [];
   for (let e = 0; e < full.edges.length; e += 3) {
-    const from = newId[full.edges[e]!]!;
-    const to = newId[full.edges[e + 1]!]!;
-    if (from >= 0 && to >= 0) edges.push(from, to, full.edges[e + 2]!);
+    const from = newId[full.edges[e]];
+    const to = newId[full.edges[e + 1]];
+    if (from >= 0 && to >= 0) edges.push(from, to, full.edges[e + 2]);
   }
   return {
     ...full,
     pages: kept,
     edges,
-    topPages: full.topPages.map((id) => newId[id]!),
-    deepestPage: full.deepestPage < 0 ? -1 : newId[full.deepestPage]!,
+    topPages: full.topPages.map((id) => newId[id]),
+    deepestPage: full.deepestPage < 0 ? -1 : newId[full.deepestPage],
     findings,
     suggestions,
     overview: buildOverview(kept, edges, full.maxDepth, overviewLimit),
@@ -77,8 +77,8 @@ function worstPages(pages: readonly HtmlPage[], k: number): number[] {
   const depthKey = (p: HtmlPage): number => (p.depth === null ? Infinity : p.depth);
   const ids = pages.map((_, i) => i);
   ids.sort((a, b) => {
-    const pa = pages[a]!;
-    const pb = pages[b]!;
+    const pa = pages[a];
+    const pb = pages[b];
     return pb.findings - pa.findings || depthKey(pb) - depthKey(pa) || pa.inlinks - pb.inlinks || a - b;
   });
   return ids.slice(0, k);

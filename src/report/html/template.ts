@@ -103,8 +103,8 @@ function toc(data: HtmlData): string {
 
 function stats(data: HtmlData): string {
   const s = data.stats;
-  const deepest = data.deepestPage >= 0 ? data.pages[data.deepestPage]! : null;
-  const deepCount = deepest === null ? 0 : data.histogram.counts[deepest.depth!]!;
+  const deepest = data.deepestPage >= 0 ? data.pages[data.deepestPage] : null;
+  const deepCount = deepest === null ? 0 : data.histogram.counts[deepest.depth!];
   const card = (id: string, label: string, value: string, sub: string, bad: boolean): string =>
     `<div class="lw-stat ${bad ? 'lw-stat-bad' : 'lw-stat-ok'}" id="lw-stat-${id}"><dt>${label}</dt><dd>${value}<span class="lw-sub">${sub}</span><span class="lw-badge">to fix</span></dd></div>`;
   const deepSub = deepest === null
@@ -150,11 +150,11 @@ function pagesSub(pages: number, files: number): string {
  */
 function deepestList(data: HtmlData): string {
   const all = data.pages.map((_, i) => i);
-  const lost = all.filter((i) => data.pages[i]!.depth === null);
-  const over = all.filter((i) => data.pages[i]!.depth !== null && data.pages[i]!.depth! > data.maxDepth);
-  over.sort((a, b) => data.pages[b]!.depth! - data.pages[a]!.depth! || a - b);
+  const lost = all.filter((i) => data.pages[i].depth === null);
+  const over = all.filter((i) => data.pages[i].depth !== null && data.pages[i].depth! > data.maxDepth);
+  over.sort((a, b) => data.pages[b].depth! - data.pages[a].depth! || a - b);
   const item = (i: number): string => {
-    const p = data.pages[i]!;
+    const p = data.pages[i];
     const tag = p.depth === null ? 'unreachable' : `${p.depth} click${p.depth === 1 ? '' : 's'}`;
     return `<li><span class="lw-depth-tag">${tag}</span> ${escapeHtml(shorten(p.title || p.route, 48))} <span class="lw-route lw-mono">${escapeHtml(p.route)}</span></li>`;
   };
@@ -167,15 +167,15 @@ function deepestList(data: HtmlData): string {
       more,
     ].join('\n');
   }
-  const deepest = all.filter((i) => (data.pages[i]!.depth ?? 0) > 0);
-  deepest.sort((a, b) => data.pages[b]!.depth! - data.pages[a]!.depth! || a - b);
+  const deepest = all.filter((i) => (data.pages[i].depth ?? 0) > 0);
+  deepest.sort((a, b) => data.pages[b].depth! - data.pages[a].depth! || a - b);
   if (deepest.length === 0) return '';
   return ['<h3>Deepest pages (all within the limit)</h3>', `<ul class="lw-deep" id="lw-deepest-pages">${deepest.slice(0, 5).map(item).join('')}</ul>`].join('\n');
 }
 
 function rankSection(data: HtmlData): string {
   const items = data.topPages.map((id) => {
-    const p = data.pages[id]!;
+    const p = data.pages[id];
     return `<li><strong>${escapeHtml(shorten(p.title || p.route, 60))}</strong> <span class="lw-route"><span class="lw-mono">${escapeHtml(p.route)}</span> \u00b7 ${formatNumber(p.rank)}</span></li>`;
   });
   return [

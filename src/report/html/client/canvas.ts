@@ -62,14 +62,14 @@ export function shapePath(x: number, y: number, r: number, shape: 'square' | 'tr
 }
 
 function pageShape(i: number): 'square' | 'triangle' | 'circle' {
-  const p = PAGES[i]!;
+  const p = PAGES[i];
   if (p.orphan) return 'square';
   if (p.depth === null) return 'triangle';
   return 'circle';
 }
 
 export function drawPageNode(i: number, x: number, y: number, r: number, emphasis: boolean): void {
-  const p = PAGES[i]!;
+  const p = PAGES[i];
   shapePath(x, y, r, pageShape(i));
   ctx2d.fillStyle = stateColor(pageState(i));
   ctx2d.fill();
@@ -129,8 +129,8 @@ export function tryLines(lines: readonly string[], x: number, y: number, dir: 1 
   font(11);
   const step = 13 * unit;
   const ys = lines.map((_, k) => dir > 0 ? y + k * step : y - (lines.length - 1 - k) * step);
-  for (let k = 0; k < lines.length; k++) if (overlaps(labelBox(lines[k]!, x, ys[k]!, 'center', 11))) return false;
-  for (let k = 0; k < lines.length; k++) label(lines[k]!, x, ys[k]!, 'center', 11);
+  for (let k = 0; k < lines.length; k++) if (overlaps(labelBox(lines[k], x, ys[k], 'center', 11))) return false;
+  for (let k = 0; k < lines.length; k++) label(lines[k], x, ys[k], 'center', 11);
   return true;
 }
 

@@ -31,7 +31,7 @@ export type Edge = readonly [number, number];
 function decodeRows(rows: readonly Cell[][], fields: readonly string[]): Record<string, Cell>[] {
   return rows.map((row) => {
     const o: Record<string, Cell> = {};
-    for (let k = 0; k < fields.length; k++) o[fields[k]!] = row[k] === undefined ? null : row[k]!;
+    for (let k = 0; k < fields.length; k++) o[fields[k]] = row[k] === undefined ? null : row[k];
     return o;
   });
 }
@@ -67,7 +67,7 @@ export const OUT: Edge[][] = [];
 export const IN: Edge[][] = [];
 for (let i = 0; i < N; i++) { OUT.push([]); IN.push([]); }
 for (let e = 0; e < DATA.edges.length; e += 3) {
-  const a = DATA.edges[e]!, b = DATA.edges[e + 1]!, f = DATA.edges[e + 2]!;
-  OUT[a]!.push([b, f]);
-  IN[b]!.push([a, f]);
+  const a = DATA.edges[e], b = DATA.edges[e + 1], f = DATA.edges[e + 2];
+  OUT[a].push([b, f]);
+  IN[b].push([a, f]);
 }

@@ -26,7 +26,7 @@ export function el<K extends keyof HTMLElementTagNameMap>(tag: K, props?: Props 
       if (v === undefined || v === null || v === false) continue;
       if (k === 'text') node.textContent = String(v);
       else if (k === 'cls') node.className = v as string;
-      else if (k === 'on') { const on = v as Readonly<Record<string, (ev: Event) => void>>; for (const ev of Object.keys(on)) node.addEventListener(ev, on[ev]!); }
+      else if (k === 'on') { const on = v as Readonly<Record<string, (ev: Event) => void>>; for (const ev of Object.keys(on)) node.addEventListener(ev, on[ev]); }
       else node.setAttribute(k, v === true ? '' : String(v));
     }
   }

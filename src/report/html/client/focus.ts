@@ -67,14 +67,14 @@ export function drawFocus(id: number, layout: FocusLayout): number[] {
   column(layout.right, 770, 1);
   const leftNotes: string[] = [], rightNotes: string[] = [];
   if (layout.leftMore > 0) leftNotes.push('+ ' + layout.leftMore + ' more in the list');
-  if (PAGES[id]!.nav) leftNotes.push('+ every page, through the navigation');
+  if (PAGES[id].nav) leftNotes.push('+ every page, through the navigation');
   if (layout.rightMore > 0) rightNotes.push('+ ' + layout.rightMore + ' more in the list');
   if (layout.navCount > 0) rightNotes.push('+ the navigation\u2019s ' + plural(layout.navCount, 'link', 'links') + ', on every page');
   leftNotes.forEach((t, k) => { label(t, 230, VH - 14 - 16 * unit * (leftNotes.length - 1 - k), 'center', 11); });
   rightNotes.forEach((t, k) => { label(t, 770, VH - 14 - 16 * unit * (rightNotes.length - 1 - k), 'center', 11); });
   drawPageNode(id, cx, cy, rc, true);
   label(shortText(pageName(id), 40), cx, cy - rc - 24 * unit, 'center', 13, 700);
-  label(PAGES[id]!.route + ' \u00b7 ' + depthText(PAGES[id]!.depth), cx, cy - rc - 9 * unit, 'center', 11);
+  label(PAGES[id].route + ' \u00b7 ' + depthText(PAGES[id].depth), cx, cy - rc - 9 * unit, 'center', 11);
   if (layout.left.length === 0 && layout.right.length === 0) label('No links in or out', cx, cy + rc + 18 * unit, 'center', 12);
   return [id].concat(layout.left.map((it) => it.id), layout.right.map((it) => it.id));
 }
@@ -82,7 +82,7 @@ export function drawFocus(id: number, layout: FocusLayout): number[] {
 /** The canvas's fallback content: the pages (and folders) drawn, as a list. */
 export function fillDrawnList(ids: readonly number[], folders?: FolderOverview['folders']): void {
   const frag = document.createDocumentFragment();
-  for (const i of ids) frag.appendChild(el('li', { text: pageName(i) + ' (' + PAGES[i]!.route + ', ' + depthText(PAGES[i]!.depth) + ')' }));
+  for (const i of ids) frag.appendChild(el('li', { text: pageName(i) + ' (' + PAGES[i].route + ', ' + depthText(PAGES[i].depth) + ')' }));
   if (folders) for (const f of folders) frag.appendChild(el('li', { text: 'folder ' + f.name + ': ' + plural(f.pages, 'page', 'pages') }));
   drawnList.replaceChildren(frag);
 }

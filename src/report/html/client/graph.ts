@@ -21,7 +21,7 @@ const details = byId('lw-details');
 const searchBox = byId<HTMLInputElement>('lw-search');
 const matchList = byId('lw-matches');
 const tip = byId('lw-tip');
-const NAV = PAGES.map((_, i) => i).filter((i) => PAGES[i]!.nav);
+const NAV = PAGES.map((_, i) => i).filter((i) => PAGES[i].nav);
 
 /** A page's neighbours, each side sorted by PageRank, with the link flags by neighbour. */
 interface Neighbours {
@@ -33,9 +33,9 @@ interface Neighbours {
 
 function neighbours(id: number): Neighbours {
   const ins = new Map<number, number>(), outs = new Map<number, number>();
-  for (const pair of IN[id]!) ins.set(pair[0], pair[1]);
-  for (const pair of OUT[id]!) outs.set(pair[0], pair[1]);
-  const byRank = (a: number, b: number): number => PAGES[b]!.pagerank - PAGES[a]!.pagerank || a - b;
+  for (const pair of IN[id]) ins.set(pair[0], pair[1]);
+  for (const pair of OUT[id]) outs.set(pair[0], pair[1]);
+  const byRank = (a: number, b: number): number => PAGES[b].pagerank - PAGES[a].pagerank || a - b;
   return { ins: Array.from(ins.keys()).sort(byRank), outs: Array.from(outs.keys()).sort(byRank), inFlags: ins, outFlags: outs };
 }
 
@@ -77,7 +77,7 @@ function pageList(ids: readonly number[], id: string, note?: (i: number) => stri
 function pathTo(id: number): number[] {
   const path = [id];
   let cur = id;
-  while (PAGES[cur]!.depth !== null && PAGES[cur]!.depth! > 0) {
+  while (PAGES[cur].depth !== null && PAGES[cur].depth! > 0) {
     const up = bfsParent(cur);
     if (up < 0) break;
     path.unshift(up);
@@ -87,7 +87,7 @@ function pathTo(id: number): number[] {
 }
 
 function renderFocusDetails(id: number, layout: ReturnType<typeof focusLayout>): void {
-  const p = PAGES[id]!;
+  const p = PAGES[id];
   const flags: string[] = [];
   if (p.depth === 0) flags.push('entry page');
   if (p.orphan) flags.push('orphan: no page links here');
@@ -122,9 +122,9 @@ function renderOverviewDetails(): void {
   const kids: Node[] = [el('h3', { text: 'Where the site is weak' })];
   const overview = DATA.overview;
   if (overview.kind === 'folders' && graph.folder >= 0) {
-    const f = overview.folders[graph.folder]!;
+    const f = overview.folders[graph.folder];
     const ids = PAGES.map((_, i) => i).filter((i) => overview.pageFolder[i] === graph.folder);
-    ids.sort((a, b) => (PAGES[b]!.depth === null ? 1e9 : PAGES[b]!.depth!) - (PAGES[a]!.depth === null ? 1e9 : PAGES[a]!.depth!) || a - b);
+    ids.sort((a, b) => (PAGES[b].depth === null ? 1e9 : PAGES[b].depth!) - (PAGES[a].depth === null ? 1e9 : PAGES[a].depth!) || a - b);
     kids.push(el('p', { id: 'lw-folder-summary', text: 'Folder ' + f.name + ': ' + plural(f.pages, 'page', 'pages') + ', ' + f.overLimit + ' too deep or unreachable, ' + plural(f.orphans, 'orphan', 'orphans') + '.' }));
     kids.push(...section('Its pages, deepest first', [pageList(ids, 'lw-folder-pages')]));
     details.replaceChildren(...kids);
@@ -132,17 +132,17 @@ function renderOverviewDetails(): void {
   }
   const lost: number[] = [], deep: number[] = [];
   PAGES.forEach((p, i) => { if (p.depth === null) lost.push(i); else if (p.depth > MAX_DEPTH) deep.push(i); });
-  lost.sort((a, b) => Number(PAGES[b]!.orphan) - Number(PAGES[a]!.orphan) || a - b);
-  deep.sort((a, b) => PAGES[b]!.depth! - PAGES[a]!.depth! || a - b);
+  lost.sort((a, b) => Number(PAGES[b].orphan) - Number(PAGES[a].orphan) || a - b);
+  deep.sort((a, b) => PAGES[b].depth! - PAGES[a].depth! || a - b);
   kids.push(el('p', { text: 'Select a page, here or on the graph, to see its links. ' + plural(lost.length, 'page is', 'pages are') + ' unreachable and ' + plural(deep.length, 'page is', 'pages are') + ' deeper than ' + MAX_DEPTH + ' clicks.' }));
-  kids.push(...section('Unreachable (' + lost.length + ')', [pageList(lost, 'lw-lost-list', (i) => PAGES[i]!.orphan ? '(orphan)' : '')]));
+  kids.push(...section('Unreachable (' + lost.length + ')', [pageList(lost, 'lw-lost-list', (i) => PAGES[i].orphan ? '(orphan)' : '')]));
   kids.push(...section('Deeper than the limit (' + deep.length + ')', [pageList(deep, 'lw-deep-list')]));
   if (overview.kind === 'folders') {
     const order = overview.folders.map((_, k) => k);
-    order.sort((a, b) => overview.folders[b]!.overLimit - overview.folders[a]!.overLimit || a - b);
+    order.sort((a, b) => overview.folders[b].overLimit - overview.folders[a].overLimit || a - b);
     const ul = el('ul', { cls: 'lw-nlist', id: 'lw-folder-list' });
     for (const k of order) {
-      const f = overview.folders[k]!;
+      const f = overview.folders[k];
       ul.appendChild(el('li', null, [el('button', { type: 'button', on: { click: () => { selectFolder(k); } } },
         [f.name, el('span', { cls: 'lw-route', text: plural(f.pages, 'page', 'pages') + ', ' + f.overLimit + ' too deep or unreachable' })])]));
     }
@@ -159,7 +159,7 @@ function focusPage(id: number): void {
   draw();
   renderFocusDetails(id, layout);
   byId('lw-graph-mode').textContent = 'Showing ' + pageName(id) + ' with ' + plural(layout.nb.ins.length, 'page', 'pages') + ' linking to it (left) and ' + plural(layout.nb.outs.length, 'page', 'pages') + ' it links to (right). Dashed: template link only; \u21C4: links both ways.';
-  if (history.replaceState) history.replaceState(null, '', '#page=' + encodeURIComponent(PAGES[id]!.route));
+  if (history.replaceState) history.replaceState(null, '', '#page=' + encodeURIComponent(PAGES[id].route));
 }
 
 function selectFolder(k: number): void {
@@ -192,14 +192,14 @@ function findMatches(query: string): number[] {
     else if (route.indexOf(q) >= 0 || title.indexOf(q) >= 0) score = 3;
     if (score >= 0) scored.push([score, i]);
   });
-  scored.sort((a, b) => a[0] - b[0] || PAGES[b[1]]!.pagerank - PAGES[a[1]]!.pagerank || a[1] - b[1]);
+  scored.sort((a, b) => a[0] - b[0] || PAGES[b[1]].pagerank - PAGES[a[1]].pagerank || a[1] - b[1]);
   return scored.slice(0, 8).map((s) => s[1]);
 }
 
 function updateMatches(): number[] {
   const found = findMatches(searchBox.value);
-  const items: HTMLLIElement[] = found.map((i) => el('li', null, [el('button', { type: 'button', 'data-route': PAGES[i]!.route, on: { click: () => { focusPage(i); } } },
-    [shortText(pageName(i), 50), el('span', { cls: 'lw-route', text: PAGES[i]!.route })])]));
+  const items: HTMLLIElement[] = found.map((i) => el('li', null, [el('button', { type: 'button', 'data-route': PAGES[i].route, on: { click: () => { focusPage(i); } } },
+    [shortText(pageName(i), 50), el('span', { cls: 'lw-route', text: PAGES[i].route })])]));
   if (searchBox.value.trim() && found.length === 0) items.push(el('li', { cls: 'lw-hint', text: 'No page matches.' }));
   matchList.replaceChildren(...items);
   return found;
@@ -223,7 +223,7 @@ export function startGraph(): void {
     if (ev.key === 'Enter') {
       ev.preventDefault();
       const found = updateMatches();
-      if (found.length > 0) focusPage(found[0]!);
+      if (found.length > 0) focusPage(found[0]);
     } else if (ev.key === 'Escape') {
       searchBox.value = '';
       updateMatches();
@@ -237,10 +237,10 @@ export function startGraph(): void {
     canvas.style.cursor = h ? 'pointer' : 'default';
     if (!h) { tip.hidden = true; return; }
     if (h.kind === 'page') {
-      const p = PAGES[h.id]!;
+      const p = PAGES[h.id];
       tip.textContent = pageName(h.id) + '\n' + p.route + '\n' + depthText(p.depth) + ' \u00b7 PageRank ' + fmt(p.rank) + '\n' + p.inlinks + ' in, ' + p.outlinks + ' out' + (p.orphan ? ' \u00b7 orphan' : '');
     } else if (DATA.overview.kind === 'folders') {
-      const f = DATA.overview.folders[h.id]!;
+      const f = DATA.overview.folders[h.id];
       tip.textContent = 'Folder ' + f.name + '\n' + plural(f.pages, 'page', 'pages') + ', ' + f.overLimit + ' too deep or unreachable\nshallowest: ' + depthText(f.minDepth);
     }
     const box = (canvas.parentNode as HTMLElement).getBoundingClientRect();

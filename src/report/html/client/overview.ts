@@ -22,7 +22,7 @@ function drawRings(rings: Rings): void {
   }
   for (let d = 1; d <= count; d++) {
     ctx2d.beginPath();
-    ctx2d.arc(rings.cx, rings.cy, rings.radii[d]!, 0, Math.PI * 2);
+    ctx2d.arc(rings.cx, rings.cy, rings.radii[d], 0, Math.PI * 2);
     ctx2d.lineWidth = 1 * unit;
     ctx2d.strokeStyle = '#e3e6ec';
     ctx2d.stroke();
@@ -48,11 +48,11 @@ function drawRingLabels(rings: Rings): void {
       const x = rings.cx + Math.cos(a) * radius, y = rings.cy + Math.sin(a) * radius;
       if (tryLabel(text, x, y, 'center', px, weight)) return;
     }
-    const a = Math.PI * order[0]!;
+    const a = Math.PI * order[0];
     label(text, rings.cx + Math.cos(a) * radius, rings.cy + Math.sin(a) * radius, 'center', px, weight);
   };
   onRing('limit: ' + plural(MAX_DEPTH, 'click', 'clicks'), rings.limit, 11, 650, [0.25, 0.3, 0.2, 0.35, 0.15, 0.4, 0.1]);
-  for (let d = 1; d < rings.radii.length; d++) onRing(plural(d, 'click', 'clicks'), rings.radii[d]!, 10.5, 400, spots);
+  for (let d = 1; d < rings.radii.length; d++) onRing(plural(d, 'click', 'clicks'), rings.radii[d], 10.5, 400, spots);
 }
 
 function drawBox(box: Box | null, caption: string): void {
@@ -81,32 +81,32 @@ export function drawPagesOverview(o: PageOverview): number[] {
   drawBox(o.box, 'Not reachable from the entry page (' + unreachable + ')');
   ctx2d.lineWidth = 0.8 * unit;
   for (let e = 0; e < DATA.edges.length; e += 3) {
-    const a = DATA.edges[e]!, b = DATA.edges[e + 1]!, f = DATA.edges[e + 2]!;
+    const a = DATA.edges[e], b = DATA.edges[e + 1], f = DATA.edges[e + 2];
     ctx2d.strokeStyle = (f & 1) ? 'rgba(60,72,96,0.20)' : 'rgba(60,72,96,0.07)';
     ctx2d.beginPath();
-    ctx2d.moveTo(pos[2 * a]!, pos[2 * a + 1]!);
-    ctx2d.lineTo(pos[2 * b]!, pos[2 * b + 1]!);
+    ctx2d.moveTo(pos[2 * a], pos[2 * a + 1]);
+    ctx2d.lineTo(pos[2 * b], pos[2 * b + 1]);
     ctx2d.stroke();
   }
   const order = PAGES.map((_, i) => i);
-  order.sort((a, b) => PAGES[a]!.pagerank - PAGES[b]!.pagerank || b - a);
-  const radius = (i: number): number => (PAGES[i]!.depth === null ? Math.max(6, nodeRadius()) : nodeRadius()) * unit;
-  for (const i of order) drawPageNode(i, pos[2 * i]!, pos[2 * i + 1]!, radius(i), false);
+  order.sort((a, b) => PAGES[a].pagerank - PAGES[b].pagerank || b - a);
+  const radius = (i: number): number => (PAGES[i].depth === null ? Math.max(6, nodeRadius()) : nodeRadius()) * unit;
+  for (const i of order) drawPageNode(i, pos[2 * i], pos[2 * i + 1], radius(i), false);
   // Names where they fit: unreachable pages first (they are few and need reading), then the
   // entry pages, then the pages deeper than the limit, then the others by PageRank; a name that would overlap another is left out.
   const named = PAGES.map((_, i) => i);
-  const prio = (i: number): number => { const d = PAGES[i]!.depth; return d === null ? 0 : d === 0 ? 1 : d > MAX_DEPTH ? 2 : 3; };
-  named.sort((a, b) => prio(a) - prio(b) || PAGES[b]!.pagerank - PAGES[a]!.pagerank || a - b);
+  const prio = (i: number): number => { const d = PAGES[i].depth; return d === null ? 0 : d === 0 ? 1 : d > MAX_DEPTH ? 2 : 3; };
+  named.sort((a, b) => prio(a) - prio(b) || PAGES[b].pagerank - PAGES[a].pagerank || a - b);
   let ringsNamed = false;
   for (const i of named) {
     // The ring names go in after the names of the pages with a problem, before the others.
     if (!ringsNamed && prio(i) > 2) { drawRingLabels(o.rings); ringsNamed = true; }
     const r = radius(i);
-    const x = pos[2 * i]!, y = pos[2 * i + 1]!;
-    if (PAGES[i]!.depth === null) {
+    const x = pos[2 * i], y = pos[2 * i + 1];
+    if (PAGES[i].depth === null) {
       const lines = twoLines(pageName(i), 19);
       if (!tryLines(lines, x, y + r + 9 * unit, 1)) tryLines(lines, x, y - r - 9 * unit, -1);
-    } else if (PAGES[i]!.depth === 0) {
+    } else if (PAGES[i].depth === 0) {
       if (!nameNode(shortText(pageName(i), 24), x, y, r, o.rings.cx, o.rings.cy, 11)) {
         label(shortText(pageName(i), 24), x, y + r + 9 * unit, 'center', 11);
       }
@@ -127,12 +127,12 @@ export function drawFoldersOverview(o: FolderOverview): void {
   // The strongest folder-to-folder links only (at most 3 per folder): all of them would be a hairball.
   const strong: number[] = [];
   for (let e = 0; e < o.edges.length; e += 3) strong.push(e);
-  strong.sort((x, y) => o.edges[y + 2]! - o.edges[x + 2]! || x - y);
+  strong.sort((x, y) => o.edges[y + 2] - o.edges[x + 2] || x - y);
   const keep = strong.slice(0, Math.max(20, 3 * o.folders.length));
-  const most = keep.length ? o.edges[keep[0]! + 2]! : 1;
+  const most = keep.length ? o.edges[keep[0] + 2] : 1;
   for (const e of keep) {
-    const a = o.folders[o.edges[e]!]!, b = o.folders[o.edges[e + 1]!]!;
-    const w = Math.log(1 + o.edges[e + 2]!) / Math.log(1 + most);
+    const a = o.folders[o.edges[e]], b = o.folders[o.edges[e + 1]];
+    const w = Math.log(1 + o.edges[e + 2]) / Math.log(1 + most);
     ctx2d.lineWidth = (0.6 + 3 * w) * unit;
     ctx2d.strokeStyle = 'rgba(60,72,96,' + (0.06 + 0.22 * w).toFixed(3) + ')';
     ctx2d.beginPath();
@@ -141,9 +141,9 @@ export function drawFoldersOverview(o: FolderOverview): void {
     ctx2d.stroke();
   }
   const order = o.folders.map((_, i) => i);
-  order.sort((a, b) => o.folders[a]!.pagerank - o.folders[b]!.pagerank || b - a);
+  order.sort((a, b) => o.folders[a].pagerank - o.folders[b].pagerank || b - a);
   for (const k of order) {
-    const f = o.folders[k]!;
+    const f = o.folders[k];
     const r = folderRadius(f) * unit;
     shapePath(f.x, f.y, r, 'circle');
     ctx2d.fillStyle = f.minDepth === null ? COLORS.lost : COLORS.fine;
@@ -162,7 +162,7 @@ export function drawFoldersOverview(o: FolderOverview): void {
   }
   drawRingLabels(o.rings);
   for (const k of order.slice().reverse()) {
-    const f = o.folders[k]!;
+    const f = o.folders[k];
     const r = folderRadius(f) * unit;
     const text = shortText(f.name, 22) + ' (' + f.pages + ')';
     if (f.minDepth === null) tryLabel(text, f.x, f.y + r + 9 * unit, 'center', 11);

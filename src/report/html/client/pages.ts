@@ -19,7 +19,7 @@ export type PageState = 'fine' | 'over' | 'orphan' | 'lost';
 
 /** A page's problem state, the graph's colour. */
 export function pageState(i: number): PageState {
-  const p = PAGES[i]!;
+  const p = PAGES[i];
   if (p.orphan) return 'orphan';
   if (p.depth === null) return 'lost';
   return p.depth > MAX_DEPTH ? 'over' : 'fine';
@@ -29,20 +29,20 @@ export function stateColor(state: PageState): string { return COLORS[state]; }
 
 /** BFS parent of a page: the in-neighbour one click closer with the highest PageRank. */
 export function bfsParent(i: number): number {
-  const d = PAGES[i]!.depth;
+  const d = PAGES[i].depth;
   if (d === null || d === 0) return -1;
   let best = -1;
-  for (const pair of IN[i]!) {
+  for (const pair of IN[i]) {
     const j = pair[0];
-    if (PAGES[j]!.depth === d - 1 && (best < 0 || PAGES[j]!.pagerank > PAGES[best]!.pagerank)) best = j;
+    if (PAGES[j].depth === d - 1 && (best < 0 || PAGES[j].pagerank > PAGES[best].pagerank)) best = j;
   }
   return best;
 }
 
 /** A button naming a page (title and route) that calls back with the page id. */
 export function pageButton(i: number, onPick: (id: number) => void, note?: string): HTMLButtonElement {
-  return el('button', { type: 'button', 'data-route': PAGES[i]!.route, on: { click: () => { onPick(i); } } }, [
+  return el('button', { type: 'button', 'data-route': PAGES[i].route, on: { click: () => { onPick(i); } } }, [
     shortText(pageName(i), 70) + (note ? ' ' + note : ''),
-    el('span', { cls: 'lw-route', text: PAGES[i]!.route + ' \u00b7 ' + depthText(PAGES[i]!.depth) }),
+    el('span', { cls: 'lw-route', text: PAGES[i].route + ' \u00b7 ' + depthText(PAGES[i].depth) }),
   ]);
 }

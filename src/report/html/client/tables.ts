@@ -71,7 +71,7 @@ function makeTable<R>(spec: TableSpec<R>): { render: () => void; state: TableSta
   const table = byId<HTMLTableElement>('lw-' + id + '-table');
   const shown = byId('lw-' + id + '-shown');
   const more = byId('lw-' + id + '-more');
-  const tbody = table.tBodies[0]!;
+  const tbody = table.tBodies[0];
   const rows = spec.rows.map((row, index) => ({ row, index }));
   const state: TableState = { key: spec.defaultKey || null, dir: spec.defaultDir || 'asc', filters: {}, text: '', all: false };
 
@@ -135,7 +135,7 @@ function makeTable<R>(spec: TableSpec<R>): { render: () => void; state: TableSta
     const limit = state.all ? list.length : Math.min(list.length, PAGE_ROWS);
     const frag = document.createDocumentFragment();
     for (let k = 0; k < limit; k++) {
-      const r = list[k]!;
+      const r = list[k];
       const tr = el('tr', { 'data-index': r.index });
       for (const col of spec.columns) {
         const td = el('td', { cls: col.numeric ? 'lw-num' : col.cls || null });

@@ -29,4 +29,4 @@ export function shortText(s: string, max: number): string {
   return chars.length <= max ? s : chars.slice(0, max - 1).join('') + '\u2026';
 }
 
-export function pageName(i: number): string { return PAGES[i]!.title || PAGES[i]!.route; }
+export function pageName(i: number): string { return PAGES[i].title || PAGES[i].route; }
