@@ -25,7 +25,9 @@
 import type { PageFacts, RawLink, ResolvedLink, SiteGraph } from '../types.js';
 import { shuffle, streamFor } from './prng.js';
 import type { HeldOutLink, HeldOutPair } from './types.js';
-import { lineStarts, linkTextRange, positionOf, withCodeSpans, withoutWords, withSpans } from './unlink.js';
+import { buildLineIndex, positionOf } from '../util/line-index.js';
+import type { LineIndex } from '../util/line-index.js';
+import { linkTextRange, withCodeSpans, withoutWords, withSpans } from './unlink.js';
 import type { TextRange } from './unlink.js';
 
 /** A (source, target) pair of pages with its content links. */
@@ -115,16 +117,16 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
   }
   const facts = [...input.facts];
   const located = new Map<RawLink, TextRange | null>();
-  const startsOf = new Map<number, number[]>();
+  const linesOf = new Map<number, LineIndex>();
   for (const [f, set] of removed) {
     const page = input.facts[f];
     const source = input.sourceText(page.file);
-    const starts = source === undefined ? [] : lineStarts(source);
-    startsOf.set(f, starts);
+    const lines = source === undefined ? null : buildLineIndex(source);
+    if (lines !== null) linesOf.set(f, lines);
     const ranges: TextRange[] = [];
     const codeRanges: TextRange[] = [];
     for (const raw of set) {
-      const range = source === undefined ? null : linkTextRange(source, starts, raw, page.kind);
+      const range = source === undefined || lines === null ? null : linkTextRange(source, lines, raw, page.kind);
       located.set(raw, range);
       if (range !== null) (range.code !== undefined ? codeRanges : ranges).push(range);
     }
@@ -133,19 +135,19 @@ export function removePairs(input: HoldoutInput, pairs: readonly ContentPair[]):
       ...page,
       links: page.links.filter((l) => !set.has(l)),
       text: keep ? page.text : withoutWords(page.text, [...set].map((l) => l.text)),
-      spans: source === undefined || !keep ? page.spans : withSpans(page.spans, source, starts, ranges),
+      spans: source === undefined || lines === null || !keep ? page.spans : withSpans(page.spans, source, lines, ranges),
     };
     // Code the author linked stays code: a place where a link may wrap it again.
-    facts[f] = source === undefined || !keep || codeRanges.length === 0 ? next : { ...next, codeSpans: withCodeSpans(page.codeSpans ?? [], source, starts, codeRanges) };
+    facts[f] = source === undefined || lines === null || !keep || codeRanges.length === 0 ? next : { ...next, codeSpans: withCodeSpans(page.codeSpans ?? [], source, lines, codeRanges) };
   }
   const heldOut = pairs.map((p): HeldOutPair => ({
     source: p.source,
     target: p.target,
     links: p.links.map((l): HeldOutLink => {
       const range = located.get(l.raw) ?? null;
-      const starts = startsOf.get(graph.pages[p.source].factsIndex) ?? [];
+      const lines = linesOf.get(graph.pages[p.source].factsIndex);
       return {
-        textLine: range === null || starts.length === 0 ? l.raw.line : positionOf(starts, range.start).line,
+        textLine: range === null || lines === undefined ? l.raw.line : positionOf(lines, range.start).line,
         line: l.raw.line,
         column: l.raw.column,
         text: l.raw.text,

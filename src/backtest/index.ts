@@ -8,7 +8,7 @@ export type { RunBase } from './run-once.js';
 export { scoreMethod, heldOutByTarget, spread, K_VALUES, LIST_LENGTH } from './metrics.js';
 export type { RankedSource } from './metrics.js';
 export { suggestionLists, similarityLists, randomLists } from './methods.js';
-export { lineStarts, positionOf, linkTextRange, withSpans, withoutWords, removeOnce } from './unlink.js';
+export { linkTextRange, withSpans, withoutWords, removeOnce } from './unlink.js';
 export { mulberry32, streamFor, shuffle } from './prng.js';
 export type { Random } from './prng.js';
 export type * from './types.js';

@@ -5,34 +5,10 @@
  * span where an anchor may be proposed, as if the author had written the words without the
  * link). Pure: works on the decoded source text and the parsed facts only.
  */
-import { codeSpanText, collapseSpace, decodeBasicEntities } from '../parse/index.js';
+import { codeSpanText, htmlFragmentText } from '../parse/index.js';
 import type { CodeSpan, FileKind, PageText, RawLink, TextSpan } from '../types.js';
-
-/** UTF-16 offset of the start of each line (`\n`, `\r\n` and lone `\r` end a line). */
-export function lineStarts(text: string): number[] {
-  const starts = [0];
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
-    if (c === 10) starts.push(i + 1);
-    else if (c === 13) {
-      if (text.charCodeAt(i + 1) === 10) i++;
-      starts.push(i + 1);
-    }
-  }
-  return starts;
-}
-
-/** 1-based line and column (UTF-16 code units) of an offset. */
-export function positionOf(starts: readonly number[], offset: number): { line: number; column: number } {
-  let lo = 0;
-  let hi = starts.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (starts[mid] <= offset) lo = mid;
-    else hi = mid - 1;
-  }
-  return { line: lo + 1, column: offset - starts[lo] + 1 };
-}
+import { lineStart, positionOf } from '../util/line-index.js';
+import type { LineIndex } from '../util/line-index.js';
 
 /** Where a held-out link's words are in the source; `code` (the code as it reads) when they are one inline code span. */
 export interface TextRange {
@@ -52,10 +28,10 @@ const CODE_SPAN = /^(`+)(?!`)[^\r\n]*?[^`\r\n]\1(?!`)/;
  * tags, `code`); links whose text carries other markup (`[**x**](y)`), link patterns and empty
  * texts give null.
  */
-export function linkTextRange(source: string, starts: readonly number[], raw: RawLink, kind: FileKind): TextRange | null {
+export function linkTextRange(source: string, lines: LineIndex, raw: RawLink, kind: FileKind): TextRange | null {
   if (raw.origin === 'pattern' || raw.origin === 'navigation' || raw.text.trim() === '') return null;
-  if (raw.line < 1 || raw.line > starts.length || raw.column < 1) return null;
-  const at = starts[raw.line - 1] + raw.column - 1;
+  if (raw.line < 1 || raw.line > lines.count || raw.column < 1) return null;
+  const at = lineStart(lines, raw.line - 1) + raw.column - 1;
   if (at >= source.length) return null;
   let start = -1;
   if (source[at] === '[' && kind === 'markdown') start = at + 1;
@@ -74,7 +50,7 @@ export function linkTextRange(source: string, starts: readonly number[], raw: Ra
     if (close < 0) return null;
     const end = close + '</code>'.length;
     if (!/^\s*<\/a>/i.test(source.slice(end, end + 40)) || /[\r\n]/.test(source.slice(start, end))) return null;
-    if (collapseSpace(decodeBasicEntities(source.slice(start, end).replace(/<[^>]*>/g, ''))) !== raw.text) return null;
+    if (htmlFragmentText(source.slice(start, end)) !== raw.text) return null;
     return { start, end, code: raw.text };
   }
   if (!source.startsWith(raw.text, start)) return null;
@@ -82,9 +58,9 @@ export function linkTextRange(source: string, starts: readonly number[], raw: Ra
 }
 
 /** `codeSpans` with a code span for each range added, in offset order. */
-export function withCodeSpans(codeSpans: readonly CodeSpan[], source: string, starts: readonly number[], ranges: readonly TextRange[]): CodeSpan[] {
+export function withCodeSpans(codeSpans: readonly CodeSpan[], source: string, lines: LineIndex, ranges: readonly TextRange[]): CodeSpan[] {
   const out = [...codeSpans];
-  for (const r of ranges) out.push({ text: source.slice(r.start, r.end), code: r.code ?? '', offset: r.start, endOffset: r.end, ...positionOf(starts, r.start) });
+  for (const r of ranges) out.push({ text: source.slice(r.start, r.end), code: r.code ?? '', offset: r.start, endOffset: r.end, ...positionOf(lines, r.start) });
   return out.sort((a, b) => a.offset - b.offset);
 }
 
@@ -92,12 +68,12 @@ export function withCodeSpans(codeSpans: readonly CodeSpan[], source: string, st
  * `spans` with a span for each range added, in offset order. A range that overlaps an existing
  * span is left out (the parse stage never puts link text in a span, so this is only a guard).
  */
-export function withSpans(spans: readonly TextSpan[], source: string, starts: readonly number[], ranges: readonly { start: number; end: number }[]): TextSpan[] {
+export function withSpans(spans: readonly TextSpan[], source: string, lines: LineIndex, ranges: readonly { start: number; end: number }[]): TextSpan[] {
   const out = [...spans];
   for (const r of ranges) {
     const overlaps = out.some((s) => r.start < s.offset + s.text.length && s.offset < r.end);
     if (overlaps) continue;
-    const { line, column } = positionOf(starts, r.start);
+    const { line, column } = positionOf(lines, r.start);
     out.push({ text: source.slice(r.start, r.end), offset: r.start, line, column });
   }
   return out.sort((a, b) => a.offset - b.offset);

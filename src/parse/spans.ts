@@ -176,28 +176,6 @@ export function codeSpanText(span: string): string {
   return collapseSpace(inner);
 }
 
-const ENTITIES: Readonly<Record<string, string>> = { amp: '&', lt: '<', gt: '>', quot: '"', apos: "'", nbsp: '\u00a0' };
-
-/** HTML text with the common named entities and numeric references decoded (others are left as written). */
-export function decodeBasicEntities(text: string): string {
-  return text.replace(/&(#x[0-9a-f]+|#[0-9]+|[a-z]+);/gi, (m, e: string) => {
-    if (e[0] === '#') {
-      const n = e[1] === 'x' || e[1] === 'X' ? parseInt(e.slice(2), 16) : parseInt(e.slice(1), 10);
-      return Number.isFinite(n) && n <= 0x10ffff ? String.fromCodePoint(n) : m;
-    }
-    return ENTITIES[e.toLowerCase()] ?? m;
-  });
-}
-
-/**
- * An anchor as a reader sees it: an HTML `<code>` element (an anchor `apply` wraps whole) as its
- * code between backticks, like a Markdown code span; any other anchor as written.
- */
-export function anchorForReading(anchor: string): string {
-  if (!/^<code[\s>]/i.test(anchor)) return anchor;
-  return `\`${collapseSpace(decodeBasicEntities(anchor.replace(/<[^>]*>/g, '')))}\``;
-}
-
 /** True when a link's visible text is its own address (an autolink): such text is no prose. */
 export function looksLikeUrl(text: string, href: string): boolean {
   const t = text.trim();

@@ -15,7 +15,8 @@ export type { RelatedMemo } from '../types.js';
 export function relatedKey(index: TermIndex, k: number): string {
   const hash = createHash('sha256');
   hash.update(`related\nk=${k}\n${index.terms.length}\n`);
-  for (const term of index.terms) hash.update(`${term}\n`);
+  hash.update(index.terms.join('\n')); // all terms in one update, not one call per term
+  hash.update('\n');
   for (const array of [index.df, index.docOffsets, index.docTerms, index.docWeights]) {
     hash.update(`${array.length}\n`);
     hash.update(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));

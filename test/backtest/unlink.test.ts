@@ -3,7 +3,8 @@
  * (`--keep-link-text`), or taken out of the page's text. Facts come from the real parse stage.
  */
 import { describe, expect, it } from 'vitest';
-import { holdOut, lineStarts, linkTextRange, positionOf, removeOnce, withoutWords, withSpans } from '../../src/backtest/index.js';
+import { holdOut, linkTextRange, removeOnce, withoutWords, withSpans } from '../../src/backtest/index.js';
+import { buildLineIndex, positionOf } from '../../src/util/line-index.js';
 import { buildGraph } from '../../src/graph/index.js';
 import { resolveOptions } from '../../src/config/options.js';
 import { parseSource } from '../../src/parse/index.js';
@@ -18,9 +19,10 @@ function source(path: string, text: string): SourceFile {
 
 describe('line positions', () => {
   it('finds line starts after LF, CRLF and lone CR', () => {
-    expect(lineStarts('a\nb\r\nc\rd')).toEqual([0, 2, 5, 7]);
-    expect(positionOf([0, 2, 5, 7], 6)).toEqual({ line: 3, column: 2 });
-    expect(positionOf([0, 2, 5, 7], 0)).toEqual({ line: 1, column: 1 });
+    const lines = buildLineIndex('a\nb\r\nc\rd');
+    expect([...lines.starts]).toEqual([0, 2, 5, 7]);
+    expect(positionOf(lines, 6)).toEqual({ line: 3, column: 2 });
+    expect(positionOf(lines, 0)).toEqual({ line: 1, column: 1 });
   });
 });
 
@@ -29,12 +31,12 @@ describe('linkTextRange', () => {
     const md = 'Intro line.\r\nSee the [Install guide](install.md) now.\r\n';
     const facts = parseSource(source('a.md', md), options);
     const raw = facts.links[0]!;
-    const r = linkTextRange(md, lineStarts(md), raw, 'markdown')!;
+    const r = linkTextRange(md, buildLineIndex(md), raw, 'markdown')!;
     expect(md.slice(r.start, r.end)).toBe('Install guide');
 
     const html = '<html><body><p>Read <a class="x" href="b.html">the manual</a> first.</p></body></html>';
     const hf = parseSource(source('a.html', html), options);
-    const hr = linkTextRange(html, lineStarts(html), hf.links[0]!, 'html')!;
+    const hr = linkTextRange(html, buildLineIndex(html), hf.links[0]!, 'html')!;
     expect(html.slice(hr.start, hr.end)).toBe('the manual');
   });
 
@@ -42,8 +44,8 @@ describe('linkTextRange', () => {
     const md = 'Go [**bold** words](b.md).\n';
     const facts = parseSource(source('a.md', md), options);
     expect(facts.links[0]!.text).toBe('bold words');
-    expect(linkTextRange(md, lineStarts(md), facts.links[0]!, 'markdown')).toBeNull();
-    expect(linkTextRange(md, lineStarts(md), { ...facts.links[0]!, origin: 'pattern' }, 'markdown')).toBeNull();
+    expect(linkTextRange(md, buildLineIndex(md), facts.links[0]!, 'markdown')).toBeNull();
+    expect(linkTextRange(md, buildLineIndex(md), { ...facts.links[0]!, origin: 'pattern' }, 'markdown')).toBeNull();
   });
 });
 
@@ -51,7 +53,7 @@ describe('withSpans', () => {
   it('adds spans in offset order with text equal to the source slice and leaves out overlapping ranges', () => {
     const src = 'alpha beta gamma delta';
     const spans = [{ text: 'alpha ', offset: 0, line: 1, column: 1 }, { text: ' delta', offset: 16, line: 1, column: 17 }];
-    const out = withSpans(spans, src, lineStarts(src), [{ start: 6, end: 10 }, { start: 3, end: 8 }]);
+    const out = withSpans(spans, src, buildLineIndex(src), [{ start: 6, end: 10 }, { start: 3, end: 8 }]);
     expect(out.map((s) => s.text)).toEqual(['alpha ', 'beta', ' delta']);
     for (const s of out) expect(src.slice(s.offset, s.offset + s.text.length)).toBe(s.text);
     expect(out[1]).toMatchObject({ line: 1, column: 7 });

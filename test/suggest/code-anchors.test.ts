@@ -12,7 +12,8 @@ import { analyze, applySuggestions, resolveOptions } from '../../src/index.js';
 import type { Report, Suggestion } from '../../src/index.js';
 import { codeSpanText, parseSource } from '../../src/parse/index.js';
 import { planFile } from '../../src/apply/index.js';
-import { lineStarts, linkTextRange } from '../../src/backtest/unlink.js';
+import { linkTextRange } from '../../src/backtest/unlink.js';
+import { buildLineIndex } from '../../src/util/line-index.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import { md } from '../parse/helpers.js';
 import { buildMentionIndex, headingNames, placementRate } from '../../src/suggest/mentions.js';
@@ -176,7 +177,7 @@ describe('holding out a code link in the backtest', () => {
   it('finds the code span inside the brackets, backticks included', () => {
     const src = '# P\n\nSee [`fs.stat()`](fs.md) and [the **bold** one](x.md) and [plain](y.md).\n';
     const facts = md(src);
-    const starts = lineStarts(src);
+    const starts = buildLineIndex(src);
     const [code, bold, plain] = facts.links;
     expect(linkTextRange(src, starts, code!, 'markdown')).toEqual({ start: 10, end: 21, code: 'fs.stat()' });
     expect(src.slice(10, 21)).toBe('`fs.stat()`');
@@ -274,7 +275,7 @@ describe('holding out an HTML code link in the backtest', () => {
   it('finds the <code> element that fills an HTML link, tags included', () => {
     const src = '<p>See <a href="fs.html"><code class="xref"><span>fs.stat()</span></code></a>, <a href="x.html"><code>x</code>()</a>.</p>\n';
     const facts = parseSource({ path: 'p.html', kind: 'html', bytes: 0, hash: 'h', text: src, problems: [] }, testOptions());
-    const starts = lineStarts(src);
+    const starts = buildLineIndex(src);
     const [code, mixed] = facts.links;
     const range = linkTextRange(src, starts, code!, 'html');
     expect(range && [src.slice(range.start, range.end), range.code]).toEqual(['<code class="xref"><span>fs.stat()</span></code>', 'fs.stat()']);
