@@ -124,5 +124,9 @@ function roundModel(m: LinkModelReport): LinkModelReport {
     means: m.means.map(r),
     scales: m.scales.map(r),
     auc: m.auc === null ? null : r(m.auc),
+    anchorChoice:
+      m.anchorChoice === null
+        ? null
+        : { ...m.anchorChoice, intercept: r(m.anchorChoice.intercept), weights: m.anchorChoice.weights.map(r), means: m.anchorChoice.means.map(r), scales: m.anchorChoice.scales.map(r) },
   };
 }

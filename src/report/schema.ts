@@ -92,6 +92,25 @@ export interface LinkModelReport {
   readonly auc: number | null;
   readonly iterations: number;
   readonly converged: boolean;
+  /**
+   * Which of a pair's mentions becomes the anchor: a second logistic regression, fitted on the
+   * site's content links against the mentions of the same page their authors left unlinked.
+   * Null when the site has too few such pairs (then the fixed order: the phrase's link odds
+   * times its placement's, then the kind of name, the longer phrase, the earlier place).
+   */
+  readonly anchorChoice: AnchorChoiceReport | null;
+}
+
+/** The fitted anchor choice of {@link LinkModelReport}, on the same standardised scale. */
+export interface AnchorChoiceReport {
+  readonly features: readonly string[];
+  readonly intercept: number;
+  readonly weights: readonly number[];
+  readonly means: readonly number[];
+  readonly scales: readonly number[];
+  /** Linked pairs fitted on (each with a mention its author passed over), and their anchor options. */
+  readonly linkedPairs: number;
+  readonly options: number;
 }
 
 /** One page row of the report. */

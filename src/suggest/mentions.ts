@@ -19,11 +19,14 @@
  * number of words times the length of the longest match, never pages times names.
  */
 import type { CodeSpan, PageFacts, SiteGraph } from '../types.js';
-import { tokenize } from '../text/tokenize.js';
+import { forEachWord, tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
 import { positionInSpan, prepareSource } from './anchor.js';
 import type { AnchorMatch, SourceTokens } from './anchor.js';
 import { routeWords } from './names.js';
+import { anchorScore, fitAnchorChoice } from './anchor-choice.js';
+import type { AnchorChoice, AnchorGroup, AnchorOptionFacts } from './anchor-choice.js';
+import { SOURCE_EXTENSION_END } from '../routes/index.js';
 
 /** Where a name comes from. */
 export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text' | 'heading';
@@ -102,6 +105,8 @@ export interface MentionIndex {
   readonly linkMatches: readonly (readonly LinkTextMatch[])[];
   /** How often the site links each placement (which anchor options come first). */
   readonly placement: PlacementHabit;
+  /** The fitted choice among a pair's anchor options, or null (too few links: the fixed order). */
+  readonly anchorChoice: AnchorChoice | null;
 }
 
 /** A phrase found in the text of a content link. */
@@ -136,9 +141,17 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     }
     return id;
   };
-  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1): void => {
+  // Inline code is compared as written (see codeKey): written form -> the phrases of the names
+  // written so.
+  const byCode = new Map<string, number>();
+  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, written: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
-    const phrase = phrases[phraseOf(stems)];
+    const id = phraseOf(stems);
+    const phrase = phrases[id];
+    if (written !== null) {
+      const key = codeKey(written);
+      if (key !== '' && !byCode.has(key)) byCode.set(key, id);
+    }
     let ref = phrase.names.find((r) => r.target === target && r.kind === kind);
     if (ref === undefined) {
       ref = { target, kind, users: kind === 'anchor-text' ? new Map() : null };
@@ -148,22 +161,22 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   };
 
   for (const page of graph.pages) {
-    claim(tokenize(page.title, cache), page.id, 'title');
-    for (const route of [page.route, ...page.meta.aliases]) claim(routeWords(route, cache), page.id, 'alias');
+    claim(tokenize(page.title, cache), page.id, 'title', -1, page.title);
+    for (const route of [page.route, ...page.meta.aliases]) claim(routeWords(route, cache), page.id, 'alias', -1, lastSegment(route));
     for (const h of factsOf(page.id)?.headings ?? []) {
       if (h.depth < 2) continue;
-      for (const name of headingNames(h.text)) claim(tokenize(name, cache), page.id, 'heading');
+      for (const name of headingNames(h.text)) claim(tokenize(name, cache), page.id, 'heading', -1, name);
     }
   }
-  const contentLinks: { from: number; to: number; stems: string[]; line: number; code: boolean }[] = [];
+  const contentLinks: { from: number; to: number; stems: string[]; line: number; column: number; code: boolean; quoted: boolean }[] = [];
   for (const link of graph.links) {
     if (link.from < 0 || link.to < 0 || link.from === link.to) continue;
     const stems = tokenize(link.raw.text, cache);
     if (link.context === 'content') {
-      claim(stems, link.to, 'anchor-text', link.from);
-      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, code: link.raw.code === true });
+      claim(stems, link.to, 'anchor-text', link.from, link.raw.text);
+      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text) });
     } else {
-      claim(stems, link.to, 'label');
+      claim(stems, link.to, 'label', -1, link.raw.text);
     }
   }
   // The trie of unambiguous phrases.
@@ -189,15 +202,25 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   const habit: PlacementHabit = { linked: [0, 0, 0, 0], mentioned: [0, 0, 0, 0] };
   const lines: (LineCounts | null)[] = new Array<LineCounts | null>(n).fill(null);
   const linesOf = (page: number): LineCounts => (lines[page] ??= lineCounts(factsOf(page)));
+  // Per linked pair (source * n + target): its links whose whole text is a phrase.
+  const pairLinks = new Map<number, LinkedOption[]>();
   for (const link of contentLinks) {
     const exact = link.stems.length > 0 && link.stems.length <= MAX_NAME_WORDS ? byKey.get(link.stems.join(' ')) : undefined;
+    const on = linesOf(link.from);
+    const alone = on.markdown && !on.words.has(link.line) && !on.code.has(link.line) && on.links.get(link.line) === 1;
+    const place: Placement = ((link.code ? CODE : 0) | (alone ? ALONE : 0)) as Placement;
     if (exact !== undefined) {
+      const key = link.from * n + link.to;
+      let own = pairLinks.get(key);
+      if (own === undefined) {
+        own = [];
+        pairLinks.set(key, own);
+      }
+      own.push({ phrase: exact, place, line: link.line, column: link.column, words: link.stems.length, quoted: link.quoted });
       const p = phrases[exact];
       p.linked++;
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
-      const on = linesOf(link.from);
-      const alone = on.markdown && !on.words.has(link.line) && !on.code.has(link.line) && on.links.get(link.line) === 1;
-      habit.linked[(link.code ? CODE : 0) | (alone ? ALONE : 0)]++;
+      habit.linked[place]++;
     }
     const joins = link.stems.map(() => true);
     scanStems(link.stems, joins, root, (phraseId, _first, words) => {
@@ -229,7 +252,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     }
     const prose = found.length;
     for (const code of facts.codeSpans ?? []) {
-      const phraseId = wholeMatch(tokenize(code.code, cache), root);
+      const phraseId = codeMatchOf(code.code, byCode, root, cache);
       if (phraseId < 0) continue;
       const alone = on.markdown && !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
       found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId].stems.length) });
@@ -254,9 +277,100 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     }
   }
-  for (const hits of bySource) for (const [t, hit] of hits) rankAnchors(hit, phrases, t, habit);
-  return { phrases, bySource, linkMatches, placement: habit };
+  const choice = orderAnchors(phrases, bySource, pairLinks, habit);
+  return { phrases, bySource, linkMatches, placement: habit, anchorChoice: choice };
 }
+
+/**
+ * Fit the anchor choice on the site's linked pairs (`anchor-choice.ts`) and order every pair's
+ * anchor options by it (by the fixed order alone when there is no fit).
+ * @param pairLinks per linked pair (source * n + target), its links whose whole text is a phrase
+ */
+function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit): AnchorChoice | null {
+  const n = bySource.length;
+  /** An option's facts as if the pair's own links were absent; null when it names the target only through them. */
+  const facts = (s: number, t: number, phraseId: number, place: number, words: number, quoted: boolean, order: number): AnchorOptionFacts | null => {
+    const p = phrases[phraseId];
+    let kind = KIND_ORDER.length;
+    for (const k of nameKindsFor(p, s, t)) kind = Math.min(kind, KIND_ORDER.indexOf(k));
+    if (kind === KIND_ORDER.length) return null;
+    let mine = 0;
+    for (const l of pairLinks.get(s * n + t) ?? []) if (l.phrase === phraseId) mine++;
+    return { linkedToTarget: (p.linkedTo.get(t) ?? 0) - mine, linked: p.linked - mine, total: p.prose + p.linked, placementRate: placementRate(habit, place), kind, place, order, words, quoted };
+  };
+  const quotedCode = (a: AnchorMatch): boolean => a.kind === 'code' && QUOTED.test(a.text);
+
+  // Training: a linked phrase and placement stands where its first occurrence is (an unlinked
+  // one before the link, if any), because a suggestion can only name the first: so the fit
+  // learns which phrase and placement authors link, at the positions it will score.
+  const groups: AnchorGroup[] = [];
+  for (const key of [...pairLinks.keys()].sort((a, b) => a - b)) {
+    const s = Math.floor(key / n);
+    const t = key - s * n;
+    const hit = bySource[s].get(t);
+    const links = pairLinks.get(key) ?? [];
+    const options: { at: { line: number; column: number }; make: (order: number) => AnchorOptionFacts | null; linked: boolean }[] = [];
+    const seen = new Set<number>();
+    for (const l of links) {
+      if (seen.has(l.phrase * 4 + l.place)) continue;
+      seen.add(l.phrase * 4 + l.place);
+      let at: { line: number; column: number } = l;
+      hit?.anchors.forEach((a, k) => {
+        if (hit.anchorPhrases[k] === l.phrase && hit.anchorPlaces[k] === l.place && before(a, at)) at = a;
+      });
+      options.push({ at, make: (order) => facts(s, t, l.phrase, l.place, l.words, l.quoted, order), linked: true });
+    }
+    hit?.anchors.forEach((a, k) => {
+      if (seen.has(hit.anchorPhrases[k] * 4 + hit.anchorPlaces[k])) return;
+      options.push({ at: a, make: (order) => facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), order), linked: false });
+    });
+    const order = ranksInText(options.map((o) => o.at));
+    const made = options.map((o, k) => o.make(order[k]));
+    const keep = made.map((_, k) => k).filter((k) => made[k] !== null);
+    groups.push({ options: keep.map((k) => made[k] as AnchorOptionFacts), linked: keep.map((k) => options[k].linked) });
+  }
+  const choice = fitAnchorChoice(groups);
+  for (let s = 0; s < n; s++) {
+    for (const [t, hit] of bySource[s]) {
+      let scores: number[] | null = null;
+      if (choice !== null) {
+        const order = ranksInText(hit.anchors);
+        scores = hit.anchors.map((a, k) => {
+          const f = facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), order[k]);
+          return f === null ? -Infinity : anchorScore(choice, f);
+        });
+      }
+      rankAnchors(hit, phrases, t, habit, scores);
+    }
+  }
+  return choice;
+}
+
+function before(a: { line: number; column: number }, b: { line: number; column: number }): boolean {
+  return a.line < b.line || (a.line === b.line && a.column < b.column);
+}
+
+/** Each place's rank in the text (0 = first). */
+function ranksInText(at: readonly { line: number; column: number }[]): number[] {
+  const ranks = new Array<number>(at.length);
+  at.map((_, k) => k)
+    .sort((a, b) => at[a].line - at[b].line || at[a].column - at[b].column || a - b)
+    .forEach((k, rank) => (ranks[k] = rank));
+  return ranks;
+}
+
+/** A content link whose whole text is a phrase, as an anchor option of its pair. */
+interface LinkedOption {
+  readonly phrase: number;
+  readonly place: Placement;
+  readonly line: number;
+  readonly column: number;
+  readonly words: number;
+  readonly quoted: boolean;
+}
+
+/** Inline code that is a quoted string: `'stream'`, `"exports"`. */
+const QUOTED = /^[`\s]*['"]/;
 
 const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias', 'heading'];
 /** Added to a phrase's link odds, so that names never written as links still rank by placement. */
@@ -269,13 +383,14 @@ const PHRASE_PRIOR = 0.05;
  * site links ({@link placementRate}); then the kind of name (another page's anchor text, the
  * title, a navigation label, the route's words), then the longer phrase, then the earlier place.
  */
-function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number, habit: PlacementHabit): void {
+function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number, habit: PlacementHabit, scores: readonly number[] | null): void {
   const order = hit.anchors.map((_, k) => k);
   const odds = (k: number): number => {
     const p = phrases[hit.anchorPhrases[k]];
+    const place = hit.anchorPlaces[k];
     const total = p.prose + p.linked;
     const phraseOdds = total === 0 ? 0 : (p.linkedTo.get(target) ?? 0) / total;
-    return (phraseOdds + PHRASE_PRIOR) * placementRate(habit, hit.anchorPlaces[k]);
+    return (phraseOdds + PHRASE_PRIOR) * placementRate(habit, place);
   };
   const kind = (k: number): number => {
     const p = phrases[hit.anchorPhrases[k]];
@@ -283,7 +398,7 @@ function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number
     for (const r of p.names) if (r.target === target) best = Math.min(best, KIND_ORDER.indexOf(r.kind));
     return best;
   };
-  order.sort((a, b) => odds(b) - odds(a) || kind(a) - kind(b) || hit.anchors[b].words - hit.anchors[a].words || hit.anchors[a].offset - hit.anchors[b].offset);
+  order.sort((a, b) => (scores === null ? 0 : scores[b] - scores[a]) || odds(b) - odds(a) || kind(a) - kind(b) || hit.anchors[b].words - hit.anchors[a].words || hit.anchors[a].offset - hit.anchors[b].offset);
   const anchors = order.map((k) => hit.anchors[k]);
   const ids = order.map((k) => hit.anchorPhrases[k]);
   const places = order.map((k) => hit.anchorPlaces[k]);
@@ -316,6 +431,38 @@ function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: 
       i += bestWords;
     } else i++;
   }
+}
+
+/**
+ * An inline code span's words as written: lower-cased word runs, stop words, digits and all
+ * (`http2.get()` -> `http2 get`, `'/p/a/t/h?query=string'` -> `p a t h query string`). Code is a
+ * name only when it is written like one, so its words are not stemmed or dropped; '' past
+ * {@link MAX_NAME_WORDS} words.
+ */
+export function codeKey(text: string): string {
+  const words: string[] = [];
+  forEachWord(text, (raw) => void words.push(raw.toLowerCase()));
+  return words.length > MAX_NAME_WORDS ? '' : words.join(' ');
+}
+
+/**
+ * The phrase a code span names, or -1: a name written the same way, else a name with the same
+ * stems when every word of the code is kept by the tokenizer (so `Streams` names "Stream", but
+ * `'/p/a/t/h?query=string'` does not name "Query string", nor `http.get()` a page called "HTTP").
+ */
+function codeMatchOf(code: string, byCode: ReadonlyMap<string, number>, root: TrieNode, cache: StemCache): number {
+  const stems = tokenize(code, cache);
+  const phrase = wholeMatch(stems, root);
+  if (phrase < 0) return -1;
+  const key = codeKey(code);
+  if (byCode.get(key) === phrase) return phrase;
+  return key !== '' && key.split(' ').length === stems.length ? phrase : -1;
+}
+
+/** The last segment of a route, its separators as spaces (`/api/n-api/` -> `n api`). */
+function lastSegment(route: string): string {
+  const segments = route.split('/').filter((x) => x !== '');
+  return segments.length === 0 ? '' : segments[segments.length - 1].replace(SOURCE_EXTENSION_END, '');
 }
 
 /** The phrase that is a run of stems whole (an inline code span's words), or -1. */

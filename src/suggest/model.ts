@@ -186,6 +186,7 @@ export function fitLinkModel(sample: TrainingSample, featuresOf: (source: number
       auc,
       iterations: model.iterations,
       converged: model.converged,
+      anchorChoice: null,
     },
   };
 }

@@ -7,6 +7,7 @@
  */
 import type { ResolvedOptions } from '../config/options.js';
 import type { LinkModelReport } from '../types.js';
+import { ANCHOR_FEATURES } from './anchor-choice.js';
 import { createStemCache } from '../text/tokenize.js';
 import { termLeaders, topTerms } from '../text/tfidf.js';
 import { findAnchors, prepareSource } from './anchor.js';
@@ -103,7 +104,12 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
       folder: shared === 0 ? '' : `/${ctx.folders[t].slice(0, shared).join('/')}/`,
     };
   };
-  return { chosen, model, modelReport: fitted.report, mentions, evidenceOf, candidatesOf: pool };
+  const choice = mentions.anchorChoice;
+  const anchorChoice =
+    choice === null
+      ? null
+      : { features: [...ANCHOR_FEATURES], intercept: choice.model.intercept, weights: [...choice.model.weights], means: [...choice.model.means], scales: [...choice.model.scales], linkedPairs: choice.groups, options: choice.options };
+  return { chosen, model, modelReport: { ...fitted.report, anchorChoice }, mentions, evidenceOf, candidatesOf: pool };
 }
 
 /**

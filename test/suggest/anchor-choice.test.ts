@@ -1,0 +1,105 @@
+/**
+ * The fitted choice among a pair's anchor options (`src/suggest/anchor-choice.ts`): learned from
+ * the site's own links against the mentions their authors passed over, used to order the options,
+ * and left out below its least number of linked pairs. And inline code named as written.
+ */
+import { describe, expect, it } from 'vitest';
+import { anchorFeatures, ANCHOR_FEATURES, fitAnchorChoice, MIN_ANCHOR_GROUPS } from '../../src/suggest/anchor-choice.js';
+import type { AnchorGroup, AnchorOptionFacts } from '../../src/suggest/anchor-choice.js';
+import { buildMentionIndex, codeKey } from '../../src/suggest/mentions.js';
+import { factsByPage } from '../../src/suggest/facts-of.js';
+import { createStemCache } from '../../src/text/index.js';
+import { markdownPage, siteInput, testOptions } from './helpers.js';
+
+/** Made-up words with distinct stems, none a stop word. */
+const WORDS = Array.from({ length: 60 }, (_, i) => `zor${'bcdfghjklmnpqrstvwxz'[i % 20]}${'aeiou'[Math.floor(i / 20)]}k`);
+
+/**
+ * A site whose authors link a thing by its section name (`<word>Start`, camelCase in prose, a
+ * heading of the target) and pass over the target's title ("Gadget <Word>") written earlier in
+ * the same page; plus a page `fresh` that mentions the title and the section name of a target no
+ * page links yet.
+ */
+function site(linkingPages: number) {
+  const options = testOptions();
+  const words = WORDS.slice(0, linkingPages + 1);
+  const fresh = words[linkingPages];
+  const pages = [
+    markdownPage('index.md', `# Home\n\n${words.map((w) => `- [${w}](g/${w}.md)`).join('\n')}\n- [Fresh](fresh.md)\n${words.slice(0, linkingPages).map((w) => `- [s ${w}](s/${w}.md)`).join('\n')}\n`),
+    ...words.map((w) => markdownPage(`g/${w}.md`, `# Gadget ${w}\n\nWhat it is.\n\n## ${w}Start\n\nHow it starts.\n`)),
+    ...words.slice(0, linkingPages).map((w) => markdownPage(`s/${w}.md`, `# Notes on ${w}\n\nThe Gadget ${w} unit sits on the shelf.\n\nTo begin, call [${w}Start](../g/${w}.md) once.\n`)),
+    markdownPage('fresh.md', `# Fresh\n\nThe Gadget ${fresh} unit sits on the shelf.\n\nTo begin, call ${fresh}Start once.\n`),
+  ];
+  const input = siteInput(pages, options);
+  const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+  const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+  return { index, hit: index.bySource[id('/fresh/')]!.get(id(`/g/${fresh}/`))!, fresh };
+}
+
+describe('the fitted anchor choice', () => {
+  it('learns that this site links the section name, not the title written before it', () => {
+    const { index, hit, fresh } = site(40);
+    expect(index.anchorChoice).not.toBeNull();
+    expect(index.anchorChoice!.groups).toBe(40);
+    const w = (name: (typeof ANCHOR_FEATURES)[number]) => index.anchorChoice!.model.weights[ANCHOR_FEATURES.indexOf(name)];
+    expect(w('heading')).toBeGreaterThan(w('title'));
+    expect(hit.anchors.map((a) => [a.text, a.line])).toEqual([
+      [`${fresh}Start`, 5],
+      [`Gadget ${fresh}`, 3],
+    ]);
+  });
+
+  it(`keeps the fixed order (title before a section name) below ${MIN_ANCHOR_GROUPS} linked pairs`, () => {
+    const { index, hit, fresh } = site(MIN_ANCHOR_GROUPS - 1);
+    expect(index.anchorChoice).toBeNull();
+    expect(hit.anchors.map((a) => a.text)).toEqual([`Gadget ${fresh}`, `${fresh}Start`]);
+  });
+
+  it('skips groups with no passed-over option, and fits the same model from the same groups', () => {
+    const option = (o: Partial<AnchorOptionFacts>): AnchorOptionFacts => ({ linkedToTarget: 0, linked: 0, total: 4, placementRate: 0.2, kind: 1, place: 0, order: 0, words: 1, quoted: false, ...o });
+    // Authors link the option that is not first, in code.
+    const groups: AnchorGroup[] = Array.from({ length: 50 }, (_, i) => ({
+      options: [option({ order: 0, words: 1 + (i % 3) }), option({ order: 1, place: 1, kind: 4 })],
+      linked: [false, true],
+    }));
+    const lonely: AnchorGroup = { options: [option({})], linked: [true] };
+    const a = fitAnchorChoice([...groups, lonely]);
+    const b = fitAnchorChoice(groups);
+    expect(a).not.toBeNull();
+    expect(a!.groups).toBe(50);
+    expect(a!.options).toBe(100);
+    expect(a).toEqual(b);
+    const score = (o: AnchorOptionFacts) => anchorFeatures(o).reduce((s, x, j) => s + (a!.model.weights[j] * (x - a!.model.means[j])) / a!.model.scales[j], a!.model.intercept);
+    expect(score(option({ order: 1, place: 1, kind: 4 }))).toBeGreaterThan(score(option({ order: 0 })));
+  });
+});
+
+describe('inline code is a name as written', () => {
+  it.each([
+    ['`http2.get()`', 'http2 get'],
+    ["`'/p/a/t/h?query=string'`", 'p a t h query string'],
+    ['`fs.readFile()`', 'fs readfile'],
+    ['`Buffer`', 'buffer'],
+  ])('%s is written %s', (code, key) => {
+    expect(codeKey(code)).toBe(key);
+  });
+
+  it('a quoted path that holds the words of a title, or a call whose last word is a stop word, names no page', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [Query string](querystring.md)\n- [HTTP](http.md)\n- [Stream](stream.md)\n- [URL](url.md)\n'),
+      markdownPage('querystring.md', '# Query string\n\nParsing.\n'),
+      markdownPage('http.md', '# HTTP\n\nServers.\n'),
+      markdownPage('stream.md', '# Stream\n\nData.\n'),
+      markdownPage('url.md', "# URL\n\nThe path `'/p/a/t/h?query=string'` is an example; `http.get()` fetches it.\n\nAll `Streams` end.\n"),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const from = index.bySource[id('/url/')]!;
+    expect(from.get(id('/querystring/'))).toBeUndefined();
+    expect(from.get(id('/http/'))).toBeUndefined();
+    // Every word kept: a plural still names its page.
+    expect(from.get(id('/stream/'))?.anchors.map((a) => a.text)).toEqual(['`Streams`']);
+  });
+});
