@@ -5,9 +5,10 @@
  * the first mention or the one that names the thing exactly, code names or words, the title or
  * a section's name, a list entry or running text.
  *
- * A training group is one linked (source, target) pair: the links whose whole text is one of the
- * target's names are positives, and the pair's unlinked mentions ({@link MentionHit.anchors})
- * are negatives. Every feature is computed as if the pair's own links were absent (the phrase
+ * A training group is one linked (source, target) pair: its first link whose whole text is one
+ * of the target's names is the positive (one per pair, so a pair that links a name twenty times
+ * weighs as much as one that links it once), and the pair's unlinked mentions of other names or
+ * placements (`MentionHit.anchors`) are the negatives. Every feature is computed as if the pair's own links were absent (the phrase
  * odds leave them out; a name only this source uses is no name). Below
  * {@link MIN_ANCHOR_GROUPS} groups the fixed order of `rankAnchors` is kept.
  */

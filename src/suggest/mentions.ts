@@ -326,7 +326,11 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
     });
     const order = ranksInText(options.map((o) => o.at));
     const made = options.map((o, k) => o.make(order[k]));
-    const keep = made.map((_, k) => k).filter((k) => made[k] !== null);
+    // One positive per pair, its first linked option: a suggestion names one mention, and a pair
+    // that links a name twenty times would otherwise outweigh twenty pairs that link it once.
+    let firstLinked = -1;
+    for (let k = 0; k < options.length; k++) if (options[k].linked && made[k] !== null && (firstLinked < 0 || order[k] < order[firstLinked])) firstLinked = k;
+    const keep = made.map((_, k) => k).filter((k) => made[k] !== null && (!options[k].linked || k === firstLinked));
     groups.push({ options: keep.map((k) => made[k] as AnchorOptionFacts), linked: keep.map((k) => options[k].linked) });
   }
   const choice = fitAnchorChoice(groups);
