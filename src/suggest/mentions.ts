@@ -162,7 +162,12 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
 
   for (const page of graph.pages) {
     claim(tokenize(page.title, cache), page.id, 'title', -1, page.title);
-    for (const route of [page.route, ...page.meta.aliases]) claim(routeWords(route, cache), page.id, 'alias', -1, lastSegment(route));
+    for (const route of [page.route, ...page.meta.aliases]) {
+      // A route whose words the tokenizer partly drops names nothing (`/n-api/` is not "API").
+      const words = routeWords(route, cache);
+      const written = lastSegment(route);
+      if (codeKey(written).split(' ').length === words.length) claim(words, page.id, 'alias', -1, written);
+    }
     for (const h of factsOf(page.id)?.headings ?? []) {
       if (h.depth < 2) continue;
       for (const name of headingNames(h.text)) claim(tokenize(name, cache), page.id, 'heading', -1, name);
@@ -463,10 +468,17 @@ function codeMatchOf(code: string, byCode: ReadonlyMap<string, number>, root: Tr
   return key !== '' && key.split(' ').length === stems.length ? phrase : -1;
 }
 
-/** The last segment of a route, its separators as spaces (`/api/n-api/` -> `n api`). */
+/** The last segment of a route as written, without a source extension (`/api/n-api/` -> `n-api`). */
 function lastSegment(route: string): string {
   const segments = route.split('/').filter((x) => x !== '');
-  return segments.length === 0 ? '' : segments[segments.length - 1].replace(SOURCE_EXTENSION_END, '');
+  const last = segments.length === 0 ? '' : segments[segments.length - 1];
+  let decoded = last;
+  try {
+    decoded = decodeURIComponent(last);
+  } catch {
+    // keep the segment as written
+  }
+  return decoded.replace(SOURCE_EXTENSION_END, '').replace(/[-_.+~]+/g, ' ');
 }
 
 /** The phrase that is a run of stems whole (an inline code span's words), or -1. */

@@ -102,4 +102,19 @@ describe('inline code is a name as written', () => {
     // Every word kept: a plural still names its page.
     expect(from.get(id('/stream/'))?.anchors.map((a) => a.text)).toEqual(['`Streams`']);
   });
+
+  it('a route whose words the tokenizer partly drops is no name: /n-api/ is not "API", /child-process/ is "child process"', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [Native](n-api.md)\n- [Spawning](child-process.md)\n- [Guide](guide.md)\n'),
+      markdownPage('n-api.md', '# Native interface\n\nFor addons.\n'),
+      markdownPage('child-process.md', '# Spawning\n\nRunning other programs.\n'),
+      markdownPage('guide.md', '# Guide\n\nThe API is stable. Start a child process to run it.\n'),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const from = buildMentionIndex(input.graph, factsByPage(input), createStemCache()).bySource[id('/guide/')]!;
+    expect(from.get(id('/n-api/'))).toBeUndefined();
+    expect(from.get(id('/child-process/'))?.anchors.map((a) => a.text)).toEqual(['child process']);
+  });
 });
