@@ -36,7 +36,7 @@ export const ANCHOR_FEATURES = [
 /** Fewer linked pairs with a passed-over mention than this: no fit, the fixed order. */
 export const MIN_ANCHOR_GROUPS = 30;
 /** At most this many groups are fitted on (every k-th pair in (source, target) order). */
-export const MAX_ANCHOR_GROUPS = 20000;
+export const MAX_ANCHOR_GROUPS = 5000;
 /** L2 penalty of the fit. */
 const ANCHOR_L2 = 1;
 

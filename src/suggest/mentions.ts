@@ -144,11 +144,13 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // Inline code is compared as written (see codeKey): written form -> the phrases of the names
   // written so.
   const byCode = new Map<string, number>();
+  const keyed = new Set<string>();
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, written: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
     const id = phraseOf(stems);
     const phrase = phrases[id];
-    if (written !== null) {
+    if (written !== null && !keyed.has(written)) {
+      keyed.add(written);
       const key = codeKey(written);
       if (key !== '' && !byCode.has(key)) byCode.set(key, id);
     }
@@ -313,6 +315,8 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
     const s = Math.floor(key / n);
     const t = key - s * n;
     const hit = bySource[s].get(t);
+    // No unlinked mention: nothing was passed over, the pair teaches nothing.
+    if (hit === undefined || hit.anchors.length === 0) continue;
     const links = pairLinks.get(key) ?? [];
     const options: { at: { line: number; column: number }; make: (order: number) => AnchorOptionFacts | null; linked: boolean }[] = [];
     const seen = new Set<number>();
@@ -320,12 +324,12 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
       if (seen.has(l.phrase * 4 + l.place)) continue;
       seen.add(l.phrase * 4 + l.place);
       let at: { line: number; column: number } = l;
-      hit?.anchors.forEach((a, k) => {
+      hit.anchors.forEach((a, k) => {
         if (hit.anchorPhrases[k] === l.phrase && hit.anchorPlaces[k] === l.place && before(a, at)) at = a;
       });
       options.push({ at, make: (order) => facts(s, t, l.phrase, l.place, l.words, l.quoted, order), linked: true });
     }
-    hit?.anchors.forEach((a, k) => {
+    hit.anchors.forEach((a, k) => {
       if (seen.has(hit.anchorPhrases[k] * 4 + hit.anchorPlaces[k])) return;
       options.push({ at: a, make: (order) => facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), order), linked: false });
     });
@@ -342,7 +346,7 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
   for (let s = 0; s < n; s++) {
     for (const [t, hit] of bySource[s]) {
       let scores: number[] | null = null;
-      if (choice !== null) {
+      if (choice !== null && hit.anchors.length > 1) {
         const order = ranksInText(hit.anchors);
         scores = hit.anchors.map((a, k) => {
           const f = facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), order[k]);
