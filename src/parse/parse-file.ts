@@ -35,10 +35,30 @@ export function parseSource(file: SourceFile, options: ResolvedOptions): PageFac
     const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines, mdx);
     addPatternLinks(src, options.linkPatterns, read.draft);
     const regions = protectDraft({ src, lines, kind: file.kind, mdx }, read.draft);
+    dropInCodeBodies(read.draft);
     return assemble(file, options, bom, lines, read, regions);
   } catch (error) {
     return failedFacts(file, options, bom, lines, error);
   }
+}
+
+/**
+ * Links and headings the Markdown parser found in template text the generator shows as code
+ * (`draft.codeBodies`) are not the page's: the reader sees them as text.
+ */
+function dropInCodeBodies(draft: PageDraft): void {
+  const bodies = draft.codeBodies;
+  if (bodies.length === 0) return;
+  const inside = (offset: number): boolean => {
+    for (let i = 0; i + 1 < bodies.length; i += 2) if (offset >= bodies[i] && offset < bodies[i + 1]) return true;
+    return false;
+  };
+  const links = draft.links.filter((l) => !inside(l.offset));
+  draft.links.length = 0;
+  draft.links.push(...links);
+  const headings = draft.headings.filter((h) => !inside(h.offset));
+  draft.headings.length = 0;
+  draft.headings.push(...headings);
 }
 
 /** The page with no links or text, and the failure as a problem. */
