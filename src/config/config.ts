@@ -80,6 +80,10 @@ export interface GeneratedConfig {
   postFolders?: string[] | undefined;
   /** Routes the generator makes with no source file (a blog index): links there are "outside", never broken. @default [] */
   routes?: string[] | undefined;
+  /** Files pulled into a page by an include are still pages of their own (MkDocs builds every file in `docs_dir`). @default false */
+  includedPages?: boolean | undefined;
+  /** Folders, relative to the content root (`../` climbs above it), that include directives also read from (pymdownx snippets' `base_path`). @default [] */
+  includeFolders?: string[] | undefined;
   /**
    * Ids the generator's page templates write into pages (a Hugo preset reads them from the
    * layouts): one entry per page type, `*` for pages of any other type; index pages get none.
@@ -170,7 +174,7 @@ export interface Config {
   preset?: 'auto' | 'none' | PresetName | undefined;
   /** Route prefixes that belong to the site but not to these sources: links there are "outside the content", never broken. @default [] */
   outside?: string[] | undefined;
-  /** Links and ids the generator makes on the pages it builds. @default { sectionLists: false, postFolders: [], routes: [], layoutIds: [] } */
+  /** Links and ids the generator makes on the pages it builds. @default { sectionLists: false, postFolders: [], routes: [], includedPages: false, includeFolders: [], layoutIds: [] } */
   generated?: GeneratedConfig | undefined;
   /** Entry pages (routes) for click depth and for `teleport: 'entry'`. @default ['/'] */
   entry?: string[] | undefined;

@@ -31,8 +31,9 @@ const ID_SET_THRESHOLD = 16;
 export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGraph {
   const routes = options.routes;
   const basePath = normalizedBasePath(routes);
-  const includes = resolveIncludes(input.pages, input.assets);
-  const notPages = routes.generator === 'hugo' ? new Set([...includes.includedFiles, ...bundleResources(input.pages)]) : includes.includedFiles;
+  const includes = resolveIncludes(input.pages, input.assets, options.generated.includeFolders);
+  const included: ReadonlySet<string> = options.generated.includedPages ? new Set() : includes.includedFiles;
+  const notPages = routes.generator === 'hugo' ? new Set([...included, ...bundleResources(input.pages)]) : included;
   const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, notPages);
   const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]);
   const unknownIds = new Set<number>();
