@@ -33,7 +33,13 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
   const basePath = normalizedBasePath(routes);
   const includes = resolveIncludes(input.pages, input.assets, options.generated.includeFolders);
   const included: ReadonlySet<string> = options.generated.includedPages ? new Set() : includes.includedFiles;
-  const notPages = routes.generator === 'hugo' ? new Set([...included, ...bundleResources(input.pages)]) : included;
+  // Hugo: leaf-bundle resources; Jekyll: `_includes/` files (pulled in by pages or layouts) are no pages.
+  const notPages =
+    routes.generator === 'hugo'
+      ? new Set([...included, ...bundleResources(input.pages)])
+      : routes.generator === 'jekyll'
+        ? new Set([...included, ...input.pages.map((p) => p.file).filter((f) => f.startsWith('_includes/'))])
+        : included;
   const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, notPages);
   const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]);
   const unknownIds = new Set<number>();

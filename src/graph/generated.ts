@@ -47,7 +47,8 @@ export function generatedEdges(pages: readonly PageNode[], sectionLists: boolean
   }
   for (const folder of postFolders) {
     const prefix = folder.endsWith('/') ? folder : `${folder}/`;
-    const posts = pages.filter((p) => p.file.startsWith(prefix) && !/(^|\/)(?:_?index|README)\.[^/]+$/i.test(p.file));
+    // The folder's own index is no post; a post may be a folder with its index (`2021-08-26-welcome/index.mdx`).
+    const posts = pages.filter((p) => p.file.startsWith(prefix) && !/^(?:_?index|README)\.[^/]+$/i.test(p.file.slice(prefix.length)));
     posts.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
     for (const entry of entries) for (const p of posts) if (p.id !== entry) edges.push({ from: entry, to: p.id });
     for (let i = 1; i < posts.length; i++) {
