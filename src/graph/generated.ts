@@ -35,7 +35,7 @@ export function generatedEdges(pages: readonly PageNode[], sectionLists: boolean
       // section above it (Hugo; checked on a hugo 0.111 build of its own docs, news/2021/).
       let from = ownerFolder;
       let owner = sections.get(from);
-      while (owner === undefined && /^[^/]+\/[^]+\/$/.test(from)) {
+      while (owner === undefined && /^[^/]+\/.+\/$/.test(from)) {
         from = folderOf(from.slice(0, -1));
         owner = sections.get(from);
       }

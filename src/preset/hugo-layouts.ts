@@ -18,11 +18,11 @@ import type { SiteFiles } from './types.js';
 import { dig, isRecord, str } from './util.js';
 
 /** Layout folders that hold no page type's templates. */
-const NOT_TYPES = new Set(['_default', 'partials', 'shortcodes', '_markup', '_internal', 'index.html']);
+const NOT_TYPES = new Set(['_default', 'partials', 'shortcodes', '_markup', '_internal']);
 /** Template files followed from one page type's `single.html`, at most. */
 const MAX_CHAIN = 200;
-const LITERAL_ID = /\bid\s*=\s*"([^"{}<>\s]+)"/g;
-const COMPUTED_ID = /\bid\s*=\s*"?[^"\s>]*\{\{/g;
+const LITERAL_ID = /(?<=[\s}])id\s*=\s*"([^"{}<>\s]+)"/g;
+const COMPUTED_ID = /(?<=[\s}])id\s*=\s*"?[^"\s>]*\{\{/g;
 const PARTIAL = /\bpartial(?:Cached)?\s+"([^"]+)"/g;
 const RENDER = /\.Render\s+"([\w-]+)"/g;
 
