@@ -53,6 +53,8 @@ describe('MkDocs snippets', () => {
     // outer.md is in parts/ (base_path), outside the docs: the run says so once.
     expect(notes).toContain('guide/page.md:5:1: included file "outer.md" is outside the sources; its ids and links are unknown');
     expect(report.findings.filter((f) => f.rule === 'duplicate-route').map((f) => f.file)).toEqual(['README.md']);
+    // Two pages render the snippet's broken fragment; it is fixed in one place, and said once.
+    expect(report.findings.filter((f) => f.rule === 'broken-fragment').map((f) => `${f.file}:${f.line}:${f.column}`)).toEqual(['snippets/links.md:1:29']);
   });
 
   const mkdocs = spawnSync('mkdocs', ['--version'], { encoding: 'utf8' }).status === 0;
