@@ -155,7 +155,7 @@ export function blockCloser(tag: string): BlockCloser | null {
   }
   const hugo = /^\{\{[<%]\s*([\w-]+)/.exec(tag);
   if (hugo !== null && SHORTCODE_CODE_BLOCKS.has(hugo[1]) && !/\bnocode\s*=\s*"?true\b/.test(tag) && !/\/\s*[>%]\}\}$/.test(tag)) {
-    return { closer: new RegExp(String.raw`\{\{[<%]\s*\/${hugo[1]}\s*[>%]\}\}`, 'g'), code: true };
+    return { closer: new RegExp(String.raw`\{\{[<%]\s*\/\s*${hugo[1]}\s*[>%]\}\}`, 'g'), code: true };
   }
   return null;
 }

@@ -22,6 +22,8 @@ describe('bodies shown as code have no links and no headings', () => {
 
   it('the % form', () => {
     expect(hrefs('{{% code %}}\n[b](/b/)\n{{% /code %}}\n\n[c](/c/)\n')).toEqual(['/c/']);
+    // White space after the slash of a closing tag, as Hugo's own docs write it (`{{%/ note %}}`).
+    expect(hrefs('{{< code >}}\n[b](/b/)\n{{</ code >}}\n\n[c](/c/)\n')).toEqual(['/c/']);
   });
 
   it('Liquid highlight and comment blocks', () => {
