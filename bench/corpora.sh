@@ -15,6 +15,11 @@
 #   nix-manual    Debian source nix 2.8.0-1.1: doc/manual, an mdBook (book.toml, src/SUMMARY.md.in)
 #   nlopt-docs    Debian source nlopt 2.7.1-5: mkdocs.yml and doc/docs, a MkDocs site
 #   hugo-docs     Debian source hugo 0.111.3-1: docs/, Hugo's own documentation site
+# and npm packages that ship a generator's site sources:
+#   jekyll-docs   npm package jekyll@3.0.0-beta1 (from the jekyll/jekyll repository): site/, Jekyll's
+#                 own documentation site of that time (_config.yml, a docs collection, _posts)
+#   docusaurus-classic  npm package create-docusaurus@3.10.2: the classic template as
+#                 `create-docusaurus` lays it out (templates/shared, then templates/classic over it)
 # Debian versions are pinned where apt still serves them; otherwise the current one is taken and
 # the script says which it got.
 set -euo pipefail
@@ -97,6 +102,21 @@ if [ ! -d hugo-docs/site ]; then
   mkdir -p hugo-docs/site && tar xzf src/hugo_0.111.3.orig.tar.gz -C hugo-docs/site --strip-components=2 hugo-0.111.3/docs
 fi
 
-for s in nodejs-doc npm-docs python-doc postgres-doc nix-manual nlopt-docs hugo-docs; do
-  printf '%-13s %6d files  %s\n' "$s" "$(find "$s/site" -type f \( -name '*.md' -o -name '*.html' \) | wc -l)" "$DIR/$s/site"
+# Jekyll's own documentation site, as published with jekyll 3.0.0-beta1.
+if [ ! -d jekyll-docs/site ]; then
+  mkdir -p jekyll-docs
+  (cd jekyll-docs && npm pack jekyll@3.0.0-beta1 --silent >/dev/null && tar xzf jekyll-3.0.0-beta1.tgz && cp -r package/site site)
+fi
+echo "jekyll 3.0.0-beta1 (site/)"
+
+# The Docusaurus classic template, laid out as create-docusaurus does (shared, then classic over it).
+if [ ! -d docusaurus-classic/site ]; then
+  mkdir -p docusaurus-classic
+  (cd docusaurus-classic && npm pack create-docusaurus@3.10.2 --silent >/dev/null && tar xzf create-docusaurus-3.10.2.tgz \
+    && mkdir -p site && cp -r package/templates/shared/. site/ && cp -r package/templates/classic/. site/)
+fi
+echo "create-docusaurus 3.10.2 (templates/classic)"
+
+for s in nodejs-doc npm-docs python-doc postgres-doc nix-manual nlopt-docs hugo-docs jekyll-docs docusaurus-classic; do
+  printf '%-13s %6d files  %s\n' "$s" "$(find "$s/site" -type f \( -name '*.md' -o -name '*.mdx' -o -name '*.html' \) | wc -l)" "$DIR/$s/site"
 done

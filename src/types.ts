@@ -183,6 +183,8 @@ export interface PageMeta {
   readonly url?: string;
   /** `date` as written (a generator's permalink patterns read it). */
   readonly date?: string;
+  /** `type`: the page type, which picks the generator's page template (Hugo). */
+  readonly type?: string;
   /** `categories` (or `category`), for Jekyll's `:categories`. */
   readonly categories?: readonly string[];
   readonly draft: boolean;

@@ -80,6 +80,26 @@ export interface GeneratedConfig {
   postFolders?: string[] | undefined;
   /** Routes the generator makes with no source file (a blog index): links there are "outside", never broken. @default [] */
   routes?: string[] | undefined;
+  /** Files pulled into a page by an include are still pages of their own (MkDocs builds every file in `docs_dir`). @default false */
+  includedPages?: boolean | undefined;
+  /** Folders, relative to the content root (`../` climbs above it), that include directives also read from (pymdownx snippets' `base_path`). @default [] */
+  includeFolders?: string[] | undefined;
+  /**
+   * Ids the generator's page templates write into pages (a Hugo preset reads them from the
+   * layouts): one entry per page type, `*` for pages of any other type; index pages get none.
+   * @default []
+   */
+  layoutIds?: LayoutIdsConfig[] | undefined;
+}
+
+/** The ids page templates write into the pages of one type. */
+export interface LayoutIdsConfig {
+  /** The page type (frontmatter `type`, else the page's top folder, `page` at the root), or `*` for any other. */
+  type: string;
+  /** Ids every page of the type has. */
+  ids: string[];
+  /** The type's template computes more ids: a fragment that is not a known id is unknown, never broken. */
+  computed: boolean;
 }
 
 /** Link suggestions (`linkweave suggest`, `command: 'suggest'`). */
@@ -154,7 +174,7 @@ export interface Config {
   preset?: 'auto' | 'none' | PresetName | undefined;
   /** Route prefixes that belong to the site but not to these sources: links there are "outside the content", never broken. @default [] */
   outside?: string[] | undefined;
-  /** Links the generator makes on the pages it builds. @default { sectionLists: false, postFolders: [], routes: [] } */
+  /** Links and ids the generator makes on the pages it builds. @default { sectionLists: false, postFolders: [], routes: [], includedPages: false, includeFolders: [], layoutIds: [] } */
   generated?: GeneratedConfig | undefined;
   /** Entry pages (routes) for click depth and for `teleport: 'entry'`. @default ['/'] */
   entry?: string[] | undefined;

@@ -105,6 +105,9 @@ const schema = z.strictObject({
       sectionLists: z.boolean().default(false),
       postFolders: z.array(z.string().min(1)).default([]),
       routes: z.array(z.string().startsWith('/')).default([]),
+      includedPages: z.boolean().default(false),
+      includeFolders: z.array(z.string().min(1)).default([]),
+      layoutIds: z.array(z.strictObject({ type: z.string().min(1), ids: z.array(z.string().min(1)), computed: z.boolean() })).default([]),
     })
     .prefault({}),
 });

@@ -31,13 +31,21 @@ const ID_SET_THRESHOLD = 16;
 export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGraph {
   const routes = options.routes;
   const basePath = normalizedBasePath(routes);
-  const includes = resolveIncludes(input.pages, input.assets);
-  const notPages = routes.generator === 'hugo' ? new Set([...includes.includedFiles, ...bundleResources(input.pages)]) : includes.includedFiles;
+  const includes = resolveIncludes(input.pages, input.assets, options.generated.includeFolders);
+  const included: ReadonlySet<string> = options.generated.includedPages ? new Set() : includes.includedFiles;
+  // Hugo: leaf-bundle resources; Jekyll: `_includes/` files (pulled in by pages or layouts) are no pages.
+  const notPages =
+    routes.generator === 'hugo'
+      ? new Set([...included, ...bundleResources(input.pages)])
+      : routes.generator === 'jekyll'
+        ? new Set([...included, ...input.pages.map((p) => p.file).filter((f) => f.startsWith('_includes/'))])
+        : included;
   const { pages, duplicates, fileToPage } = selectPages(input.pages, routes, notPages);
   const facts: PageFacts[] = pages.map((p) => input.pages[p.factsIndex]);
   const unknownIds = new Set<number>();
   for (const p of pages) if (includes.unknown.has(p.factsIndex)) unknownIds.add(p.id);
-  const pageIds = new PageIds(facts, pages.map((p) => includes.pulledIn.get(p.factsIndex) ?? []), unknownIds);
+  const layoutIds = pageLayoutIds(facts, options.generated.layoutIds, unknownIds);
+  const pageIds = new PageIds(facts, pages.map((p) => includes.pulledIn.get(p.factsIndex) ?? []), unknownIds, layoutIds);
   const n = pages.length;
 
   const { routeIndex, redirectEnds } = buildRouteIndex(
@@ -50,6 +58,16 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
   const fileIndex = new Map<string, number>();
   for (const [file, id] of fileToPage) if (!fileIndex.has(fold(file))) fileIndex.set(fold(file), id);
   const assets = new Set(input.assets.map(fold));
+  // Hugo's ref shortcodes also find a page by its file name alone, when only one page has it.
+  let fileNames: Map<string, number> | undefined;
+  if (routes.generator === 'hugo') {
+    fileNames = new Map();
+    for (const [file, id] of fileToPage) {
+      const name = file.slice(file.lastIndexOf('/') + 1).toLowerCase();
+      const known = fileNames.get(name);
+      fileNames.set(name, known === undefined || known === id ? id : -1);
+    }
+  }
   const idSets: (Set<string> | undefined)[] = new Array(n);
   const ctx: ResolveContext = {
     routes,
@@ -60,8 +78,9 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
     assets,
     pageRoutes: pages.map((p) => p.route),
     scope: scopeContext(basePath, options.outside, options.generated.routes, routes.absoluteLinksUnderBase),
+    ...(fileNames === undefined ? {} : { fileNames }),
     hasId(page, id) {
-      if (unknownIds.has(page) || includes.pulledIn.has(pages[page].factsIndex)) return pageIds.has(page, id, 'github');
+      if (unknownIds.has(page) || includes.pulledIn.has(pages[page].factsIndex) || layoutIds[page] !== undefined) return pageIds.has(page, id, 'github');
       const ids = facts[page].ids;
       if (ids.length <= ID_SET_THRESHOLD) return ids.includes(id);
       let set = idSets[page];
@@ -118,6 +137,30 @@ export function buildGraph(input: GraphInput, options: ResolvedOptions): SiteGra
     headingIds: choice,
     ...(includes.outside.length === 0 ? {} : { includesOutside: includes.outside }),
   };
+}
+
+/**
+ * The ids each page's template writes (`generated.layoutIds`), by page id. A page's type is its
+ * frontmatter `type`, else its top folder (`page` for a page at the root); index pages
+ * (`_index.*`, rendered by list templates) get none. A type whose template computes ids makes
+ * its pages' ids unknown (added to `unknown`).
+ */
+function pageLayoutIds(facts: readonly PageFacts[], entries: ResolvedOptions['generated']['layoutIds'], unknown: Set<number>): (readonly string[] | undefined)[] {
+  const out: (readonly string[] | undefined)[] = new Array(facts.length);
+  if (entries.length === 0) return out;
+  const byType = new Map<string, (typeof entries)[number]>();
+  for (const e of entries) if (!byType.has(e.type)) byType.set(e.type, e);
+  for (let id = 0; id < facts.length; id++) {
+    const f = facts[id];
+    if (/(?:^|\/)_index\.[^/]+$/.test(f.file)) continue;
+    const cut = f.file.indexOf('/');
+    const type = f.meta.type ?? (cut < 0 ? 'page' : f.file.slice(0, cut));
+    const e = byType.get(type) ?? byType.get('*');
+    if (e === undefined) continue;
+    if (e.ids.length > 0) out[id] = e.ids;
+    if (e.computed) unknown.add(id);
+  }
+  return out;
 }
 
 /** Entry routes (or source file paths) -> page ids; the ones that match no page, as written. */

@@ -23,12 +23,15 @@ export class PageIds {
   /**
    * @param facts facts of the graph's pages, by page id
    * @param included for each page id, the facts of the files it pulls in
-   * @param unknown page ids whose ids are not all known (an include outside the sources)
+   * @param unknown page ids whose ids are not all known (an include outside the sources, a
+   *   page template that computes ids)
+   * @param layout for each page id, the ids its page template writes (any style), if any
    */
   constructor(
     private readonly facts: readonly PageFacts[],
     private readonly included: readonly (readonly PageFacts[])[],
     private readonly unknown: ReadonlySet<number>,
+    private readonly layout: readonly (readonly string[] | undefined)[] = [],
   ) {}
 
   /** True when page `page` has the id under `style` (always, when its ids are unknown). */
@@ -40,9 +43,11 @@ export class PageIds {
       set = null;
       const own = idsUnder(this.facts[page], style);
       const extra = this.included[page] ?? [];
-      if (style !== 'github' || extra.length > 0 || own !== this.facts[page].ids) {
+      const layout = this.layout[page] ?? [];
+      if (style !== 'github' || extra.length > 0 || layout.length > 0 || own !== this.facts[page].ids) {
         set = new Set(own);
         for (const f of extra) for (const x of idsUnder(f, style)) set.add(x);
+        for (const x of layout) set.add(x);
       }
       this.cache.set(key, set);
     }

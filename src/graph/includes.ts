@@ -21,8 +21,10 @@ export interface IncludeResolution {
  * Resolve every page's includes.
  * @param facts every parsed file
  * @param assets the other files under the content root
+ * @param folders `generated.includeFolders`: folders (relative to the content root) tried after
+ *   a directive's own paths
  */
-export function resolveIncludes(facts: readonly PageFacts[], assets: readonly string[]): IncludeResolution {
+export function resolveIncludes(facts: readonly PageFacts[], assets: readonly string[], folders: readonly string[] = []): IncludeResolution {
   const byFile = new Map<string, number>();
   facts.forEach((f, i) => byFile.set(f.file, i));
   const assetSet = new Set(assets);
@@ -31,7 +33,8 @@ export function resolveIncludes(facts: readonly PageFacts[], assets: readonly st
   const includedFiles = new Set<string>();
   const outside = new Map<string, { file: string; line: number; column: number; written: string }>();
   facts.forEach((f, i) => {
-    for (const inc of f.includes ?? []) {
+    for (const raw of f.includes ?? []) {
+      const inc = folders.length === 0 ? raw : { ...raw, paths: [...raw.paths, ...folders.map((d) => underFolder(d, raw.written))] };
       const source = inc.paths.find((p) => byFile.has(p));
       if (source !== undefined) {
         if (source === f.file) continue;
@@ -62,4 +65,18 @@ export function resolveIncludes(facts: readonly PageFacts[], assets: readonly st
   }
   const list = [...outside.values()].sort((a, b) => (a.written < b.written ? -1 : a.written > b.written ? 1 : 0));
   return { includedFiles, pulledIn, unknown, outside: list };
+}
+
+/** `written` read from `folder` (relative to the content root), dot segments removed; a leading `../` kept. */
+function underFolder(folder: string, written: string): string {
+  const out: string[] = [];
+  let up = 0;
+  for (const seg of `${folder}/${written.replace(/^\/+/, '')}`.split('/')) {
+    if (seg === '' || seg === '.') continue;
+    if (seg === '..') {
+      if (out.length > 0) out.pop();
+      else up++;
+    } else out.push(seg);
+  }
+  return '../'.repeat(up) + out.join('/');
 }

@@ -35,14 +35,21 @@ export function canonicalRoute(route: string): string {
  * @param notPages files that are no pages of their own (pulled into another page)
  */
 export function selectPages(facts: readonly PageFacts[], routes: RouteOptions, notPages: ReadonlySet<string> = new Set()): PageSelection {
-  const candidates: { index: number; route: string; key: string; file: string }[] = [];
+  const candidates: { index: number; route: string; key: string; file: string; rank: number }[] = [];
+  // Two index files of one folder (index.md and README.md): the earlier name in `indexNames`
+  // wins, as generators choose (mkdocs 1.4 skips README.md beside index.md, with a warning).
+  const indexRank = (file: string): number => {
+    const stem = file.slice(file.lastIndexOf('/') + 1).replace(/\.[^.]*$/, '');
+    const at = routes.indexNames.indexOf(stem);
+    return at < 0 ? -1 : at;
+  };
   for (let index = 0; index < facts.length; index++) {
     const f = facts[index];
     if (f.meta.draft || notPages.has(f.file)) continue;
     const route = canonicalRoute(f.route);
-    candidates.push({ index, route, key: routeKeyOf(route, routes), file: f.file });
+    candidates.push({ index, route, key: routeKeyOf(route, routes), file: f.file, rank: indexRank(f.file) });
   }
-  candidates.sort((a, b) => compareText(a.key, b.key) || compareText(a.file, b.file) || a.index - b.index);
+  candidates.sort((a, b) => compareText(a.key, b.key) || (a.rank >= 0 && b.rank >= 0 ? a.rank - b.rank : 0) || compareText(a.file, b.file) || a.index - b.index);
 
   const kept: typeof candidates = [];
   const lost: { file: string; route: string; keptIndex: number }[] = [];

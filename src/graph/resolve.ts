@@ -64,6 +64,12 @@ export interface ResolveContext {
   hasId(page: number, id: string): boolean;
   /** Link scope (outside prefixes, generated routes); absent: nothing is outside. */
   readonly scope?: ScopeContext;
+  /**
+   * Lower-cased file name (`front-matter.md`) -> its page id, -1 when several pages have that
+   * name: Hugo's `ref`/`relref` find a name with no `/` anywhere in the content when it names
+   * no file from the page or the content root. Absent: no such lookup.
+   */
+  readonly fileNames?: ReadonlyMap<string, number>;
 }
 
 /**
@@ -214,6 +220,11 @@ function fileCandidates(raw: RawLink, src: LinkSource, ctx: ResolveContext, file
     const page = ctx.fileIndex.get(lookup);
     if (page !== undefined) return toPage(raw, src, ctx, page, fragment, hash);
     if (ctx.assets.has(lookup)) return make(raw, src, -1, assetTarget(file, ctx), fragment, 'asset', 'asset');
+  }
+  if (raw.origin === 'pattern' && ctx.fileNames !== undefined) {
+    const written = raw.href.split('#')[0];
+    const page = written.includes('/') ? undefined : ctx.fileNames.get(written.toLowerCase());
+    if (page !== undefined && page >= 0) return toPage(raw, src, ctx, page, fragment, hash);
   }
   if (!markdownLink) return null;
   return broken(raw, src, files[0] ?? raw.href, 'internal', fragment);

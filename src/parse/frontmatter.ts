@@ -137,6 +137,8 @@ function readRecord(
     if (t === undefined || t.trim() === '') wrong('url', record.url, 'a non-empty route text');
     else meta.url = t;
   }
+  // The page type picks the generator's page template (Hugo's `type`); one that does not read is left out.
+  if (typeof record.type === 'string' && record.type.trim() !== '') meta.type = record.type.trim();
   // Dates only feed permalink patterns: one that does not read is left out without a word.
   const date = record.date instanceof Date ? record.date.toISOString() : textValue(record.date);
   if (date !== undefined && /^\d{4}-\d{1,2}-\d{1,2}/.test(date.trim())) meta.date = date.trim();

@@ -35,9 +35,47 @@ export function parseSource(file: SourceFile, options: ResolvedOptions): PageFac
     const read = file.kind === 'html' ? readHtmlPage(src) : readMarkdownPage(src, lines, mdx);
     addPatternLinks(src, options.linkPatterns, read.draft);
     const regions = protectDraft({ src, lines, kind: file.kind, mdx }, read.draft);
+    dropInCodeBodies(read.draft);
+    if (file.kind === 'markdown') addBlockAttributeIds(src, read.draft);
     return assemble(file, options, bom, lines, read, regions);
   } catch (error) {
     return failedFacts(file, options, bom, lines, error);
+  }
+}
+
+/**
+ * Links and headings the Markdown parser found in template text the generator shows as code
+ * (`draft.codeBodies`) are not the page's: the reader sees them as text.
+ */
+function dropInCodeBodies(draft: PageDraft): void {
+  const bodies = draft.codeBodies;
+  if (bodies.length === 0) return;
+  const inside = (offset: number): boolean => {
+    for (let i = 0; i + 1 < bodies.length; i += 2) if (offset >= bodies[i] && offset < bodies[i + 1]) return true;
+    return false;
+  };
+  const links = draft.links.filter((l) => !inside(l.offset));
+  draft.links.length = 0;
+  draft.links.push(...links);
+  const headings = draft.headings.filter((h) => !inside(h.offset));
+  draft.headings.length = 0;
+  draft.headings.push(...headings);
+}
+
+/**
+ * kramdown's block attribute list on a line of its own (`{: #v1-0-0}` under a heading) gives the
+ * block before it that id (kramdown syntax, "Block Inline Attribute Lists"; checked with
+ * jekyll 4.3 on Jekyll's own docs: `## 1.0.0 / 2013-05-06` then `{: #v1-0-0}` is
+ * `<h2 id="v1-0-0">`). The id is the page's whatever the block; lines in code are skipped.
+ */
+function addBlockAttributeIds(src: string, draft: PageDraft): void {
+  if (!src.includes('{:')) return;
+  const code = draft.code;
+  const re = /^[ \t]{0,3}\{:[ \t]*#([A-Za-z][\w:.-]*)(?=[\s}])[^}\n]*\}[ \t]*$/gm;
+  for (let m = re.exec(src); m !== null; m = re.exec(src)) {
+    let inCode = false;
+    for (let i = 0; i + 1 < code.length && !inCode; i += 2) if (m.index >= code[i] && m.index < code[i + 1]) inCode = true;
+    if (!inCode && !draft.ids.includes(m[1])) draft.ids.push(m[1]);
   }
 }
 

@@ -128,18 +128,35 @@ export function templateOpen(src: string, at: number): TemplateOpen | null {
 
 /** Liquid/Nunjucks block tags whose body is not prose. */
 const TEMPLATE_BLOCKS = new Set(['raw', 'verbatim', 'comment', 'highlight']);
-/** Hugo shortcodes whose body is code. */
-const SHORTCODE_BLOCKS = new Set(['highlight']);
+/** Of those, the ones whose body is not rendered as Markdown at all (shown as code, or dropped). */
+const TEMPLATE_CODE_BLOCKS = new Set(['comment', 'highlight']);
+/**
+ * Hugo shortcodes whose body is shown as code: Hugo's own `highlight`, and the code-display
+ * shortcodes of Hugo's documentation (`code`, `code-toggle`, `output`, `nohighlight`; their
+ * templates put `.Inner` in `<pre><code>` or through `highlight`/`transform.Remarshal`), a
+ * common set of names for the same job. `code` with `nocode="true"` renders its body as HTML.
+ */
+const SHORTCODE_CODE_BLOCKS = new Set(['highlight', 'code', 'code-toggle', 'output', 'nohighlight']);
+
+/** The closing tag of a block whose body is not prose, and whether that body is code (no links, no headings). */
+export interface BlockCloser {
+  readonly closer: RegExp;
+  readonly code: boolean;
+}
 
 /**
  * When the template tag `tag` (its full text) opens a block whose body is not prose, the
  * pattern of its closing tag; null otherwise.
  */
-export function blockCloser(tag: string): RegExp | null {
+export function blockCloser(tag: string): BlockCloser | null {
   const liquid = /^\{%-?\s*([a-z]+)/.exec(tag);
-  if (liquid !== null && TEMPLATE_BLOCKS.has(liquid[1])) return new RegExp(String.raw`\{%-?\s*end${liquid[1]}\s*-?%\}`, 'g');
+  if (liquid !== null && TEMPLATE_BLOCKS.has(liquid[1])) {
+    return { closer: new RegExp(String.raw`\{%-?\s*end${liquid[1]}\s*-?%\}`, 'g'), code: TEMPLATE_CODE_BLOCKS.has(liquid[1]) };
+  }
   const hugo = /^\{\{[<%]\s*([\w-]+)/.exec(tag);
-  if (hugo !== null && SHORTCODE_BLOCKS.has(hugo[1])) return new RegExp(String.raw`\{\{[<%]\s*\/${hugo[1]}\s*[>%]\}\}`, 'g');
+  if (hugo !== null && SHORTCODE_CODE_BLOCKS.has(hugo[1]) && !/\bnocode\s*=\s*"?true\b/.test(tag) && !/\/\s*[>%]\}\}$/.test(tag)) {
+    return { closer: new RegExp(String.raw`\{\{[<%]\s*\/\s*${hugo[1]}\s*[>%]\}\}`, 'g'), code: true };
+  }
   return null;
 }
 

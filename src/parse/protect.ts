@@ -50,13 +50,14 @@ export interface ProtectInput {
  * Find the protected regions of a file and cut the draft's spans by them.
  * @param input the source and how to read it
  * @param draft the page as the Markdown or HTML walk left it (its `code` ranges are skipped and
- *   become `code` regions; its `protected` holds what the walk found, e.g. link definitions)
+ *   become `code` regions; its `protected` holds what the walk found, e.g. link definitions);
+ *   the bodies of template blocks shown as code are added to its `codeBodies`
  * @returns the regions, sorted by start, none holding another
  */
 export function protectDraft(input: ProtectInput, draft: PageDraft): ProtectedRegion[] {
   const code = pairs(draft.code);
   const found: ProtectedRegion[] = [...frontMatter(input.src), ...draft.protected];
-  scan(input, code, found);
+  scan(input, code, found, draft.codeBodies);
   for (let i = 0; i < code.length; i++) found.push([code[i][0], code[i][1], 'code']);
   const regions = normalize(input.src, found);
   const cut = cutSpansByRanges(draft.spans, regions);
@@ -76,7 +77,7 @@ function frontMatter(src: string): ProtectedRegion[] {
   return close === null ? [] : [[0, close.index + close[0].length, 'front-matter']];
 }
 
-function scan(input: ProtectInput, code: readonly (readonly [number, number])[], out: ProtectedRegion[]): void {
+function scan(input: ProtectInput, code: readonly (readonly [number, number])[], out: ProtectedRegion[], codeBodies: number[]): void {
   const { src, lines, kind, mdx } = input;
   const markdown = kind === 'markdown';
   const n = src.length;
@@ -140,12 +141,15 @@ function scan(input: ProtectInput, code: readonly (readonly [number, number])[],
         let end = close + t.close.length;
         if (t.close === '}}') while (end < n && src.charCodeAt(end) === 125) end++;
         push(i, end, t.kind);
-        const closer = blockCloser(src.slice(i, end));
-        if (closer !== null) {
-          closer.lastIndex = end;
-          const m = closer.exec(src);
-          const bodyEnd = m === null ? n : m.index;
+        const tag = src.slice(i, end);
+        const block = blockCloser(tag);
+        if (block !== null) {
+          block.closer.lastIndex = end;
+          const m = block.closer.exec(src);
+          // A code-display shortcode with no closing tag has no body (its text stays prose).
+          const bodyEnd = m === null ? (block.code && t.kind === 'shortcode' ? end : n) : m.index;
           push(end, bodyEnd, 'template-block');
+          if (block.code && m !== null && bodyEnd > end) codeBodies.push(end, bodyEnd);
           end = bodyEnd;
         }
         i = end - 1;

@@ -71,6 +71,13 @@ export interface PageDraft {
   readonly problems: ProblemDraft[];
   /** Protected regions the walk found (link definitions); the rest come from `protect.ts`. */
   readonly protected: ProtectedRegion[];
+  /**
+   * Template text shown as code (`{{< highlight >}}`/`{{< code >}}` bodies, `{% highlight %}`,
+   * `{% comment %}`), `[start, end)` pairs found by `protect.ts`: the Markdown parser saw links
+   * and headings there, but the generator shows the text as written (or drops it). An escaped
+   * shortcode in prose is not one: Hugo writes it out as text, and its Markdown is still read.
+   */
+  readonly codeBodies: number[];
   firstH1?: string;
   htmlTitle?: string;
   baseHref?: string;
@@ -78,7 +85,7 @@ export interface PageDraft {
 
 /** A fresh, empty draft. */
 export function newDraft(): PageDraft {
-  return { links: [], headings: [], ids: [], spans: [], body: [], code: [], codeSpans: [], problems: [], protected: [] };
+  return { links: [], headings: [], ids: [], spans: [], body: [], code: [], codeSpans: [], problems: [], protected: [], codeBodies: [] };
 }
 
 /** A file read into a draft, with its frontmatter. */

@@ -9,8 +9,10 @@
  * either are to pages the generator makes (`generated.routes`). `module.mounts` whose source folder is absent
  * bring content in from elsewhere at build time: their targets are outside these sources.
  * Heading ids: `markup.goldmark.parser.autoHeadingIDType` (github, github-ascii, blackfriday).
+ * Ids the page templates write: read from the layouts (`hugo-layouts.ts`).
  */
 import type { HeadingIdStyle } from '../parse/heading-ids.js';
+import { hugoLayoutDirs, readHugoLayoutIds } from './hugo-layouts.js';
 import type { PresetReader } from './types.js';
 import { basePathOf, cleanFolder, count, dig, isRecord, parseConfigText, shownFolder, str } from './util.js';
 
@@ -90,6 +92,13 @@ export const readHugo: PresetReader = (configFile, files) => {
   }
   if (staticRoutes.length >= MAX_STATIC_FILES) notes.push(`more than ${MAX_STATIC_FILES} static files; the first ${MAX_STATIC_FILES} are known`);
   const generatedRoutes = [...new Set([...listRoutes, ...staticRoutes])].sort();
+  // Ids the page templates write (read from the layouts as text, never run).
+  const layouts = readHugoLayoutIds(hugoLayoutDirs(conf, files), files);
+  for (const file of layouts.computedFiles) {
+    const type = /(?:^|\/)layouts\/([^/]+)\//.exec(file)?.[1] ?? '';
+    notes.push(`${file} computes the ids it writes: fragment links to pages of type ${type} are unknown, never broken`);
+  }
+  if (layouts.sharedComputed > 0) notes.push(`${count(layouts.sharedComputed, 'id')} computed by shared templates (_default/, partials) not known`);
   const parts = [shownFolder(content)];
   if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
   if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
@@ -109,7 +118,11 @@ export const readHugo: PresetReader = (configFile, files) => {
         ...(basePath === null ? {} : { basePath }),
       },
       linkPatterns: [{ pattern: REF_PATTERN, route: '$1' }],
-      generated: { sectionLists: true, ...(generatedRoutes.length === 0 ? {} : { routes: generatedRoutes }) },
+      generated: {
+        sectionLists: true,
+        ...(generatedRoutes.length === 0 ? {} : { routes: generatedRoutes }),
+        ...(layouts.entries.length === 0 ? {} : { layoutIds: layouts.entries }),
+      },
       ...(outside.length === 0 ? {} : { outside }),
     },
     navigation: null,

@@ -7,7 +7,9 @@
  * collections with `output: true` (`_name/`, `/:collection/:path:output_ext` unless the
  * collection says otherwise). Other folders starting with `_` are no pages (`_layouts/`,
  * `_data/`, `_site/`...; files in `_includes/` are part of the pages that include them).
- * `defaults:` that set a permalink by folder or by type apply. `exclude:` is honoured. Heading
+ * `defaults:` that set a permalink by folder or by type apply. `exclude:` is honoured. Files
+ * with no front matter are copied, not rendered: no pages. The literal site-absolute links of the
+ * layouts (and the includes they pull in) are on every page, as navigation. Heading
  * ids: kramdown's GFM input (GitHub-like) unless `kramdown.input` says otherwise.
  */
 import type { PresetReader } from './types.js';
@@ -57,6 +59,23 @@ export const readJekyll: PresetReader = (configFile, files) => {
     // `_includes/` stays: its files are part of the pages that include them, never pages.
     if (top.length > 1 && name.startsWith('_') && name !== '_posts' && name !== '_includes' && !collections.includes(name.slice(1))) underscored.add(`${name}/**`);
   }
+  // Files with no front matter are copied as they are, not rendered (Jekyll reads a page or a
+  // document only when it starts with `---`), unless a plugin makes front matter optional.
+  const plugins = [...(Array.isArray(conf.plugins) ? conf.plugins : []), ...(Array.isArray(conf.gems) ? conf.gems : [])];
+  const copied: string[] = [];
+  if (!plugins.includes('jekyll-optional-front-matter')) {
+    for (const f of files.files(source, MAX_FILES)) {
+      const rel = source === '' ? f : f.slice(source.length + 1);
+      if (!/\.(?:md|markdown|mdx|html?)$/i.test(rel) || /^_(?:site|layouts|includes|sass|data|drafts)\//.test(rel) || rel.startsWith('vendor/')) continue;
+      if (exclude.some((e) => rel === e.replace(/\/+$/, '') || rel.startsWith(`${e.replace(/\/+$/, '')}/`))) continue;
+      const text = files.read(f);
+      if (text !== null && !/^\uFEFF?---[ \t]*\r?\n/.test(text)) copied.push(rel);
+    }
+  }
+  if (copied.length > 0) notes.push(`${count(copied.length, 'file')} with no front matter copied as ${copied.length === 1 ? 'it is' : 'they are'}, not pages (${copied.slice(0, 3).join(', ')}${copied.length > 3 ? ', ...' : ''})`);
+  // The layouts and the includes they pull in are around every page: their literal site-absolute
+  // links are template links (Liquid is not run: links it computes are not known).
+  const chrome = layoutLinks(files, inSource);
   const parts = [shownFolder(source)];
   if (hasPosts) parts.push('_posts/');
   if (collections.length > 0) parts.push(count(collections.length, 'collection'));
@@ -69,6 +88,7 @@ export const readJekyll: PresetReader = (configFile, files) => {
       exclude: [
         ...new Set([...NOT_PAGES, ...[...underscored].sort()]),
         ...exclude.map((e) => (/[*?]/.test(e) || /\.\w+$/.test(e) ? e : `${e.replace(/\/+$/, '')}/**`)),
+        ...copied.map(escapeGlob),
       ],
       routes: {
         style: sitePermalink === 'pretty' || sitePermalink.endsWith('/') ? 'directory' : 'html',
@@ -81,9 +101,40 @@ export const readJekyll: PresetReader = (configFile, files) => {
       },
       ...(hasPosts ? { generated: { postFolders: ['_posts'] } } : {}),
     },
-    navigation: null,
+    navigation: chrome.links.length === 0 ? null : { file: '_layouts', text: chrome.links.map((l) => `- ${JSON.stringify(l)}`).join('\n'), format: 'yaml' },
     redirects: [],
-    parts,
+    parts: chrome.links.length === 0 ? parts : [...parts, `${count(chrome.links.length, 'link')} in ${count(chrome.files, 'layout file')}`],
     notes,
   };
 };
+
+/** Files looked at for front matter, at most. */
+const MAX_FILES = 20000;
+
+/** A path as a glob that matches only itself. */
+function escapeGlob(path: string): string {
+  return path.replace(/[*?[\]{}()!@+\\]/g, (c) => `\\${c}`);
+}
+
+/**
+ * The literal site-absolute links of `<a>` elements (`href="/news/"`, with `{{ site.baseurl }}` in front read as
+ * nothing) of `_layouts/*.html` and of the `_includes/` files they include, recursively.
+ */
+function layoutLinks(files: Parameters<PresetReader>[1], inSource: (p: string) => string): { links: string[]; files: number } {
+  const layouts = files.exists(inSource('_layouts')) ? files.files(inSource('_layouts'), 500).filter((f) => /\.html?$/i.test(f)) : [];
+  const queue = [...layouts];
+  const seen = new Set<string>();
+  const links = new Set<string>();
+  while (queue.length > 0) {
+    const path = queue.shift() as string;
+    if (seen.has(path)) continue;
+    seen.add(path);
+    const text = (files.read(path) ?? '').replace(/\{%-?\s*comment\s*-?%\}[\s\S]*?\{%-?\s*endcomment\s*-?%\}/g, '').replace(/<!--[\s\S]*?-->/g, '');
+    for (const m of text.matchAll(/\{%-?\s*include\s+([\w./-]+)/g)) queue.push(inSource(`_includes/${m[1]}`));
+    for (const m of text.matchAll(/<a\s[^>]*?\bhref\s*=\s*"([^"]*)"/gi)) {
+      const href = m[1].replace(/^\{\{-?\s*site\.baseurl\s*-?\}\}/, '');
+      if (href.startsWith('/') && !href.startsWith('//') && !/\{[{%]/.test(href)) links.add(href);
+    }
+  }
+  return { links: [...links].sort(), files: [...seen].filter((p) => files.read(p) !== null).length };
+}

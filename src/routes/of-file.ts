@@ -75,16 +75,27 @@ function mapFolder(path: string, routes: RouteOptions, meta: RouteMeta = {}): st
   if (prefix === null && !isDated) return null;
   if (prefix !== null) rest = rest.slice(longest);
   else prefix = normalizedBasePath(routes);
-  if (isDated) rest = rest.replace(/(^|\/)(\d{4})-(\d{2})-(\d{2})-([^/]+)$/, '$1$2/$3/$4/$5');
+  // Docusaurus: a blog post's `slug` is its path below the blog's route (relative or not).
+  if (isDated && routes.generator === 'docusaurus' && meta.slug !== undefined && meta.slug.trim() !== '') {
+    return canonicalUrlPath(completeRoute(folderStart(prefix, routes) + meta.slug.trim().replace(/^\/+/, ''), routes.style));
+  }
+  // A dated post is a file `YYYY-MM-DD-name.md`, or a folder `YYYY-MM-DD-name/` holding `index.md`.
+  if (isDated) rest = rest.replace(/(^|\/)(\d{4})-(\d{2})-(\d{2})-([^/]+?)(?:\/(?:index|README)(\.[A-Za-z]+))?$/i, (_m, lead: string, y: string, mo: string, d: string, name: string, ext?: string) => `${lead}${y}/${mo}/${d}/${name}${ext ?? ''}`);
+  const start = folderStart(prefix, routes);
+  if (routes.generator === 'docusaurus' && !isDated) {
+    const doc = docusaurusRest(rest, meta);
+    if (doc.slug !== null) return canonicalUrlPath(completeRoute(start + doc.slug, routes.style));
+    rest = doc.rest;
+  }
+  return canonicalUrlPath(start + fileRoutePath(rest, routes));
+}
+
+/** A folder's route prefix with the base path in front and a trailing slash. */
+function folderStart(prefix: string, routes: RouteOptions): string {
   let start = prefix.startsWith('/') ? prefix : `/${prefix}`;
   const base = normalizedBasePath(routes);
   if (base !== '/' && !start.startsWith(base)) start = base + start.slice(1);
-  if (routes.generator === 'docusaurus' && !isDated) {
-    const doc = docusaurusRest(rest, meta);
-    if (doc.slug !== null) return canonicalUrlPath(completeRoute((start.endsWith('/') ? start : `${start}/`) + doc.slug, routes.style));
-    rest = doc.rest;
-  }
-  return canonicalUrlPath((start.endsWith('/') ? start : `${start}/`) + fileRoutePath(rest, routes));
+  return start.endsWith('/') ? start : `${start}/`;
 }
 
 /** The route of a file below `basePath`, without a leading slash (`a/b/`, `a/b.html`, ``), encoded. */

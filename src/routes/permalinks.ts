@@ -67,11 +67,21 @@ interface DateParts {
   readonly second: number;
 }
 
-function parseDate(text: string | undefined): DateParts | null {
+function parseDate(text: string | undefined, toUtc = false): DateParts | null {
   if (text === undefined) return null;
-  const m = /^(\d{4})-(\d{1,2})-(\d{1,2})(?:[T ](\d{1,2}):(\d{2})(?::(\d{2}))?)?/.exec(text.trim());
+  const m = /^(\d{4})-(\d{1,2})-(\d{1,2})(?:[T ](\d{1,2}):(\d{2})(?::(\d{2}))?(?:\.\d+)?\s*(Z|[+-]\d{2}:?\d{2})?)?/.exec(text.trim());
   if (m === null) return null;
-  return { year: +m[1], month: +m[2], day: +m[3], hour: +(m[4] ?? 0), minute: +(m[5] ?? 0), second: +(m[6] ?? 0) };
+  const parts = { year: +m[1], month: +m[2], day: +m[3], hour: +(m[4] ?? 0), minute: +(m[5] ?? 0), second: +(m[6] ?? 0) };
+  const zone = m[7];
+  if (!toUtc || zone === undefined || zone === 'Z') return parts;
+  // The time as the build machine's clock reads it, taken as UTC (Jekyll converts a date with
+  // an offset to local time; checked with jekyll 4.3 under TZ=UTC: 2013-09-06 22:02:41 -0400 is
+  // written under 2013/09/07).
+  const sign = zone.startsWith('-') ? -1 : 1;
+  const digits = zone.slice(1).replace(':', '');
+  const offset = sign * (+digits.slice(0, 2) * 60 + +digits.slice(2));
+  const t = new Date(Date.UTC(parts.year, parts.month - 1, parts.day, parts.hour, parts.minute - offset, parts.second));
+  return { year: t.getUTCFullYear(), month: t.getUTCMonth() + 1, day: t.getUTCDate(), hour: t.getUTCHours(), minute: t.getUTCMinutes(), second: t.getUTCSeconds() };
 }
 
 const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
@@ -138,7 +148,7 @@ function jekyllPath(path: string, meta: RouteMeta, permalinks: Readonly<Record<s
   if (postAt >= 0) {
     const m = /^(\d{4})-(\d{1,2})-(\d{1,2})-(.+)$/.exec(stem);
     if (m === null) return null;
-    const date = parseDate(meta.date) ?? { year: +m[1], month: +m[2], day: +m[3], hour: 0, minute: 0, second: 0 };
+    const date = parseDate(meta.date, true) ?? { year: +m[1], month: +m[2], day: +m[3], hour: 0, minute: 0, second: 0 };
     const name = m[4];
     const categories = [...parts.slice(0, postAt), ...(meta.categories ?? [])];
     const values: Record<string, string> = {

@@ -70,8 +70,8 @@ function settingOf(
 
 /**
  * Run every rule whose level is not `none` and return their findings with rule id and severity,
- * sorted by file, line, column, rule and message. Findings on pages marked
- * `linkweave.exclude` are dropped.
+ * sorted by file, line, column, rule and message, each distinct finding once. Findings on pages
+ * marked `linkweave.exclude` are dropped.
  * @param settings the settings `validateRuleConfig` gave for `known` (the pipeline validates once, in its prepare stage)
  * @throws EngineError `E_CONFIG_INVALID` for a bad `checks` configuration (see `validateRuleConfig`)
  */
@@ -89,7 +89,14 @@ export function runRules(
       findings.push(stamp(rule.id, level ?? found.severity ?? rule.defaultSeverity, found));
     }
   }
-  return findings.sort(compareFindings);
+  findings.sort(compareFindings);
+  // The same words at the same place once: a file pulled into several pages (an include, an
+  // MkDocs snippet that is also a page) gives each page the same link, fixed in one place.
+  return findings.filter((f, i) => i === 0 || !sameFinding(findings[i - 1], f));
+}
+
+function sameFinding(a: Finding, b: Finding): boolean {
+  return a.rule === b.rule && a.file === b.file && a.line === b.line && a.column === b.column && a.message === b.message && a.target === b.target && a.severity === b.severity;
 }
 
 function stamp(rule: string, severity: Exclude<Severity, 'off'>, found: RuleFinding): Finding {
