@@ -33,7 +33,12 @@ export interface LinkPatternConfig {
 
 /** How file paths become routes (URL paths). */
 export interface RoutesConfig {
-  /** `directory`: `a/b.md` -> `/a/b/`; `html`: `a/b.md` -> `/a/b.html`. HTML files keep their own path. @default 'directory' */
+  /**
+   * `directory`: `a/b.md` -> `/a/b/`; `html`: `a/b.md` -> `/a/b.html`. HTML files keep their own
+   * path. Unset and with no generator preset, `html` is chosen when most relative `.html` links
+   * of the Markdown sources name a Markdown source (at least 5 do), and the run says so.
+   * @default 'directory'
+   */
   style?: 'directory' | 'html' | undefined;
   /** URL prefix of the site; starts with `/`. @default '/' */
   basePath?: string | undefined;

@@ -9,7 +9,8 @@ import type { Redirect } from '../parse/index.js';
 import type { PresetRun } from '../preset/index.js';
 import type { AuxProblem } from '../rules/index.js';
 import { parseTraffic } from '../suggest/index.js';
-import type { CollectedInputs, PreparedRun } from './types.js';
+import type { AnalyzeHooks, CollectedInputs, PreparedRun } from './types.js';
+import { styleFromLinks } from '../routes/index.js';
 
 /** Read everything the later stages read from disk: the sources, navigation, redirects and traffic files. */
 export async function collectInputs(options: ResolvedOptions, preset: PresetRun | null = null): Promise<CollectedInputs> {
@@ -44,10 +45,20 @@ export async function collectInputs(options: ResolvedOptions, preset: PresetRun 
 
 /**
  * The collect stage of a prepared run. A navigation list read from the generator's config is
- * named in the returned run's options like a navigation file.
+ * named in the returned run's options like a navigation file. With no route style given (no
+ * configuration key, no preset), the style the site's links are written for is chosen
+ * (`styleFromLinks`) and `hooks.onNote` says so.
  */
-export async function collect(run: PreparedRun): Promise<{ run: PreparedRun; collected: CollectedInputs }> {
+export async function collect(run: PreparedRun, hooks: Pick<AnalyzeHooks, 'onNote'> = {}): Promise<{ run: PreparedRun; collected: CollectedInputs }> {
   const collected = await collectInputs(run.options, run.preset);
-  const named = run.options.navigation === null && collected.navigation !== null;
-  return { run: named ? { ...run, options: { ...run.options, navigation: collected.navigation!.file } } : run, collected };
+  let options = run.options;
+  if (options.navigation === null && collected.navigation !== null) options = { ...options, navigation: collected.navigation.file };
+  if (!run.routeStyleGiven) {
+    const read = styleFromLinks(collected.sources.files);
+    if (read.style !== null) {
+      options = { ...options, routes: { ...options.routes, style: read.style } };
+      hooks.onNote?.(`routes: .html pages (chosen by the links: ${read.naming} of ${read.htmlLinks} relative .html links name a Markdown source); set routes.style to choose`);
+    }
+  }
+  return { run: options === run.options ? run : { ...run, options }, collected };
 }

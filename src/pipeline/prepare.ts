@@ -47,5 +47,7 @@ export function prepareConfig(config: unknown, settings: RunSettings, hooks: Pic
   if (preset !== null) hooks.onNote?.(preset.summary);
   const options = preset === null ? written : override(resolveOptions(configWithPreset(preset, config as Config), preset.contentRoot, configOrigin));
   const rules = validateRuleConfig(options, configOrigin);
-  return { options, preset, command, configOrigin, rules, ...(baseline === undefined ? {} : { baseline }) };
+  const routes = typeof config === 'object' && config !== null ? (config as Config).routes : undefined;
+  const routeStyleGiven = preset !== null || options.routes.style !== 'directory' || (typeof routes === 'object' && routes !== null && routes.style !== undefined);
+  return { options, preset, routeStyleGiven, command, configOrigin, rules, ...(baseline === undefined ? {} : { baseline }) };
 }

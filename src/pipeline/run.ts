@@ -33,7 +33,7 @@ export async function stage<T>(hooks: AnalyzeHooks, name: StageName, fn: () => T
 
 /** Collect and parse the site of a prepared run, as every command reads it. */
 export async function readSite(run: PreparedRun, hooks: AnalyzeHooks = {}): Promise<{ run: PreparedRun; collected: CollectedInputs; facts: PageFacts[] }> {
-  const read = await stage(hooks, 'collect', () => collect(run));
+  const read = await stage(hooks, 'collect', () => collect(run, hooks));
   const facts = await stage(hooks, 'parse', () => parseAll(read.collected.sources, read.run.options, hooks));
   return { ...read, facts };
 }
@@ -48,7 +48,7 @@ export async function runPipeline(input: AnalyzeInput, hooks: AnalyzeHooks = {})
  * last one returns that run's report (the whole-report cache) without parsing.
  */
 export async function runPrepared(prepared: PreparedRun, hooks: AnalyzeHooks = {}): Promise<Report> {
-  const { run, collected } = await stage(hooks, 'collect', () => collect(prepared));
+  const { run, collected } = await stage(hooks, 'collect', () => collect(prepared, hooks));
   const { options, command, baseline } = run;
   const cacheDir = options.cache.enabled ? resolve(options.cache.dir) : null;
   const key = cacheDir === null ? '' : resultKey(reportInputs(options, command, collected, baseline));

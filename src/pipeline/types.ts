@@ -57,6 +57,11 @@ export interface PreparedRun {
   readonly options: ResolvedOptions;
   /** The generator config read for this run, or null (`preset: 'none'`, or none detected). */
   readonly preset: PresetRun | null;
+  /**
+   * The route style comes from the configuration or the preset; when false the collect stage may
+   * read it from the site's links (`styleFromLinks`).
+   */
+  readonly routeStyleGiven: boolean;
   readonly command: ReportCommand;
   /** Where the configuration came from, named in error messages. */
   readonly configOrigin: string;

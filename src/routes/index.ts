@@ -16,6 +16,8 @@ export {
 } from './normalize.js';
 export { DOT_SEGMENT, removeDotSegments, joinPath, stripIndexFile, filePathOf, decodeFragment, pathPart } from './paths.js';
 export { routeOfFile } from './of-file.js';
+export { styleFromLinks, STYLE_EVIDENCE_LINKS } from './style-from-links.js';
+export type { StyleFromLinks } from './style-from-links.js';
 export {
   MARKDOWN_EXTENSIONS,
   HTML_EXTENSIONS,
