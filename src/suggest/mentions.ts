@@ -145,14 +145,27 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // written so.
   const byCode = new Map<string, number>();
   const keyed = new Set<string>();
-  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, written: string | null = null): void => {
+  // Per phrase: its names as written (codeKey), each with the pages it names. Stems join words
+  // that are different names ("HTTPS" and "HTTP/2" both stem to "http"): a mention written
+  // exactly as some of the phrase's pages are named is a mention of those pages only.
+  const written = new Map<number, Map<string, number[]>>();
+  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
     const id = phraseOf(stems);
     const phrase = phrases[id];
-    if (written !== null && !keyed.has(written)) {
-      keyed.add(written);
-      const key = codeKey(written);
-      if (key !== '' && !byCode.has(key)) byCode.set(key, id);
+    if (as !== null) {
+      const key = codeKey(as);
+      if (!keyed.has(as)) {
+        keyed.add(as);
+        if (key !== '' && !byCode.has(key)) byCode.set(key, id);
+      }
+      if (key !== '') {
+        let forms = written.get(id);
+        if (forms === undefined) written.set(id, (forms = new Map()));
+        const pages = forms.get(key);
+        if (pages === undefined) forms.set(key, [target]);
+        else if (!pages.includes(target)) pages.push(target);
+      }
     }
     let ref = phrase.names.find((r) => r.target === target && r.kind === kind);
     if (ref === undefined) {
@@ -245,7 +258,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (facts === undefined) continue;
     // Mentions in prose and whole inline code spans, in the order of the text (the first
     // mention of a phrase is its anchor option).
-    const found: { offset: number; phrase: number; place: Placement; anchor: () => AnchorMatch }[] = [];
+    const found: { offset: number; phrase: number; place: Placement; text: () => string; anchor: () => AnchorMatch }[] = [];
     const on = linesOf(s);
     if (facts.spans.length > 0) {
       const tokens = prepareSource(facts.spans, cache);
@@ -254,7 +267,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         const start = tokens.start[first];
         const end = tokens.end[first + words - 1];
         const alone = on.markdown && on.words.get(span.line) === 1 && !on.code.has(span.line) && !on.links.has(span.line) && !WORD.test(span.text.slice(0, start) + span.text.slice(end));
-        found.push({ offset: span.offset + start, phrase: phraseId, place: alone ? ALONE : 0, anchor: () => match(span, start, end, words) });
+        found.push({ offset: span.offset + start, phrase: phraseId, place: alone ? ALONE : 0, text: () => span.text.slice(start, end), anchor: () => match(span, start, end, words) });
       });
     }
     const prose = found.length;
@@ -262,7 +275,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       const phraseId = codeMatchOf(code.code, byCode, root, cache);
       if (phraseId < 0) continue;
       const alone = on.markdown && !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
-      found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, anchor: () => codeMatch(code, phrases[phraseId].stems.length) });
+      found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, text: () => code.code, anchor: () => codeMatch(code, phrases[phraseId].stems.length) });
     }
     if (found.length > prose) found.sort((a, b) => a.offset - b.offset);
     for (const f of found) {
@@ -270,8 +283,10 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       phrase.prose++;
       habit.mentioned[f.place]++;
       let made: AnchorMatch | null = null;
+      const forms = written.get(f.phrase);
+      const only = forms !== undefined && forms.size > 1 ? forms.get(codeKey(f.text())) : undefined;
       for (const ref of phrase.names) {
-        if (ref.target === s) continue;
+        if (ref.target === s || (only !== undefined && !only.includes(ref.target))) continue;
         let hit = hits.get(ref.target);
         if (hit === undefined) {
           hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [], anchorPlaces: [] };

@@ -74,7 +74,7 @@ describe('the fitted anchor choice', () => {
   });
 });
 
-describe('inline code is a name as written', () => {
+describe('names as written', () => {
   it.each([
     ['`http2.get()`', 'http2 get'],
     ["`'/p/a/t/h?query=string'`", 'p a t h query string'],
@@ -116,5 +116,20 @@ describe('inline code is a name as written', () => {
     const from = buildMentionIndex(input.graph, factsByPage(input), createStemCache()).bySource[id('/guide/')]!;
     expect(from.get(id('/n-api/'))).toBeUndefined();
     expect(from.get(id('/child-process/'))?.anchors.map((a) => a.text)).toEqual(['child process']);
+  });
+
+  it('a mention written exactly as one page is named is not a mention of pages whose names only stem alike ("HTTPS", "HTTP/2" and "HTTP" all stem to "http")', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [HTTP](http.md)\n- [HTTPS](https.md)\n- [HTTP/2](http2.md)\n- [Guide](guide.md)\n'),
+      markdownPage('http.md', '# HTTP\n\nPlain.\n'),
+      markdownPage('https.md', '# HTTPS\n\nSecure.\n'),
+      markdownPage('http2.md', '# HTTP/2\n\nFramed.\n'),
+      markdownPage('guide.md', '# Guide\n\nServe it over HTTPS.\n'),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const from = buildMentionIndex(input.graph, factsByPage(input), createStemCache()).bySource[id('/guide/')]!;
+    expect([...from.keys()].map((t) => input.graph.pages[t]!.route)).toEqual(['/https/']);
   });
 });
