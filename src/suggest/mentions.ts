@@ -18,11 +18,11 @@
  * Built in one pass over every page's prose through a trie of the phrases, so the cost is the
  * number of words times the length of the longest match, never pages times names.
  */
+import { ProseTokens, proseTokens, proseWords } from './mention-tokens.js';
 import type { CodeSpan, PageFacts, SiteGraph } from '../types.js';
-import { isStopWord, stemToken, tokenize } from '../text/tokenize.js';
+import { tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
-import { WordTable } from '../text/scan.js';
-import { positionInSpan } from './anchor.js';
+import { positionInSpan, prepareSource } from './anchor.js';
 import type { AnchorMatch, SourceTokens } from './anchor.js';
 import { routeWords } from './names.js';
 
@@ -201,7 +201,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       habit.linked[(link.code ? CODE : 0) | (alone ? ALONE : 0)]++;
     }
     const joins = link.stems.map(() => true);
-    scanStems(link.stems, joins, link.stems.length, root, (phraseId, _first, words) => {
+    scanStems(link.stems, joins, root, (phraseId, _first, words) => {
       const whole = words === link.stems.length;
       if (!whole) phrases[phraseId].prose++;
       linkMatches[link.from].push({ target: link.to, phrase: phraseId, exact: whole });
@@ -209,7 +209,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   }
 
   const bySource: Map<number, MentionHit>[] = [];
-  const words = proseWords(cache);
+  const wordTable = proseWords(cache);
   const tokens = new ProseTokens();
   for (let s = 0; s < n; s++) {
     const facts = factsOf(s);
@@ -221,8 +221,8 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const found: { offset: number; phrase: number; place: Placement; anchor: () => AnchorMatch }[] = [];
     const on = linesOf(s);
     if (facts.spans.length > 0) {
-      proseTokens(facts.spans, words, tokens);
-      scanStems(tokens.stem, tokens.joinNext, tokens.count, root, (phraseId, first, words) => {
+      proseTokens(facts.spans, wordTable, tokens);
+      scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
         const span = facts.spans[tokens.span[first]];
         const start = tokens.start[first];
         const end = tokens.end[first + words - 1];
@@ -299,8 +299,8 @@ function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number
  * The phrases of a run of stems, left to right, each the longest that starts at its word; a
  * word inside a match starts no other (so "file system" is one mention, not also "file").
  */
-function scanStems(stem: readonly string[], joinNext: readonly boolean[], count: number, root: TrieNode, visit: (phrase: number, first: number, words: number) => void): void {
-  for (let i = 0; i < count; ) {
+function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: TrieNode, visit: (phrase: number, first: number, words: number) => void): void {
+  for (let i = 0; i < stem.length; ) {
     let node = root.next.get(stem[i]);
     let words = 1;
     let best = -1;
@@ -319,91 +319,6 @@ function scanStems(stem: readonly string[], joinNext: readonly boolean[], count:
       i += bestWords;
     } else i++;
   }
-}
-
-/**
- * The words met in prose, each distinct word as written looked up once: its stem (`''` when
- * dropped, as `stemToken` gives it) and whether it is a stop word. The table finds a word by its
- * characters, so a word seen before costs no string.
- */
-export interface ProseWords {
-  readonly table: WordTable;
-  readonly stem: string[];
-  readonly stop: boolean[];
-}
-
-/** An empty {@link ProseWords} filling `cache`. */
-export function proseWords(cache: StemCache): ProseWords {
-  const stem: string[] = [];
-  const stop: boolean[] = [];
-  const table = new WordTable((raw) => {
-    const s = stemToken(raw, cache);
-    stem.push(s);
-    stop.push(s === '' && isStopWord(raw));
-    return stem.length - 1;
-  });
-  return { table, stem, stop };
-}
-
-/** Kept words of one page's prose: the first `count` entries of each array (reused from page to page). */
-export class ProseTokens {
-  count = 0;
-  readonly stem: string[] = [];
-  /** Start/end offsets of each kept word within its span's text, and the span's index. */
-  readonly start: number[] = [];
-  readonly end: number[] = [];
-  readonly span: number[] = [];
-  /** joinNext[i]: word i and word i + 1 may be in one phrase. */
-  readonly joinNext: boolean[] = [];
-}
-
-/** Stop words allowed between two words of one phrase (as in `anchor.ts`). */
-const MAX_GAP_STOP_WORDS = 2;
-
-/**
- * The kept words of `spans` into `out`: the stems, offsets, spans and `joinNext` that
- * `prepareSource` (`anchor.ts`) gives, the same to the word (`test/suggest/mentions.test.ts`
- * compares the two), without a string, regular expression or array per word; the mention index
- * reads nothing else of a page's prose.
- */
-export function proseTokens(spans: readonly { readonly text: string }[], words: ProseWords, out: ProseTokens): void {
-  out.count = 0;
-  for (let si = 0; si < spans.length; si++) {
-    const text = spans[si].text;
-    let last = -1;
-    let stopWords = 0;
-    let bad = false;
-    let prevEnd = 0;
-    words.table.scanWords(text, (id, start, end) => {
-      if (last >= 0 && !bad && !gapOnly(text, prevEnd, start)) bad = true;
-      prevEnd = end;
-      const stem = words.stem[id];
-      if (stem === '') {
-        if (words.stop[id]) stopWords++;
-        else bad = true;
-        return;
-      }
-      const i = out.count++;
-      if (last >= 0) out.joinNext[last] = !bad && stopWords <= MAX_GAP_STOP_WORDS;
-      out.stem[i] = stem;
-      out.start[i] = start;
-      out.end[i] = end;
-      out.span[i] = si;
-      out.joinNext[i] = false;
-      last = i;
-      stopWords = 0;
-      bad = false;
-    });
-  }
-}
-
-/** True when `text[from, to)` holds only what may stand between two words of a phrase: spaces, tabs, no-break spaces, hyphens and apostrophes (`GAP_CHARS` in `anchor.ts`). */
-function gapOnly(text: string, from: number, to: number): boolean {
-  for (let k = from; k < to; k++) {
-    const c = text.charCodeAt(k);
-    if (c !== 32 && c !== 9 && c !== 0xa0 && c !== 45 && c !== 39 && c !== 0x2019) return false;
-  }
-  return true;
 }
 
 /** The phrase that is a run of stems whole (an inline code span's words), or -1. */

@@ -8,7 +8,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { prepareSource } from '../../src/suggest/anchor.js';
-import { ProseTokens, proseTokens, proseWords } from '../../src/suggest/mentions.js';
+import { ProseTokens, proseTokens, proseWords } from '../../src/suggest/mention-tokens.js';
 import { createStemCache } from '../../src/text/tokenize.js';
 import { markdownPage } from './helpers.js';
 
@@ -19,7 +19,7 @@ function both(spans: readonly { text: string; line: number; column: number; offs
   const words = proseWords(createStemCache());
   proseTokens([{ text: 'Earlier page text - with the words, 42 and THE end' }], words, out);
   proseTokens(spans, words, out);
-  const n = out.count;
+  const n = out.stem.length;
   return {
     ours: { stem: out.stem.slice(0, n), start: out.start.slice(0, n), end: out.end.slice(0, n), span: out.span.slice(0, n), joinNext: out.joinNext.slice(0, n) },
     theirs: { stem: expected.stem, start: expected.start, end: expected.end, span: expected.span, joinNext: expected.joinNext },
