@@ -18,6 +18,7 @@
  * Built in one pass over every page's prose through a trie of the phrases, so the cost is the
  * number of words times the length of the longest match, never pages times names.
  */
+import { ProseTokens, proseTokens, proseWords } from './mention-tokens.js';
 import type { CodeSpan, PageFacts, SiteGraph } from '../types.js';
 import { forEachWord, tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
@@ -251,6 +252,8 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   }
 
   const bySource: Map<number, MentionHit>[] = [];
+  const wordTable = proseWords(cache);
+  const tokens = new ProseTokens();
   for (let s = 0; s < n; s++) {
     const facts = factsOf(s);
     const hits = new Map<number, MentionHit>();
@@ -261,9 +264,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const found: { offset: number; phrase: number; place: Placement; text: () => string; anchor: () => AnchorMatch }[] = [];
     const on = linesOf(s);
     if (facts.spans.length > 0) {
-      const tokens = prepareSource(facts.spans, cache);
+      proseTokens(facts.spans, wordTable, tokens);
       scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
-        const span = tokens.spans[tokens.span[first]];
+        const span = facts.spans[tokens.span[first]];
         const start = tokens.start[first];
         const end = tokens.end[first + words - 1];
         const alone = on.markdown && on.words.get(span.line) === 1 && !on.code.has(span.line) && !on.links.has(span.line) && !WORD.test(span.text.slice(0, start) + span.text.slice(end));

@@ -44,6 +44,27 @@ export class WordTable {
     }
   }
 
+  /** Like {@link scan}, with each word's UTF-16 `start`/`end` offsets in `text`. */
+  scanWords(text: string, visit: (id: number, start: number, end: number) => void): void {
+    const len = text.length;
+    let i = 0;
+    while (i < len) {
+      let c = text.charCodeAt(i);
+      if (!isWordChar(c)) {
+        i++;
+        continue;
+      }
+      const start = i;
+      let h = 0x811c9dc5 | 0;
+      do {
+        h = Math.imul(h ^ c, 0x01000193);
+        i++;
+        c = i < len ? text.charCodeAt(i) : 0;
+      } while (i < len && isWordChar(c));
+      visit(this.lookup(text, start, i, h), start, i);
+    }
+  }
+
   private lookup(text: string, start: number, end: number, h: number): number {
     const n = end - start;
     let slot = h & this.mask;

@@ -3,12 +3,14 @@
  * natural's English stop words dropped, Porter stems (DESIGN section 6).
  *
  * Word boundaries are exactly those of natural's `WordTokenizer` (it splits on
- * `/[^A-Za-zА-Яа-я0-9_]+/`); this file matches the complementary class with one sticky-free
- * global regular expression instead of calling `WordTokenizer.tokenize`, because the anchor
- * search needs each token's offsets (which a split cannot give) and because a single `exec`
- * loop measured 2-4x faster than `split` plus natural's empty-string filter on 14 MB of text.
- * `test/text/tokenize.test.ts` checks that both give the same tokens. The term index scans with
- * its own character loop (`scan.ts`), checked against `tokenize` in `test/text/tfidf.test.ts`.
+ * `/[^A-Za-zА-Яа-я0-9_]+/`); this file walks the characters of the complementary class
+ * (`isWordChar`, shared with the term index's scan in `scan.ts`) instead of calling
+ * `WordTokenizer.tokenize`, because the anchor search needs each token's offsets (which a split
+ * cannot give). A single `exec` loop had measured 2-4x faster than `split` plus natural's
+ * empty-string filter on 14 MB of text; the character loop also drops the regular expression
+ * object per call and the match array per word. `test/text/tokenize.test.ts` checks that both
+ * give the same tokens. The term index scans with its own character loop (`scan.ts`), checked
+ * against `tokenize` in `test/text/tfidf.test.ts`.
  *
  * Stemming is the expensive step (about 2.5 us per token with natural's Porter stemmer), so
  * every caller passes a {@link StemCache} that lives as long as one index build: each distinct
@@ -16,6 +18,7 @@
  */
 import PorterStemmer from 'natural/lib/natural/stemmers/porter_stemmer.js';
 import naturalStopwords from 'natural/lib/natural/util/stopwords.js';
+import { isWordChar } from './scan.js';
 
 /** natural's English stop word list (170 words, single letters and digits included). A constant. */
 const STOP_WORDS: ReadonlySet<string> = new Set(naturalStopwords.words);
@@ -25,9 +28,6 @@ const MAX_TOKEN_LENGTH = 40;
 
 /** At least one letter; tokens of digits and underscores only (numbers, list counters) are dropped. */
 const HAS_LETTER = /[A-Za-zА-Яа-я]/;
-
-/** A word of natural's `WordTokenizer`: the complement of its gap pattern. */
-const WORD = /[A-Za-zА-Яа-я0-9_]+/g;
 
 /**
  * Per-distinct-token results: raw token (as written) -> Porter stem, or `''` when the token is
@@ -65,7 +65,8 @@ export function stemToken(raw: string, cache: StemCache): string {
 
 /** True when the lower-cased word is on natural's English stop word list. */
 export function isStopWord(word: string): boolean {
-  return STOP_WORDS.has(word.toLowerCase());
+  // Most stop words are written in lower case: no lower-cased copy for those.
+  return STOP_WORDS.has(word) || STOP_WORDS.has(word.toLowerCase());
 }
 
 /**
@@ -73,11 +74,19 @@ export function isStopWord(word: string): boolean {
  * stop words included. The callback form keeps the hot loop free of per-token objects.
  */
 export function forEachWord(text: string, visit: (raw: string, start: number, end: number) => void): void {
-  const re = new RegExp(WORD.source, 'g');
-  let match: RegExpExecArray | null;
-  while ((match = re.exec(text)) !== null) {
-    const raw = match[0];
-    visit(raw, match.index, match.index + raw.length);
+  // A character loop over natural's word class (`isWordChar`): no regular expression object per
+  // call and no match array per word, only the word's own string.
+  const len = text.length;
+  let i = 0;
+  while (i < len) {
+    if (!isWordChar(text.charCodeAt(i))) {
+      i++;
+      continue;
+    }
+    const start = i;
+    i++;
+    while (i < len && isWordChar(text.charCodeAt(i))) i++;
+    visit(text.slice(start, i), start, i);
   }
 }
 

@@ -57,6 +57,25 @@ describe('tokenize', () => {
     );
   });
 
+  it('splits where natural WordTokenizer does at the edges of its word class', () => {
+    // The characters next to each range of [A-Za-zА-Яа-я0-9_]: '/' ':' '@' '[' '`' '{', Ё and ё
+    // (outside А-я), and the first and last letter of each range.
+    const tokenizer = new naturalTokenizers.WordTokenizer();
+    const edges = ['/', '0', '9', ':', '@', 'A', 'Z', '[', '_', '`', 'a', 'z', '{', 'Ё', 'А', 'я', 'ё', ' '];
+    const text = fc.string({ unit: fc.constantFrom(...edges), maxLength: 40 });
+    fc.assert(
+      fc.property(text, (s) => {
+        const ours: string[] = [];
+        forEachWord(s, (raw) => ours.push(raw));
+        expect(ours).toEqual(tokenizer.tokenize(s));
+      }),
+      { numRuns: 400 },
+    );
+    const words: string[] = [];
+    forEachWord('/09:@AZ[_`az{ЁАяё', (raw) => words.push(raw));
+    expect(words).toEqual(['09', 'AZ', '_', 'az', 'Ая']);
+  });
+
   it('gives offsets that slice the word as written', () => {
     const text = 'Configure\tthe  Cache-Server, then restart.';
     const tokens = tokenizeWithOffsets(text);
