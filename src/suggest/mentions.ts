@@ -22,7 +22,7 @@ import { ProseTokens, proseTokens, proseWords } from './mention-tokens.js';
 import type { CodeSpan, PageFacts, SiteGraph } from '../types.js';
 import { forEachWord, tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
-import { positionInSpan, prepareSource } from './anchor.js';
+import { positionInSpan } from './anchor.js';
 import type { AnchorMatch, SourceTokens } from './anchor.js';
 import { routeWords } from './names.js';
 import { anchorScore, fitAnchorChoice } from './anchor-choice.js';
