@@ -25,26 +25,10 @@ export class WordTable {
 
   /** Call `visit(id)` for each word of `text`, in order. */
   scan(text: string, visit: (id: number) => void): void {
-    const len = text.length;
-    let i = 0;
-    while (i < len) {
-      let c = text.charCodeAt(i);
-      if (!isWordChar(c)) {
-        i++;
-        continue;
-      }
-      const start = i;
-      let h = 0x811c9dc5 | 0;
-      do {
-        h = Math.imul(h ^ c, 0x01000193);
-        i++;
-        c = i < len ? text.charCodeAt(i) : 0;
-      } while (i < len && isWordChar(c));
-      visit(this.lookup(text, start, i, h));
-    }
+    this.scanWords(text, visit);
   }
 
-  /** Like {@link scan}, with each word's UTF-16 `start`/`end` offsets in `text`. */
+  /** Call `visit(id, start, end)` for each word of `text`, in order, with its UTF-16 offsets. */
   scanWords(text: string, visit: (id: number, start: number, end: number) => void): void {
     const len = text.length;
     let i = 0;

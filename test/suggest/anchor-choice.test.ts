@@ -84,52 +84,39 @@ describe('names as written', () => {
     expect(codeKey(code)).toBe(key);
   });
 
-  it('a quoted path that holds the words of a title, or a call whose last word is a stop word, names no page', () => {
-    const options = testOptions();
+  /**
+   * The mentions `guide.md` makes of the other pages of a site: an index linking every page,
+   * the pages (file -> title), and the guide's prose. Keyed by route.
+   */
+  function mentionsFrom(titles: Record<string, string>, guide: string): Map<string, string[]> {
+    const files = Object.keys(titles);
     const pages = [
-      markdownPage('index.md', '# Home\n\n- [Query string](querystring.md)\n- [HTTP](http.md)\n- [Stream](stream.md)\n- [URL](url.md)\n'),
-      markdownPage('querystring.md', '# Query string\n\nParsing.\n'),
-      markdownPage('http.md', '# HTTP\n\nServers.\n'),
-      markdownPage('stream.md', '# Stream\n\nData.\n'),
-      markdownPage('url.md', "# URL\n\nThe path `'/p/a/t/h?query=string'` is an example; `http.get()` fetches it.\n\nAll `Streams` end.\n"),
+      markdownPage('index.md', `# Home\n\n${files.map((f) => `- [${titles[f]}](${f})`).join('\n')}\n- [Guide](guide.md)\n`),
+      ...files.map((f) => markdownPage(f, `# ${titles[f]}\n\nAbout it.\n`)),
+      markdownPage('guide.md', `# Guide\n\n${guide}\n`),
     ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
-    const from = index.bySource[id('/url/')]!;
-    expect(from.get(id('/querystring/'))).toBeUndefined();
-    expect(from.get(id('/http/'))).toBeUndefined();
+    const input = siteInput(pages, testOptions());
+    const from = input.graph.pages.findIndex((p) => p.route === '/guide/');
+    const hits = buildMentionIndex(input.graph, factsByPage(input), createStemCache()).bySource[from]!;
+    return new Map([...hits].map(([t, hit]) => [input.graph.pages[t]!.route, hit.anchors.map((a) => a.text)]));
+  }
+
+  it('a quoted path that holds the words of a title, or a call whose last word is a stop word, names no page', () => {
+    const from = mentionsFrom(
+      { 'querystring.md': 'Query string', 'http.md': 'HTTP', 'stream.md': 'Stream' },
+      "The path `'/p/a/t/h?query=string'` is an example; `http.get()` fetches it.\n\nAll `Streams` end.",
+    );
     // Every word kept: a plural still names its page.
-    expect(from.get(id('/stream/'))?.anchors.map((a) => a.text)).toEqual(['`Streams`']);
+    expect(from).toEqual(new Map([['/stream/', ['`Streams`']]]));
   });
 
   it('a route whose words the tokenizer partly drops is no name: /n-api/ is not "API", /child-process/ is "child process"', () => {
-    const options = testOptions();
-    const pages = [
-      markdownPage('index.md', '# Home\n\n- [Native](n-api.md)\n- [Spawning](child-process.md)\n- [Guide](guide.md)\n'),
-      markdownPage('n-api.md', '# Native interface\n\nFor addons.\n'),
-      markdownPage('child-process.md', '# Spawning\n\nRunning other programs.\n'),
-      markdownPage('guide.md', '# Guide\n\nThe API is stable. Start a child process to run it.\n'),
-    ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const from = buildMentionIndex(input.graph, factsByPage(input), createStemCache()).bySource[id('/guide/')]!;
-    expect(from.get(id('/n-api/'))).toBeUndefined();
-    expect(from.get(id('/child-process/'))?.anchors.map((a) => a.text)).toEqual(['child process']);
+    const from = mentionsFrom({ 'n-api.md': 'Native interface', 'child-process.md': 'Spawning' }, 'The API is stable. Start a child process to run it.');
+    expect(from).toEqual(new Map([['/child-process/', ['child process']]]));
   });
 
   it('a mention written exactly as one page is named is not a mention of pages whose names only stem alike ("HTTPS", "HTTP/2" and "HTTP" all stem to "http")', () => {
-    const options = testOptions();
-    const pages = [
-      markdownPage('index.md', '# Home\n\n- [HTTP](http.md)\n- [HTTPS](https.md)\n- [HTTP/2](http2.md)\n- [Guide](guide.md)\n'),
-      markdownPage('http.md', '# HTTP\n\nPlain.\n'),
-      markdownPage('https.md', '# HTTPS\n\nSecure.\n'),
-      markdownPage('http2.md', '# HTTP/2\n\nFramed.\n'),
-      markdownPage('guide.md', '# Guide\n\nServe it over HTTPS.\n'),
-    ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const from = buildMentionIndex(input.graph, factsByPage(input), createStemCache()).bySource[id('/guide/')]!;
-    expect([...from.keys()].map((t) => input.graph.pages[t]!.route)).toEqual(['/https/']);
+    const from = mentionsFrom({ 'http.md': 'HTTP', 'https.md': 'HTTPS', 'http2.md': 'HTTP/2' }, 'Serve it over HTTPS.');
+    expect(from).toEqual(new Map([['/https/', ['HTTPS']]]));
   });
 });
