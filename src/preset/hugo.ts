@@ -74,6 +74,7 @@ export const readHugo: PresetReader = (configFile, files) => {
   // Every top-level folder is a section: Hugo makes its list page even without `_index.md`.
   const lists = new Set<string>();
   const withIndex = new Set<string>();
+  const bundles = new Set<string>();
   for (const f of files.markdownFiles(content)) {
     const rel = content === '' ? f : f.slice(content.length + 1);
     const cut = rel.indexOf('/');
@@ -81,8 +82,11 @@ export const readHugo: PresetReader = (configFile, files) => {
     const top = rel.slice(0, cut);
     lists.add(top);
     if (/^_index\.[^/]+$/.test(rel.slice(cut + 1))) withIndex.add(top);
+    // A folder with `index.md` is a leaf bundle, a page (or headless): no section, no list.
+    if (/^index\.[^/]+$/.test(rel.slice(cut + 1))) bundles.add(top);
   }
-  const listRoutes = [...lists].filter((t) => !withIndex.has(t)).sort().map((t) => `/${t}/`);
+  const lowerPaths = conf.disablePathToLower !== true;
+  const listRoutes = [...lists].filter((t) => !withIndex.has(t) && !bundles.has(t)).map((t) => `/${lowerPaths ? t.toLowerCase() : t}/`).sort();
   // Files in `staticDir` (default `static/`) are copied to the site's root.
   const staticDirs = Array.isArray(conf.staticDir) ? conf.staticDir.filter((d): d is string => typeof d === 'string') : [str(conf.staticDir) ?? 'static'];
   const staticRoutes: string[] = [];
@@ -103,6 +107,13 @@ export const readHugo: PresetReader = (configFile, files) => {
   if (outside.length > 0) parts.push(`${count(outside.length, 'mounted folder')} from elsewhere`);
   if (idType !== undefined) parts.push(`autoHeadingIDType ${idType}`);
   if (Object.keys(permalinks).length > 0) parts.push(count(Object.keys(permalinks).length, 'permalink pattern'));
+  // The list pages of sections with no `_index.md` are built but have no source: no page here
+  // (nothing to check or to write links into); the home page stands for them, and links to
+  // them are "outside", never broken.
+  if (listRoutes.length > 0) {
+    const shown = listRoutes.slice(0, 3).join(', ') + (listRoutes.length > 3 ? ', ...' : '');
+    parts.push(`${count(listRoutes.length, 'section list')} with no source (${shown})`);
+  }
   return {
     name: 'hugo',
     configFile,
@@ -111,7 +122,7 @@ export const readHugo: PresetReader = (configFile, files) => {
       routes: {
         style: conf.uglyURLs === true || conf.uglyurls === true ? 'html' : 'directory',
         indexNames: ['index', '_index'],
-        caseInsensitive: conf.disablePathToLower !== true,
+        caseInsensitive: lowerPaths,
         generator: 'hugo',
         ...(Object.keys(permalinks).length === 0 ? {} : { permalinks }),
         headingIdsDefault: (idType !== undefined ? ID_TYPES[idType] : undefined) ?? 'hugo-github',

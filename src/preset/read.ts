@@ -140,6 +140,17 @@ function siteFiles(folder: string): SiteFiles {
     files(sub, limit) {
       return walkFiles(folder, sub, () => true, limit);
     },
+    names(sub) {
+      try {
+        return fs
+          .readdirSync(resolve(folder, sub), { withFileTypes: true })
+          .filter((e) => e.isFile() && !e.name.startsWith('.'))
+          .map((e) => e.name)
+          .sort();
+      } catch {
+        return [];
+      }
+    },
   };
 }
 

@@ -12,6 +12,8 @@ export interface SiteFiles {
   markdownFiles(folder: string): string[];
   /** Every file under a folder (dot-files and node_modules left out), relative to the site folder, sorted; at most `limit`. */
   files(folder: string, limit: number): string[];
+  /** The names of the files directly in a folder (not below it; dot-files left out), sorted. */
+  names(folder: string): string[];
 }
 
 /** One redirect the generator serves: `from` (a route) still leads to `to`. */

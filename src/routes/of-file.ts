@@ -5,8 +5,8 @@
  * parse and graph stages share): segments decoded, with
  * only `%`, `/`, `\`, `?`, `#` and control characters percent-encoded, so `/caf%C3%A9/` and
  * `/café/` are one route, shown `/café/`, and a file `a b.md` has the route `/a b/`. Case is
- * kept; with `routes.caseInsensitive` the graph folds case in its lookup keys (`normalizeRoute`
- * gives that key).
+ * kept (but for Hugo, which writes lower-case paths); with `routes.caseInsensitive` the graph
+ * folds case in its lookup keys (`normalizeRoute` gives that key).
  */
 import type { PageMeta } from '../types.js';
 import { HTML_EXTENSION_END as HTML_EXT, MARKDOWN_EXTENSION_END as MARKDOWN_EXT } from './extensions.js';
@@ -34,9 +34,14 @@ export function routeOfFile(path: string, meta: RouteMeta, routes: RouteOptions)
   const base = canonicalUrlPath(normalizedBasePath(routes));
   const { generator, permalinks } = routes;
   if (generator !== 'none') {
+    // Hugo writes its paths in lower case (unless `disablePathToLower`, which the preset reads
+    // into `caseInsensitive: false`); a frontmatter `url` is kept as written, and so is the base
+    // path (checked with hugo 0.111: `url: /Custom/Path/`, `slug: MySlug` -> `myslug/`).
+    const lower = generator === 'hugo' && routes.caseInsensitive && meta.url === undefined ? (s: string) => s.toLowerCase() : (s: string) => s;
     const own = generatorPath(path, meta, generator, permalinks);
-    if (own !== null) return canonicalUrlPath(completeRoute(base + own.replace(/^\/+/, ''), routes.style));
-    return mapFolder(path, routes, meta) ?? base + fileRoutePath(path, routes);
+    if (own !== null) return canonicalUrlPath(completeRoute(base + lower(own.replace(/^\/+/, '')), routes.style));
+    const mapped = mapFolder(path, routes, meta);
+    return mapped !== null ? mapped : base + lower(fileRoutePath(path, routes));
   }
   if (meta.permalink !== undefined) {
     const p = meta.permalink.trim();

@@ -37,7 +37,7 @@ describe('Hugo layouts and shortcodes, read from the site as text', () => {
     const { report, notes } = await check(FIXTURE);
     expect(notes[0]).toBe(
       [
-        'read as a Hugo site from hugo.toml: content/',
+        'read as a Hugo site from hugo.toml: content/, 1 section list with no source (/reference/)',
         '  layouts/reference/body.html computes the ids it writes: fragment links to pages of type reference are unknown, never broken',
         '  1 id computed by shared templates (_default/, partials) not known',
       ].join('\n'),

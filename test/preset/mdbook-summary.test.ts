@@ -50,4 +50,41 @@ describe('mdBook chapters', () => {
     // The included part is read (its link counts for guide/start.md) though it is no chapter.
     expect(report.links.find((l) => l.file === 'parts/common.md')).toMatchObject({ from: '/guide/start.html', to: '/intro.html', status: 'ok' });
   });
+
+  it('a folder the build files name, with no source and no chapter, is made at build when the template has a placeholder line', async () => {
+    const files = {
+      'book.toml': '[book]\ntitle = "B"\n',
+      'local.mk': 'out/src/SUMMARY.md: out/src/SUMMARY.md.in $(d)/src/ref/made\n\tgen-summary $< > $@\n\n$(d)/src/ref/made: gen.nix\n\tfor i in out/src/ref/made/*.md; do echo $$i; done\n',
+      'src/SUMMARY.md.in': '# Summary\n\n- [Intro](intro.md)\n- [Reference](ref/index.md)\n@pages@\n',
+      'src/intro.md': '# Intro\n\nSee [the made page](ref/made/cmd.md), [a typo](ref/indx.md) and [another folder](other/cmd.md).\n',
+      'src/ref/index.md': '# Reference\n',
+    };
+    const notes: string[] = [];
+    const report = await analyze({ root: site(files), cache: { enabled: false }, workers: 1 }, { onNote: (m) => notes.push(m) });
+    expect(notes[0]).toBe(
+      'read as an mdBook site from book.toml: src/, SUMMARY.md.in, 1 folder made at build time\n' +
+        '  SUMMARY.md is made at build time; SUMMARY.md.in read in its place\n' +
+        '  src/ref/made/ is made at build time (named by the build files, no source in it): links into it are outside the content',
+    );
+    const status = (r: typeof report, to: string) => r.links.find((l) => l.file === 'intro.md' && l.to === to)?.status;
+    // Made at build: outside, listed with its position; a typo in the existing folder ref/ and a
+    // folder the build files do not name stay broken.
+    expect(report.links.find((l) => l.to === 'ref/made/cmd.md')).toMatchObject({ status: 'outside', line: 3, column: 5 });
+    expect(status(report, 'ref/indx.md')).toBe('broken');
+    expect(status(report, 'other/cmd.md')).toBe('broken');
+    expect(report.stats.brokenLinks).toBe(2);
+
+    // Without the placeholder line the summary is complete: the same link is broken.
+    const plain = await analyze(
+      { root: site({ ...files, 'src/SUMMARY.md.in': '# Summary\n\n- [Intro](intro.md)\n- [Reference](ref/index.md)\n' }), cache: { enabled: false }, workers: 1 },
+      { onNote: () => undefined },
+    );
+    expect(status(plain, 'ref/made/cmd.md')).toBe('broken');
+    // A folder with a source in it is no made folder: links to its missing files are broken.
+    const withSource = await analyze(
+      { root: site({ ...files, 'src/ref/made/old.md': '# Old\n' }), cache: { enabled: false }, workers: 1 },
+      { onNote: () => undefined },
+    );
+    expect(status(withSource, 'ref/made/cmd.md')).toBe('broken');
+  });
 });

@@ -192,7 +192,7 @@ describe('fixture sites built by the real generator', () => {
     const r = spawnSync('hugo', ['--quiet', '--source', site, '--destination', out], { encoding: 'utf8', timeout: 120_000 });
     expect(r.status, `hugo failed:\n${r.stdout}\n${r.stderr}`).toBe(0);
     const { report, notes } = await check(site);
-    expect(notes[0]).toBe('read as a Hugo site from hugo.toml: content/, 2 permalink patterns');
+    expect(notes[0]).toBe('read as a Hugo site from hugo.toml: content/, 2 permalink patterns, 2 section lists with no source (/guide/, /news/)');
     const expected = [
       '/site/',
       '/site/2017/02/my-first-post/',
