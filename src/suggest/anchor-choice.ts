@@ -31,6 +31,7 @@ export const ANCHOR_FEATURES = [
   'order',
   'words',
   'quoted',
+  'exact-code',
 ] as const;
 
 /** Fewer linked pairs with a passed-over mention than this: no fit, the fixed order. */
@@ -59,6 +60,8 @@ export interface AnchorOptionFacts {
   readonly words: number;
   /** Inline code that is a quoted string (`'stream'`). */
   readonly quoted: boolean;
+  /** Inline code written exactly as one of the target's own names, case and all (`Error`, not `error`). */
+  readonly exact: boolean;
 }
 
 /** The feature vector of an option. */
@@ -76,6 +79,7 @@ export function anchorFeatures(o: AnchorOptionFacts): number[] {
     Math.log1p(o.order),
     o.words,
     o.quoted ? 1 : 0,
+    o.exact ? 1 : 0,
   ];
 }
 

@@ -150,6 +150,15 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // that are different names ("HTTPS" and "HTTP/2" both stem to "http"): a mention written
   // exactly as some of the phrase's pages are named is a mention of those pages only.
   const written = new Map<number, Map<string, number[]>>();
+  // The pages' own names (title, route, code-naming headings) as written, case kept: key -> pages.
+  const cased = new Map<string, number[]>();
+  const ownName = (as: string, page: number): void => {
+    const key = codeKey(as, true);
+    if (key === '') return;
+    const pages = cased.get(key);
+    if (pages === undefined) cased.set(key, [page]);
+    else if (!pages.includes(page)) pages.push(page);
+  };
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
     const id = phraseOf(stems);
@@ -178,24 +187,29 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
 
   for (const page of graph.pages) {
     claim(tokenize(page.title, cache), page.id, 'title', -1, page.title);
+    ownName(page.title, page.id);
     for (const route of [page.route, ...page.meta.aliases]) {
       // A route whose words the tokenizer partly drops names nothing (`/n-api/` is not "API").
       const words = routeWords(route, cache);
       const written = lastSegment(route);
       if (codeKey(written).split(' ').length === words.length) claim(words, page.id, 'alias', -1, written);
+      ownName(written, page.id);
     }
     for (const h of factsOf(page.id)?.headings ?? []) {
       if (h.depth < 2) continue;
-      for (const name of headingNames(h.text)) claim(tokenize(name, cache), page.id, 'heading', -1, name);
+      for (const name of headingNames(h.text)) {
+        claim(tokenize(name, cache), page.id, 'heading', -1, name);
+        ownName(name, page.id);
+      }
     }
   }
-  const contentLinks: { from: number; to: number; stems: string[]; line: number; column: number; code: boolean; quoted: boolean }[] = [];
+  const contentLinks: { from: number; to: number; stems: string[]; line: number; column: number; code: boolean; quoted: boolean; exact: boolean }[] = [];
   for (const link of graph.links) {
     if (link.from < 0 || link.to < 0 || link.from === link.to) continue;
     const stems = tokenize(link.raw.text, cache);
     if (link.context === 'content') {
       claim(stems, link.to, 'anchor-text', link.from, link.raw.text);
-      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text) });
+      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text), exact: link.raw.code === true && cased.get(codeKey(link.raw.text, true))?.includes(link.to) === true });
     } else {
       claim(stems, link.to, 'label', -1, link.raw.text);
     }
@@ -237,7 +251,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         own = [];
         pairLinks.set(key, own);
       }
-      own.push({ phrase: exact, place, line: link.line, column: link.column, words: link.stems.length, quoted: link.quoted });
+      own.push({ phrase: exact, place, line: link.line, column: link.column, words: link.stems.length, quoted: link.quoted, exact: link.exact });
       const p = phrases[exact];
       p.linked++;
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
@@ -302,7 +316,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     }
   }
-  const choice = orderAnchors(phrases, bySource, pairLinks, habit);
+  const choice = orderAnchors(phrases, bySource, pairLinks, habit, cased);
   return { phrases, bySource, linkMatches, placement: habit, anchorChoice: choice };
 }
 
@@ -311,19 +325,20 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
  * anchor options by it (by the fixed order alone when there is no fit).
  * @param pairLinks per linked pair (source * n + target), its links whose whole text is a phrase
  */
-function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit): AnchorChoice | null {
+function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit, cased: ReadonlyMap<string, readonly number[]>): AnchorChoice | null {
   const n = bySource.length;
   /** An option's facts as if the pair's own links were absent; null when it names the target only through them. */
-  const facts = (s: number, t: number, phraseId: number, place: number, words: number, quoted: boolean, order: number): AnchorOptionFacts | null => {
+  const facts = (s: number, t: number, phraseId: number, place: number, words: number, quoted: boolean, exact: boolean, order: number): AnchorOptionFacts | null => {
     const p = phrases[phraseId];
     let kind = KIND_ORDER.length;
     for (const k of nameKindsFor(p, s, t)) kind = Math.min(kind, KIND_ORDER.indexOf(k));
     if (kind === KIND_ORDER.length) return null;
     let mine = 0;
     for (const l of pairLinks.get(s * n + t) ?? []) if (l.phrase === phraseId) mine++;
-    return { linkedToTarget: (p.linkedTo.get(t) ?? 0) - mine, linked: p.linked - mine, total: p.prose + p.linked, placementRate: placementRate(habit, place), kind, place, order, words, quoted };
+    return { linkedToTarget: (p.linkedTo.get(t) ?? 0) - mine, linked: p.linked - mine, total: p.prose + p.linked, placementRate: placementRate(habit, place), kind, place, order, words, quoted, exact };
   };
   const quotedCode = (a: AnchorMatch): boolean => a.kind === 'code' && QUOTED.test(a.text);
+  const exactCode = (a: AnchorMatch, t: number): boolean => a.kind === 'code' && cased.get(codeKey(a.text.replace(/<[^>]*>/g, ''), true))?.includes(t) === true;
 
   // Training: a linked phrase and placement stands where its first occurrence is (an unlinked
   // one before the link, if any), because a suggestion can only name the first: so the fit
@@ -345,11 +360,11 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
       hit.anchors.forEach((a, k) => {
         if (hit.anchorPhrases[k] === l.phrase && hit.anchorPlaces[k] === l.place && before(a, at)) at = a;
       });
-      options.push({ at, make: (order) => facts(s, t, l.phrase, l.place, l.words, l.quoted, order), linked: true });
+      options.push({ at, make: (order) => facts(s, t, l.phrase, l.place, l.words, l.quoted, l.exact, order), linked: true });
     }
     hit.anchors.forEach((a, k) => {
       if (seen.has(hit.anchorPhrases[k] * 4 + hit.anchorPlaces[k])) return;
-      options.push({ at: a, make: (order) => facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), order), linked: false });
+      options.push({ at: a, make: (order) => facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), exactCode(a, t), order), linked: false });
     });
     const order = ranksInText(options.map((o) => o.at));
     const made = options.map((o, k) => o.make(order[k]));
@@ -367,7 +382,7 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
       if (choice !== null && hit.anchors.length > 1) {
         const order = ranksInText(hit.anchors);
         scores = hit.anchors.map((a, k) => {
-          const f = facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), order[k]);
+          const f = facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), exactCode(a, t), order[k]);
           return f === null ? -Infinity : anchorScore(choice, f);
         });
       }
@@ -398,6 +413,7 @@ interface LinkedOption {
   readonly column: number;
   readonly words: number;
   readonly quoted: boolean;
+  readonly exact: boolean;
 }
 
 /** Inline code that is a quoted string: `'stream'`, `"exports"`. */
@@ -470,9 +486,9 @@ function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: 
  * name only when it is written like one, so its words are not stemmed or dropped; '' past
  * {@link MAX_NAME_WORDS} words.
  */
-export function codeKey(text: string): string {
+export function codeKey(text: string, keepCase = false): string {
   const words: string[] = [];
-  forEachWord(text, (raw) => void words.push(raw.toLowerCase()));
+  forEachWord(text, (raw) => void words.push(keepCase ? raw : raw.toLowerCase()));
   return words.length > MAX_NAME_WORDS ? '' : words.join(' ');
 }
 

@@ -56,7 +56,7 @@ describe('the fitted anchor choice', () => {
   });
 
   it('skips groups with no passed-over option, and fits the same model from the same groups', () => {
-    const option = (o: Partial<AnchorOptionFacts>): AnchorOptionFacts => ({ linkedToTarget: 0, linked: 0, total: 4, placementRate: 0.2, kind: 1, place: 0, order: 0, words: 1, quoted: false, ...o });
+    const option = (o: Partial<AnchorOptionFacts>): AnchorOptionFacts => ({ linkedToTarget: 0, linked: 0, total: 4, placementRate: 0.2, kind: 1, place: 0, order: 0, words: 1, quoted: false, exact: false, ...o });
     // Authors link the option that is not first, in code.
     const groups: AnchorGroup[] = Array.from({ length: 50 }, (_, i) => ({
       options: [option({ order: 0, words: 1 + (i % 3) }), option({ order: 1, place: 1, kind: 4 })],
@@ -71,6 +71,20 @@ describe('the fitted anchor choice', () => {
     expect(a).toEqual(b);
     const score = (o: AnchorOptionFacts) => anchorFeatures(o).reduce((s, x, j) => s + (a!.model.weights[j] * (x - a!.model.means[j])) / a!.model.scales[j], a!.model.intercept);
     expect(score(option({ order: 1, place: 1, kind: 4 }))).toBeGreaterThan(score(option({ order: 0 })));
+  });
+});
+
+describe('the anchor features', () => {
+  it('give one value per named feature, each in its place', () => {
+    const o = { linkedToTarget: 3, linked: 4, total: 9, placementRate: 0.5, kind: 4, place: 1, order: 2, words: 2, quoted: false, exact: true };
+    const x = anchorFeatures(o);
+    expect(x).toHaveLength(ANCHOR_FEATURES.length);
+    const at = (name: (typeof ANCHOR_FEATURES)[number]) => x[ANCHOR_FEATURES.indexOf(name)];
+    expect(at('phrase-odds')).toBeCloseTo(Math.log(3.5 / 10), 12);
+    expect(at('placement-rate')).toBeCloseTo(Math.log(0.5), 12);
+    expect([at('heading'), at('title'), at('code'), at('alone'), at('first')]).toEqual([1, 0, 1, 0, 0]);
+    expect(at('order')).toBeCloseTo(Math.log(3), 12);
+    expect([at('words'), at('quoted'), at('exact-code')]).toEqual([2, 0, 1]);
   });
 });
 
