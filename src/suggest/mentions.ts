@@ -191,9 +191,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     for (const route of [page.route, ...page.meta.aliases]) {
       // A route whose words the tokenizer partly drops names nothing (`/n-api/` is not "API").
       const words = routeWords(route, cache);
-      const written = lastSegment(route);
-      if (codeKey(written).split(' ').length === words.length) claim(words, page.id, 'alias', -1, written);
-      ownName(written, page.id);
+      const segment = lastSegment(route);
+      if (codeKey(segment).split(' ').length === words.length) claim(words, page.id, 'alias', -1, segment);
+      ownName(segment, page.id);
     }
     for (const h of factsOf(page.id)?.headings ?? []) {
       if (h.depth < 2) continue;
@@ -484,7 +484,8 @@ function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: 
  * An inline code span's words as written: lower-cased word runs, stop words, digits and all
  * (`http2.get()` -> `http2 get`, `'/p/a/t/h?query=string'` -> `p a t h query string`). Code is a
  * name only when it is written like one, so its words are not stemmed or dropped; '' past
- * {@link MAX_NAME_WORDS} words.
+ * {@link MAX_NAME_WORDS} words. `keepCase`: the words as written, case and all (`Error` is not
+ * `error`).
  */
 export function codeKey(text: string, keepCase = false): string {
   const words: string[] = [];
