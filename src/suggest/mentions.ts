@@ -24,10 +24,9 @@ import { forEachWord, tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
 import { positionInSpan } from './anchor.js';
 import type { AnchorMatch, SourceTokens } from './anchor.js';
-import { routeWords } from './names.js';
+import { routeSegmentText, routeWords } from './names.js';
 import { anchorScore, fitAnchorChoice } from './anchor-choice.js';
 import type { AnchorChoice, AnchorGroup, AnchorOptionFacts } from './anchor-choice.js';
-import { SOURCE_EXTENSION_END } from '../routes/index.js';
 
 /** Where a name comes from. */
 export type NameKind = 'title' | 'alias' | 'label' | 'anchor-text' | 'heading';
@@ -145,7 +144,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // Inline code is compared as written (see codeKey): written form -> the phrases of the names
   // written so.
   const byCode = new Map<string, number>();
-  const keyed = new Set<string>();
+  const keyOf = new Map<string, string>();
   // Per phrase: its names as written (codeKey), each with the pages it names. Stems join words
   // that are different names ("HTTPS" and "HTTP/2" both stem to "http"): a mention written
   // exactly as some of the phrase's pages are named is a mention of those pages only.
@@ -164,9 +163,10 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const id = phraseOf(stems);
     const phrase = phrases[id];
     if (as !== null) {
-      const key = codeKey(as);
-      if (!keyed.has(as)) {
-        keyed.add(as);
+      let key = keyOf.get(as);
+      if (key === undefined) {
+        key = codeKey(as);
+        keyOf.set(as, key);
         if (key !== '' && !byCode.has(key)) byCode.set(key, id);
       }
       if (key !== '') {
@@ -191,7 +191,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     for (const route of [page.route, ...page.meta.aliases]) {
       // A route whose words the tokenizer partly drops names nothing (`/n-api/` is not "API").
       const words = routeWords(route, cache);
-      const segment = lastSegment(route);
+      const segment = routeSegmentText(route);
       if (codeKey(segment).split(' ').length === words.length) claim(words, page.id, 'alias', -1, segment);
       ownName(segment, page.id);
     }
@@ -505,19 +505,6 @@ function codeMatchOf(code: string, byCode: ReadonlyMap<string, number>, root: Tr
   const key = codeKey(code);
   if (byCode.get(key) === phrase) return phrase;
   return key !== '' && key.split(' ').length === stems.length ? phrase : -1;
-}
-
-/** The last segment of a route as written, without a source extension (`/api/n-api/` -> `n-api`). */
-function lastSegment(route: string): string {
-  const segments = route.split('/').filter((x) => x !== '');
-  const last = segments.length === 0 ? '' : segments[segments.length - 1];
-  let decoded = last;
-  try {
-    decoded = decodeURIComponent(last);
-  } catch {
-    // keep the segment as written
-  }
-  return decoded.replace(SOURCE_EXTENSION_END, '').replace(/[-_.+~]+/g, ' ');
 }
 
 /** The phrase that is a run of stems whole (an inline code span's words), or -1. */

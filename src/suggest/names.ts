@@ -35,16 +35,21 @@ export interface KeyTerms {
 
 /** Stems of the words of the last segment of a route or alias (`/guide/cache-server/` -> cach, server). */
 export function routeWords(route: string, cache: StemCache): string[] {
+  return tokenize(routeSegmentText(route), cache);
+}
+
+/** The last segment of a route as written, decoded, without a source extension, separators as spaces (`/api/n-api/` -> `n api`). */
+export function routeSegmentText(route: string): string {
   const segments = route.split('/').filter((s) => s !== '');
   const last = segments[segments.length - 1];
-  if (last === undefined) return [];
+  if (last === undefined) return '';
   let decoded = last;
   try {
     decoded = decodeURIComponent(last);
   } catch {
     // keep the segment as written
   }
-  return tokenize(decoded.replace(SOURCE_EXTENSION_END, '').replace(/[-_.+~]+/g, ' '), cache);
+  return decoded.replace(SOURCE_EXTENSION_END, '').replace(/[-_.+~]+/g, ' ');
 }
 
 /**

@@ -6,10 +6,10 @@
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { analyze } from '../../src/analyze.js';
+import { tempDir, writeTree } from '../collect/tree.js';
 import type { Report } from '../../src/types.js';
 
 const temps: string[] = [];
@@ -18,12 +18,9 @@ afterAll(() => {
 });
 
 function site(files: Record<string, string>): string {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'lw-trees-'));
+  const { dir } = tempDir('lw-trees-');
   temps.push(dir);
-  for (const [name, text] of Object.entries(files)) {
-    fs.mkdirSync(path.dirname(path.join(dir, 'site', name)), { recursive: true });
-    fs.writeFileSync(path.join(dir, 'site', name), text);
-  }
+  writeTree(path.join(dir, 'site'), files);
   return path.join(dir, 'site');
 }
 

@@ -14,6 +14,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { analyze } from '../../src/analyze.js';
+import { tempDir, writeTree } from '../collect/tree.js';
 
 const temps: string[] = [];
 afterAll(() => {
@@ -33,12 +34,9 @@ const FILES: Record<string, string> = {
 };
 
 function site(): string {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'lw-hugo-pages-'));
+  const { dir } = tempDir('lw-hugo-pages-');
   temps.push(dir);
-  for (const [name, text] of Object.entries(FILES)) {
-    fs.mkdirSync(path.dirname(path.join(dir, name)), { recursive: true });
-    fs.writeFileSync(path.join(dir, name), text);
-  }
+  writeTree(dir, FILES);
   return dir;
 }
 

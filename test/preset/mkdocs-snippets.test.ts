@@ -6,10 +6,10 @@
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { analyze } from '../../src/analyze.js';
+import { tempDir, writeTree } from '../collect/tree.js';
 
 const temps: string[] = [];
 afterAll(() => {
@@ -28,12 +28,9 @@ const FILES: Record<string, string> = {
 };
 
 function project(): string {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'lw-snippets-'));
+  const { dir } = tempDir('lw-snippets-');
   temps.push(dir);
-  for (const [name, text] of Object.entries(FILES)) {
-    fs.mkdirSync(path.dirname(path.join(dir, name)), { recursive: true });
-    fs.writeFileSync(path.join(dir, name), text);
-  }
+  writeTree(dir, FILES);
   return dir;
 }
 
