@@ -34,6 +34,7 @@ import type { MentionIndex, NameKind } from './mentions.js';
 import { nameKindsFor } from './mentions.js';
 import type { Neighbours } from './proximity.js';
 import { adamicAdar, depthWithout, sharedSegments, twoStepPaths } from './proximity.js';
+import type { TargetRows } from './pair-sums.js';
 
 /** Feature names, in the order of a feature vector. */
 export const FEATURES = [
@@ -93,6 +94,11 @@ export interface FeatureContext {
   readonly outlinks: Int32Array;
   /** Each page's route folders (`routeFolders`). */
   readonly folders: readonly (readonly string[])[];
+  /**
+   * The pairwise sums with the target's rows kept between calls (`pair-sums.ts`): the same
+   * values, faster when consecutive pairs share their target. Without it the rows are merged.
+   */
+  readonly rows?: TargetRows;
 }
 
 const NONE: readonly number[] = [];
@@ -102,7 +108,9 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   const { graph, ranking, mentions } = ctx;
   const x = new Array<number>(FEATURES.length).fill(0);
   const linked = hasContentLink(graph.forward, s, t);
-  x[F.similarity] = t < ctx.index.docOffsets.length - 1 && s < ctx.index.docOffsets.length - 1 ? cosine(ctx.index, s, t) : 0;
+  const sums = ctx.rows?.of(s, t);
+  const rows = ctx.index.docOffsets.length - 1;
+  x[F.similarity] = sums !== undefined ? sums.similarity : t < rows && s < rows ? cosine(ctx.index, s, t) : 0;
 
   // Name evidence: prose mentions, plus (for a linked pair) the pair's own link texts.
   const hit = mentions.bySource[s]?.get(t);
@@ -138,9 +146,8 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   }
   x[F.mentions] = validCount === 0 ? 0 : Math.log1p(count);
 
-  const aa = adamicAdar(ctx.neighbours, s, t);
-  x[F['adamic-adar']] = Math.log1p(aa.adamicAdar);
-  x[F['two-step-paths']] = Math.log1p(twoStepPaths(graph, s, t));
+  x[F['adamic-adar']] = Math.log1p(sums !== undefined ? sums.adamicAdar : adamicAdar(ctx.neighbours, s, t).adamicAdar);
+  x[F['two-step-paths']] = Math.log1p(sums !== undefined ? sums.twoStep : twoStepPaths(graph, s, t));
   x[F['shared-folders']] = sharedSegments(ctx.folders[s], ctx.folders[t]);
   x[F['target-inlinks']] = Math.log1p(ranking.contentInlinks[t] - (linked ? 1 : 0));
   x[F['source-outlinks']] = Math.log1p(ctx.outlinks[s] - (linked ? 1 : 0));

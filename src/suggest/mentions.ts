@@ -148,7 +148,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // Per phrase: its names as written (codeKey), each with the pages it names. Stems join words
   // that are different names ("HTTPS" and "HTTP/2" both stem to "http"): a mention written
   // exactly as some of the phrase's pages are named is a mention of those pages only.
-  const written = new Map<number, Map<string, number[]>>();
+  const written = new Map<number, Map<string, Set<number>>>();
   // The pages' own names (title, route, code-naming headings) as written, case kept: key -> pages.
   const cased = new Map<string, number[]>();
   const ownName = (as: string, page: number): void => {
@@ -158,6 +158,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (pages === undefined) cased.set(key, [page]);
     else if (!pages.includes(page)) pages.push(page);
   };
+  const refOf = new Map<number, NameRef>();
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
     const id = phraseOf(stems);
@@ -173,14 +174,18 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         let forms = written.get(id);
         if (forms === undefined) written.set(id, (forms = new Map()));
         const pages = forms.get(key);
-        if (pages === undefined) forms.set(key, [target]);
-        else if (!pages.includes(target)) pages.push(target);
+        if (pages === undefined) forms.set(key, new Set([target]));
+        else pages.add(target);
       }
     }
-    let ref = phrase.names.find((r) => r.target === target && r.kind === kind);
+    // Found through a map, not a search of the phrase's names: a label or link text such as
+    // "Overview" can name thousands of pages, and a search per claim made that quadratic.
+    const refKey = (id * n + target) * KIND_ORDER.length + KIND_ORDER.indexOf(kind);
+    let ref = refOf.get(refKey);
     if (ref === undefined) {
       ref = { target, kind, users: kind === 'anchor-text' ? new Map() : null };
       phrase.names.push(ref);
+      refOf.set(refKey, ref);
     }
     if (ref.users !== null && source >= 0) ref.users.set(source, (ref.users.get(source) ?? 0) + 1);
   };
@@ -303,7 +308,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       const forms = written.get(f.phrase);
       const only = forms !== undefined && forms.size > 1 ? forms.get(codeKey(f.text())) : undefined;
       for (const ref of phrase.names) {
-        if (ref.target === s || (only !== undefined && !only.includes(ref.target))) continue;
+        if (ref.target === s || (only !== undefined && !only.has(ref.target))) continue;
         let hit = hits.get(ref.target);
         if (hit === undefined) {
           hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [], anchorPlaces: [] };

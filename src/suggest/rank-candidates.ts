@@ -26,6 +26,7 @@ import { contentNeighbours } from './proximity.js';
 import { contributions } from './logistic.js';
 import { adamicAdar, routeFolders, sharedSegments, twoStepPaths } from './proximity.js';
 import type { Evidence } from './reason.js';
+import { TargetRows } from './pair-sums.js';
 import { pickUnderCaps } from './pick.js';
 import type { Chosen, ScoredPair } from './pick.js';
 import { factsByPage } from './facts-of.js';
@@ -64,7 +65,18 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
   const neighbours = contentNeighbours(graph);
   const isEntry = new Uint8Array(n);
   for (const e of graph.entries) isEntry[e] = 1;
-  const ctx: FeatureContext = { graph, ranking, index, mentions, neighbours, rankPct, isEntry, outlinks: contentOutlinks(graph), folders: graph.pages.map((p) => routeFolders(p.route)) };
+  const ctx: FeatureContext = {
+    graph,
+    ranking,
+    index,
+    mentions,
+    neighbours,
+    rankPct,
+    isEntry,
+    outlinks: contentOutlinks(graph),
+    folders: graph.pages.map((p) => routeFolders(p.route)),
+    rows: new TargetRows(graph, index, neighbours),
+  };
   const pool = candidatePool({ graph, related, mentions, neighbours, minSimilarity: settings.minSimilarity });
   const linked = (s: number, t: number): boolean => hasContentLink(graph.forward, s, t);
 
