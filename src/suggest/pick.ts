@@ -38,22 +38,53 @@ interface Entry {
 
 /**
  * Choose suggestions greedily.
+ *
+ * The pairs are taken in one fixed order: score (best first), then target, then source. Each
+ * pair's first entry is in a sorted array of indices (typed arrays, sorted once); only a pair
+ * that lost its phrases to an earlier choice comes back, at a lower score, through a small heap,
+ * and the two are merged as they are read. A heap of every pair (a million entries on a
+ * 50,000-page site) spent most of its time on cache misses: 26 s there, against 0.3 s for the
+ * 220,000 pairs of 10,000 pages.
  * @returns chosen pairs in the order they were chosen
  */
 export function pickUnderCaps(pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): Chosen[] {
+  const count = pairs.length;
+  const firstScore = new Float64Array(count);
+  const target = new Int32Array(count);
+  const source = new Int32Array(count);
+  for (let i = 0; i < count; i++) {
+    const p = pairs[i];
+    firstScore[i] = p.anchors.length > 0 ? p.score : Math.min(p.score, p.scoreWithoutAnchor);
+    target[i] = p.target;
+    source[i] = p.source;
+  }
+  // Score first (best first), then target, then source: a total order, since a pair appears once.
+  const order = new Int32Array(count);
+  for (let i = 0; i < count; i++) order[i] = i;
+  order.sort((a, b) => (firstScore[a] !== firstScore[b] ? firstScore[b] - firstScore[a] : target[a] !== target[b] ? target[a] - target[b] : source[a] - source[b]));
   const before = (a: Entry, b: Entry): boolean => {
     if (a.score !== b.score) return a.score > b.score;
-    const pa = pairs[a.pair];
-    const pb = pairs[b.pair];
-    return pa.target !== pb.target ? pa.target < pb.target : pa.source < pb.source;
+    return target[a.pair] !== target[b.pair] ? target[a.pair] < target[b.pair] : source[a.pair] < source[b.pair];
   };
-  const heap = new Heap<Entry>(before);
-  pairs.forEach((p, i) => heap.push({ pair: i, score: p.anchors.length > 0 ? p.score : Math.min(p.score, p.scoreWithoutAnchor), option: p.anchors.length > 0 ? 0 : -1 }));
+  const again = new Heap<Entry>(before);
+  let at = 0;
+  const next = (): Entry | undefined => {
+    const queued = again.peek();
+    if (at < count) {
+      const i = order[at];
+      const first: Entry = { pair: i, score: firstScore[i], option: pairs[i].anchors.length > 0 ? 0 : -1 };
+      if (queued === undefined || !before(queued, first)) {
+        at++;
+        return first;
+      }
+    }
+    return again.pop();
+  };
   const perSource = new Map<number, number>();
   const perTarget = new Map<number, number>();
   const used = new Map<number, [number, number][]>();
   const out: Chosen[] = [];
-  for (let e = heap.pop(); e !== undefined; e = heap.pop()) {
+  for (let e = next(); e !== undefined; e = next()) {
     const pair = pairs[e.pair];
     if ((perSource.get(pair.source) ?? 0) >= maxPerSource || (perTarget.get(pair.target) ?? 0) >= maxPerTarget) continue;
     let anchor: AnchorMatch | null = null;
@@ -63,7 +94,7 @@ export function pickUnderCaps(pairs: readonly ScoredPair[], maxPerSource: number
       let k = e.option;
       while (k < pair.anchors.length && !free(pair.anchors[k])) k++;
       if (k === pair.anchors.length) {
-        heap.push({ pair: e.pair, score: Math.min(pair.score, pair.scoreWithoutAnchor), option: -1 });
+        again.push({ pair: e.pair, score: Math.min(pair.score, pair.scoreWithoutAnchor), option: -1 });
         continue;
       }
       anchor = pair.anchors[k];
@@ -82,6 +113,11 @@ class Heap<T> {
   private readonly items: T[] = [];
 
   constructor(private readonly before: (a: T, b: T) => boolean) {}
+
+  /** The item that would come out next, left in place. */
+  peek(): T | undefined {
+    return this.items[0];
+  }
 
   push(item: T): void {
     const items = this.items;

@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { pickUnderCaps } from '../../src/suggest/pick.js';
 import type { ScoredPair } from '../../src/suggest/pick.js';
 import type { AnchorMatch } from '../../src/suggest/anchor.js';
+import { random } from './helpers.js';
 
 const anchor = (offset: number, endOffset: number): AnchorMatch => ({
   offset,
@@ -63,5 +64,66 @@ describe('pickUnderCaps', () => {
       [11, 2],
       [11, 3],
     ]);
+  });
+
+  it('chooses as the plain greedy rule does (best remaining first, by a search of every entry) on random pairs', () => {
+    // The rule written the slow, obvious way: every step searches all waiting entries.
+    const greedy = (pairs: readonly ScoredPair[], maxPerSource: number, maxPerTarget: number): [number, number, number | null, number][] => {
+      const waiting = pairs.map((p, i) => ({ i, score: p.anchors.length > 0 ? p.score : Math.min(p.score, p.scoreWithoutAnchor), option: p.anchors.length > 0 ? 0 : -1 }));
+      const perSource = new Map<number, number>();
+      const perTarget = new Map<number, number>();
+      const taken = new Map<number, [number, number][]>();
+      const out: [number, number, number | null, number][] = [];
+      while (waiting.length > 0) {
+        let best = 0;
+        for (let k = 1; k < waiting.length; k++) {
+          const a = waiting[k]!;
+          const b = waiting[best]!;
+          const pa = pairs[a.i]!;
+          const pb = pairs[b.i]!;
+          if (a.score > b.score || (a.score === b.score && (pa.target < pb.target || (pa.target === pb.target && pa.source < pb.source)))) best = k;
+        }
+        const e = waiting.splice(best, 1)[0]!;
+        const p = pairs[e.i]!;
+        if ((perSource.get(p.source) ?? 0) >= maxPerSource || (perTarget.get(p.target) ?? 0) >= maxPerTarget) continue;
+        let at: number | null = null;
+        if (e.option >= 0) {
+          const used = taken.get(p.source) ?? [];
+          const free = p.anchors.find((a) => !used.some(([s, t]) => a.offset < t && s < a.endOffset));
+          if (free === undefined) {
+            waiting.push({ i: e.i, score: Math.min(p.score, p.scoreWithoutAnchor), option: -1 });
+            continue;
+          }
+          used.push([free.offset, free.endOffset]);
+          taken.set(p.source, used);
+          at = free.offset;
+        }
+        perSource.set(p.source, (perSource.get(p.source) ?? 0) + 1);
+        perTarget.set(p.target, (perTarget.get(p.target) ?? 0) + 1);
+        out.push([p.source, p.target, at, e.score]);
+      }
+      return out;
+    };
+    for (let seed = 1; seed <= 20; seed++) {
+      const rnd = random(seed);
+      const pairs: ScoredPair[] = [];
+      for (let s = 0; s < 25; s++) {
+        for (let t = 0; t < 25; t++) {
+          if (s === t || rnd() < 0.6) continue;
+          // Scores on a coarse grid, so ties are common; anchors that overlap within a source.
+          const score = Math.floor(rnd() * 8) / 8;
+          const anchors = Array.from({ length: Math.floor(rnd() * 3) }, () => {
+            const at = Math.floor(rnd() * 6) * 10;
+            return anchor(at, at + 5 + Math.floor(rnd() * 10));
+          });
+          pairs.push({ ...pair(s, t, score, anchors), scoreWithoutAnchor: Math.floor(rnd() * 8) / 8 });
+        }
+      }
+      const perSource = 1 + Math.floor(rnd() * 3);
+      const perTarget = 1 + Math.floor(rnd() * 3);
+      const chosen = pickUnderCaps(pairs, perSource, perTarget).map((c) => [c.pair.source, c.pair.target, c.anchor?.offset ?? null, c.score]);
+      expect(chosen.length).toBeGreaterThan(10);
+      expect(chosen).toEqual(greedy(pairs, perSource, perTarget));
+    }
   });
 });
