@@ -38,6 +38,8 @@ export interface RunSettings {
   readonly outFile: string;
   /** @default 'suggest' */
   readonly command?: 'check' | 'suggest';
+  /** Also write the report as HTML here, after the timed span (for the browser measurement). */
+  readonly htmlOut?: string;
 }
 
 /** Run the pipeline once on the site at `root`. */
@@ -72,6 +74,7 @@ export async function runPipeline(lib: Built, root: string, settings: RunSetting
   const end = performance.now();
   const cpu = process.cpuUsage(c0);
   stages.write = end - tw;
+  if (settings.htmlOut !== undefined) await lib.write.writeFileAtomic(settings.htmlOut, lib.api.formatReportPieces(report, 'html'));
   return {
     stages,
     totalMs: end - t0,
