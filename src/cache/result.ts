@@ -4,8 +4,9 @@
  * files, the resolved options, the command, the baseline, the tool version and the code itself,
  * see `codeHash`), the last report
  * is returned as it was, without parsing, ranking or suggesting again. It lives beside the
- * page-facts shards, one file per command, written atomically; a file that does not parse, or
- * whose key differs, is ignored (and replaced by the next run), never trusted.
+ * page-facts shards, one file per command, written atomically; a file whose head does not parse,
+ * whose key differs or whose sizes do not add up is ignored (and replaced by the next run), never
+ * trusted.
  */
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
@@ -43,15 +44,17 @@ function resultFile(dir: string, command: string): string {
  * the head, `{"schema","key","fields"}`, where `fields` lists each report field in order with
  * the number of lines it takes: `[name, lines]`. Then come those lines, field after field: the
  * field's value, or, for an array longer than `ROWS_PER_LINE`, its items in lines of
- * `ROWS_PER_LINE`. A file whose line count is not what its head says (cut short) is ignored.
+ * `ROWS_PER_LINE`. The last line, `{"bytes":[...]}`, gives the bytes of each field's lines, so
+ * that a field is read without reading the ones before it. A file whose sizes do not add up
+ * (cut short) is ignored.
  */
 const ROWS_PER_LINE = 5000;
 
 /**
- * A field whose lines take more bytes than this is decoded when it is first read, not when the
- * file is read: a run whose report comes from the cache and is written out as the bytes of the
- * last run (`readCachedOutput`) never reads the pages, links or suggestions at all, and their
- * decoding was most of such a run.
+ * A field whose lines take more bytes than this is read and decoded when it is first used, not
+ * when the report is read: a run whose report comes from the cache and is written out as a copy
+ * of the last run's output (`copyCachedOutput`) never reads the pages, links or suggestions at
+ * all. Reading and decoding them was most of such a run.
  */
 const DECODE_ON_READ_BYTES = 64 * 1024;
 
@@ -72,67 +75,133 @@ function isHead(value: unknown): value is ResultHead {
   );
 }
 
+/** The open cache file behind the fields of one report that are not read yet. */
+interface Pending {
+  fd: number | null;
+  fields: number;
+}
+
+/** Closes the file of a report dropped with fields never read. */
+const unread = new FinalizationRegistry<Pending>((pending) => closePending(pending));
+
+function closePending(pending: Pending): void {
+  if (pending.fd === null) return;
+  try {
+    fs.closeSync(pending.fd);
+  } catch {
+    // Already closed: nothing to do.
+  }
+  pending.fd = null;
+}
+
 /**
- * The cached report for `key`, or null (absent, unreadable, foreign, stale or cut short). Its
- * large fields are decoded on first read (see `DECODE_ON_READ_BYTES`); they are enumerable
+ * The cached report for `key`, or null (absent, unreadable, foreign, stale or cut short).
+ *
+ * Its large fields (see `DECODE_ON_READ_BYTES`) are read when first used: they are enumerable
  * properties in the report's field order all the same, so `JSON.stringify`, spreading and
- * comparing see the report as it was written.
+ * comparing see the report as it was written. Until then the file stays open (a later run that
+ * replaces it renames a new file over it, so this report's bytes stay readable); it is closed
+ * once every such field was read, or when the report is dropped.
  */
 export function readResult(dir: string, command: string, key: string): Report | null {
+  let fd: number | null = null;
   try {
-    // The head line is read and checked before the rest: after a change (the usual case in a
-    // pull request) the key differs, and reading a large report for nothing costs time.
-    const file = resultFile(dir, command);
-    const head = JSON.parse(readHead(file)) as unknown;
+    fd = fs.openSync(resultFile(dir, command), 'r');
+    const size = fs.fstatSync(fd).size;
+    // The head is read and checked before the rest: after a change (the usual case in a pull
+    // request) the key differs, and reading a large report for nothing costs time.
+    const first = readBytes(fd, 0, Math.min(HEAD_BYTES, size));
+    const headEnd = first.indexOf(10);
+    if (headEnd === -1) return null;
+    const head = JSON.parse(first.toString('utf8', 0, headEnd)) as unknown;
     if (!isHead(head) || head.key !== key) return null;
-    const bytes = fs.readFileSync(file);
-    const ends = lineEnds(bytes);
-    const expected = 1 + head.fields.reduce((sum, [, lines]) => sum + lines, 0);
-    if (ends.length !== expected) return null;
+    const tailStart = Math.max(headEnd + 1, size - TAIL_BYTES);
+    const tail = readBytes(fd, tailStart, size - tailStart);
+    if (tail.length < 2 || tail[tail.length - 1] !== 10) return null;
+    const trailerStart = tail.lastIndexOf(10, tail.length - 2) + 1;
+    if (trailerStart === 0 && tailStart !== headEnd + 1) return null;
+    const trailer = JSON.parse(tail.toString('utf8', trailerStart, tail.length - 1)) as { bytes?: unknown };
+    const bytes = trailer.bytes;
+    if (!Array.isArray(bytes) || bytes.length !== head.fields.length || !bytes.every((b) => Number.isInteger(b) && b >= 2)) return null;
+    const sizes = bytes as number[];
+    if (headEnd + 1 + sizes.reduce((a, b) => a + b, 0) + (tail.length - trailerStart) !== size) return null;
+
     const report: Record<string, unknown> = {};
-    let line = 1;
-    for (const [name, lines] of head.fields) {
-      const spans: [number, number][] = [];
-      for (let k = 0; k < lines; k++, line++) spans.push([ends[line - 1] + 1, ends[line]]);
-      const size = spans[spans.length - 1][1] - spans[0][0];
-      if (size <= DECODE_ON_READ_BYTES) report[name] = decodeField(bytes, spans);
-      else decodeOnRead(report, name, bytes, spans);
-    }
+    const pending: Pending = { fd, fields: 0 };
+    let offset = headEnd + 1;
+    head.fields.forEach(([name, lines], i) => {
+      const span = { offset, length: sizes[i], lines };
+      offset += sizes[i];
+      if (span.length <= DECODE_ON_READ_BYTES) report[name] = decodeField(readBytes(fd!, span.offset, span.length), span.lines);
+      else {
+        pending.fields++;
+        decodeOnRead(report, name, span, pending);
+      }
+    });
     if (report.schema !== 'linkweave/report@1') return null;
+    if (pending.fields === 0) return report as unknown as Report;
+    unread.register(report, pending, pending);
+    fd = null;
     return report as unknown as Report;
   } catch {
     return null;
+  } finally {
+    if (fd !== null) fs.closeSync(fd);
   }
 }
 
-/** Offsets of the newlines of `bytes`; a file not ending in one is cut short (none returned). */
-function lineEnds(bytes: Buffer): number[] {
-  const ends: number[] = [];
-  if (bytes.length === 0 || bytes[bytes.length - 1] !== 10) return ends;
-  for (let at = bytes.indexOf(10); at !== -1; at = bytes.indexOf(10, at + 1)) ends.push(at);
-  return ends;
+/** `length` bytes of the file at `offset` (fewer only at its end). */
+function readBytes(fd: number, offset: number, length: number): Buffer {
+  const buffer = Buffer.allocUnsafe(length);
+  let done = 0;
+  while (done < length) {
+    const n = fs.readSync(fd, buffer, done, length - done, offset + done);
+    if (n === 0) break;
+    done += n;
+  }
+  return buffer.subarray(0, done);
 }
 
-/** The value of one field from its lines: one value, or the items of its lines in order. */
-function decodeField(bytes: Buffer, spans: readonly (readonly [number, number])[]): unknown {
-  if (spans.length === 1) return JSON.parse(bytes.toString('utf8', spans[0][0], spans[0][1]));
+/**
+ * The value of one field from its `lines` lines (each ending in a newline): one value, or the
+ * items of its lines in order.
+ * @throws when the bytes are not those lines
+ */
+function decodeField(bytes: Buffer, lines: number): unknown {
+  const values: unknown[] = [];
+  let start = 0;
+  for (let k = 0; k < lines; k++) {
+    const end = bytes.indexOf(10, start);
+    if (end === -1) throw new Error('report cache: a field has fewer lines than its head says');
+    values.push(JSON.parse(bytes.toString('utf8', start, end)));
+    start = end + 1;
+  }
+  if (start !== bytes.length) throw new Error('report cache: a field has more bytes than its lines');
+  if (lines === 1) return values[0];
   const items: unknown[] = [];
-  for (const [start, end] of spans) {
-    for (const item of JSON.parse(bytes.toString('utf8', start, end)) as unknown[]) items.push(item);
-  }
+  for (const line of values) for (const item of line as unknown[]) items.push(item);
   return items;
 }
 
-/** Make `name` a property of `target` that decodes its lines when first read (or is replaced when first set). */
-function decodeOnRead(target: Record<string, unknown>, name: string, bytes: Buffer, spans: readonly (readonly [number, number])[]): void {
+/**
+ * Make `name` a property of `target` that reads and decodes its lines from the open cache file
+ * when first used (or takes the value it is first given).
+ */
+function decodeOnRead(target: Record<string, unknown>, name: string, span: { offset: number; length: number; lines: number }, pending: Pending): void {
   const settle = (value: unknown): void => {
     Object.defineProperty(target, name, { value, enumerable: true, configurable: true, writable: true });
+    pending.fields--;
+    if (pending.fields === 0) {
+      closePending(pending);
+      unread.unregister(pending);
+    }
   };
   Object.defineProperty(target, name, {
     enumerable: true,
     configurable: true,
     get() {
-      const value = decodeField(bytes, spans);
+      if (pending.fd === null) throw new Error(`report cache: the file behind the report's "${name}" was closed before it was read`);
+      const value = decodeField(readBytes(pending.fd, span.offset, span.length), span.lines);
       settle(value);
       return value;
     },
@@ -140,21 +209,10 @@ function decodeOnRead(target: Record<string, unknown>, name: string, bytes: Buff
   });
 }
 
-/** The first line of `file` (the head: its schema, key and field list), read alone. */
-function readHead(file: string): string {
-  const fd = fs.openSync(file, 'r');
-  try {
-    const chunk = Buffer.alloc(HEAD_BYTES);
-    const length = fs.readSync(fd, chunk, 0, HEAD_BYTES, 0);
-    const end = chunk.subarray(0, length).indexOf(10);
-    return chunk.toString('utf8', 0, end === -1 ? length : end);
-  } finally {
-    fs.closeSync(fd);
-  }
-}
-
-/** Bytes read for the head line (the head of a report is about 600). */
+/** Bytes read for the head line (the head of a report is about 300). */
 const HEAD_BYTES = 8192;
+/** Bytes read from the end for the last line (about 100). */
+const TAIL_BYTES = 8192;
 
 /** Store `report` under `key` (temp file + rename). Never throws: a cache that cannot be written is skipped. */
 export function writeResult(dir: string, command: string, key: string, report: Report): void {
@@ -167,15 +225,20 @@ export function writeResult(dir: string, command: string, key: string, report: R
     const head: ResultHead = { schema: RESULT_SCHEMA, key, fields: fields.map(([name, value]) => [name, linesOf(value)] as const) };
     fs.mkdirSync(dir, { recursive: true });
     fd = fs.openSync(temp, 'w');
-    fs.writeSync(fd, `${JSON.stringify(head)}\n`);
+    const out = fd;
+    const write = (line: string): number => fs.writeSync(out, `${line}\n`);
+    write(JSON.stringify(head));
+    const bytes: number[] = [];
     for (const [, value] of fields) {
-      if (linesOf(value) === 1) {
-        fs.writeSync(fd, `${JSON.stringify(value)}\n`);
-        continue;
+      let written = 0;
+      if (linesOf(value) === 1) written += write(JSON.stringify(value));
+      else {
+        const items = value as unknown[];
+        for (let i = 0; i < items.length; i += ROWS_PER_LINE) written += write(JSON.stringify(items.slice(i, i + ROWS_PER_LINE)));
       }
-      const items = value as unknown[];
-      for (let i = 0; i < items.length; i += ROWS_PER_LINE) fs.writeSync(fd, `${JSON.stringify(items.slice(i, i + ROWS_PER_LINE))}\n`);
+      bytes.push(written);
     }
+    write(JSON.stringify({ bytes }));
     fs.closeSync(fd);
     fd = null;
     fs.renameSync(temp, target);

@@ -69,7 +69,7 @@ describe('the whole-report cache file', () => {
     const dir = path.join(base, 'lines');
     writeResult(dir, 'check', 'k1', report as never);
     const lines = fs.readFileSync(path.join(dir, 'report-check.json'), 'utf8').trimEnd().split('\n');
-    expect(lines.length).toBe(1 + 2 + 3 + 1); // header, schema and stats, links in 3 lines, pages
+    expect(lines.length).toBe(1 + 2 + 3 + 1 + 1); // header, schema and stats, links in 3 lines, pages, the sizes
     expect(JSON.stringify(readResult(dir, 'check', 'k1'))).toBe(JSON.stringify(report));
     expect(readResult(dir, 'check', 'other')).toBeNull();
   });
@@ -102,6 +102,24 @@ describe('the whole-report cache file', () => {
     const again = readResult(dir, 'suggest', 'k2') as unknown as Record<string, unknown>;
     again.links = [];
     expect(again.links).toEqual([]);
+  });
+
+  it('reads a field of a report whose file a later run replaced, and closes the file once every field was read', async () => {
+    const { readResult, writeResult } = await import('../../src/cache/result.js');
+    const rows = (tag: string): Record<string, unknown>[] => Array.from({ length: 6000 }, (_, i) => ({ route: `/${tag}/${i}/`, line: i }));
+    const first = { schema: 'linkweave/report@1', pages: rows('first'), links: rows('link') };
+    const dir = path.join(base, 'replaced');
+    writeResult(dir, 'check', 'k-first', first as never);
+    const openFiles = (): number => fs.readdirSync('/proc/self/fd').length;
+    const before = process.platform === 'linux' ? openFiles() : 0;
+    const read = readResult(dir, 'check', 'k-first') as unknown as Record<string, unknown>;
+    writeResult(dir, 'check', 'k-second', { schema: 'linkweave/report@1', pages: rows('second'), links: [] } as never);
+    expect(readResult(dir, 'check', 'k-first')).toBeNull();
+    expect(read.pages).toEqual(first.pages);
+    if (process.platform === 'linux') expect(openFiles()).toBe(before + 1);
+    expect(read.links).toEqual(first.links);
+    if (process.platform === 'linux') expect(openFiles()).toBe(before);
+    expect(JSON.stringify(read)).toBe(JSON.stringify(first));
   });
 
   it('ignores a file cut short', async () => {
