@@ -10,15 +10,22 @@
  *   and the pipeline cold, warm with no change, warm with one link target changed, and warm with
  *   one file changed (a paragraph added); medians of R.
  * - `related`: the inverted-index top-10 against brute force on the site's term index.
+ * - `html`: the HTML report's size and the time chromium takes to open it (bench/html.ts): the
+ *   report at `--html FILE` (written by `measure --html-out FILE` from its first cold run), or,
+ *   without `--html`, the browser tests' fixture report of `--size` pages
+ *   (test/browser/report-fixture.ts) formatted by the built package.
  * Without `--dir`, the site is generated into a temporary folder and removed afterwards.
  */
 import { appendFileSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { parseArgs } from 'node:util';
+import { buildFixtureReport } from '../test/browser/report-fixture.js';
 import { bruteForceRelated, compareRelated } from './brute-force.js';
 import { runFront } from './front.js';
 import { generateSite, relinkOne } from './generate.js';
+import { measureHtmlOpen } from './html.js';
+import type { HtmlOpenResult } from './html.js';
 import { loadBuilt } from './lib.js';
 import type { Built } from './lib.js';
 import type { RunTiming } from './pipeline.js';
@@ -94,7 +101,7 @@ async function prepare(lib: Built, root: string) {
   };
 }
 
-async function measure(lib: Built, root: string, work: string, size: number, runs: number): Promise<MeasureResult> {
+async function measure(lib: Built, root: string, work: string, size: number, runs: number, htmlOut: string | undefined): Promise<MeasureResult> {
   // The front half once: the file list and the link graph for the references (also warms the JIT
   // for every run below, bare parse included, so they compare like with like).
   // Only what the references need is kept: the parsed facts must not stay on the heap during
@@ -132,7 +139,8 @@ async function measure(lib: Built, root: string, work: string, size: number, run
     coldCheck.push(await runPipeline(lib, root, { cacheDir: join(work, `cache-check-${r}`), outFile, command: 'check' }));
     rmSync(join(work, `cache-check-${r}`), { recursive: true, force: true });
     gc();
-    cold.push(await runPipeline(lib, root, { cacheDir, outFile }));
+    // The first cold run's report is also written as HTML (after its timed span) for `--mode html`.
+    cold.push(await runPipeline(lib, root, { cacheDir, outFile, ...(r === 0 && htmlOut !== undefined ? { htmlOut } : {}) }));
     cacheBytes = folderBytes(cacheDir);
     gc();
     if (cacheBytes > 0) {
@@ -190,6 +198,24 @@ async function related(lib: Built, root: string, size: number, runs: number, voc
   };
 }
 
+/** `--mode html`: the report at `file`, or the fixture report of `size` pages written to a temp file. */
+async function html(size: number, runs: number, file: string | undefined): Promise<HtmlOpenResult> {
+  if (file !== undefined) return measureHtmlOpen(file, 'site', size, runs);
+  const lib = await loadBuilt();
+  const work = mkdtempSync(join(tmpdir(), 'lw-bench-html-'));
+  try {
+    const out = join(work, 'report.html');
+    let report: ReturnType<typeof buildFixtureReport> | null = buildFixtureReport({ pages: size, seed: 5 });
+    const pages = report.pages.length;
+    await lib.write.writeFileAtomic(out, lib.api.formatReportPieces(report, 'html'));
+    report = null;
+    gc();
+    return await measureHtmlOpen(out, 'fixture', pages, runs);
+  } finally {
+    rmSync(work, { recursive: true, force: true });
+  }
+}
+
 async function main(): Promise<void> {
   const { values } = parseArgs({
     options: {
@@ -199,14 +225,20 @@ async function main(): Promise<void> {
       mode: { type: 'string', default: 'rss' },
       seed: { type: 'string', default: '1' },
       vocabulary: { type: 'string', default: 'topical' },
+      html: { type: 'string' },
+      'html-out': { type: 'string' },
     },
   });
   const size = Number(values.size);
   if (!Number.isInteger(size) || size < 1) throw new Error(`one-size: --size must be a positive integer, got "${values.size ?? ''}"`);
   const mode = values.mode;
-  if (mode !== 'rss' && mode !== 'measure' && mode !== 'related') throw new Error(`one-size: --mode must be rss, measure or related, got "${mode}"`);
+  if (mode !== 'rss' && mode !== 'measure' && mode !== 'related' && mode !== 'html') throw new Error(`one-size: --mode must be rss, measure, related or html, got "${mode}"`);
   const runs = values.runs === undefined ? (size >= 50_000 ? 1 : 3) : Number(values.runs);
   if (!Number.isInteger(runs) || runs < 1) throw new Error(`one-size: --runs must be a positive integer, got "${values.runs}"`);
+  if (mode === 'html') {
+    process.stdout.write(`RESULT ${JSON.stringify(await html(size, runs, values.html))}\n`);
+    return;
+  }
   const work = mkdtempSync(join(tmpdir(), 'lw-bench-work-'));
   const root = values.dir ?? join(work, 'site');
   try {
@@ -214,7 +246,7 @@ async function main(): Promise<void> {
     if (vocabulary !== 'topical' && vocabulary !== 'shared') throw new Error(`one-size: --vocabulary must be topical or shared, got "${vocabulary}"`);
     if (values.dir === undefined) generateSite(root, { pages: size, seed: Number(values.seed), vocabulary });
     const lib = await loadBuilt();
-    const result = mode === 'rss' ? await rss(lib, root, work) : mode === 'measure' ? await measure(lib, root, work, size, runs) : await related(lib, root, size, runs, vocabulary);
+    const result = mode === 'rss' ? await rss(lib, root, work) : mode === 'measure' ? await measure(lib, root, work, size, runs, values['html-out']) : await related(lib, root, size, runs, vocabulary);
     process.stdout.write(`RESULT ${JSON.stringify(result)}\n`);
   } finally {
     rmSync(work, { recursive: true, force: true });

@@ -1,8 +1,8 @@
 /**
  * One timed run of the real pipeline: `analyze` with `command: 'suggest'` or `'check'` (stages timed from
- * its hooks), then the write stage as the command line does it: the bytes kept in the cache when
- * the report came from the whole-report cache, else `formatReportPieces(report, 'json')`; then
- * `writeFileAtomic`.
+ * its hooks), then the write stage as the command line does it: the bytes kept in the cache copied
+ * (`copyCachedOutput`) when the report came from the whole-report cache, else
+ * `formatReportPieces(report, 'json')` written by `writeFileAtomic`.
  */
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
@@ -38,6 +38,8 @@ export interface RunSettings {
   readonly outFile: string;
   /** @default 'suggest' */
   readonly command?: 'check' | 'suggest';
+  /** Also write the report as HTML here, after the timed span (for the browser measurement). */
+  readonly htmlOut?: string;
 }
 
 /** Run the pipeline once on the site at `root`. */
@@ -60,18 +62,18 @@ export async function runPipeline(lib: Built, root: string, settings: RunSetting
   const t0 = performance.now();
   const report = await lib.api.analyze({ ...siteConfig(root), root, command: settings.command ?? 'suggest', cache }, hooks);
   const tw = performance.now();
-  // As the command line writes it: the bytes written last time when the report came from the
-  // whole-report cache, else in pieces (one string cannot hold a 100,000-page report).
+  // As the command line writes it: a copy of the bytes written last time when the report came
+  // from the whole-report cache, else in pieces (one string cannot hold a 100,000-page report).
   const info = reportCache as ReportCacheInfo | null;
-  const bytes = info === null ? null : lib.cache.readCachedOutput(info, 'json', process.cwd());
-  if (bytes !== null) await lib.write.writeFileAtomic(settings.outFile, bytes);
-  else {
+  const copied = info !== null && (await lib.cache.copyCachedOutput(info, 'json', process.cwd(), settings.outFile));
+  if (!copied) {
     await lib.write.writeFileAtomic(settings.outFile, lib.api.formatReportPieces(report, 'json'));
     if (info !== null) lib.cache.saveCachedOutput(info, 'json', process.cwd(), settings.outFile);
   }
   const end = performance.now();
   const cpu = process.cpuUsage(c0);
   stages.write = end - tw;
+  if (settings.htmlOut !== undefined) await lib.write.writeFileAtomic(settings.htmlOut, lib.api.formatReportPieces(report, 'html'));
   return {
     stages,
     totalMs: end - t0,

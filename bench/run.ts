@@ -11,6 +11,11 @@
  * removed afterwards. `--vocabulary` names the site kinds measured at every size (default
  * `topical`; `shared` adds a large site-wide vocabulary, see bench/site/plan.ts); the related-pages
  * check against brute force runs on both kinds.
+ *
+ * The HTML report of each size (written from the first cold run) is opened in chromium in a
+ * fresh process (bench/html.ts); at 100,000 pages the HTML is measured on the browser tests'
+ * fixture report (test/browser/report-fixture.ts) unless the sizes include 100,000 (`--full`),
+ * where the generated site's real report is measured too.
  */
 import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -19,6 +24,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parseArgs } from 'node:util';
 import { generateSite } from './generate.js';
+import type { HtmlOpenResult } from './html.js';
 import type { MeasureResult, RelatedResult, RssResult } from './one-size.js';
 import type { Vocabulary } from './site/plan.js';
 import type { MachineInfo, SizeResult } from './table.js';
@@ -26,6 +32,10 @@ import { renderTable } from './table.js';
 
 /** Pages of the site the relatedness reference runs on (the brute force is quadratic). */
 const RELATED_PAGES = 2000;
+/** Pages of the fixture report whose HTML is measured (the issue's size for the HTML target). */
+const HTML_FIXTURE_PAGES = 100_000;
+/** Opens of each HTML report (medians). */
+const HTML_RUNS = '3';
 
 function log(message: string): void {
   process.stderr.write(`[bench] ${message}\n`);
@@ -117,6 +127,7 @@ async function main(): Promise<void> {
   const base = mkdtempSync(join(tmpdir(), 'lw-bench-'));
   const results: SizeResult[] = [];
   const related: (RelatedResult | { error: string })[] = [];
+  let htmlFixture: HtmlOpenResult | { error: string } | null = null;
   try {
     // The related-pages check first: it is short, and a long run stopped early still has it.
     for (const vocabulary of ['topical', 'shared'] as const) {
@@ -138,17 +149,26 @@ async function main(): Promise<void> {
         log(`${size} pages (${vocabulary}): measuring...`);
         const runs = values.runs ?? String(size >= 50_000 ? 1 : 3);
         const heap = `--max-old-space-size=${size >= 50_000 ? 12_288 : 4096}`;
-        const measure = await child<MeasureResult>(['--mode', 'measure', '--size', String(size), '--dir', dir, '--runs', runs], ['--expose-gc', heap]);
-        results.push({ size, vocabulary, generateMs, rss, measure });
+        const htmlFile = join(base, `report-${vocabulary}-${size}.html`);
+        const measure = await child<MeasureResult>(['--mode', 'measure', '--size', String(size), '--dir', dir, '--runs', runs, '--html-out', htmlFile], ['--expose-gc', heap]);
         rmSync(dir, { recursive: true, force: true });
+        let html: HtmlOpenResult | { error: string } = { error: 'no HTML report was written' };
+        if (existsSync(htmlFile)) {
+          log(`${size} pages (${vocabulary}): opening the HTML report in chromium...`);
+          html = await child<HtmlOpenResult>(['--mode', 'html', '--size', String(size), '--html', htmlFile, '--runs', HTML_RUNS], []);
+          rmSync(htmlFile, { force: true });
+        }
+        results.push({ size, vocabulary, generateMs, rss, measure, html });
         // The table so far, so a long run that is stopped still leaves its numbers.
-        log(`so far:\n${renderTable(results, related, { ...machine, load: [machine.load[0], loadavg()[0]!] })}`);
+        log(`so far:\n${renderTable(results, related, { ...machine, load: [machine.load[0], loadavg()[0]!] }, htmlFixture)}`);
       }
     }
+    log(`HTML report of the ${HTML_FIXTURE_PAGES.toLocaleString('en-US')}-page fixture: formatting and opening in chromium...`);
+    htmlFixture = await child<HtmlOpenResult>(['--mode', 'html', '--size', String(HTML_FIXTURE_PAGES), '--runs', HTML_RUNS], ['--expose-gc']);
   } finally {
     rmSync(base, { recursive: true, force: true });
   }
-  const table = renderTable(results, related, { ...machine, load: [machine.load[0], loadavg()[0]!] });
+  const table = renderTable(results, related, { ...machine, load: [machine.load[0], loadavg()[0]!] }, htmlFixture);
   process.stdout.write(`\n${table}`);
   if (values.record) {
     const command = `npm run bench -- ${process.argv.slice(2).join(' ')}`.trim();

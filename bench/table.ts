@@ -2,6 +2,8 @@
  * The bench's one table: a row per measurement, a column per site size, and the target with a
  * pass/miss mark beside each measured ratio that has one.
  */
+import type { HtmlOpenResult } from './html.js';
+import { htmlCell } from './html.js';
 import type { MeasureResult, RelatedResult, RssResult } from './one-size.js';
 import type { BenchStage, RunTiming } from './pipeline.js';
 import { STAGES, median } from './pipeline.js';
@@ -14,6 +16,8 @@ export interface SizeResult {
   readonly generateMs: number;
   readonly rss: RssResult | { readonly error: string };
   readonly measure: MeasureResult | { readonly error: string };
+  /** The HTML report of the first cold run, opened in chromium (absent in older results). */
+  readonly html?: HtmlOpenResult | { readonly error: string };
 }
 
 /** The machine the bench ran on. */
@@ -42,6 +46,8 @@ export const TARGETS = {
   relatedSpeedup: 40,
   textGrowth10kTo50k: 6,
   peakRssAt100kBytes: 2.5 * 1024 ** 3,
+  /** The HTML report at 100,000 pages: bytes, and milliseconds to open in chromium. */
+  htmlAt100k: { bytes: 15 * 1024 * 1024, openMs: 3000 },
 } as const;
 
 const int = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
@@ -68,7 +74,12 @@ function stageMedian(m: Measured, stage: BenchStage): number {
 }
 
 /** Render the table (Markdown, readable as plain text too). */
-export function renderTable(results: readonly SizeResult[], related: readonly (RelatedResult | { error: string })[], machine: MachineInfo): string {
+export function renderTable(
+  results: readonly SizeResult[],
+  related: readonly (RelatedResult | { error: string })[],
+  machine: MachineInfo,
+  htmlFixture: HtmlOpenResult | { error: string } | null = null,
+): string {
   const kinds = new Set(results.map((r) => r.vocabulary));
   const header = ['measurement', ...results.map((r) => `${int.format(r.size)} pages${kinds.size > 1 || r.vocabulary !== 'topical' ? ` (${r.vocabulary})` : ''}`), 'target'];
   const rows: string[][] = [];
@@ -177,6 +188,19 @@ export function renderTable(results: readonly SizeResult[], related: readonly (R
   row('text: time / previous size (same kind)', growth('text', TARGETS.textGrowth10kTo50k), '<= 6x from 10,000 to 50,000');
   row('suggest: time / previous size (same kind)', growth('suggest', null), '~ pages ratio');
 
+  const HTML_TARGET = '<= 15 MB and open < 3,000 ms at 100,000';
+  const htmlOf = (r: SizeResult): string => {
+    if (r.html === undefined) return 'n/a';
+    if (!('mode' in r.html)) return `error: ${r.html.error.slice(0, 60)}`;
+    return htmlCell(r.html, TARGETS.htmlAt100k, r.size === 100_000);
+  };
+  row('HTML report (real, first cold run): size; open in chromium; blank page', htmlOf, HTML_TARGET);
+  if (htmlFixture !== null) {
+    const text = 'mode' in htmlFixture ? htmlCell(htmlFixture, TARGETS.htmlAt100k, true) : `error: ${htmlFixture.error.slice(0, 60)}`;
+    const pages = 'mode' in htmlFixture ? int.format(htmlFixture.pages) : '100,000';
+    row(`HTML report of the ${pages}-page test fixture: size; open in chromium; blank page`, (_r, i) => (i === 0 ? text : ''), HTML_TARGET);
+  }
+
   const relatedCells = (text: string): ((r: SizeResult, i: number) => string) => (_r, i) => (i === 0 ? text : '');
   for (const rel of related) {
     if (!('mode' in rel)) {
@@ -195,9 +219,12 @@ export function renderTable(results: readonly SizeResult[], related: readonly (R
     row(`${on}: sets vs brute force`, relatedCells(same), 'identical');
   }
 
+  const opened = [...results.map((r) => r.html), htmlFixture].find((h): h is HtmlOpenResult => h !== undefined && h !== null && 'mode' in h && h.browser !== null);
+  const browserLine = opened?.browser ? [`HTML reports opened in headless chromium ${opened.browser.version} (${opened.browser.source === 'system' ? 'Debian\'s /usr/bin/chromium' : 'the @sparticuz/chromium binary'}); open = page.goto until the report's script has set data-ready, in a new context, median of 3; in page = the navigation's domContentLoadedEventEnd.`, ''] : [];
   const lines = [
     `${machine.date} · ${machine.cpu} × ${machine.cores} · ${(machine.memoryBytes / 1024 ** 3).toFixed(0)} GiB · Node ${machine.node} · ${machine.platform} · load average ${machine.load[0].toFixed(1)} at start, ${machine.load[1].toFixed(1)} at end`,
     '',
+    ...browserLine,
     `| ${header.join(' | ')} |`,
     `| ${header.map((_, i) => (i === 0 ? '---' : '---:')).join(' | ')} |`,
     ...rows.map((r) => `| ${r.join(' | ')} |`),

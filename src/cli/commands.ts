@@ -3,7 +3,7 @@
  * flags and the function that runs it.
  */
 import { resolve } from 'node:path';
-import { readCachedOutput, saveCachedOutput } from '../cache/index.js';
+import { copyCachedOutput, saveCachedOutput } from '../cache/index.js';
 import type { ReportCacheInfo } from '../cache/index.js';
 import { runPrepared } from '../pipeline/index.js';
 import { formatReportPieces, summaryLines } from '../report/index.js';
@@ -134,9 +134,8 @@ async function reportCommand(ctx: CommandContext, command: 'check' | 'suggest'):
     // A report from the whole-report cache (and not changed here by a comparison) is written as
     // the bytes written for it last time, without formatting it again.
     const reused = report === analyzed ? cache.info : null;
-    const bytes = reused === null ? null : readCachedOutput(reused, format, io.cwd);
-    if (bytes !== null) await writeFileAtomic(output, bytes, writeOptions);
-    else {
+    const copied = reused !== null && (await copyCachedOutput(reused, format, io.cwd, output, io.tempFiles));
+    if (!copied) {
       await writeFileAtomic(output, formatReportPieces(report, format, { color: false, cwd: io.cwd, ...config }), writeOptions);
       if (reused !== null) saveCachedOutput(reused, format, io.cwd, output);
     }

@@ -5,7 +5,7 @@ import { EngineError } from '../errors.js';
 import type { ResolvedOptions } from '../config/options.js';
 import type { SourceFile } from '../types.js';
 import { isInside, listFiles, toRelative, WarningLog } from './list.js';
-import { kindOfPath } from '../routes/index.js';
+import { kindOfPath, SOURCE_EXTENSIONS, SOURCE_GLOB } from '../routes/index.js';
 import { readSource } from './read.js';
 import { compareText, describeIoError } from '../util/index.js';
 import type { CollectResult } from './types.js';
@@ -32,10 +32,12 @@ export async function collectSources(options: ResolvedOptions, extraExclude: rea
   const ignore = [...options.exclude, ...extra];
 
   const warnings = new WarningLog();
-  const [matched, all] = await Promise.all([
-    listFiles(realRoot, options.include, ignore, warnings),
-    listFiles(realRoot, ['**/*'], ignore, warnings),
-  ]);
+  // With the default `include` (every source extension), the sources are the listed files that
+  // end in one (the glob's match, case and all), so the tree is walked once instead of twice.
+  const defaultInclude = options.include.length === 1 && options.include[0] === SOURCE_GLOB;
+  const [matched, all] = defaultInclude
+    ? await listFiles(realRoot, ['**/*'], ignore, warnings).then((files) => [files.filter((f) => SOURCE_EXTENSIONS.some((ext) => f.endsWith(ext))), files])
+    : await Promise.all([listFiles(realRoot, options.include, ignore, warnings), listFiles(realRoot, ['**/*'], ignore, warnings)]);
   const sources: { rel: string; kind: NonNullable<ReturnType<typeof kindOfPath>> }[] = [];
   const sourceSet = new Set<string>();
   for (const rel of matched) {
@@ -47,7 +49,7 @@ export async function collectSources(options: ResolvedOptions, extraExclude: rea
   }
   const assets = all.filter((rel) => !sourceSet.has(rel));
 
-  const ctx = { realRoot, maxFileBytes: options.maxFileBytes };
+  const ctx = { realRoot, maxFileBytes: options.maxFileBytes, realFolders: new Map<string, string>() };
   const files: SourceFile[] = [];
   for (let i = 0; i < sources.length; i++) {
     const { rel, kind } = sources[i];

@@ -1,6 +1,7 @@
 /** Reading one source file: real-path check, size limit, hash, decoding. */
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
+import { basename, dirname, join } from 'node:path';
 import type { FileKind, SourceFile } from '../types.js';
 import { kindOfPath } from '../routes/index.js';
 import { describeIoError } from '../util/index.js';
@@ -13,12 +14,22 @@ export interface ReadContext {
   /** Real path of the content root. */
   readonly realRoot: string;
   readonly maxFileBytes: number;
+  /**
+   * Real paths of the folders met so far, for a caller reading many files (`collectSources`):
+   * each folder is resolved once, and each file is opened without following a symlink, so only
+   * a file that is itself a symlink is resolved alone. Without it, each file's path is resolved
+   * whole (one `realpath` per file: about 0.2 s of a 10,000-file site).
+   */
+  readonly realFolders?: Map<string, string>;
 }
 
 /** A file read, or the warning that kept it out. */
 export type ReadOutcome = { readonly file: SourceFile } | { readonly warning: CollectWarning };
 
 const HASH_CHUNK = 1 << 20;
+
+/** O_NOFOLLOW where the platform has it (not on Windows: there every path is resolved whole). */
+const NO_FOLLOW: number | undefined = fs.constants.O_NOFOLLOW;
 
 /**
  * Read one source file. Never throws: a file that vanished or cannot be read gives a warning;
@@ -32,22 +43,34 @@ const HASH_CHUNK = 1 << 20;
  * @param relPath the same path relative to the root, `/` separators
  */
 export function readSource(absPath: string, relPath: string, kind: FileKind, ctx: ReadContext): ReadOutcome {
+  const folders = NO_FOLLOW === undefined ? undefined : ctx.realFolders;
   let real: string;
   try {
-    real = fs.realpathSync.native(absPath);
+    real = folders === undefined ? fs.realpathSync.native(absPath) : join(realFolder(dirname(absPath), folders), basename(absPath));
   } catch (error) {
     return { warning: ioWarning(relPath, error) };
   }
-  if (!isInside(ctx.realRoot, real)) {
-    return {
-      warning: { file: relPath, code: 'symlink-outside', message: `"${relPath}" resolves outside the content root; skipped` },
-    };
-  }
+  const outside = (): ReadOutcome => ({
+    warning: { file: relPath, code: 'symlink-outside', message: `"${relPath}" resolves outside the content root; skipped` },
+  });
+  if (!isInside(ctx.realRoot, real)) return outside();
   let fd: number | undefined;
   try {
     // O_NONBLOCK: opening a FIFO or device named like a page must not hang the run; the
     // fstat check below then skips it. No effect on regular files.
-    fd = fs.openSync(real, fs.constants.O_RDONLY | fs.constants.O_NONBLOCK);
+    const flags = fs.constants.O_RDONLY | fs.constants.O_NONBLOCK;
+    if (folders === undefined) fd = fs.openSync(real, flags);
+    else {
+      try {
+        fd = fs.openSync(real, flags | NO_FOLLOW!);
+      } catch (error) {
+        // ELOOP: the file itself is a symlink; it is resolved whole, as without the folder memo.
+        if ((error as NodeJS.ErrnoException).code !== 'ELOOP') throw error;
+        real = fs.realpathSync.native(absPath);
+        if (!isInside(ctx.realRoot, real)) return outside();
+        fd = fs.openSync(real, flags);
+      }
+    }
     const stat = fs.fstatSync(fd);
     if (!stat.isFile()) {
       return { warning: { file: relPath, code: 'unreadable', message: `"${relPath}" is not a regular file; skipped` } };
@@ -88,9 +111,30 @@ export function readSource(absPath: string, relPath: string, kind: FileKind, ctx
   }
 }
 
-/** Read a whole file of (about) `size` bytes; copes with a file that grows or shrinks meanwhile. */
+/** Real path of `folder`, resolved once per memo. */
+function realFolder(folder: string, memo: Map<string, string>): string {
+  let real = memo.get(folder);
+  if (real === undefined) {
+    real = fs.realpathSync.native(folder);
+    memo.set(folder, real);
+  }
+  return real;
+}
+
+/** Files up to this size are read into one buffer kept between calls (`scratch`). */
+const SCRATCH_LIMIT = 1 << 20;
+let scratch = Buffer.allocUnsafe(1 << 16);
+
+/**
+ * Read a whole file of (about) `size` bytes; copes with a file that grows or shrinks meanwhile.
+ * A file of up to `SCRATCH_LIMIT` bytes is read into `scratch`, so the returned bytes are only
+ * valid until the next call (`readSource` hashes and decodes them at once): on a 10,000-file
+ * site, one buffer (and a copy, once the first read filled it) per file was GC work for nothing.
+ */
 function readAll(fd: number, size: number): Buffer {
-  let buffer = Buffer.allocUnsafe(Math.max(size, 1));
+  // One byte of room beyond `size`: the read that returns 0 then needs no larger buffer.
+  if (size < SCRATCH_LIMIT && scratch.length <= size) scratch = Buffer.allocUnsafe(Math.min(SCRATCH_LIMIT, Math.max(size + 1, scratch.length * 2)));
+  let buffer = size < SCRATCH_LIMIT ? scratch : Buffer.allocUnsafe(size + 1);
   let length = 0;
   for (;;) {
     if (length === buffer.length) {

@@ -88,3 +88,40 @@ describe('the formatted report in the cache', () => {
     }
   }, CLI_RUNS_TIMEOUT);
 });
+
+describe('copyCachedOutput', () => {
+  it('copies the kept bytes over the target with its permission bits, and says false when it has nothing to copy', async () => {
+    const { copyCachedOutput } = await import('../../src/cache/output.js');
+    const cold = suggest('report.json');
+    const name = kept('json')[0]!;
+    const hash = name.slice('output-suggest-json-'.length);
+    expect(hash).toMatch(/^[0-9a-f]{32}$/);
+    // The key behind the kept file is not known here; a kept file under the name of another key
+    // is never read, and a miss (`hit: false`) never copies.
+    const target = path.join(cwd, 'copy.json');
+    fs.writeFileSync(target, 'old');
+    fs.chmodSync(target, 0o600);
+    const info = { dir: cacheDir(), command: 'suggest', key: 'not-the-key', hit: true };
+    expect(await copyCachedOutput(info, 'json', cwd, target)).toBe(false);
+    expect(await copyCachedOutput({ ...info, hit: false }, 'json', cwd, target)).toBe(false);
+    expect(fs.readFileSync(target, 'utf8')).toBe('old');
+    // Under its own name, the kept file is copied; the target keeps its mode and no temp file is left.
+    const { createHash } = await import('node:crypto');
+    const probe = (k: string): string => createHash('sha256').update(`${k}\njson\n${cwd}`).digest('hex').slice(0, 32);
+    const head = JSON.parse(fs.readFileSync(path.join(cacheDir(), 'report-suggest.json'), 'utf8').split('\n')[0]!) as { key: string };
+    const key = head.key;
+    expect(probe(key)).toBe(hash);
+    const tracked = new Set<string>();
+    const seen: string[] = [];
+    const tracker = { add: (p: string) => (seen.push(p), tracked.add(p)), delete: (p: string) => tracked.delete(p) };
+    expect(await copyCachedOutput({ ...info, key }, 'json', cwd, target, tracker)).toBe(true);
+    expect(fs.readFileSync(target).equals(cold)).toBe(true);
+    expect(fs.statSync(target).mode & 0o777).toBe(0o600);
+    expect(seen).toHaveLength(1);
+    expect(tracked.size).toBe(0);
+    expect(fs.readdirSync(cwd).filter((n) => n.startsWith('.linkweave-tmp-'))).toEqual([]);
+    // A target folder that does not exist: false, and nothing written.
+    expect(await copyCachedOutput({ ...info, key }, 'json', cwd, path.join(cwd, 'missing', 'r.json'))).toBe(false);
+    expect(fs.existsSync(path.join(cwd, 'missing'))).toBe(false);
+  }, CLI_RUNS_TIMEOUT);
+});

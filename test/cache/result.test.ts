@@ -69,8 +69,71 @@ describe('the whole-report cache file', () => {
     const dir = path.join(base, 'lines');
     writeResult(dir, 'check', 'k1', report as never);
     const lines = fs.readFileSync(path.join(dir, 'report-check.json'), 'utf8').trimEnd().split('\n');
-    expect(lines.length).toBe(1 + 2 + 3 + 1); // header, schema and stats, links in 3 lines, pages
+    expect(lines.length).toBe(1 + 2 + 3 + 1 + 1); // header, schema and stats, links in 3 lines, pages, the sizes
     expect(JSON.stringify(readResult(dir, 'check', 'k1'))).toBe(JSON.stringify(report));
     expect(readResult(dir, 'check', 'other')).toBeNull();
+  });
+
+  it('decodes a large field when it is first read, and gives the same report as decoding it all at once', async () => {
+    const { readResult, writeResult } = await import('../../src/cache/result.js');
+    const link = (i: number): Record<string, unknown> => ({ from: `/guide/${i}/`, to: `/ref/${i % 97}/`, line: i, text: `step ${i} ✓ "quoted"` });
+    const report = {
+      schema: 'linkweave/report@1',
+      stats: { pages: 3, links: 7000 },
+      links: Array.from({ length: 7000 }, (_, i) => link(i)),
+      findings: [{ rule: 'broken-link', route: '/a/' }],
+      gate: { passed: true },
+    };
+    const dir = path.join(base, 'lazy');
+    writeResult(dir, 'suggest', 'k2', report as never);
+    const read = readResult(dir, 'suggest', 'k2') as unknown as Record<string, unknown>;
+    // The links (about 500 KB) wait to be read; the small fields are plain values.
+    expect(typeof Object.getOwnPropertyDescriptor(read, 'links')?.get).toBe('function');
+    expect(Object.getOwnPropertyDescriptor(read, 'stats')).toHaveProperty('value', { pages: 3, links: 7000 });
+    expect(Object.keys(read)).toEqual(Object.keys(report));
+    expect(JSON.stringify(read)).toBe(JSON.stringify(report));
+    // Once read, the field is a plain value that stays the same array.
+    const links = read.links as unknown[];
+    expect(links).toHaveLength(7000);
+    expect(links[6999]).toEqual(link(6999));
+    expect(read.links).toBe(links);
+    expect({ ...read }).toEqual(report);
+    // Set before it was read, a field takes the new value.
+    const again = readResult(dir, 'suggest', 'k2') as unknown as Record<string, unknown>;
+    again.links = [];
+    expect(again.links).toEqual([]);
+  });
+
+  it('reads a field of a report whose file a later run replaced, and closes the file once every field was read', async () => {
+    const { readResult, writeResult } = await import('../../src/cache/result.js');
+    const rows = (tag: string): Record<string, unknown>[] => Array.from({ length: 6000 }, (_, i) => ({ route: `/${tag}/${i}/`, line: i }));
+    const first = { schema: 'linkweave/report@1', pages: rows('first'), links: rows('link') };
+    const dir = path.join(base, 'replaced');
+    writeResult(dir, 'check', 'k-first', first as never);
+    const openFiles = (): number => fs.readdirSync('/proc/self/fd').length;
+    const before = process.platform === 'linux' ? openFiles() : 0;
+    const read = readResult(dir, 'check', 'k-first') as unknown as Record<string, unknown>;
+    writeResult(dir, 'check', 'k-second', { schema: 'linkweave/report@1', pages: rows('second'), links: [] } as never);
+    expect(readResult(dir, 'check', 'k-first')).toBeNull();
+    expect(read.pages).toEqual(first.pages);
+    if (process.platform === 'linux') expect(openFiles()).toBe(before + 1);
+    expect(read.links).toEqual(first.links);
+    if (process.platform === 'linux') expect(openFiles()).toBe(before);
+    expect(JSON.stringify(read)).toBe(JSON.stringify(first));
+  });
+
+  it('ignores a file cut short', async () => {
+    const { readResult, writeResult } = await import('../../src/cache/result.js');
+    const report = { schema: 'linkweave/report@1', stats: { pages: 1 }, links: Array.from({ length: 12_000 }, (_, i) => ({ line: i })), pages: [] };
+    const dir = path.join(base, 'cut');
+    writeResult(dir, 'check', 'k3', report as never);
+    const file = path.join(dir, 'report-check.json');
+    const text = fs.readFileSync(file, 'utf8');
+    expect(JSON.stringify(readResult(dir, 'check', 'k3'))).toBe(JSON.stringify(report));
+    const lines = text.trimEnd().split('\n');
+    fs.writeFileSync(file, `${lines.slice(0, -2).join('\n')}\n`);
+    expect(readResult(dir, 'check', 'k3')).toBeNull();
+    fs.writeFileSync(file, text.slice(0, -1));
+    expect(readResult(dir, 'check', 'k3')).toBeNull();
   });
 });

@@ -71,6 +71,14 @@ describe.each(['topical', 'shared'] as const)('a warm run after random edits (%s
       expect(warm, `round ${round}: ${edits.join('; ')}`).toBe(cold);
       suggestionsSeen += (JSON.parse(cold) as { suggestions: unknown[] }).suggestions.length;
     }
+    // Nothing changed since the last warm run: the report comes from the whole-report cache
+    // (its large fields decoded when read) and is still the cold one.
+    const stages: string[] = [];
+    const hit = JSON.stringify(
+      await analyze({ ...config, root, command: 'suggest', cache: { dir: cacheDir } }, { onStage: (stage, phase) => (phase === 'start' ? stages.push(stage) : undefined) }),
+    );
+    expect(stages).toEqual(['collect']);
+    expect(hit).toBe(await run(false));
     // The comparison is worth something only if the reports carry suggestions and a fitted model.
     expect(suggestionsSeen).toBeGreaterThan(0);
     expect(fs.existsSync(path.join(cacheDir, 'link-model.json'))).toBe(true);

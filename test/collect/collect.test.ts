@@ -259,3 +259,31 @@ describe('collectSources', () => {
     expect(result.warnings).toMatchObject([{ file: 'locked.md', code: 'unreadable' }]);
   });
 });
+
+describe('collectSources with the default include', () => {
+  it('finds the same sources and assets as the same globs written out (one walk instead of two)', async () => {
+    const root = site({
+      'index.md': '# Home\n',
+      'guide/a.markdown': 'a',
+      'guide/b.mdx': 'b',
+      'guide/deep/c.html': '<p>c</p>',
+      'guide/deep/d.htm': '<p>d</p>',
+      'UPPER.MD': 'not a source by the glob',
+      'notes.md.txt': 'an asset',
+      'img/logo.png': 'png',
+      'md': 'no extension',
+      '.hidden/e.md': 'dot folder',
+      '.f.md': 'dot file',
+      'node_modules/pkg/g.md': 'dependency',
+      'guide/skip.md': 'excluded',
+      'guide/link.md': { symlink: 'a.markdown' },
+    });
+    const byDefault = await collect(root, { exclude: ['guide/skip.md'] });
+    const spelled = await collect(root, { exclude: ['guide/skip.md'], include: ['**/*.md', '**/*.markdown', '**/*.mdx', '**/*.html', '**/*.htm'] });
+    // The first is the case of one walk: the default include is the source glob itself.
+    expect(resolveOptions({}, root).include).toEqual(['**/*.{md,markdown,mdx,html,htm}']);
+    expect(byDefault.files.map((f) => f.path)).toEqual(['guide/a.markdown', 'guide/b.mdx', 'guide/deep/c.html', 'guide/deep/d.htm', 'guide/link.md', 'index.md']);
+    expect(byDefault).toEqual(spelled);
+  });
+});
+

@@ -72,6 +72,44 @@ describe('readSource', () => {
   });
 });
 
+describe('readSource with the folder memo (as collectSources reads)', () => {
+  it('resolves each folder once, a symlinked file alone, and keeps out a file that leads outside', () => {
+    const dir = root();
+    const outside = tempDir('linkweave-outside-');
+    cleanups.push(outside.cleanup);
+    writeTree(outside.dir, { 'secret.md': 'CANARY-77cd' });
+    writeTree(dir, {
+      'shared/part.md': 'shared part\n',
+      'guide/a.md': 'page a\n',
+      'guide/part.md': { symlink: '../shared/part.md' },
+      'guide/leak.md': { symlink: path.join(outside.dir, 'secret.md') },
+      'linked': { symlink: 'shared' },
+    });
+    const realFolders = new Map<string, string>();
+    const ctx = { realRoot: dir, maxFileBytes: 100, realFolders };
+    const read = (rel: string) => readSource(path.join(dir, rel), rel, 'markdown', ctx);
+    expect(read('guide/a.md')).toMatchObject({ file: { path: 'guide/a.md', text: 'page a\n' } });
+    expect(read('guide/part.md')).toMatchObject({ file: { path: 'guide/part.md', text: 'shared part\n' } });
+    expect(read('linked/part.md')).toMatchObject({ file: { path: 'linked/part.md', text: 'shared part\n' } });
+    const leak = read('guide/leak.md');
+    expect(leak).toMatchObject({ warning: { file: 'guide/leak.md', code: 'symlink-outside' } });
+    expect(JSON.stringify(leak)).not.toContain('CANARY-77cd');
+    expect(realFolders.get(path.join(dir, 'linked'))).toBe(fs.realpathSync(path.join(dir, 'shared')));
+    expect(read('missing/x.md')).toMatchObject({ warning: { file: 'missing/x.md', code: 'vanished' } });
+  });
+
+  it('gives each file its own bytes and hash when files of different sizes are read one after another', () => {
+    const dir = root();
+    const texts = ['x'.repeat(200_000), 'short\n', 'é'.repeat(70_000), '', 'y'.repeat(2_000_000), 'last\n'];
+    writeTree(dir, Object.fromEntries(texts.map((t, i) => [`p${i}.md`, t])));
+    const ctx = { realRoot: dir, maxFileBytes: 10_000_000, realFolders: new Map<string, string>() };
+    for (const [i, t] of texts.entries()) {
+      const outcome = readSource(path.join(dir, `p${i}.md`), `p${i}.md`, 'markdown', ctx);
+      expect(outcome).toMatchObject({ file: { text: t, bytes: Buffer.byteLength(t), hash: createHash('sha256').update(t).digest('hex') } });
+    }
+  });
+});
+
 describe('kindOfPath', () => {
   it.each([
     ['a.md', 'markdown'],
