@@ -158,7 +158,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (pages === undefined) cased.set(key, [page]);
     else if (!pages.includes(page)) pages.push(page);
   };
-  const refOf = new Map<number, NameRef>();
+  const refOf: (Map<number, NameRef> | undefined)[] = [];
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
     const id = phraseOf(stems);
@@ -180,12 +180,14 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     }
     // Found through a map, not a search of the phrase's names: a label or link text such as
     // "Overview" can name thousands of pages, and a search per claim made that quadratic.
-    const refKey = (id * n + target) * KIND_ORDER.length + KIND_ORDER.indexOf(kind);
-    let ref = refOf.get(refKey);
+    // Keyed per phrase, so the key stays a small integer on any site.
+    const refs = (refOf[id] ??= new Map());
+    const refKey = target * KIND_ORDER.length + KIND_ORDER.indexOf(kind);
+    let ref = refs.get(refKey);
     if (ref === undefined) {
       ref = { target, kind, users: kind === 'anchor-text' ? new Map() : null };
       phrase.names.push(ref);
-      refOf.set(refKey, ref);
+      refs.set(refKey, ref);
     }
     if (ref.users !== null && source >= 0) ref.users.set(source, (ref.users.get(source) ?? 0) + 1);
   };
