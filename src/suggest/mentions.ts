@@ -544,7 +544,8 @@ function keepAnchor(hit: MentionHit, phrase: number, place: Placement, m: Anchor
 
 /**
  * The names a section heading gives its page, when the heading names something in code (an API
- * reference's `fs.readFile(path)`, `ERR_WIDGET_CLOSED`, `Class: fs.Dir`): the heading, the part
+ * reference's `fs.readFile(path)`, `ERR_WIDGET_CLOSED`, `Class: fs.Dir`, a command-line option
+ * `--pending-deprecation`): the heading, the part
  * after a label (`Class: fs.Dir` -> `fs.Dir`) and a call without its arguments
  * (`fs.readFile(path[, options])` -> `fs.readFile`), as prose writes them. Headings in words
  * ("Installing the widget") name a section, not the page, and give none: on a guide they made
@@ -560,8 +561,11 @@ export function headingNames(text: string): string[] {
   return out;
 }
 
-/** A name written as code: a dotted, underscored or called identifier, camelCase, or an upper-case constant. */
-const CODE_NAME = /[\p{L}\p{N}$][._][\p{L}\p{N}$]|[\p{L}\p{N}$_]\(|\p{Ll}\p{Lu}|^[\p{Lu}\p{N}_]{3,}$/u;
+/**
+ * A name written as code: a dotted, underscored or called identifier, camelCase, an upper-case
+ * constant, or a command-line option (`--name`, `-x`, with a value after `=` or a space).
+ */
+const CODE_NAME = /[\p{L}\p{N}$][._][\p{L}\p{N}$]|[\p{L}\p{N}$_]\(|\p{Ll}\p{Lu}|^[\p{Lu}\p{N}_]{3,}$|^--?\p{L}[\p{L}\p{N}-]*(?:[= ].*)?$/u;
 
 /**
  * Per line of a page: prose spans with a word, inline code spans that may be anchors, content
