@@ -32,6 +32,7 @@ export const ANCHOR_FEATURES = [
   'words',
   'quoted',
   'exact-code',
+  'form-odds',
 ] as const;
 
 /** Fewer linked pairs with a passed-over mention than this: no fit, the fixed order. */
@@ -62,6 +63,10 @@ export interface AnchorOptionFacts {
   readonly quoted: boolean;
   /** Inline code written exactly as one of the target's own names, case and all (`Error`, not `error`). */
   readonly exact: boolean;
+  /** For inline code: links to the target with this written form (case kept), the pair's own left out; else -1. */
+  readonly formLinkedToTarget: number;
+  /** For inline code: occurrences of this written form on the site (code mentions and code links). */
+  readonly formTotal: number;
 }
 
 /** The feature vector of an option. */
@@ -80,6 +85,7 @@ export function anchorFeatures(o: AnchorOptionFacts): number[] {
     o.words,
     o.quoted ? 1 : 0,
     o.exact ? 1 : 0,
+    o.formLinkedToTarget < 0 ? Math.log((o.linkedToTarget + 0.5) / (o.total + 1)) : Math.log((o.formLinkedToTarget + 0.5) / (o.formTotal + 1)),
   ];
 }
 
