@@ -3,7 +3,8 @@
  * the site's own content links, each against the unlinked mentions of the same target in the
  * same page (the mentions its author passed over). It learns, per site, whether authors link
  * the first mention or the one that names the thing exactly, code names or words, the title or
- * a section's name, a list entry or running text.
+ * a section's name, a list entry or running text, and which written forms of code they link
+ * (`Error`, not the `error` variable or the `'error'` event, though all three stem alike).
  *
  * A training group is one linked (source, target) pair: its first link whose whole text is one
  * of the target's names is the positive (one per pair, so a pair that links a name twenty times
