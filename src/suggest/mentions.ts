@@ -311,6 +311,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       const phrase = phrases[f.phrase];
       phrase.prose++;
       habit.mentioned[f.place]++;
+      // Code written exactly as the source names itself (`response.finished` in the page whose
+      // section it is) is the page speaking of itself, not of another page named so.
+      if ((f.place & CODE) !== 0 && cased.get(codeKey(f.text(), true))?.includes(s) === true) continue;
       let made: AnchorMatch | null = null;
       const forms = written.get(f.phrase);
       const only = forms !== undefined && forms.size > 1 ? forms.get(codeKey(f.text())) : undefined;

@@ -93,6 +93,25 @@ describe('the anchor features', () => {
   });
 });
 
+describe('code a page writes as its own name', () => {
+  it('is the page speaking of itself, not a mention of another page with a section of that name', () => {
+    const section = (title: string) => `# ${title}\n\nAbout it.\n\n## \`response.finished\`\n\nTrue once the response is sent.\n`;
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [HTTP](http.md)\n- [HTTP/2](http2.md)\n- [Changes](changes.md)\n'),
+      markdownPage('http.md', section('HTTP')),
+      markdownPage('http2.md', `${section('HTTP/2')}\nCheck \`response.finished\` before writing.\n`),
+      markdownPage('changes.md', '# Changes\n\nThe `response.finished` property is deprecated.\n'),
+    ];
+    const input = siteInput(pages, testOptions());
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const { bySource } = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const code = (from: string, to: string) => bySource[id(from)]!.get(id(to))?.anchors.filter((a) => a.kind === 'code').map((a) => [a.text, a.line]) ?? [];
+    expect(code('/http2/', '/http/')).toEqual([]);
+    expect(code('/changes/', '/http/')).toEqual([['`response.finished`', 3]]);
+    expect(code('/changes/', '/http2/')).toEqual([['`response.finished`', 3]]);
+  });
+});
+
 describe('the link record of a written form of code', () => {
   it('counts `Error` apart from `error` and `\'error\'` (one form: the quotes are no words), though all are the same stems', () => {
     const pages = [
