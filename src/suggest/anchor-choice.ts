@@ -3,7 +3,8 @@
  * the site's own content links, each against the unlinked mentions of the same target in the
  * same page (the mentions its author passed over). It learns, per site, whether authors link
  * the first mention or the one that names the thing exactly, code names or words, the title or
- * a section's name, a list entry or running text.
+ * a section's name, a list entry or running text, and which written forms of code they link
+ * (`Error`, not the `error` variable or the `'error'` event, though all three stem alike).
  *
  * A training group is one linked (source, target) pair: its first link whose whole text is one
  * of the target's names is the positive (one per pair, so a pair that links a name twenty times
@@ -32,6 +33,7 @@ export const ANCHOR_FEATURES = [
   'words',
   'quoted',
   'exact-code',
+  'form-odds',
 ] as const;
 
 /** Fewer linked pairs with a passed-over mention than this: no fit, the fixed order. */
@@ -62,6 +64,10 @@ export interface AnchorOptionFacts {
   readonly quoted: boolean;
   /** Inline code written exactly as one of the target's own names, case and all (`Error`, not `error`). */
   readonly exact: boolean;
+  /** For inline code: links to the target with this written form (case kept), the pair's own left out; else -1. */
+  readonly formLinkedToTarget: number;
+  /** For inline code: occurrences of this written form on the site (code mentions and code links). */
+  readonly formTotal: number;
 }
 
 /** The feature vector of an option. */
@@ -80,6 +86,7 @@ export function anchorFeatures(o: AnchorOptionFacts): number[] {
     o.words,
     o.quoted ? 1 : 0,
     o.exact ? 1 : 0,
+    o.formLinkedToTarget < 0 ? Math.log((o.linkedToTarget + 0.5) / (o.total + 1)) : Math.log((o.formLinkedToTarget + 0.5) / (o.formTotal + 1)),
   ];
 }
 

@@ -107,6 +107,8 @@ export interface MentionIndex {
   readonly placement: PlacementHabit;
   /** The fitted choice among a pair's anchor options, or null (too few links: the fixed order). */
   readonly anchorChoice: AnchorChoice | null;
+  /** Inline code by written form: how often each is written and linked (an option's form odds). */
+  readonly codeForms: CodeForms;
 }
 
 /** A phrase found in the text of a content link. */
@@ -210,13 +212,15 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     }
   }
-  const contentLinks: { from: number; to: number; stems: string[]; line: number; column: number; code: boolean; quoted: boolean; exact: boolean }[] = [];
+  const contentLinks: { from: number; to: number; stems: string[]; line: number; column: number; code: boolean; quoted: boolean; exact: boolean; form: string }[] = [];
+  // Inline code by written form (codeKey, case kept): occurrences, and links per target.
+  const forms: CodeForms = { total: new Map(), linkedTo: new Map() };
   for (const link of graph.links) {
     if (link.from < 0 || link.to < 0 || link.from === link.to) continue;
     const stems = tokenize(link.raw.text, cache);
     if (link.context === 'content') {
       claim(stems, link.to, 'anchor-text', link.from, link.raw.text);
-      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text), exact: link.raw.code === true && cased.get(codeKey(link.raw.text, true))?.includes(link.to) === true });
+      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text), exact: link.raw.code === true && cased.get(codeKey(link.raw.text, true))?.includes(link.to) === true, form: link.raw.code === true ? codeKey(link.raw.text, true) : '' });
     } else {
       claim(stems, link.to, 'label', -1, link.raw.text);
     }
@@ -258,7 +262,13 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         own = [];
         pairLinks.set(key, own);
       }
-      own.push({ phrase: exact, place, line: link.line, column: link.column, words: link.stems.length, quoted: link.quoted, exact: link.exact });
+      own.push({ phrase: exact, place, line: link.line, column: link.column, words: link.stems.length, quoted: link.quoted, exact: link.exact, form: link.form });
+      if (link.form !== '') {
+        forms.total.set(link.form, (forms.total.get(link.form) ?? 0) + 1);
+        let to = forms.linkedTo.get(link.form);
+        if (to === undefined) forms.linkedTo.set(link.form, (to = new Map()));
+        to.set(link.to, (to.get(link.to) ?? 0) + 1);
+      }
       const p = phrases[exact];
       p.linked++;
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
@@ -299,6 +309,8 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       const phraseId = codeMatchOf(code.code, byCode, root, cache);
       if (phraseId < 0) continue;
       const alone = on.markdown && !on.words.has(code.line) && on.code.get(code.line) === 1 && !on.links.has(code.line);
+      const form = codeKey(code.code, true);
+      if (form !== '') forms.total.set(form, (forms.total.get(form) ?? 0) + 1);
       found.push({ offset: code.offset, phrase: phraseId, place: alone ? 3 : CODE, text: () => code.code, anchor: () => codeMatch(code, phrases[phraseId].stems.length) });
     }
     if (found.length > prose) found.sort((a, b) => a.offset - b.offset);
@@ -306,6 +318,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       const phrase = phrases[f.phrase];
       phrase.prose++;
       habit.mentioned[f.place]++;
+      // Code written exactly as the source names itself (`response.finished` in the page whose
+      // section it is) is the page speaking of itself, not of another page named so.
+      if ((f.place & CODE) !== 0 && cased.get(codeKey(f.text(), true))?.includes(s) === true) continue;
       let made: AnchorMatch | null = null;
       const forms = written.get(f.phrase);
       const only = forms !== undefined && forms.size > 1 ? forms.get(codeKey(f.text())) : undefined;
@@ -323,8 +338,8 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     }
   }
-  const choice = orderAnchors(phrases, bySource, pairLinks, habit, cased);
-  return { phrases, bySource, linkMatches, placement: habit, anchorChoice: choice };
+  const choice = orderAnchors(phrases, bySource, pairLinks, habit, cased, forms);
+  return { phrases, bySource, linkMatches, placement: habit, anchorChoice: choice, codeForms: forms };
 }
 
 /**
@@ -332,20 +347,26 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
  * anchor options by it (by the fixed order alone when there is no fit).
  * @param pairLinks per linked pair (source * n + target), its links whose whole text is a phrase
  */
-function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit, cased: ReadonlyMap<string, readonly number[]>): AnchorChoice | null {
+function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit, cased: ReadonlyMap<string, readonly number[]>, forms: CodeForms): AnchorChoice | null {
   const n = bySource.length;
   /** An option's facts as if the pair's own links were absent; null when it names the target only through them. */
-  const facts = (s: number, t: number, phraseId: number, place: number, words: number, quoted: boolean, exact: boolean, order: number): AnchorOptionFacts | null => {
+  const facts = (s: number, t: number, phraseId: number, place: number, words: number, quoted: boolean, exact: boolean, order: number, form: string): AnchorOptionFacts | null => {
     const p = phrases[phraseId];
     let kind = KIND_ORDER.length;
     for (const k of nameKindsFor(p, s, t)) kind = Math.min(kind, KIND_ORDER.indexOf(k));
     if (kind === KIND_ORDER.length) return null;
     let mine = 0;
-    for (const l of pairLinks.get(s * n + t) ?? []) if (l.phrase === phraseId) mine++;
-    return { linkedToTarget: (p.linkedTo.get(t) ?? 0) - mine, linked: p.linked - mine, total: p.prose + p.linked, placementRate: placementRate(habit, place), kind, place, order, words, quoted, exact };
+    let mineAsForm = 0;
+    for (const l of pairLinks.get(s * n + t) ?? []) {
+      if (l.phrase === phraseId) mine++;
+      if (form !== '' && l.form === form) mineAsForm++;
+    }
+    const formLinkedToTarget = form === '' ? -1 : (forms.linkedTo.get(form)?.get(t) ?? 0) - mineAsForm;
+    return { linkedToTarget: (p.linkedTo.get(t) ?? 0) - mine, linked: p.linked - mine, total: p.prose + p.linked, placementRate: placementRate(habit, place), kind, place, order, words, quoted, exact, formLinkedToTarget, formTotal: forms.total.get(form) ?? 0 };
   };
   const quotedCode = (a: AnchorMatch): boolean => a.kind === 'code' && QUOTED.test(a.text);
   const exactCode = (a: AnchorMatch, t: number): boolean => a.kind === 'code' && cased.get(codeKey(a.text.replace(/<[^>]*>/g, ''), true))?.includes(t) === true;
+  const formOf = (a: AnchorMatch): string => (a.kind === 'code' ? codeKey(a.text.replace(/<[^>]*>/g, ''), true) : '');
 
   // Training: a linked phrase and placement stands where its first occurrence is (an unlinked
   // one before the link, if any), because a suggestion can only name the first: so the fit
@@ -367,11 +388,11 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
       hit.anchors.forEach((a, k) => {
         if (hit.anchorPhrases[k] === l.phrase && hit.anchorPlaces[k] === l.place && before(a, at)) at = a;
       });
-      options.push({ at, make: (order) => facts(s, t, l.phrase, l.place, l.words, l.quoted, l.exact, order), linked: true });
+      options.push({ at, make: (order) => facts(s, t, l.phrase, l.place, l.words, l.quoted, l.exact, order, l.form), linked: true });
     }
     hit.anchors.forEach((a, k) => {
       if (seen.has(hit.anchorPhrases[k] * 4 + hit.anchorPlaces[k])) return;
-      options.push({ at: a, make: (order) => facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), exactCode(a, t), order), linked: false });
+      options.push({ at: a, make: (order) => facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), exactCode(a, t), order, formOf(a)), linked: false });
     });
     const order = ranksInText(options.map((o) => o.at));
     const made = options.map((o, k) => o.make(order[k]));
@@ -389,7 +410,7 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
       if (choice !== null && hit.anchors.length > 1) {
         const order = ranksInText(hit.anchors);
         scores = hit.anchors.map((a, k) => {
-          const f = facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), exactCode(a, t), order[k]);
+          const f = facts(s, t, hit.anchorPhrases[k], hit.anchorPlaces[k], a.words, quotedCode(a), exactCode(a, t), order[k], formOf(a));
           return f === null ? -Infinity : anchorScore(choice, f);
         });
       }
@@ -413,6 +434,17 @@ function ranksInText(at: readonly { line: number; column: number }[]): number[] 
 }
 
 /** A content link whose whole text is a phrase, as an anchor option of its pair. */
+/**
+ * Inline code by written form (`codeKey` with case kept): its occurrences on the site (code
+ * spans in prose and code links), and its links per target. Authors of one site link `Error` and
+ * leave `error` (a variable) or `'error'` (an event name) alone, though all three are the same
+ * stems: the written form's own link record tells them apart.
+ */
+export interface CodeForms {
+  readonly total: Map<string, number>;
+  readonly linkedTo: Map<string, Map<number, number>>;
+}
+
 interface LinkedOption {
   readonly phrase: number;
   readonly place: Placement;
@@ -421,6 +453,8 @@ interface LinkedOption {
   readonly words: number;
   readonly quoted: boolean;
   readonly exact: boolean;
+  /** The written form of a code link (`codeKey`, case kept), '' for words. */
+  readonly form: string;
 }
 
 /** Inline code that is a quoted string: `'stream'`, `"exports"`. */
@@ -551,7 +585,8 @@ function keepAnchor(hit: MentionHit, phrase: number, place: Placement, m: Anchor
 
 /**
  * The names a section heading gives its page, when the heading names something in code (an API
- * reference's `fs.readFile(path)`, `ERR_WIDGET_CLOSED`, `Class: fs.Dir`): the heading, the part
+ * reference's `fs.readFile(path)`, `ERR_WIDGET_CLOSED`, `Class: fs.Dir`, a command-line option
+ * `--pending-deprecation`): the heading, the part
  * after a label (`Class: fs.Dir` -> `fs.Dir`) and a call without its arguments
  * (`fs.readFile(path[, options])` -> `fs.readFile`), as prose writes them. Headings in words
  * ("Installing the widget") name a section, not the page, and give none: on a guide they made
@@ -567,8 +602,11 @@ export function headingNames(text: string): string[] {
   return out;
 }
 
-/** A name written as code: a dotted, underscored or called identifier, camelCase, or an upper-case constant. */
-const CODE_NAME = /[\p{L}\p{N}$][._][\p{L}\p{N}$]|[\p{L}\p{N}$_]\(|\p{Ll}\p{Lu}|^[\p{Lu}\p{N}_]{3,}$/u;
+/**
+ * A name written as code: a dotted, underscored or called identifier, camelCase, an upper-case
+ * constant, or a command-line option (`--name`, `-x`, with a value after `=` or a space).
+ */
+const CODE_NAME = /[\p{L}\p{N}$][._][\p{L}\p{N}$]|[\p{L}\p{N}$_]\(|\p{Ll}\p{Lu}|^[\p{Lu}\p{N}_]{3,}$|^--?\p{L}[\p{L}\p{N}-]*(?:[= ].*)?$/u;
 
 /**
  * Per line of a page: prose spans with a word, inline code spans that may be anchors, content

@@ -4,7 +4,7 @@
  * Porter stems.
  */
 import { SOURCE_EXTENSION_END } from '../routes/index.js';
-import { tokenize } from '../text/tokenize.js';
+import { forEachWord, tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
 
 /** A name of the target (its title or an alias) as stems, with the stems a partial match must include. */
@@ -53,6 +53,16 @@ export function routeSegmentText(route: string): string {
 }
 
 /**
+ * Whether the tokenizer kept every word of a route's last segment (`stems` of them): a route it
+ * partly drops names nothing (`/n-api/` is not "API"), as in the mention index.
+ */
+function wholeRoute(route: string, stems: number): boolean {
+  let written = 0;
+  forEachWord(routeSegmentText(route), () => void written++);
+  return written === stems;
+}
+
+/**
  * The names of a target page.
  * @param keyTerms the target's key terms; in a plain list every term counts as strong
  * @param df document frequency of a stem (0 when the index does not know it)
@@ -75,7 +85,7 @@ export function targetNames(
   for (const route of routes) {
     const words = routeWords(route, cache);
     const key = words.join(' ');
-    if (words.length === 0 || seen.has(key)) continue;
+    if (words.length === 0 || seen.has(key) || !wholeRoute(route, words.length)) continue;
     seen.add(key);
     aliases.push(name(words));
   }

@@ -56,7 +56,7 @@ describe('the fitted anchor choice', () => {
   });
 
   it('skips groups with no passed-over option, and fits the same model from the same groups', () => {
-    const option = (o: Partial<AnchorOptionFacts>): AnchorOptionFacts => ({ linkedToTarget: 0, linked: 0, total: 4, placementRate: 0.2, kind: 1, place: 0, order: 0, words: 1, quoted: false, exact: false, ...o });
+    const option = (o: Partial<AnchorOptionFacts>): AnchorOptionFacts => ({ linkedToTarget: 0, linked: 0, total: 4, placementRate: 0.2, kind: 1, place: 0, order: 0, words: 1, quoted: false, exact: false, formLinkedToTarget: -1, formTotal: 0, ...o });
     // Authors link the option that is not first, in code.
     const groups: AnchorGroup[] = Array.from({ length: 50 }, (_, i) => ({
       options: [option({ order: 0, words: 1 + (i % 3) }), option({ order: 1, place: 1, kind: 4 })],
@@ -76,7 +76,7 @@ describe('the fitted anchor choice', () => {
 
 describe('the anchor features', () => {
   it('give one value per named feature, each in its place', () => {
-    const o = { linkedToTarget: 3, linked: 4, total: 9, placementRate: 0.5, kind: 4, place: 1, order: 2, words: 2, quoted: false, exact: true };
+    const o = { linkedToTarget: 3, linked: 4, total: 9, placementRate: 0.5, kind: 4, place: 1, order: 2, words: 2, quoted: false, exact: true, formLinkedToTarget: 1, formTotal: 5 };
     const x = anchorFeatures(o);
     expect(x).toHaveLength(ANCHOR_FEATURES.length);
     const at = (name: (typeof ANCHOR_FEATURES)[number]) => x[ANCHOR_FEATURES.indexOf(name)];
@@ -85,6 +85,53 @@ describe('the anchor features', () => {
     expect([at('heading'), at('title'), at('code'), at('alone'), at('first')]).toEqual([1, 0, 1, 0, 0]);
     expect(at('order')).toBeCloseTo(Math.log(3), 12);
     expect([at('words'), at('quoted'), at('exact-code')]).toEqual([2, 0, 1]);
+    // Code: the written form's own record (1 link to the target in 5 occurrences).
+    expect(at('form-odds')).toBeCloseTo(Math.log(1.5 / 6), 12);
+    // Words have no written form: the phrase's record stands in.
+    const words = anchorFeatures({ ...o, place: 0, exact: false, formLinkedToTarget: -1, formTotal: 0 });
+    expect(words[ANCHOR_FEATURES.indexOf('form-odds')]).toBeCloseTo(Math.log(3.5 / 10), 12);
+  });
+});
+
+describe('code a page writes as its own name', () => {
+  it('is the page speaking of itself, not a mention of another page with a section of that name', () => {
+    const section = (title: string) => `# ${title}\n\nAbout it.\n\n## \`response.finished\`\n\nTrue once the response is sent.\n`;
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [HTTP](http.md)\n- [HTTP/2](http2.md)\n- [Changes](changes.md)\n'),
+      markdownPage('http.md', section('HTTP')),
+      markdownPage('http2.md', `${section('HTTP/2')}\nCheck \`response.finished\` before writing.\n`),
+      markdownPage('changes.md', '# Changes\n\nThe `response.finished` property is deprecated.\n'),
+    ];
+    const input = siteInput(pages, testOptions());
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const { bySource } = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const code = (from: string, to: string) => bySource[id(from)]!.get(id(to))?.anchors.filter((a) => a.kind === 'code').map((a) => [a.text, a.line]) ?? [];
+    expect(code('/http2/', '/http/')).toEqual([]);
+    expect(code('/changes/', '/http/')).toEqual([['`response.finished`', 3]]);
+    expect(code('/changes/', '/http2/')).toEqual([['`response.finished`', 3]]);
+  });
+});
+
+describe('the link record of a written form of code', () => {
+  it('counts `Error` apart from `error` and `\'error\'` (one form: the quotes are no words), though all are the same stems', () => {
+    const pages = [
+      markdownPage('index.md', `# Home\n\n- [Errors](errors.md)\n- [Streams](streams.md)\n- [Files](files.md)\n${['Timers', 'Paths', 'Sockets', 'Zones'].map((t) => `- [${t}](${t.toLowerCase()}.md)`).join('\n')}\n`),
+      // Enough pages that two links alike are content, not a template.
+      ...['Timers', 'Paths', 'Sockets', 'Zones'].map((t) => markdownPage(`${t.toLowerCase()}.md`, `# ${t}\n\nAbout ${t.toLowerCase()}.\n`)),
+      markdownPage('errors.md', '# Errors\n\nWhat can go wrong.\n'),
+      markdownPage('streams.md', "# Streams\n\nA stream emits `'error'` and passes an [`Error`](errors.md) to the handler.\n\nThe handler reads `error.code`.\n"),
+      markdownPage('files.md', "# Files\n\nOn failure the callback gets an [`Error`](errors.md); name it `error` or `err`.\n\nListen for `'error'` too.\n"),
+    ];
+    const input = siteInput(pages, testOptions());
+    const errors = input.graph.pages.findIndex((p) => p.route === '/errors/');
+    const { codeForms } = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    expect(codeForms.linkedTo.get('Error')).toEqual(new Map([[errors, 2]]));
+    expect(codeForms.total.get('Error')).toBe(2);
+    expect(codeForms.linkedTo.get('error')).toBeUndefined();
+    expect(codeForms.total.get('error')).toBe(3);
+    // `error.code` and `err` name no page: they are no mentions and not counted.
+    expect(codeForms.total.get('error code')).toBeUndefined();
+    expect(codeForms.total.get('err')).toBeUndefined();
   });
 });
 

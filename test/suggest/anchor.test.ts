@@ -35,6 +35,15 @@ describe('findAnchors', () => {
     expect(best).toMatchObject({ text: 'rate limits', kind: 'alias' });
   });
 
+  it('takes no alias from a route whose words the tokenizer partly drops (/n-api/ is not "API"), as the mention index does', () => {
+    const page = markdownPage('documentation.md', '# About this documentation\n\nWelcome to the official API reference documentation.\n');
+    const source = prepareSource(page.spans, cache, 'About this documentation');
+    expect(targetNames('Node-API', ['/n-api/'], [], cache).aliases).toEqual([]);
+    expect(findAnchors(source, targetNames('Node-API', ['/n-api/'], [], cache))).toEqual([]);
+    // A route kept whole is an alias still.
+    expect(findAnchors(source, targetNames('Reference', ['/api-reference/'], [], cache)).map((a) => [a.text, a.kind, a.line])).toEqual([['API reference', 'alias', 3]]);
+  });
+
   it('does not join words across punctuation, line breaks or more than two stop words', () => {
     const names = targetNames('Cache server', [], [], cache);
     for (const text of ['the cache, server', 'the cache\nserver', 'cache and then the server', 'cache (server)']) {

@@ -252,6 +252,11 @@ describe('section headings name their page', () => {
     ['ERR_WIDGET_CLOSED', ['ERR_WIDGET_CLOSED']],
     ['readFileSync', ['readFileSync']],
     ['PyObject_New()', ['PyObject_New()', 'PyObject_New']],
+    ['--pending-deprecation', ['--pending-deprecation']],
+    ['--require module', ['--require module']],
+    ['--max-old-space-size=SIZE', ['--max-old-space-size=SIZE']],
+    ['-- the rest', []],
+    ['- a list marker', []],
   ])('%s gives %j', (heading, names) => {
     expect(headingNames(heading)).toEqual(names);
   });
@@ -268,6 +273,25 @@ describe('section headings name their page', () => {
     const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
     const hit = index.bySource[id('/guide/')]!.get(id('/errors/'));
     expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([['`ERR_WIDGET_CLOSED`', 3, 'code']]);
+  });
+});
+
+describe('command-line option headings name their page', () => {
+  it('a code span written as an option of a command-line page is a mention of that page, and it is the option put first', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [Command line](cli.md)\n- [Deprecations](deprecations.md)\n'),
+      markdownPage('cli.md', '# Command line\n\n## Options\n\n### `--pending-deprecation`\n\nWarn about pending deprecations.\n\n### `-r, --require module`\n\nLoad a module at startup.\n'),
+      markdownPage('deprecations.md', '# Deprecations\n\nSome deprecations are pending deprecation notices.\nThey warn when the `--pending-deprecation` flag is set.\n'),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const hit = index.bySource[id('/deprecations/')]!.get(id('/cli/'));
+    expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([
+      ['`--pending-deprecation`', 4, 'code'],
+      ['pending deprecation', 3, 'name'],
+    ]);
   });
 });
 
