@@ -223,6 +223,10 @@ export interface Config {
   limits?: LimitsConfig | undefined;
   /** The page-facts cache. @default { enabled: true, dir: 'node_modules/.cache/linkweave' } */
   cache?: CacheConfig | undefined;
-  /** Worker threads for parsing: 0 = automatic (by file count and cores), 1 = main thread only. @default 0 */
+  /**
+   * Worker threads: 0 = automatic (parsing: by file count and cores; the impact predictions'
+   * PageRank: a second thread on a machine of two or more cores), 1 = the main thread only. The
+   * report is the same either way. @default 0
+   */
   workers?: number | undefined;
 }

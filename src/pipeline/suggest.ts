@@ -1,4 +1,5 @@
 /** The suggest stage: importance, under-linked pages and the link model's suggestions (suggest/). */
+import { availableParallelism } from 'node:os';
 import type { ResolvedOptions } from '../config/options.js';
 import { suggestLinks } from '../suggest/index.js';
 import type { SuggestResult } from '../suggest/index.js';
@@ -14,5 +15,8 @@ export function suggestFor(
   options: ResolvedOptions,
   fitMemo?: FitMemo,
 ): SuggestResult {
-  return suggestLinks({ graph: site.graph, facts: ordered, ranking: site.ranking, ...text, traffic, ...(fitMemo === undefined ? {} : { fitMemo }) }, options);
+  // The impact predictions' PageRank takes a second thread where there is a second core (and
+  // `workers` is not 1, the main thread only); the results are the same either way.
+  const threads = options.workers !== 1 && availableParallelism() >= 2 ? 2 : 1;
+  return suggestLinks({ graph: site.graph, facts: ordered, ranking: site.ranking, ...text, traffic, threads, ...(fitMemo === undefined ? {} : { fitMemo }) }, options);
 }

@@ -17,7 +17,7 @@ import { compareText } from '../util/index.js';
 import { outWeightSums } from '../graph/csr.js';
 import { pagerank } from '../rank/pagerank.js';
 import type { PagerankOptions } from '../rank/pagerank.js';
-import { pagerankScenarios } from '../rank/pagerank-batch.js';
+import { pagerankScenariosOnThreads } from '../rank/pagerank-threads.js';
 import { depthMask, teleportVector } from '../rank/rank.js';
 
 /** Everything needed to predict PageRank after adding links, made once per run. */
@@ -56,11 +56,12 @@ export function pagerankWithLinks(model: RankModel, links: readonly { from: numb
 /**
  * PageRank of each link's target with that link alone added (weight 1, a content link), each
  * link its own scenario; all in one batched run, exactly as {@link pagerankWithLinks} per link.
+ * @param threads 1, or 2 to solve half the scenarios on a worker thread (same results)
  * @returns `after[i]`: PageRank (sum 1) of `links[i].to` with `links[i]` added
  */
-export function targetRanksWithLinks(model: RankModel, links: readonly { from: number; to: number }[]): Float64Array {
+export function targetRanksWithLinks(model: RankModel, links: readonly { from: number; to: number }[], threads = 1): Float64Array {
   const { graph, options } = model;
-  const result = pagerankScenarios(
+  const result = pagerankScenariosOnThreads(
     graph.forward,
     graph.reverse,
     graph.pages.length,
@@ -68,6 +69,7 @@ export function targetRanksWithLinks(model: RankModel, links: readonly { from: n
     links.map((l) => [{ from: l.from, to: l.to, weight: 1 }]),
     model.current,
     links.map((l) => [l.to]),
+    threads,
   );
   const after = new Float64Array(links.length);
   for (let i = 0; i < links.length; i++) after[i] = result.values[i][0];

@@ -91,7 +91,7 @@ export function suggestLinks(input: SuggestInput, options: ResolvedOptions): Sug
   // PageRank after: for the best `impactLimit` by score and the plan, in one batched run.
   const selected = impactSelection(made.map((m) => m.suggestion), plan.suggestionIds, settings.impactLimit);
   const predict = made.filter((_, i) => selected[i] === 1);
-  const after = targetRanksWithLinks(model, predict.map((m) => ({ from: m.source, to: m.target })));
+  const after = targetRanksWithLinks(model, predict.map((m) => ({ from: m.source, to: m.target })), input.threads ?? 1);
   predict.forEach((m, j) => {
     m.suggestion = { ...m.suggestion, targetRankAfter: after[j] * n };
   });

@@ -25,6 +25,8 @@ export interface SuggestInput {
   readonly stems?: StemCache;
   /** Fitted link models kept between runs (the cache folder's). A memo: results do not depend on it. @default none */
   readonly fitMemo?: FitMemo;
+  /** Threads the impact predictions may use: 1, or 2 (half on a worker thread). Results do not depend on it. @default 1 */
+  readonly threads?: number;
 }
 
 
