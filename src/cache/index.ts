@@ -10,7 +10,7 @@ export type { CacheSettings, CacheStats, IgnoredReason, ParseMisses } from './ty
 export { codeHash, codeVersion } from './code.js';
 export { readResult, resultKey, writeResult } from './result.js';
 export type { ResultInputs } from './result.js';
-export { copyCachedOutput, readCachedOutput, saveCachedOutput } from './output.js';
+export { copyCachedOutput, saveCachedOutput } from './output.js';
 export type { ReportCacheInfo } from './output.js';
 export { linkModelStore } from './model.js';
 export { relatedStore } from './related.js';

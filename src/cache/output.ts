@@ -34,19 +34,6 @@ function outputFile(info: ReportCacheInfo, format: string, cwd: string): string 
   return join(info.dir, `${prefix(info.command, format)}${hash}`);
 }
 
-/**
- * The cached bytes of this report in `format`, or null: only when the report itself came from
- * the cache and the same format was written from the same working folder.
- */
-export function readCachedOutput(info: ReportCacheInfo, format: string, cwd: string): Buffer | null {
-  if (!info.hit) return null;
-  try {
-    return fs.readFileSync(outputFile(info, format, cwd));
-  } catch {
-    return null;
-  }
-}
-
 /** Temp files of `copyCachedOutput`: the prefix of `writeFileAtomic`'s (a dot-file, never collected; in .gitignore). */
 const TEMP_PREFIX = '.linkweave-tmp-';
 
@@ -57,8 +44,9 @@ interface TempTracker {
 }
 
 /**
- * Write the cached bytes of this report in `format` to `target`, as `readCachedOutput` would
- * give them, but copied by the file system instead of read into memory and written again (at
+ * Write the cached bytes of this report in `format` to `target` (only when the report itself
+ * came from the cache and the same format was written from the same working folder), copied by
+ * the file system instead of read into memory and written again (at
  * 10,000 pages a 90 MB JSON report: about 0.12 s against 0.6 s here). Atomic like
  * `writeFileAtomic`: a temp file beside `target`, flushed, given the old file's permission
  * bits, renamed over it. Never throws: false when there are no cached bytes or the copy failed

@@ -11,6 +11,7 @@
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import { join } from 'node:path';
+import { EngineError } from '../errors.js';
 import type { Report } from '../types.js';
 import { codeVersion } from './code.js';
 
@@ -79,6 +80,8 @@ function isHead(value: unknown): value is ResultHead {
 interface Pending {
   fd: number | null;
   fields: number;
+  /** The cache file, named when a field cannot be read. */
+  readonly file: string;
 }
 
 /** Closes the file of a report dropped with fields never read. */
@@ -106,7 +109,8 @@ function closePending(pending: Pending): void {
 export function readResult(dir: string, command: string, key: string): Report | null {
   let fd: number | null = null;
   try {
-    fd = fs.openSync(resultFile(dir, command), 'r');
+    const file = resultFile(dir, command);
+    fd = fs.openSync(file, 'r');
     const size = fs.fstatSync(fd).size;
     // The head is read and checked before the rest: after a change (the usual case in a pull
     // request) the key differs, and reading a large report for nothing costs time.
@@ -127,7 +131,7 @@ export function readResult(dir: string, command: string, key: string): Report | 
     if (headEnd + 1 + sizes.reduce((a, b) => a + b, 0) + (tail.length - trailerStart) !== size) return null;
 
     const report: Record<string, unknown> = {};
-    const pending: Pending = { fd, fields: 0 };
+    const pending: Pending = { fd, fields: 0, file };
     let offset = headEnd + 1;
     head.fields.forEach(([name, lines], i) => {
       const span = { offset, length: sizes[i], lines };
@@ -200,8 +204,19 @@ function decodeOnRead(target: Record<string, unknown>, name: string, span: { off
     enumerable: true,
     configurable: true,
     get() {
-      if (pending.fd === null) throw new Error(`report cache: the file behind the report's "${name}" was closed before it was read`);
-      const value = decodeField(readBytes(pending.fd, span.offset, span.length), span.lines);
+      // The head, the sizes and the small fields were checked when the report was taken from the
+      // cache; a large field that cannot be decoded now means the file was changed by hand or
+      // damaged on disk. Say which file, and how to get past it.
+      const fail = (why: string): never => {
+        throw new EngineError('E_IO', `report cache ${pending.file}: the report's "${name}" cannot be read (${why}); delete the cache folder and run again`);
+      };
+      if (pending.fd === null) return fail('its file was closed before it was read');
+      let value: unknown;
+      try {
+        value = decodeField(readBytes(pending.fd, span.offset, span.length), span.lines);
+      } catch (error) {
+        return fail(error instanceof Error ? error.message : String(error));
+      }
       settle(value);
       return value;
     },

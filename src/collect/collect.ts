@@ -49,7 +49,7 @@ export async function collectSources(options: ResolvedOptions, extraExclude: rea
   }
   const assets = all.filter((rel) => !sourceSet.has(rel));
 
-  const ctx = { realRoot, maxFileBytes: options.maxFileBytes, realFolders: new Map<string, string>() };
+  const ctx = { realRoot, maxFileBytes: options.maxFileBytes, realFolders: new Map<string, string>(), scratch: { buffer: Buffer.allocUnsafe(1 << 16) } };
   const files: SourceFile[] = [];
   for (let i = 0; i < sources.length; i++) {
     const { rel, kind } = sources[i];

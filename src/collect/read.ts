@@ -21,6 +21,12 @@ export interface ReadContext {
    * whole (one `realpath` per file: about 0.2 s of a 10,000-file site).
    */
   readonly realFolders?: Map<string, string>;
+  /**
+   * A read buffer kept between files by a caller reading many (`collectSources`): a file of up
+   * to `SCRATCH_LIMIT` bytes is read into it, so its bytes are valid until the next read. Without
+   * it, each file gets a buffer of its own.
+   */
+  readonly scratch?: { buffer: Buffer };
 }
 
 /** A file read, or the warning that kept it out. */
@@ -64,8 +70,10 @@ export function readSource(absPath: string, relPath: string, kind: FileKind, ctx
       try {
         fd = fs.openSync(real, flags | NO_FOLLOW!);
       } catch (error) {
-        // ELOOP: the file itself is a symlink; it is resolved whole, as without the folder memo.
-        if ((error as NodeJS.ErrnoException).code !== 'ELOOP') throw error;
+        // ELOOP (EMLINK on FreeBSD): the file itself is a symlink; it is resolved whole, as
+        // without the folder memo.
+        const code = (error as NodeJS.ErrnoException).code;
+        if (code !== 'ELOOP' && code !== 'EMLINK') throw error;
         real = fs.realpathSync.native(absPath);
         if (!isInside(ctx.realRoot, real)) return outside();
         fd = fs.openSync(real, flags);
@@ -92,7 +100,7 @@ export function readSource(absPath: string, relPath: string, kind: FileKind, ctx
         },
       };
     }
-    const bytes = readAll(fd, stat.size);
+    const bytes = readAll(fd, stat.size, ctx.scratch);
     const decoded = decodeSource(bytes);
     return {
       file: {
@@ -121,20 +129,21 @@ function realFolder(folder: string, memo: Map<string, string>): string {
   return real;
 }
 
-/** Files up to this size are read into one buffer kept between calls (`scratch`). */
+/** Files up to this size are read into the caller's kept buffer (`ReadContext.scratch`). */
 const SCRATCH_LIMIT = 1 << 20;
-let scratch = Buffer.allocUnsafe(1 << 16);
 
 /**
  * Read a whole file of (about) `size` bytes; copes with a file that grows or shrinks meanwhile.
- * A file of up to `SCRATCH_LIMIT` bytes is read into `scratch`, so the returned bytes are only
- * valid until the next call (`readSource` hashes and decodes them at once): on a 10,000-file
- * site, one buffer (and a copy, once the first read filled it) per file was GC work for nothing.
+ * A file of up to `SCRATCH_LIMIT` bytes is read into `scratch` when given, so the returned bytes
+ * are only valid until the next call (`readSource` hashes and decodes them at once): on a
+ * 10,000-file site, one buffer (and a copy, once the first read filled it) per file was GC work
+ * for nothing.
  */
-function readAll(fd: number, size: number): Buffer {
+function readAll(fd: number, size: number, scratch: { buffer: Buffer } | undefined): Buffer {
+  const kept = scratch !== undefined && size < SCRATCH_LIMIT;
   // One byte of room beyond `size`: the read that returns 0 then needs no larger buffer.
-  if (size < SCRATCH_LIMIT && scratch.length <= size) scratch = Buffer.allocUnsafe(Math.min(SCRATCH_LIMIT, Math.max(size + 1, scratch.length * 2)));
-  let buffer = size < SCRATCH_LIMIT ? scratch : Buffer.allocUnsafe(size + 1);
+  if (kept && scratch.buffer.length <= size) scratch.buffer = Buffer.allocUnsafe(Math.min(SCRATCH_LIMIT, Math.max(size + 1, scratch.buffer.length * 2)));
+  let buffer = kept ? scratch.buffer : Buffer.allocUnsafe(size + 1);
   let length = 0;
   for (;;) {
     if (length === buffer.length) {

@@ -7,6 +7,7 @@ import { Piscina } from 'piscina';
 import type { ResolvedOptions } from '../config/options.js';
 import { parseSource } from '../parse/index.js';
 import type { PageFacts, SourceFile } from '../types.js';
+import { compiledModule } from './beside.js';
 import { makeBatches } from './plan.js';
 import type { ParseTask, WorkerStats } from './types.js';
 
@@ -16,7 +17,7 @@ import type { ParseTask, WorkerStats } from './types.js';
  * (`npm test` and the vitest global setup build it first).
  */
 export function workerUrl(moduleUrl: string = import.meta.url): URL {
-  return moduleUrl.endsWith('.ts') ? new URL('../../dist/parallel/worker.js', moduleUrl) : new URL('./worker.js', moduleUrl);
+  return compiledModule(moduleUrl, './worker.js', 'parallel/worker.js');
 }
 
 /**

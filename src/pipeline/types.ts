@@ -20,7 +20,7 @@ export interface AnalyzeHooks extends ParseHooks {
   onStage?(stage: StageName, phase: 'start' | 'end'): void;
   /**
    * Where the report of this run is in the whole-report cache (only with the cache on): lets
-   * a caller that writes the report copy the bytes it wrote last time (`readCachedOutput`).
+   * a caller that writes the report copy the bytes it wrote last time (`copyCachedOutput`).
    */
   onReportCache?(info: ReportCacheInfo): void;
   /** Progress inside a stage (files parsed so far). */

@@ -11,7 +11,10 @@
  * two threads against 2.0-2.8 s on one (the same machine, busy with other work).
  *
  * The caller stays synchronous: the main thread waits for the worker through shared memory. If
- * the worker cannot start or does not finish, the main thread solves its half too.
+ * the worker cannot start (within `START_TIMEOUT_MS`), fails, or does not finish (within ten
+ * times the main thread's own half, at least 10 s), the main thread solves its half too. This
+ * file and `parallel/beside.ts` are the one place where a stage starts a thread and reads the
+ * clock outside the parse pool (DEVELOPERS.md, "Decisions").
  */
 import { compiledModule, startBeside } from '../parallel/beside.js';
 import type { Csr } from '../types.js';
@@ -82,7 +85,13 @@ export function pagerankScenariosOnThreads(
   };
   const beside = startBeside(worker, share);
   const startedAt = Date.now();
-  const mine = pagerankScenarios(forward, reverse, n, options, scenarios.slice(0, half), start, at.slice(0, half));
+  let mine: ScenarioResult;
+  try {
+    mine = pagerankScenarios(forward, reverse, n, options, scenarios.slice(0, half), start, at.slice(0, half));
+  } catch (error) {
+    beside?.cancel();
+    throw error;
+  }
   // The worker's half is about as much work as ours; allow for a busy machine before giving up.
   const done = beside !== null && beside.wait(Math.max(10_000, 10 * (Date.now() - startedAt)));
   const rest = done ? fromShare(share, theirAt) : pagerankScenarios(forward, reverse, n, options, theirs, start, theirAt);

@@ -152,13 +152,13 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // exactly as some of the phrase's pages are named is a mention of those pages only.
   const written = new Map<number, Map<string, Set<number>>>();
   // The pages' own names (title, route, code-naming headings) as written, case kept: key -> pages.
-  const cased = new Map<string, number[]>();
+  const cased = new Map<string, Set<number>>();
   const ownName = (as: string, page: number): void => {
     const key = codeKey(as, true);
     if (key === '') return;
     const pages = cased.get(key);
-    if (pages === undefined) cased.set(key, [page]);
-    else if (!pages.includes(page)) pages.push(page);
+    if (pages === undefined) cased.set(key, new Set([page]));
+    else pages.add(page);
   };
   const refOf: (Map<number, NameRef> | undefined)[] = [];
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
@@ -220,7 +220,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const stems = tokenize(link.raw.text, cache);
     if (link.context === 'content') {
       claim(stems, link.to, 'anchor-text', link.from, link.raw.text);
-      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text), exact: link.raw.code === true && cased.get(codeKey(link.raw.text, true))?.includes(link.to) === true, form: link.raw.code === true ? codeKey(link.raw.text, true) : '' });
+      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text), exact: link.raw.code === true && cased.get(codeKey(link.raw.text, true))?.has(link.to) === true, form: link.raw.code === true ? codeKey(link.raw.text, true) : '' });
     } else {
       claim(stems, link.to, 'label', -1, link.raw.text);
     }
@@ -319,11 +319,13 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       phrase.prose++;
       habit.mentioned[f.place]++;
       // Code written exactly as the source names itself (`response.finished` in the page whose
-      // section it is) is the page speaking of itself, not of another page named so.
-      if ((f.place & CODE) !== 0 && cased.get(codeKey(f.text(), true))?.includes(s) === true) continue;
+      // section it is) is the page speaking of itself, not of another page named so: no mention
+      // of a target. It still counts above as an occurrence of the phrase and of its placement
+      // (the site wrote the name there and did not link it), as in the measured rule.
+      if ((f.place & CODE) !== 0 && cased.get(codeKey(f.text(), true))?.has(s) === true) continue;
       let made: AnchorMatch | null = null;
-      const forms = written.get(f.phrase);
-      const only = forms !== undefined && forms.size > 1 ? forms.get(codeKey(f.text())) : undefined;
+      const writtenAs = written.get(f.phrase);
+      const only = writtenAs !== undefined && writtenAs.size > 1 ? writtenAs.get(codeKey(f.text())) : undefined;
       for (const ref of phrase.names) {
         if (ref.target === s || (only !== undefined && !only.has(ref.target))) continue;
         let hit = hits.get(ref.target);
@@ -347,7 +349,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
  * anchor options by it (by the fixed order alone when there is no fit).
  * @param pairLinks per linked pair (source * n + target), its links whose whole text is a phrase
  */
-function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit, cased: ReadonlyMap<string, readonly number[]>, forms: CodeForms): AnchorChoice | null {
+function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number, MentionHit>[], pairLinks: ReadonlyMap<number, readonly LinkedOption[]>, habit: PlacementHabit, cased: ReadonlyMap<string, ReadonlySet<number>>, forms: CodeForms): AnchorChoice | null {
   const n = bySource.length;
   /** An option's facts as if the pair's own links were absent; null when it names the target only through them. */
   const facts = (s: number, t: number, phraseId: number, place: number, words: number, quoted: boolean, exact: boolean, order: number, form: string): AnchorOptionFacts | null => {
@@ -365,7 +367,7 @@ function orderAnchors(phrases: readonly Phrase[], bySource: readonly Map<number,
     return { linkedToTarget: (p.linkedTo.get(t) ?? 0) - mine, linked: p.linked - mine, total: p.prose + p.linked, placementRate: placementRate(habit, place), kind, place, order, words, quoted, exact, formLinkedToTarget, formTotal: forms.total.get(form) ?? 0 };
   };
   const quotedCode = (a: AnchorMatch): boolean => a.kind === 'code' && QUOTED.test(a.text);
-  const exactCode = (a: AnchorMatch, t: number): boolean => a.kind === 'code' && cased.get(codeKey(a.text.replace(/<[^>]*>/g, ''), true))?.includes(t) === true;
+  const exactCode = (a: AnchorMatch, t: number): boolean => a.kind === 'code' && cased.get(codeKey(a.text.replace(/<[^>]*>/g, ''), true))?.has(t) === true;
   const formOf = (a: AnchorMatch): string => (a.kind === 'code' ? codeKey(a.text.replace(/<[^>]*>/g, ''), true) : '');
 
   // Training: a linked phrase and placement stands where its first occurrence is (an unlinked
@@ -433,7 +435,6 @@ function ranksInText(at: readonly { line: number; column: number }[]): number[] 
   return ranks;
 }
 
-/** A content link whose whole text is a phrase, as an anchor option of its pair. */
 /**
  * Inline code by written form (`codeKey` with case kept): its occurrences on the site (code
  * spans in prose and code links), and its links per target. Authors of one site link `Error` and
@@ -445,6 +446,7 @@ export interface CodeForms {
   readonly linkedTo: Map<string, Map<number, number>>;
 }
 
+/** A content link whose whole text is a phrase, as an anchor option of its pair. */
 interface LinkedOption {
   readonly phrase: number;
   readonly place: Placement;

@@ -136,4 +136,30 @@ describe('the whole-report cache file', () => {
     fs.writeFileSync(file, text.slice(0, -1));
     expect(readResult(dir, 'check', 'k3')).toBeNull();
   });
+
+  it('a large field damaged on disk (same length) fails when read, naming the cache file and what to do', async () => {
+    const { readResult, writeResult } = await import('../../src/cache/result.js');
+    const report = { schema: 'linkweave/report@1', stats: { pages: 1 }, links: Array.from({ length: 12_000 }, (_, i) => ({ line: i })) };
+    const dir = path.join(base, 'damaged');
+    writeResult(dir, 'check', 'k4', report as never);
+    const file = path.join(dir, 'report-check.json');
+    const text = fs.readFileSync(file, 'utf8');
+    // One byte of the links changed to another of the same length: the sizes still add up.
+    const at = text.indexOf('{"line":5000}');
+    expect(at).toBeGreaterThan(0);
+    fs.writeFileSync(file, `${text.slice(0, at)}[${text.slice(at + 1)}`);
+    const read = readResult(dir, 'check', 'k4') as unknown as Record<string, unknown>;
+    expect(read).not.toBeNull();
+    expect(read.stats).toEqual({ pages: 1 });
+    let error: unknown;
+    try {
+      void read.links;
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toMatchObject({ name: 'EngineError', code: 'E_IO' });
+    expect((error as Error).message).toContain(file);
+    expect((error as Error).message).toContain('"links"');
+    expect((error as Error).message).toContain('delete the cache folder');
+  });
 });

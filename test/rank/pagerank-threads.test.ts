@@ -59,18 +59,34 @@ describe('pagerankScenariosOnThreads', () => {
     expect(two.values.map((v) => [...v])).toEqual(one.values.map((v) => [...v]));
   }, 60_000);
 
-  it('solves the worker half on the main thread when the worker fails', () => {
-    // A worker that reports failure at once, as the real one does when its solve throws.
+  function withWorker(source: string, run: (url: URL) => void): void {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'linkweave-threads-'));
     try {
-      const failing = path.join(dir, 'failing-worker.mjs');
-      fs.writeFileSync(failing, "import { workerData } from 'node:worker_threads';\nconst s = new Int32Array(workerData.status);\nAtomics.store(s, 0, 2);\nAtomics.notify(s, 0);\n");
-      const two = pagerankScenariosOnThreads(c.forward, c.reverse, c.n, OPTIONS, c.scenarios, c.start, c.at, 2, pathToFileURL(failing));
-      expect(two.threads).toBe(1);
-      expect(two.values.map((v) => [...v])).toEqual(one.values.map((v) => [...v]));
-      expect([...two.iterations]).toEqual([...one.iterations]);
+      const file = path.join(dir, 'worker.mjs');
+      fs.writeFileSync(file, source);
+      run(pathToFileURL(file));
     } finally {
       fs.rmSync(dir, { recursive: true, force: true });
     }
+  }
+
+  it('solves the worker half on the main thread when the worker fails', () => {
+    // A worker whose work throws, reported through the real reporting code (compiled in dist/).
+    const beside = pathToFileURL(path.resolve('dist/parallel/beside.js')).href;
+    const source = `import { workerData } from 'node:worker_threads';\nimport { reportBeside } from '${beside}';\nawait reportBeside(workerData.status, async () => { throw new Error('no'); });\n`;
+    withWorker(source, (url) => {
+      const two = pagerankScenariosOnThreads(c.forward, c.reverse, c.n, OPTIONS, c.scenarios, c.start, c.at, 2, url);
+      expect(two.threads).toBe(1);
+      expect(two.values.map((v) => [...v])).toEqual(one.values.map((v) => [...v]));
+      expect([...two.iterations]).toEqual([...one.iterations]);
+    });
+  }, 60_000);
+
+  it('solves it on the main thread when the worker dies before it can report (its module throws while loading)', () => {
+    withWorker("throw new Error('cannot load');\n", (url) => {
+      const two = pagerankScenariosOnThreads(c.forward, c.reverse, c.n, OPTIONS, c.scenarios, c.start, c.at, 2, url);
+      expect(two.threads).toBe(1);
+      expect(two.values.map((v) => [...v])).toEqual(one.values.map((v) => [...v]));
+    });
   }, 60_000);
 });
