@@ -33,6 +33,10 @@ export const ANCHOR_FEATURES = [
   'words',
   'quoted',
   'exact-code',
+  // Code: the odds of its written form (case kept) being linked to the target. Words have no
+  // written form of their own, so for them it repeats phrase-odds, and the two weights share
+  // that part between them (read the pair together in the report). Giving words 0 here instead
+  // was not measured this round.
   'form-odds',
 ] as const;
 
