@@ -163,7 +163,7 @@ export function repairLine(report: Report, code: (s: string) => string = (s) => 
   const byId = new Map(report.suggestions.map((s) => [s.id, s]));
   const ids = plan.suggestionIds.map((id) => (byId.get(id)?.anchor === null ? `${code(id)} (needs a sentence written by hand)` : code(id))).join(', ');
   return (
-    `Depth repair: ${plural(plan.suggestionIds.length, 'link')} bring the pages deeper than ` +
+    `Depth repair: ${plural(plan.suggestionIds.length, 'link')} ${plan.suggestionIds.length === 1 ? 'brings' : 'bring'} the pages deeper than ` +
     `${plural(plan.maxDepth, 'click')} or unreachable from ${plan.tooDeepBefore} to ${plan.tooDeepAfter}: ${ids}.`
   );
 }
