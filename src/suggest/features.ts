@@ -109,8 +109,7 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   const x = new Array<number>(FEATURES.length).fill(0);
   const linked = hasContentLink(graph.forward, s, t);
   const sums = ctx.rows?.of(s, t);
-  const rows = ctx.index.docOffsets.length - 1;
-  x[F.similarity] = sums !== undefined ? sums.similarity : t < rows && s < rows ? cosine(ctx.index, s, t) : 0;
+  x[F.similarity] = sums !== undefined ? sums.similarity : mergedCosine(ctx.index, s, t);
 
   // Name evidence: prose mentions, plus (for a linked pair) the pair's own link texts.
   const hit = mentions.bySource[s]?.get(t);
@@ -156,6 +155,12 @@ export function pairFeatures(ctx: FeatureContext, s: number, t: number): number[
   const d = linked ? depthWithout(graph, ranking, ctx.isEntry, s, t) : ranking.depth[t];
   x[F['target-depth']] = d < 0 ? DEPTH_CAP : Math.min(d, DEPTH_CAP);
   return x;
+}
+
+/** `cosine` of two pages, 0 when either has no row in the index. */
+function mergedCosine(index: TermIndex, s: number, t: number): number {
+  const rows = index.docOffsets.length - 1;
+  return s < rows && t < rows ? cosine(index, s, t) : 0;
 }
 
 function kindFeature(kind: NameKind): number {
