@@ -36,6 +36,8 @@ export function proseWords(cache: StemCache): ProseWords {
 /** Kept words of one page's prose (the arrays are reused from page to page). */
 export class ProseTokens {
   readonly stem: string[] = [];
+  /** The word-table id of each kept word (its stem is `words.stem[id]`). */
+  readonly word: number[] = [];
   /** Start/end offsets of each kept word within its span's text, and the span's index. */
   readonly start: number[] = [];
   readonly end: number[] = [];
@@ -73,6 +75,7 @@ export function proseTokens(spans: readonly { readonly text: string }[], words: 
       const i = count++;
       if (last >= 0) out.joinNext[last] = !bad && stopWords <= MAX_GAP_STOP_WORDS;
       out.stem[i] = stem;
+      out.word[i] = id;
       out.start[i] = start;
       out.end[i] = end;
       out.span[i] = si;
@@ -83,6 +86,7 @@ export function proseTokens(spans: readonly { readonly text: string }[], words: 
     });
   }
   out.stem.length = count;
+  out.word.length = count;
   out.start.length = count;
   out.end.length = count;
   out.span.length = count;

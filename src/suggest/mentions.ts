@@ -120,6 +120,19 @@ export interface LinkTextMatch {
   readonly exact: boolean;
 }
 
+/** A distinct link text, tokenised and looked up once. */
+interface LinkText {
+  readonly stems: string[];
+  /** Its phrase, or -1 (no kept word, or longer than a name). */
+  readonly phrase: number;
+  /** Its written form (`codeKey`), '' when it has no phrase. */
+  readonly key: string;
+  /** Its written form with case kept, once a code link has asked. */
+  cased: string | null;
+  /** The phrases its stems hold (phrase, 1 when the whole text), once the trie is built. */
+  matches: number[] | null;
+}
+
 interface TrieNode {
   phrase: number;
   readonly next: Map<string, TrieNode>;
@@ -164,14 +177,22 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
     if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
     const id = phraseOf(stems);
+    claimPhrase(id, target, kind, source, as === null ? null : keyOfText(as, id));
+  };
+  /** The written form (codeKey) of a name's text, its first phrase noted for code spans written so. */
+  const keyOfText = (as: string, id: number): string => {
+    let key = keyOf.get(as);
+    if (key === undefined) {
+      key = codeKey(as);
+      keyOf.set(as, key);
+      if (key !== '' && !byCode.has(key)) byCode.set(key, id);
+    }
+    return key;
+  };
+  /** Claim phrase `id` for `target` (`key`: the name's written form, or null). */
+  const claimPhrase = (id: number, target: number, kind: NameKind, source: number, key: string | null): void => {
     const phrase = phrases[id];
-    if (as !== null) {
-      let key = keyOf.get(as);
-      if (key === undefined) {
-        key = codeKey(as);
-        keyOf.set(as, key);
-        if (key !== '' && !byCode.has(key)) byCode.set(key, id);
-      }
+    if (key !== null) {
       if (key !== '') {
         let forms = written.get(id);
         if (forms === undefined) written.set(id, (forms = new Map()));
@@ -212,17 +233,29 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     }
   }
-  const contentLinks: { from: number; to: number; stems: string[]; line: number; column: number; code: boolean; quoted: boolean; exact: boolean; form: string }[] = [];
+  const contentLinks: { from: number; to: number; text: LinkText; line: number; column: number; code: boolean; quoted: boolean; exact: boolean; form: string }[] = [];
   // Inline code by written form (codeKey, case kept): occurrences, and links per target.
   const forms: CodeForms = { total: new Map(), linkedTo: new Map() };
+  // Link texts repeat (a site links a page by the same few words from many pages): each distinct
+  // text is tokenised, looked up and keyed once. At 10,000 generated pages this was a third of
+  // the dictionary's cost.
+  const texts = new Map<string, LinkText>();
   for (const link of graph.links) {
     if (link.from < 0 || link.to < 0 || link.from === link.to) continue;
-    const stems = tokenize(link.raw.text, cache);
+    const raw = link.raw.text;
+    let text = texts.get(raw);
+    if (text === undefined) {
+      const stems = tokenize(raw, cache);
+      const phrase = stems.length === 0 || stems.length > MAX_NAME_WORDS ? -1 : phraseOf(stems);
+      text = { stems, phrase, key: phrase < 0 ? '' : keyOfText(raw, phrase), cased: link.raw.code === true ? codeKey(raw, true) : null, matches: null };
+      texts.set(raw, text);
+    }
     if (link.context === 'content') {
-      claim(stems, link.to, 'anchor-text', link.from, link.raw.text);
-      contentLinks.push({ from: link.from, to: link.to, stems, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(link.raw.text), exact: link.raw.code === true && cased.get(codeKey(link.raw.text, true))?.has(link.to) === true, form: link.raw.code === true ? codeKey(link.raw.text, true) : '' });
-    } else {
-      claim(stems, link.to, 'label', -1, link.raw.text);
+      if (text.phrase >= 0) claimPhrase(text.phrase, link.to, 'anchor-text', link.from, text.key);
+      const form = link.raw.code === true ? (text.cased ??= codeKey(raw, true)) : '';
+      contentLinks.push({ from: link.from, to: link.to, text, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(raw), exact: link.raw.code === true && cased.get(form)?.has(link.to) === true, form });
+    } else if (text.phrase >= 0) {
+      claimPhrase(text.phrase, link.to, 'label', -1, text.key);
     }
   }
   // The trie of unambiguous phrases.
@@ -251,7 +284,8 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   // Per linked pair (source * n + target): its links whose whole text is a phrase.
   const pairLinks = new Map<number, LinkedOption[]>();
   for (const link of contentLinks) {
-    const exact = link.stems.length > 0 && link.stems.length <= MAX_NAME_WORDS ? byKey.get(link.stems.join(' ')) : undefined;
+    const { stems } = link.text;
+    const exact = link.text.phrase < 0 ? undefined : link.text.phrase;
     const on = linesOf(link.from);
     const alone = on.markdown && !on.words.has(link.line) && !on.code.has(link.line) && on.links.get(link.line) === 1;
     const place: Placement = ((link.code ? CODE : 0) | (alone ? ALONE : 0)) as Placement;
@@ -262,7 +296,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         own = [];
         pairLinks.set(key, own);
       }
-      own.push({ phrase: exact, place, line: link.line, column: link.column, words: link.stems.length, quoted: link.quoted, exact: link.exact, form: link.form });
+      own.push({ phrase: exact, place, line: link.line, column: link.column, words: stems.length, quoted: link.quoted, exact: link.exact, form: link.form });
       if (link.form !== '') {
         forms.total.set(link.form, (forms.total.get(link.form) ?? 0) + 1);
         let to = forms.linkedTo.get(link.form);
@@ -274,17 +308,35 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       p.linkedTo.set(link.to, (p.linkedTo.get(link.to) ?? 0) + 1);
       habit.linked[place]++;
     }
-    const joins = link.stems.map(() => true);
-    scanStems(link.stems, joins, root, (phraseId, _first, words) => {
-      const whole = words === link.stems.length;
-      if (!whole) phrases[phraseId].prose++;
-      linkMatches[link.from].push({ target: link.to, phrase: phraseId, exact: whole });
-    });
+    if (link.text.matches === null) {
+      const found: number[] = [];
+      scanStems(stems, stems.map(() => true), root, null, (phraseId, _first, words) => void found.push(phraseId, words === stems.length ? 1 : 0));
+      link.text.matches = found;
+    }
+    const found = link.text.matches;
+    for (let k = 0; k < found.length; k += 2) {
+      const whole = found[k + 1] === 1;
+      if (!whole) phrases[found[k]].prose++;
+      linkMatches[link.from].push({ target: link.to, phrase: found[k], exact: whole });
+    }
   }
 
   const bySource: Map<number, MentionHit>[] = [];
   const wordTable = proseWords(cache);
   const tokens = new ProseTokens();
+  // Per word of the table: the trie node its stem starts at (null: no name starts with it),
+  // found once per distinct word. Most words of the prose start no name, and this makes each
+  // of them an array read instead of a map lookup by its stem.
+  const startOfWord: (TrieNode | null | undefined)[] = [];
+  const firstNode = (i: number): TrieNode | undefined => {
+    const id = tokens.word[i];
+    let node = startOfWord[id];
+    if (node === undefined) {
+      node = root.next.get(tokens.stem[i]) ?? null;
+      startOfWord[id] = node;
+    }
+    return node ?? undefined;
+  };
   for (let s = 0; s < n; s++) {
     const facts = factsOf(s);
     const hits = new Map<number, MentionHit>();
@@ -296,7 +348,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const on = linesOf(s);
     if (facts.spans.length > 0) {
       proseTokens(facts.spans, wordTable, tokens);
-      scanStems(tokens.stem, tokens.joinNext, root, (phraseId, first, words) => {
+      scanStems(tokens.stem, tokens.joinNext, root, firstNode, (phraseId, first, words) => {
         const span = facts.spans[tokens.span[first]];
         const start = tokens.start[first];
         const end = tokens.end[first + words - 1];
@@ -501,9 +553,15 @@ function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number
  * The phrases of a run of stems, left to right, each the longest that starts at its word; a
  * word inside a match starts no other (so "file system" is one mention, not also "file").
  */
-function scanStems(stem: readonly string[], joinNext: readonly boolean[], root: TrieNode, visit: (phrase: number, first: number, words: number) => void): void {
+function scanStems(
+  stem: readonly string[],
+  joinNext: readonly boolean[],
+  root: TrieNode,
+  first: ((i: number) => TrieNode | undefined) | null,
+  visit: (phrase: number, first: number, words: number) => void,
+): void {
   for (let i = 0; i < stem.length; ) {
-    let node = root.next.get(stem[i]);
+    let node = first === null ? root.next.get(stem[i]) : first(i);
     let words = 1;
     let best = -1;
     let bestWords = 0;
