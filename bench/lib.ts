@@ -9,7 +9,7 @@ import type * as Parse from '../src/parse/index.js';
 import type * as Graph from '../src/graph/index.js';
 import type * as Rank from '../src/rank/index.js';
 import type * as Text from '../src/text/index.js';
-import type * as Write from '../src/report/write.js';
+import type * as Write from '../src/util/write-file.js';
 import type * as Cache from '../src/cache/index.js';
 
 /** The modules of the built package the bench uses. */
@@ -45,7 +45,7 @@ export async function loadBuilt(): Promise<Built> {
     load<typeof Graph>('graph/index.js'),
     load<typeof Rank>('rank/index.js'),
     load<typeof Text>('text/index.js'),
-    load<typeof Write>('report/write.js'),
+    load<typeof Write>('util/write-file.js'),
     load<typeof Cache>('cache/index.js'),
   ]);
   return { api, collect, parse, graph, rank, text, write, cache };

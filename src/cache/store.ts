@@ -7,7 +7,7 @@ import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import { join } from 'node:path';
 import type { PageFacts, SourceFile } from '../types.js';
-import { compareText, describeIoError } from '../util/index.js';
+import { compareText, describeIoError, TEMP_PREFIX } from '../util/index.js';
 import { CACHE_SCHEMA, packFacts, shardFileName, shardOfPath, SHARDS, unpackFacts } from './format.js';
 import type { ShardHeader, StoredFacts } from './format.js';
 import type { IgnoredReason } from './types.js';
@@ -60,8 +60,6 @@ class Unpacked {
     readonly source: string,
   ) {}
 }
-
-const TEMP_PREFIX = '.linkweave-tmp-';
 
 /** Load the shard files of `dir` (a missing folder is an empty cache). */
 export function openCache(dir: string, key: CacheKey): CacheSession {

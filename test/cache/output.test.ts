@@ -120,8 +120,12 @@ describe('copyCachedOutput', () => {
     expect(seen).toHaveLength(1);
     expect(tracked.size).toBe(0);
     expect(fs.readdirSync(cwd).filter((n) => n.startsWith('.linkweave-tmp-'))).toEqual([]);
-    // A target folder that does not exist: false, and nothing written.
-    expect(await copyCachedOutput({ ...info, key }, 'json', cwd, path.join(cwd, 'missing', 'r.json'))).toBe(false);
-    expect(fs.existsSync(path.join(cwd, 'missing'))).toBe(false);
+    // A target folder that does not exist is made, as the report's own write makes it.
+    expect(await copyCachedOutput({ ...info, key }, 'json', cwd, path.join(cwd, 'missing', 'r.json'))).toBe(true);
+    expect(fs.readFileSync(path.join(cwd, 'missing', 'r.json')).equals(cold)).toBe(true);
+    // A target in the way of a folder: false, and the file left as it was.
+    fs.writeFileSync(path.join(cwd, 'file'), 'a file');
+    expect(await copyCachedOutput({ ...info, key }, 'json', cwd, path.join(cwd, 'file', 'r.json'))).toBe(false);
+    expect(fs.readFileSync(path.join(cwd, 'file'), 'utf8')).toBe('a file');
   }, CLI_RUNS_TIMEOUT);
 });

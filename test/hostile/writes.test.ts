@@ -4,7 +4,7 @@
  * are refused by test/apply/command.test.ts; here the path is a plain source path inside the
  * root that leads outside through a symlink (a file symlink and a folder symlink). The outside
  * file must stay byte for byte, the rest of the suggestions are applied, and no temp file is
- * left. (Atomic writes: test/report/write.test.ts; refusing --output over a source and SIGINT
+ * left. (Atomic writes: test/util/write-file.test.ts; refusing --output over a source and SIGINT
  * mid-run leaving the previous report whole with no temp file: test/cli/cli.test.ts.)
  */
 import { createHash } from 'node:crypto';

@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { removeTempFilesSync, TEMP_PREFIX, writeFileAtomic } from '../../src/report/write.js';
+import { removeTempFilesSync, TEMP_PREFIX, writeFileAtomic } from '../../src/util/write-file.js';
 import { tempDir } from '../collect/tree.js';
 
 const cleanups: (() => void)[] = [];
@@ -79,6 +79,21 @@ describe('writeFileAtomic', () => {
     expect(path.basename(seen[0]!).startsWith(`${TEMP_PREFIX}r.txt-`)).toBe(true);
     expect(live.size).toBe(0);
     expect(fs.existsSync(seen[0]!)).toBe(false);
+  });
+
+  it('copies a file given as { copyOf }, keeping the old permission bits, and leaves the target as it was when the copy fails', async () => {
+    const d = dir();
+    const source = path.join(d, 'cached.json');
+    const target = path.join(d, 'report.json');
+    fs.writeFileSync(source, '{"from":"cache"}\n');
+    fs.writeFileSync(target, 'old report');
+    fs.chmodSync(target, 0o600);
+    await writeFileAtomic(target, { copyOf: source });
+    expect(fs.readFileSync(target, 'utf8')).toBe('{"from":"cache"}\n');
+    expect(fs.statSync(target).mode & 0o777).toBe(0o600);
+    await expect(writeFileAtomic(target, { copyOf: path.join(d, 'missing.json') })).rejects.toMatchObject({ code: 'E_IO' });
+    expect(fs.readFileSync(target, 'utf8')).toBe('{"from":"cache"}\n');
+    expect(leftovers(d)).toEqual([]);
   });
 
   it('removeTempFilesSync deletes the listed files and ignores missing ones', () => {
