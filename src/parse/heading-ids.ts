@@ -6,7 +6,7 @@
  * Explicit ids (`## Title {#id}`, `<a id>`, `<span id>`) are the same in every style; they are
  * not made here.
  */
-import GithubSlugger from 'github-slugger';
+import GithubSlugger, { slug as githubSlug } from 'github-slugger';
 
 /** The heading-id styles linkweave knows, by the generator or library that uses them. */
 export const HEADING_ID_STYLES = [
@@ -19,6 +19,7 @@ export const HEADING_ID_STYLES = [
   'kramdown',
   'python-markdown',
   'vitepress',
+  'github-underscore',
 ] as const;
 
 /** One heading-id style. */
@@ -41,6 +42,7 @@ export function headingIdMaker(style: HeadingIdStyle): HeadingIdMaker {
   }
   if (style === 'python-markdown') return pythonMarkdownMaker();
   const base = BASES[style];
+  const mark = style === 'github-underscore' ? '_' : '-';
   const counts = new Map<string, number>();
   return {
     id(text) {
@@ -50,10 +52,11 @@ export function headingIdMaker(style: HeadingIdStyle): HeadingIdMaker {
         counts.set(slug, 1);
         return slug;
       }
-      // mdBook, Hugo, kramdown and markdown-it-anchor (VitePress) number repeats -1, -2, ...
+      // mdBook, Hugo, kramdown and markdown-it-anchor (VitePress) number repeats -1, -2, ...;
+      // the Node.js API docs _1, _2, ...
       let n = seen;
-      let candidate = `${slug}-${n}`;
-      while (counts.has(candidate)) candidate = `${slug}-${++n}`;
+      let candidate = `${slug}${mark}${n}`;
+      while (counts.has(candidate)) candidate = `${slug}${mark}${++n}`;
       counts.set(slug, n + 1);
       counts.set(candidate, 1);
       return candidate;
@@ -73,6 +76,12 @@ export function headingIds(style: HeadingIdStyle, texts: readonly string[]): str
 const LETTER_OR_DIGIT = /[\p{L}\p{N}]/u;
 
 const BASES: Record<Exclude<HeadingIdStyle, 'github' | 'python-markdown'>, (text: string) => string> = {
+  /**
+   * GitHub's slug of each heading, repeats numbered `_1`, `_2`, ...: the ids of the Node.js API
+   * documentation's HTML (Debian nodejs-doc 18.20.4: `process.exit([code])` is `processexitcode`
+   * and `process.exitCode` after it `processexitcode_1`).
+   */
+  'github-underscore': (text) => githubSlug(text),
   /** Lower case, each space an underscore; characters that cannot stand in an id dropped. */
   underscore: (text) =>
     text

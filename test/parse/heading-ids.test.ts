@@ -16,6 +16,21 @@ describe('github style', () => {
   });
 });
 
+describe('github-underscore style', () => {
+  it("the ids of the Node.js API docs' built HTML (Debian nodejs-doc 18.20.4+dfsg-1~deb12u2, api/fs.html and api/process.html)", () => {
+    // fs.md's four "Event: `'close'`" headings (with others between them), and process.md's
+    // "`process.exit([code])`" then "`process.exitCode`"; the ids as the package's HTML has them.
+    expect(headingIds('github-underscore', ["Event: 'close'", 'filehandle.close()', "Event: 'close'", "Event: 'close'", "Event: 'close'"])).toEqual([
+      'event-close',
+      'filehandleclose',
+      'event-close_1',
+      'event-close_2',
+      'event-close_3',
+    ]);
+    expect(headingIds('github-underscore', ['process.exit([code])', 'process.exitCode'])).toEqual(['processexitcode', 'processexitcode_1']);
+  });
+});
+
 describe('kramdown style', () => {
   it('the header id examples of the kramdown syntax documentation ("Automatic generation of header IDs", from memory)', () => {
     expect(headingIds('kramdown', ['This is a header', '12. Another one 1.2.3', 'Do ^& it now', 'Hallo', 'Not now', 'Hallo', '123456789'])).toEqual([
