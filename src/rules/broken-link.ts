@@ -1,3 +1,5 @@
+import { posix } from 'node:path';
+import { MARKDOWN_EXTENSIONS, SOURCE_EXTENSION_END } from '../routes/extensions.js';
 import type { Rule, RuleFinding } from './types.js';
 import { linkSource } from './place.js';
 import { nearest } from './nearest.js';
@@ -9,7 +11,10 @@ import { nearest } from './nearest.js';
  * region is reported on every page that carries it). The message names the resolved target
  * (a route; for a link to a source file that does not exist, the file's path from the content
  * root; for a missing image or download, its path), the destination as written when it
- * differs, and the closest existing route (or source file) by edit distance when one is close.
+ * differs, and a fix: a relative link written without the extension of a Markdown file beside
+ * it (`NLopt_Introduction#x` next to `NLopt_Introduction.md`, which a generator that turns file
+ * links into page links leaves as it is) gets the link to that file; otherwise the closest
+ * existing route (or source file) by edit distance, when one is close.
  * `target` is the resolved target.
  *
  * Options: none. Default level: `error`.
@@ -34,6 +39,7 @@ export const brokenLink: Rule = {
   check(ctx) {
     const routes = ctx.graph.pages.map((p) => p.route);
     const files = ctx.graph.pages.map((p) => p.file);
+    const fileSet = new Set(files);
     const guesses = new Map<string, string | null>();
     const findings: RuleFinding[] = [];
     for (const link of ctx.graph.links) {
@@ -42,10 +48,13 @@ export const brokenLink: Rule = {
       // a missing asset or page as a route.
       const sourceFile = !link.target.startsWith('/');
       const what = sourceFile ? 'source file' : link.kind === 'asset' ? 'file' : 'page';
-      let guess = guesses.get(link.target);
-      if (guess === undefined) {
-        guess = link.kind === 'asset' ? null : nearest(link.target, sourceFile ? files : routes);
-        guesses.set(link.target, guess);
+      let guess = sourceFile || link.kind === 'asset' ? null : fileWithoutExtension(link.raw.href, ctx.graph.pages[link.from]?.file ?? '', fileSet);
+      if (guess === null) {
+        guess = guesses.get(link.target) ?? null;
+        if (!guesses.has(link.target)) {
+          guess = link.kind === 'asset' ? null : nearest(link.target, sourceFile ? files : routes);
+          guesses.set(link.target, guess);
+        }
       }
       const written = link.raw.href !== link.target ? ` (written "${link.raw.href}")` : '';
       const todo = guess !== null ? `did you mean ${guess}?` : link.kind === 'asset' ? 'add the file or fix the link' : 'fix or remove the link';
@@ -60,3 +69,20 @@ export const brokenLink: Rule = {
     return findings;
   },
 };
+
+/**
+ * The link to a Markdown file beside the source, as it would be written, when `href` is a
+ * relative link to that file without its extension (`NLopt_Introduction#termination` from
+ * `NLopt_Algorithms.md`, with `NLopt_Introduction.md` in the same folder); null otherwise.
+ */
+function fileWithoutExtension(href: string, fromFile: string, files: ReadonlySet<string>): string | null {
+  if (/^(?:[a-z][a-z0-9+.-]*:|\/|#)/i.test(href)) return null;
+  const cut = href.search(/[?#]/);
+  const path = cut < 0 ? href : href.slice(0, cut);
+  if (path === '' || path.endsWith('/') || SOURCE_EXTENSION_END.test(path)) return null;
+  for (const ext of MARKDOWN_EXTENSIONS) {
+    const file = posix.normalize(posix.join(posix.dirname(fromFile), `${path}${ext}`));
+    if (!file.startsWith('../') && files.has(file)) return `${path}${ext}${cut < 0 ? '' : href.slice(cut)}`;
+  }
+  return null;
+}

@@ -48,6 +48,30 @@ ruleTable(brokenLink, {
       ],
     },
     {
+      name: 'a relative link written without the extension of a Markdown file beside it gets the link to that file',
+      site: {
+        pages: [
+          {
+            route: '/NLopt_Algorithms/',
+            file: 'NLopt_Algorithms.md',
+            links: [{ to: '/NLopt_Algorithms/NLopt_Introduction', href: 'NLopt_Introduction#termination-conditions', line: 27, column: 5 }],
+          },
+          { route: '/NLopt_Introduction/', file: 'NLopt_Introduction.md' },
+        ],
+      },
+      findings: [
+        {
+          file: 'NLopt_Algorithms.md',
+          line: 27,
+          column: 5,
+          route: '/NLopt_Algorithms/',
+          target: '/NLopt_Algorithms/NLopt_Introduction',
+          message:
+            'Broken link: no page /NLopt_Algorithms/NLopt_Introduction (written "NLopt_Introduction#termination-conditions"); did you mean NLopt_Introduction.md#termination-conditions?',
+        },
+      ],
+    },
+    {
       name: 'no hint when no route is close; the written form is left out when it equals the target',
       site: { pages: [{ route: '/', links: [{ to: '/reference/cli/', line: 7, column: 3 }] }, { route: '/guide/' }] },
       findings: [
