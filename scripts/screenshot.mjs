@@ -1,17 +1,20 @@
 // `node scripts/screenshot.mjs [out.png] [--full] [--view=top|graph|focus|tables]`: the README's
 // picture of the HTML report, and pictures of its other views.
 // Writes the example site's HTML report the way a user would (from the repository folder, so
-// the page names the root as typed: examples/docs-site), opens it in Debian's chromium through
+// the page names the root as typed: examples/docs-site), opens it in chromium through
 // playwright-core and saves a screenshot (default docs/report.png, the top of the page at
-// 1280 px wide; --full takes the whole page). Needs `npm run build` first and /usr/bin/chromium.
+// 1280 px wide; --full takes the whole page). Needs `npm run build` first. The browser is the
+// tests' (test/browser/launch.ts): Debian's /usr/bin/chromium where it is installed, else the
+// binary of the `@sparticuz/chromium` dev dependency.
 // --view=graph takes the link-graph section in its overview, --view=focus the same section
 // after a search for "install" (Enter focuses the first match), --view=tables the findings and
 // suggestions sections.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync } from 'node:fs';
+import { existsSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import registryChromium from '@sparticuz/chromium';
 import { chromium } from 'playwright-core';
 
 const repo = fileURLToPath(new URL('..', import.meta.url));
@@ -25,9 +28,12 @@ const html = join(mkdtempSync(join(tmpdir(), 'lw-shot-')), 'report.html');
 const run = spawnSync(process.execPath, ['dist/cli/bin.js', 'suggest', 'examples/docs-site', '--output', html, '--quiet'], { cwd: repo, encoding: 'utf8' });
 if (run.status !== 0 && run.status !== 1) throw new Error(`linkweave exited ${run.status}: ${run.stderr}`);
 
+const system = existsSync('/usr/bin/chromium');
 const browser = await chromium.launch({
-  executablePath: '/usr/bin/chromium',
-  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+  executablePath: system ? '/usr/bin/chromium' : await registryChromium.executablePath(),
+  // The package's `--single-process` would end the browser with its first page; the rest of its
+  // flags are kept, and ours come last.
+  args: [...(system ? [] : registryChromium.args.filter((a) => a !== '--single-process')), '--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
 });
 try {
   const page = await browser.newPage({ viewport: { width: 1280, height: 1500 }, deviceScaleFactor: 1 });
