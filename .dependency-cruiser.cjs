@@ -8,6 +8,10 @@
  *
  * EXCEPTIONS are the imports that run backwards, each named with its reason: the config schema
  * lists names that the parse and preset stages define.
+ *
+ * WRITERS are the only places that may import the atomic file write (`src/util/write-file.ts`,
+ * on the ground floor so that the cache and the report share it, but not re-exported by
+ * `util/index.ts`): the stages that touch the file system, as DEVELOPERS.md lists them.
  */
 
 /** The pipeline stages, earliest first: [name, paths below the repository root]. */
@@ -47,6 +51,9 @@ const EXCEPTIONS = [
   { name: 'config-preset-names', from: 'src/config/config.ts', to: 'src/preset/names.ts' },
   { name: 'hugo-heading-ids', from: 'src/preset/hugo.ts', to: 'src/parse/heading-ids.ts' },
 ];
+
+/** The modules that may write files (import `src/util/write-file.ts`). */
+const WRITERS = ['src/collect/', 'src/cache/', 'src/report/index.ts', 'src/apply/run.ts', 'src/pipeline/', 'src/plugins/', 'src/cli/', 'src/index.ts'];
 
 /**
  * Import cycles let through, each named with its files (the cycle rule skips every file of each);
@@ -103,6 +110,13 @@ module.exports = {
       severity: 'error',
       from: { path: '^src/', pathNot: pathsOf(STAGES.flatMap(([, p]) => p)) },
       to: {},
+    },
+    {
+      name: 'file-writes',
+      comment: 'only the stages that touch the file system (WRITERS) import the atomic file write',
+      severity: 'error',
+      from: { path: '^src/', pathNot: pathsOf([...WRITERS, 'src/util/write-file.ts']) },
+      to: { path: pathsOf(['src/util/write-file.ts']) },
     },
     ...stageRules(),
   ],

@@ -60,10 +60,11 @@ deb python3.11-doc '3.11.2-6+deb12u9'
 if [ ! -d python-doc/site ]; then
   mkdir -p python-doc
   cp -r python3.11-doc-deb/usr/share/doc/python3.11/html python-doc/site
-  # Debian compresses changelog files: whatsnew/changelog.html ships as changelog.html.gz, and
-  # 1,449 links of the site point at it. Unpacked, the site is as Sphinx built it.
-  find python-doc/site -name '*.html.gz' -exec gunzip {} +
 fi
+# Debian compresses changelog files: whatsnew/changelog.html ships as changelog.html.gz, and
+# 1,449 links of the site point at it. Unpacked (also in a set fetched before this step), the
+# site is as Sphinx built it.
+find python-doc/site -name '*.html.gz' -exec gunzip -f {} +
 
 # PostgreSQL 15 manual, built HTML.
 deb postgresql-doc-15 '15.20-0+deb12u1'

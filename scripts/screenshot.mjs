@@ -3,9 +3,10 @@
 // Writes the example site's HTML report the way a user would (from the repository folder, so
 // the page names the root as typed: examples/docs-site), opens it in chromium through
 // playwright-core and saves a screenshot (default docs/report.png, the top of the page at
-// 1280 px wide; --full takes the whole page). Needs `npm run build` first. The browser is the
-// tests' (test/browser/launch.ts): Debian's /usr/bin/chromium where it is installed, else the
-// binary of the `@sparticuz/chromium` dev dependency.
+// 1280 px wide; --full takes the whole page). Needs `npm run build` first. The browser is chosen
+// as the tests choose it (test/browser/launch.ts, LINKWEAVE_TEST_BROWSER included): Debian's
+// /usr/bin/chromium where it is installed, else the binary of the `@sparticuz/chromium` dev
+// dependency.
 // --view=graph takes the link-graph section in its overview, --view=focus the same section
 // after a search for "install" (Enter focuses the first match), --view=tables the findings and
 // suggestions sections.
@@ -28,7 +29,8 @@ const html = join(mkdtempSync(join(tmpdir(), 'lw-shot-')), 'report.html');
 const run = spawnSync(process.execPath, ['dist/cli/bin.js', 'suggest', 'examples/docs-site', '--output', html, '--quiet'], { cwd: repo, encoding: 'utf8' });
 if (run.status !== 0 && run.status !== 1) throw new Error(`linkweave exited ${run.status}: ${run.stderr}`);
 
-const system = existsSync('/usr/bin/chromium');
+const forced = process.env.LINKWEAVE_TEST_BROWSER;
+const system = forced === 'system' || (forced !== 'registry' && existsSync('/usr/bin/chromium'));
 const browser = await chromium.launch({
   executablePath: system ? '/usr/bin/chromium' : await registryChromium.executablePath(),
   // The package's `--single-process` would end the browser with its first page; the rest of its

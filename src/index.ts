@@ -14,7 +14,7 @@ export type { Config, ResolvedOptions } from './config/options.js';
 export { EngineError, isEngineError } from './errors.js';
 export type { ErrorCode } from './errors.js';
 export { formatReport, formatReportPieces, formatters, FORMAT_IDS, isFormatId, writeFileAtomic } from './report/index.js';
-export type { FormatContext, FormatId, Formatter, WriteOptions } from './report/index.js';
+export type { FormatContext, FormatId, Formatter, WriteData, WriteOptions } from './report/index.js';
 export type { CacheConfig, CheckConfig, Level, LimitsConfig, LinkPatternConfig, RoutesConfig, SuggestConfig } from './config/config.js';
 export { applySuggestions } from './apply/index.js';
 export type { ApplyInput, ApplyResult, AppliedLink, FileStyle, LinkStyle, NotApplied, RefusalCode, Selection } from './apply/index.js';

@@ -13,8 +13,8 @@
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import { join } from 'node:path';
-import { writeFileAtomic } from '../util/index.js';
-import type { TempFileTracker } from '../util/index.js';
+import { writeFileAtomic } from '../util/write-file.js';
+import type { TempFileTracker } from '../util/write-file.js';
 
 /** Where `analyze` found (or put) the report of this run in the whole-report cache. */
 export interface ReportCacheInfo {

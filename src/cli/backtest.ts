@@ -8,7 +8,7 @@
 import { relative, resolve } from 'node:path';
 import { backtest } from '../backtest/index.js';
 import { readSite } from '../pipeline/index.js';
-import { writeFileAtomic } from '../util/index.js';
+import { writeFileAtomic } from '../util/write-file.js';
 import { backtestFormat, parseBacktestFlags } from './backtest-flags.js';
 import { formatBacktestJson, formatBacktestText } from './backtest-format.js';
 import type { CommandContext } from './context.js';

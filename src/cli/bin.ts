@@ -4,7 +4,7 @@
  * The only file that exits the process, and only on a signal, after removing the temp files of
  * atomic writes still in flight.
  */
-import { removeTempFilesSync } from '../util/index.js';
+import { removeTempFilesSync } from '../util/write-file.js';
 import { run } from './run.js';
 
 const tempFiles = new Set<string>();

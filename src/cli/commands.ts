@@ -7,7 +7,7 @@ import { copyCachedOutput, saveCachedOutput } from '../cache/index.js';
 import type { ReportCacheInfo } from '../cache/index.js';
 import { runPrepared } from '../pipeline/index.js';
 import { formatReportPieces, summaryLines } from '../report/index.js';
-import { writeFileAtomic } from '../util/index.js';
+import { writeFileAtomic } from '../util/write-file.js';
 import { applyArgsOf, FLAGS, SUGGEST_FLAGS } from './args.js';
 import type { CommandInfo, FlagSpec } from './args.js';
 import { BACKTEST_FLAGS } from './backtest-flags.js';

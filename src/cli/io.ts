@@ -1,5 +1,5 @@
 /** What the CLI needs from its process, passed in so `run` can be driven from tests and bin.ts. */
-import type { TempFileTracker } from '../util/index.js';
+import type { TempFileTracker } from '../util/write-file.js';
 
 /** A stream the CLI writes text to. */
 export interface TextSink {

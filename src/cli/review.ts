@@ -19,7 +19,7 @@ import type { Baseline } from '../baseline/index.js';
 import { compareReports, parseReportFile } from '../compare/index.js';
 import type { ReportFile } from '../compare/index.js';
 import { EngineError } from '../errors.js';
-import { writeFileAtomic } from '../util/index.js';
+import { writeFileAtomic } from '../util/write-file.js';
 import type { Report } from '../types.js';
 import type { FlagSpec, FlagValues } from './args.js';
 import type { CliIo } from './io.js';

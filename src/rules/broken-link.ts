@@ -1,5 +1,5 @@
 import { posix } from 'node:path';
-import { MARKDOWN_EXTENSIONS, SOURCE_EXTENSION_END } from '../routes/extensions.js';
+import { MARKDOWN_EXTENSION_END, MARKDOWN_EXTENSIONS, SOURCE_EXTENSION_END } from '../routes/extensions.js';
 import type { Rule, RuleFinding } from './types.js';
 import { linkSource } from './place.js';
 import { nearest } from './nearest.js';
@@ -71,17 +71,25 @@ export const brokenLink: Rule = {
 };
 
 /**
- * The link to a Markdown file beside the source, as it would be written, when `href` is a
- * relative link to that file without its extension (`NLopt_Introduction#termination` from
- * `NLopt_Algorithms.md`, with `NLopt_Introduction.md` in the same folder); null otherwise.
+ * The link to a Markdown file, as it would be written, when a Markdown source links that file
+ * by a relative path without its extension (`setup#wiring` from `guide/intro.md`, with
+ * `guide/setup.md` beside it); null otherwise. Only from Markdown: a generator turns a link to
+ * a Markdown file into the page's address, while a link in an HTML page stays as written.
  */
-function fileWithoutExtension(href: string, fromFile: string, files: ReadonlySet<string>): string | null {
-  if (/^(?:[a-z][a-z0-9+.-]*:|\/|#)/i.test(href)) return null;
+function fileWithoutExtension(written: string, fromFile: string, files: ReadonlySet<string>): string | null {
+  const href = written.trim();
+  if (!MARKDOWN_EXTENSION_END.test(fromFile) || /^(?:[a-z][a-z0-9+.-]*:|\/|#)/i.test(href)) return null;
   const cut = href.search(/[?#]/);
   const path = cut < 0 ? href : href.slice(0, cut);
   if (path === '' || path.endsWith('/') || SOURCE_EXTENSION_END.test(path)) return null;
+  let name = path;
+  try {
+    name = decodeURIComponent(path);
+  } catch {
+    // A malformed escape: the path as written.
+  }
   for (const ext of MARKDOWN_EXTENSIONS) {
-    const file = posix.normalize(posix.join(posix.dirname(fromFile), `${path}${ext}`));
+    const file = posix.normalize(posix.join(posix.dirname(fromFile), `${name}${ext}`));
     if (!file.startsWith('../') && files.has(file)) return `${path}${ext}${cut < 0 ? '' : href.slice(cut)}`;
   }
   return null;

@@ -247,7 +247,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (text === undefined) {
       const stems = tokenize(raw, cache);
       const phrase = stems.length === 0 || stems.length > MAX_NAME_WORDS ? -1 : phraseOf(stems);
-      text = { stems, phrase, key: phrase < 0 ? '' : keyOfText(raw, phrase), cased: link.raw.code === true ? codeKey(raw, true) : null, matches: null };
+      text = { stems, phrase, key: phrase < 0 ? '' : keyOfText(raw, phrase), cased: null, matches: null };
       texts.set(raw, text);
     }
     if (link.context === 'content') {

@@ -10,5 +10,5 @@ export type { Random } from './prng.js';
 export { navigationFile } from './navigation-file.js';
 export { buildLineIndex, positionOf, lineOf, lineStart, lineContentEnd } from './line-index.js';
 export type { LineIndex } from './line-index.js';
-export { writeFileAtomic, removeTempFilesSync, TEMP_PREFIX } from './write-file.js';
-export type { TempFileTracker, WriteData, WriteOptions } from './write-file.js';
+// The atomic file write (write-file.ts) is not exported here: only the stages that touch the
+// file system import it (the `file-writes` rule of .dependency-cruiser.cjs).

@@ -1,8 +1,9 @@
 /**
  * Writing files atomically: the data goes to a temp file in the same folder, which is then
- * renamed over the target, so a reader never sees a half-written report, source file or cache
- * file. Every file linkweave writes goes through here (or, for the cache's own shards, names
- * its temp files with {@link TEMP_PREFIX} and renames them the same way).
+ * renamed over the target, so a reader never sees a half-written file. Reports, sources changed
+ * by `apply`, baselines, review files and the report cache's copy of its last output are written
+ * here; the cache's own files use the same temp-file-and-rename pattern. Only the stages that
+ * touch the file system import this module (the `file-writes` rule of .dependency-cruiser.cjs).
  */
 import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
@@ -39,7 +40,7 @@ export interface WriteOptions {
  * file is removed and the target is left as it was.
  *
  * `{ copyOf: file }` writes that file's bytes, copied by the file system instead of read into
- * memory (the report cache's copy of the last run's output: at 10,000 pages a 90 MB JSON report
+ * memory (a new target takes that file's permission bits) (the report cache's copy of the last run's output: at 10,000 pages a 90 MB JSON report
  * took about 0.12 s against 0.6 s read and written).
  * @throws EngineError `E_IO` naming the path and the reason
  */
@@ -61,7 +62,9 @@ export async function writeFileAtomic(path: string, data: WriteData, options: Wr
       created = true; // a copy that fails part way may leave the temp file
       await fs.promises.copyFile(copyOf, temp, fs.constants.COPYFILE_EXCL);
     }
-    const handle = await fs.promises.open(temp, copyOf !== null ? 'r+' : 'wx', mode ?? 0o666);
+    // A copy is only flushed and given the mode here: read access is enough, and a copy of a
+    // read-only file (the copy keeps its mode) can still be opened.
+    const handle = await fs.promises.open(temp, copyOf !== null ? 'r' : 'wx', mode ?? 0o666);
     created = true;
     try {
       if (typeof data === 'string' || data instanceof Uint8Array) await handle.writeFile(data);

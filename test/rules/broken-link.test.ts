@@ -48,27 +48,52 @@ ruleTable(brokenLink, {
       ],
     },
     {
-      name: 'a relative link written without the extension of a Markdown file beside it gets the link to that file',
+      name: 'a relative link from Markdown written without the extension of a Markdown file gets the link to that file',
       site: {
         pages: [
           {
-            route: '/NLopt_Algorithms/',
-            file: 'NLopt_Algorithms.md',
-            links: [{ to: '/NLopt_Algorithms/NLopt_Introduction', href: 'NLopt_Introduction#termination-conditions', line: 27, column: 5 }],
+            route: '/guide/intro/',
+            file: 'guide/intro.md',
+            links: [
+              { to: '/guide/intro/setup', href: 'setup#wiring', line: 27, column: 5 },
+              { to: '/guide/intro/My Notes', href: 'My%20Notes', line: 28, column: 1 },
+              { to: '/guide/reference/cli', href: '../reference/cli?v=2', line: 29, column: 1 },
+              { to: '/guide/intro/nowhere', href: 'nowhere', line: 30, column: 1 },
+            ],
           },
-          { route: '/NLopt_Introduction/', file: 'NLopt_Introduction.md' },
+          { route: '/guide/setup/', file: 'guide/setup.md' },
+          { route: '/guide/my-notes/', file: 'guide/My Notes.md' },
+          { route: '/reference/cli/', file: 'reference/cli.md' },
+          { route: '/legacy/old/', file: 'legacy/old.html', links: [{ to: '/legacy/guide/setup', href: '../guide/setup', line: 3, column: 1 }] },
         ],
       },
       findings: [
         {
-          file: 'NLopt_Algorithms.md',
+          file: 'guide/intro.md',
           line: 27,
           column: 5,
-          route: '/NLopt_Algorithms/',
-          target: '/NLopt_Algorithms/NLopt_Introduction',
-          message:
-            'Broken link: no page /NLopt_Algorithms/NLopt_Introduction (written "NLopt_Introduction#termination-conditions"); did you mean NLopt_Introduction.md#termination-conditions?',
+          route: '/guide/intro/',
+          target: '/guide/intro/setup',
+          message: 'Broken link: no page /guide/intro/setup (written "setup#wiring"); did you mean setup.md#wiring?',
         },
+        {
+          file: 'guide/intro.md',
+          line: 28,
+          column: 1,
+          route: '/guide/intro/',
+          target: '/guide/intro/My Notes',
+          message: 'Broken link: no page /guide/intro/My Notes (written "My%20Notes"); did you mean My%20Notes.md?',
+        },
+        {
+          file: 'guide/intro.md',
+          line: 29,
+          column: 1,
+          route: '/guide/intro/',
+          target: '/guide/reference/cli',
+          message: 'Broken link: no page /guide/reference/cli (written "../reference/cli?v=2"); did you mean ../reference/cli.md?v=2?',
+        },
+        { file: 'guide/intro.md', line: 30, column: 1, route: '/guide/intro/', target: '/guide/intro/nowhere', message: 'Broken link: no page /guide/intro/nowhere (written "nowhere"); fix or remove the link' },
+        { file: 'legacy/old.html', line: 3, column: 1, route: '/legacy/old/', target: '/legacy/guide/setup', message: 'Broken link: no page /legacy/guide/setup (written "../guide/setup"); fix or remove the link' },
       ],
     },
     {
