@@ -49,11 +49,17 @@ describe('the import rules of the stages', () => {
     // A named exception lets exactly its own import through.
     write('src/config/options.ts', "import { STYLES } from '../parse/heading-ids.js';\nimport { links } from '../parse/links.js';\nexport const o = [STYLES, links];\n");
     write('src/parse/heading-ids.ts', 'export const STYLES = [];\n');
+    // A pure stage that imports the atomic file write (the ground floor, but only writers may),
+    // and a writer that may.
+    write('src/util/write-file.ts', 'export const writeFileAtomic = 0;\n');
+    write('src/rules/save.ts', "import { writeFileAtomic } from '../util/write-file.js';\nexport const s = writeFileAtomic;\n");
+    write('src/cli/out.ts', "import { writeFileAtomic } from '../util/write-file.js';\nexport const o = writeFileAtomic;\n");
     // A folder that is no stage.
     write('src/extra/thing.ts', "import { sortKey } from '../util/compare.js';\nexport const t = sortKey;\n");
 
-    it('reports the backwards imports, the cycle and the unknown folder, and nothing else', async () => {
+    it('reports the backwards imports, the cycle, the unknown folder and the pure stage that writes files, and nothing else', async () => {
       expect(await violations(tmp)).toEqual([
+        'file-writes: src/rules/save.ts -> src/util/write-file.ts',
         'no-cycle: src/text/a.ts -> src/text/b.ts',
         'stage-known: src/extra/thing.ts -> src/util/compare.ts',
         'stage-order: config (except options-heading-ids, options-preset-names): src/config/options.ts -> src/parse/links.ts',
