@@ -5,10 +5,10 @@
 #   bash bench/corpora.sh [DIR]      (default: ../corpora beside the checkout)
 #
 # Each set lands in DIR/<name>/site, ready for `linkweave <command> DIR/<name>/site`:
-#   nodejs-doc    Debian nodejs-doc 18.20.4+dfsg-1~deb12u3: the Node.js API reference, 64 Markdown pages
+#   nodejs-doc    Debian nodejs-doc 18.20.4+dfsg-1~deb12u2: the Node.js API reference, 64 Markdown pages
 #   npm-docs      npm package npm@10.9.9: docs/content, the npm CLI's Markdown documentation
-#   python-doc    Debian python3.11-doc 3.11.2-6+deb12u9: the Python 3.11 documentation, built HTML
-#   postgres-doc  Debian postgresql-doc-15 15.20-0+deb12u1: the PostgreSQL 15 manual, built HTML
+#   python-doc    Debian python3.11-doc 3.11.2-6+deb12u8: the Python 3.11 documentation, built HTML
+#   postgres-doc  Debian postgresql-doc-15 15.18-0+deb12u1: the PostgreSQL 15 manual, built HTML
 # Generator source trees (each lands in DIR/<name>/site with the generator's config at its root,
 # for a run with no linkweave config): Debian source packages, fetched with a private apt source
 # list (deb-src) so the machine's apt setup is left alone:
@@ -38,7 +38,7 @@ deb() { # name version -> extracted into ./<name>-deb
 }
 
 # Node.js API reference: the Markdown sources ship gzipped.
-deb nodejs-doc '18.20.4+dfsg-1~deb12u3'
+deb nodejs-doc '18.20.4+dfsg-1~deb12u2'
 if [ ! -d nodejs-doc/site ]; then
   mkdir -p nodejs-doc/site
   for f in nodejs-doc-deb/usr/share/doc/nodejs/api/*.md nodejs-doc-deb/usr/share/doc/nodejs/api/*.md.gz; do
@@ -56,7 +56,7 @@ fi
 echo "npm 10.9.9 (docs/content)"
 
 # Python 3.11 documentation, built HTML.
-deb python3.11-doc '3.11.2-6+deb12u9'
+deb python3.11-doc '3.11.2-6+deb12u8'
 if [ ! -d python-doc/site ]; then
   mkdir -p python-doc
   cp -r python3.11-doc-deb/usr/share/doc/python3.11/html python-doc/site
@@ -67,7 +67,7 @@ fi
 find python-doc/site -name '*.html.gz' -exec gunzip -f {} +
 
 # PostgreSQL 15 manual, built HTML.
-deb postgresql-doc-15 '15.20-0+deb12u1'
+deb postgresql-doc-15 '15.18-0+deb12u1'
 if [ ! -d postgres-doc/site ]; then
   mkdir -p postgres-doc
   cp -r postgresql-doc-15-deb/usr/share/doc/postgresql-doc-15/html postgres-doc/site
