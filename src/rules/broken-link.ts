@@ -30,6 +30,13 @@ import { nearest } from './nearest.js';
  * `guide/index.md:1:6  error  Broken link: no source file guide/instal.md (written "instal.md");
  * did you mean guide/install.md?`
  * `guide/index.md:1:40  error  Broken link: no page /guide/instal/; did you mean /guide/install/?`
+ * @example not ok (`guide/setup.md`, whose page is `/guide/setup/`: a relative link without the
+ * file's extension resolves below it)
+ * ```md
+ * Read [the install guide](install#requirements) first.
+ * ```
+ * `guide/setup.md:1:6  error  Broken link: no page /guide/setup/install (written
+ * "install#requirements"); did you mean install.md#requirements?`
  */
 export const brokenLink: Rule = {
   id: 'broken-link',

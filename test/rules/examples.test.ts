@@ -49,6 +49,9 @@ describe('rule documentation examples', () => {
       'guide/index.md:1:6  error  Broken link: no source file guide/instal.md (written "instal.md"); did you mean guide/install.md?',
       'guide/index.md:1:40  error  Broken link: no page /guide/instal/; did you mean /guide/install/?',
     ]);
+    expect(check(brokenLink, { ...site, 'guide/index.md': '[Setup](setup.md)\n', 'guide/setup.md': 'Read [the install guide](install#requirements) first.\n' })).toEqual([
+      'guide/setup.md:1:6  error  Broken link: no page /guide/setup/install (written "install#requirements"); did you mean install.md#requirements?',
+    ]);
   });
 
   it('broken-fragment', () => {
