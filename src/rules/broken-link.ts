@@ -12,8 +12,8 @@ import { nearest } from './nearest.js';
  * (a route; for a link to a source file that does not exist, the file's path from the content
  * root; for a missing image or download, its path), the destination as written when it
  * differs, and a fix: a relative link written without the extension of a Markdown file beside
- * it (`NLopt_Introduction#x` next to `NLopt_Introduction.md`, which a generator that turns file
- * links into page links leaves as it is) gets the link to that file; otherwise the closest
+ * it (`install#requirements` next to `install.md`, which a generator that turns file links into
+ * page links leaves as it is) gets the link to that file; otherwise the closest
  * existing route (or source file) by edit distance, when one is close.
  * `target` is the resolved target.
  *
