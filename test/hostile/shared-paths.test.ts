@@ -54,7 +54,7 @@ function runCli(cwd: string, command: string): Promise<{ code: number | null; st
 }
 
 describe('runs in parallel sharing one cache folder', () => {
-  it('four processes at once (check and suggest) each give the uncached report; the cache left behind is whole and answers the next run', async () => {
+  it('four processes at once (check and suggest) each give the report of a run without the cache; the cache left behind is whole and answers the next run', async () => {
     const cwd = scratch();
     fs.cpSync(example, path.join(cwd, 'docs'), { recursive: true });
     const expected = {
@@ -65,7 +65,10 @@ describe('runs in parallel sharing one cache folder', () => {
     const runs = await Promise.all(commands.map((c) => runCli(cwd, c)));
     runs.forEach((r, i) => {
       // Nothing but the note of the heading-id style chosen (no error, no warning of the cache).
-      expect(r.stderr).toBe('linkweave: heading ids: github style (chosen by the fragment links), 20 of 23 fragment links resolve\n');
+      // A process that starts after another of its command has written the report reads it from
+      // the cache, and a report from the cache chooses nothing, so it has no note: the four start
+      // together, but on a loaded machine not always before the first is done.
+      expect(['', 'linkweave: heading ids: github style (chosen by the fragment links), 20 of 23 fragment links resolve\n']).toContain(r.stderr);
       expect(r.code).toBe(1); // the example site fails its gate
       expect(JSON.stringify(JSON.parse(r.stdout))).toBe(expected[commands[i]!]);
     });
