@@ -1,19 +1,10 @@
 import path from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { readAuxFile } from '../../src/collect/index.js';
 import { resolveOptions } from '../../src/config/options.js';
-import { tempDir, writeTree } from './tree.js';
+import { tempDirsPerTest, writeTree } from './tree.js';
 
-const cleanups: (() => void)[] = [];
-afterEach(() => {
-  while (cleanups.length > 0) cleanups.pop()!();
-});
-
-function dir(): string {
-  const t = tempDir();
-  cleanups.push(t.cleanup);
-  return t.dir;
-}
+const dir = tempDirsPerTest();
 
 describe('readAuxFile', () => {
   it('reads a file relative to the content root, BOM removed', async () => {

@@ -1,19 +1,10 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { removeTempFilesSync, TEMP_PREFIX, writeFileAtomic } from '../../src/util/write-file.js';
-import { tempDir } from '../collect/tree.js';
+import { tempDirsPerTest } from '../collect/tree.js';
 
-const cleanups: (() => void)[] = [];
-afterEach(() => {
-  while (cleanups.length > 0) cleanups.pop()!();
-});
-
-function dir(): string {
-  const t = tempDir();
-  cleanups.push(t.cleanup);
-  return t.dir;
-}
+const dir = tempDirsPerTest();
 
 const leftovers = (d: string) => fs.readdirSync(d).filter((n) => n.startsWith(TEMP_PREFIX));
 
