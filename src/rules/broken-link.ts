@@ -37,6 +37,12 @@ import { nearest } from './nearest.js';
  * ```
  * `guide/setup.md:1:6  error  Broken link: no page /guide/setup/install (written
  * "install#requirements"); did you mean install.md#requirements?`
+ * @example not ok (an address that does not parse)
+ * ```md
+ * Open [the site](https://) to start.
+ * ```
+ * `guide/index.md:1:6  error  Broken link: "https://" is not a well-formed address; fix or remove
+ * the link`
  */
 export const brokenLink: Rule = {
   id: 'broken-link',
@@ -51,6 +57,19 @@ export const brokenLink: Rule = {
     const findings: RuleFinding[] = [];
     for (const link of ctx.graph.links) {
       if (link.status !== 'broken') continue;
+      const href = link.raw.href.trim();
+      if (WITH_SCHEME.test(href)) {
+        // An address with a scheme that does not parse (`https://`, `http://[bad`): no file or
+        // page to name, and none to guess.
+        findings.push({
+          ...linkSource(ctx, link),
+          line: link.raw.line,
+          column: link.raw.column,
+          message: `Broken link: "${href}" is not a well-formed address; fix or remove the link`,
+          target: link.target,
+        });
+        continue;
+      }
       // The graph gives a missing source file as its path from the root (no leading slash),
       // a missing asset or page as a route.
       const sourceFile = !link.target.startsWith('/');
@@ -76,6 +95,9 @@ export const brokenLink: Rule = {
     return findings;
   },
 };
+
+/** An address that starts with a scheme (`https:`) or with `//` (another host). */
+const WITH_SCHEME = /^(?:[a-z][a-z0-9+.-]*:|\/\/)/i;
 
 /**
  * The link to a Markdown file, as it would be written, when a Markdown source links that file

@@ -52,6 +52,9 @@ describe('rule documentation examples', () => {
     expect(check(brokenLink, { ...site, 'guide/index.md': '[Setup](setup.md)\n', 'guide/setup.md': 'Read [the install guide](install#requirements) first.\n' })).toEqual([
       'guide/setup.md:1:6  error  Broken link: no page /guide/setup/install (written "install#requirements"); did you mean install.md#requirements?',
     ]);
+    expect(check(brokenLink, { ...site, 'guide/index.md': 'Open [the site](https://) to start.\n' })).toEqual([
+      'guide/index.md:1:6  error  Broken link: "https://" is not a well-formed address; fix or remove the link',
+    ]);
   });
 
   it('broken-fragment', () => {
