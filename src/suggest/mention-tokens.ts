@@ -44,6 +44,8 @@ export class ProseTokens {
   readonly span: number[] = [];
   /** joinNext[i]: word i and word i + 1 may be in one phrase. */
   readonly joinNext: boolean[] = [];
+  /** stopBetween[i]: stop words stand between word i and word i + 1 ("storage *of* tiles"). */
+  readonly stopBetween: boolean[] = [];
 }
 
 /** Stop words allowed between two words of one phrase (as in `anchor.ts`). */
@@ -73,13 +75,17 @@ export function proseTokens(spans: readonly { readonly text: string }[], words: 
         return;
       }
       const i = count++;
-      if (last >= 0) out.joinNext[last] = !bad && stopWords <= MAX_GAP_STOP_WORDS;
+      if (last >= 0) {
+        out.joinNext[last] = !bad && stopWords <= MAX_GAP_STOP_WORDS;
+        out.stopBetween[last] = stopWords > 0;
+      }
       out.stem[i] = stem;
       out.word[i] = id;
       out.start[i] = start;
       out.end[i] = end;
       out.span[i] = si;
       out.joinNext[i] = false;
+      out.stopBetween[i] = false;
       last = i;
       stopWords = 0;
       bad = false;
@@ -91,6 +97,7 @@ export function proseTokens(spans: readonly { readonly text: string }[], words: 
   out.end.length = count;
   out.span.length = count;
   out.joinNext.length = count;
+  out.stopBetween.length = count;
 }
 
 /** True when `text[from, to)` holds only what may stand between two words of a phrase: spaces, tabs, no-break spaces, hyphens and apostrophes (`GAP_CHARS` in `anchor.ts`). */

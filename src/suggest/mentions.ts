@@ -7,7 +7,10 @@
  * A page's names: its title, its aliases (the words of the last segment of its route and of its
  * frontmatter aliases), the labels its template links carry (a sidebar's words for it), and the
  * anchor texts of the content links other pages already point at it with. Names are compared
- * on Porter stems (the text stage's tokenizer), so "Caching tiles" matches "cached tile".
+ * on Porter stems (the text stage's tokenizer), so "Caching tiles" matches "cached tile", with
+ * stop words between two words only where a name has some ("storage for tiles" is "Storage of
+ * tiles", "npm from installing" is not "npm install"). A code name a heading gives (`server.close()`)
+ * is a mention in prose only where it is written as the name is ("the server is closed" is none).
  *
  * Each distinct name (a phrase) counts its occurrences over the site: in prose, and as the whole
  * text of a content link (to which page). From those come a phrase's link probability (the
@@ -20,7 +23,7 @@
  */
 import { ProseTokens, proseTokens, proseWords } from './mention-tokens.js';
 import type { CodeSpan, PageFacts, SiteGraph } from '../types.js';
-import { forEachWord, tokenize } from '../text/tokenize.js';
+import { forEachWord, isStopWord, stemToken, tokenize } from '../text/tokenize.js';
 import type { StemCache } from '../text/tokenize.js';
 import { positionInSpan } from './anchor.js';
 import type { AnchorMatch, SourceTokens } from './anchor.js';
@@ -127,6 +130,8 @@ interface LinkText {
   readonly phrase: number;
   /** Its written form (`codeKey`), '' when it has no phrase. */
   readonly key: string;
+  /** Where stop words stand between its kept words ({@link stopMask}). */
+  readonly stops: number;
   /** Its written form with case kept, once a code link has asked. */
   cased: string | null;
   /** The phrases its stems hold (phrase, 1 when the whole text), once the trie is built. */
@@ -166,6 +171,10 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
   const written = new Map<number, Map<string, Set<number>>>();
   // The pages' own names (title, route, code-naming headings) as written, case kept: key -> pages.
   const cased = new Map<string, Set<number>>();
+  // Per phrase: the written forms (codeKey) of the code names headings give it, each with its
+  // pages. A code name matches prose only as written: `server.close()` is not "the server is
+  // closed", though the stems are the same.
+  const headingAs = new Map<number, Map<string, Set<number>>>();
   const ownName = (as: string, page: number): void => {
     const key = codeKey(as, true);
     if (key === '') return;
@@ -174,10 +183,18 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     else pages.add(page);
   };
   const refOf: (Map<number, NameRef> | undefined)[] = [];
-  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): void => {
-    if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return;
+  // Per phrase: where its names written out have stop words between their kept words (each a
+  // stopMask). Prose matches a phrase only with stop words where one of its names has them:
+  // "npm from installing" is not the name "npm install", though the stems are the same.
+  const stopsOf: (Set<number> | undefined)[] = [];
+  const allowStops = (id: number, mask: number): void => void (stopsOf[id] ??= new Set()).add(mask);
+  /** Claim the phrase of `stems` for `target`; its id, or -1 when it is no name (no word, or too long). */
+  const claim = (stems: readonly string[], target: number, kind: NameKind, source = -1, as: string | null = null): number => {
+    if (stems.length === 0 || stems.length > MAX_NAME_WORDS) return -1;
     const id = phraseOf(stems);
     claimPhrase(id, target, kind, source, as === null ? null : keyOfText(as, id));
+    allowStops(id, as === null ? 0 : stopMask(as, cache));
+    return id;
   };
   /** The written form (codeKey) of a name's text, its first phrase noted for code spans written so. */
   const keyOfText = (as: string, id: number): string => {
@@ -228,8 +245,15 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     for (const h of factsOf(page.id)?.headings ?? []) {
       if (h.depth < 2) continue;
       for (const name of headingNames(h.text)) {
-        claim(tokenize(name, cache), page.id, 'heading', -1, name);
+        const id = claim(tokenize(name, cache), page.id, 'heading', -1, name);
         ownName(name, page.id);
+        if (id < 0) continue;
+        let forms = headingAs.get(id);
+        if (forms === undefined) headingAs.set(id, (forms = new Map()));
+        const key = codeKey(name);
+        const pages = forms.get(key);
+        if (pages === undefined) forms.set(key, new Set([page.id]));
+        else pages.add(page.id);
       }
     }
   }
@@ -247,15 +271,19 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (text === undefined) {
       const stems = tokenize(raw, cache);
       const phrase = stems.length === 0 || stems.length > MAX_NAME_WORDS ? -1 : phraseOf(stems);
-      text = { stems, phrase, key: phrase < 0 ? '' : keyOfText(raw, phrase), cased: null, matches: null };
+      text = { stems, phrase, key: phrase < 0 ? '' : keyOfText(raw, phrase), stops: stopMask(raw, cache), cased: null, matches: null };
       texts.set(raw, text);
     }
     if (link.context === 'content') {
-      if (text.phrase >= 0) claimPhrase(text.phrase, link.to, 'anchor-text', link.from, text.key);
+      if (text.phrase >= 0) {
+        claimPhrase(text.phrase, link.to, 'anchor-text', link.from, text.key);
+        allowStops(text.phrase, text.stops);
+      }
       const form = link.raw.code === true ? (text.cased ??= codeKey(raw, true)) : '';
       contentLinks.push({ from: link.from, to: link.to, text, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(raw), exact: link.raw.code === true && cased.get(form)?.has(link.to) === true, form });
     } else if (text.phrase >= 0) {
       claimPhrase(text.phrase, link.to, 'label', -1, text.key);
+      allowStops(text.phrase, text.stops);
     }
   }
   // The trie of unambiguous phrases.
@@ -310,7 +338,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     }
     if (link.text.matches === null) {
       const found: number[] = [];
-      scanStems(stems, stems.map(() => true), root, null, (phraseId, _first, words) => void found.push(phraseId, words === stems.length ? 1 : 0));
+      scanStems(stems, stems.map(() => true), root, null, null, (phraseId, _first, words) => void found.push(phraseId, words === stems.length ? 1 : 0));
       link.text.matches = found;
     }
     const found = link.text.matches;
@@ -337,6 +365,15 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     }
     return node ?? undefined;
   };
+  /** Whether prose words `first`.. (`words` of them) may be phrase `id`, by where stop words stand between them. */
+  const stopsAllowed = (id: number, first: number, words: number): boolean => {
+    const allowed = stopsOf[id];
+    if (allowed === undefined) return true;
+    let mask = 0;
+    for (let k = 0; k < words - 1; k++) if (tokens.stopBetween[first + k]) mask |= 1 << k;
+    return allowed.has(mask);
+  };
+  const counted: number[] = [];
   for (let s = 0; s < n; s++) {
     const facts = factsOf(s);
     const hits = new Map<number, MentionHit>();
@@ -348,7 +385,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     const on = linesOf(s);
     if (facts.spans.length > 0) {
       proseTokens(facts.spans, wordTable, tokens);
-      scanStems(tokens.stem, tokens.joinNext, root, firstNode, (phraseId, first, words) => {
+      scanStems(tokens.stem, tokens.joinNext, root, firstNode, stopsAllowed, (phraseId, first, words) => {
         const span = facts.spans[tokens.span[first]];
         const start = tokens.start[first];
         const end = tokens.end[first + words - 1];
@@ -376,16 +413,26 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       // (the site wrote the name there and did not link it), as in the measured rule.
       if ((f.place & CODE) !== 0 && cased.get(codeKey(f.text(), true))?.has(s) === true) continue;
       let made: AnchorMatch | null = null;
+      // A target named by the phrase in several ways (title, route, link text) is still
+      // mentioned once here.
+      counted.length = 0;
       const writtenAs = written.get(f.phrase);
-      const only = writtenAs !== undefined && writtenAs.size > 1 ? writtenAs.get(codeKey(f.text())) : undefined;
+      const as = writtenAs !== undefined && writtenAs.size > 1 ? codeKey(f.text()) : null;
+      const only = as === null ? undefined : writtenAs?.get(as);
+      const headingForms = (f.place & CODE) === 0 ? headingAs.get(f.phrase) : undefined;
+      const headingPages = headingForms === undefined ? undefined : (headingForms.get(as ?? codeKey(f.text())) ?? NO_PAGES);
       for (const ref of phrase.names) {
         if (ref.target === s || (only !== undefined && !only.has(ref.target))) continue;
+        if (ref.kind === 'heading' && headingPages !== undefined && !headingPages.has(ref.target)) continue;
         let hit = hits.get(ref.target);
         if (hit === undefined) {
           hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [], anchorPlaces: [] };
           hits.set(ref.target, hit);
         }
-        hit.count++;
+        if (!counted.includes(ref.target)) {
+          counted.push(ref.target);
+          hit.count++;
+        }
         if (!hit.phrases.includes(f.phrase)) hit.phrases.push(f.phrase);
         made ??= f.anchor();
         keepAnchor(hit, f.phrase, f.place, made);
@@ -514,6 +561,8 @@ interface LinkedOption {
 /** Inline code that is a quoted string: `'stream'`, `"exports"`. */
 const QUOTED = /^[`\s]*['"]/;
 
+const NO_PAGES: ReadonlySet<number> = new Set();
+
 const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias', 'heading'];
 /** Added to a phrase's link odds, so that names never written as links still rank by placement. */
 const PHRASE_PRIOR = 0.05;
@@ -552,12 +601,15 @@ function rankAnchors(hit: MentionHit, phrases: readonly Phrase[], target: number
 /**
  * The phrases of a run of stems, left to right, each the longest that starts at its word; a
  * word inside a match starts no other (so "file system" is one mention, not also "file").
+ * `allowed`, when given, may refuse a phrase of two words or more at a place (by where stop
+ * words stand in the prose); a shorter phrase there may still match.
  */
 function scanStems(
   stem: readonly string[],
   joinNext: readonly boolean[],
   root: TrieNode,
   first: ((i: number) => TrieNode | undefined) | null,
+  allowed: ((phrase: number, first: number, words: number) => boolean) | null,
   visit: (phrase: number, first: number, words: number) => void,
 ): void {
   for (let i = 0; i < stem.length; ) {
@@ -566,7 +618,7 @@ function scanStems(
     let best = -1;
     let bestWords = 0;
     while (node !== undefined) {
-      if (node.phrase >= 0) {
+      if (node.phrase >= 0 && (allowed === null || words === 1 || allowed(node.phrase, i, words))) {
         best = node.phrase;
         bestWords = words;
       }
@@ -579,6 +631,27 @@ function scanStems(
       i += bestWords;
     } else i++;
   }
+}
+
+/**
+ * Where stop words stand between the kept words of `text`: bit k set when stop words stand
+ * between its kept words k and k + 1 ("Storage of tiles" -> 1, "tile storage" -> 0). Words the
+ * tokenizer drops that are not stop words do not count.
+ */
+export function stopMask(text: string, cache: StemCache): number {
+  let mask = 0;
+  let kept = 0;
+  let stops = false;
+  forEachWord(text, (raw) => {
+    if (stemToken(raw, cache) === '') {
+      if (kept > 0 && isStopWord(raw)) stops = true;
+      return;
+    }
+    if (stops && kept <= MAX_NAME_WORDS) mask |= 1 << (kept - 1);
+    kept++;
+    stops = false;
+  });
+  return mask;
 }
 
 /**

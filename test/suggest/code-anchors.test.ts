@@ -274,6 +274,23 @@ describe('section headings name their page', () => {
     const hit = index.bySource[id('/guide/')]!.get(id('/errors/'));
     expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([['`ERR_WIDGET_CLOSED`', 3, 'code']]);
   });
+
+  it('a code name from a heading is no mention in prose words with the same stems ("the server is closed"), and still one in code', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [Networking](net.md)\n- [Guide](guide.md)\n- [Notes](notes.md)\n'),
+      markdownPage('net.md', '# Networking\n\n## `server.close([callback])`\n\nStops the server from accepting new connections.\n'),
+      markdownPage('guide.md', '# Guide\n\nAfter the server is closed, no new connection is accepted.\nOnce the server closes, it is gone.\n'),
+      markdownPage('notes.md', '# Notes\n\nAfter the server is closed, it is gone.\nCall `server.close()` to stop it.\n'),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    expect(index.bySource[id('/guide/')]!.get(id('/net/'))).toBeUndefined();
+    const hit = index.bySource[id('/notes/')]!.get(id('/net/'));
+    expect(hit?.count).toBe(1);
+    expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([['`server.close()`', 4, 'code']]);
+  });
 });
 
 describe('command-line option headings name their page', () => {

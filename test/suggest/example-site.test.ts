@@ -37,8 +37,10 @@ describe('the example site planted suggestions', () => {
       .map((p) => ({ p, s: report.suggestions.find((s) => s.file === p.source && fileOf.get(s.target) === p.target) }))
       .filter((x) => x.s !== undefined);
     // Measured when the model came in: 17 of 24; 15 with an anchor, all on the README's phrase
-    // (the other two need a sentence written by hand).
-    expect(found.length).toBeGreaterThanOrEqual(16);
+    // (the other two need a sentence written by hand). Since a mention counts once whatever the
+    // number of ways its phrase names the target, those two (no anchor) score 0.044 and 0.045,
+    // was 0.059 and 0.061, under the 0.05 floor: 15 of 24, the same 15 with an anchor on the README's phrase.
+    expect(found.length).toBeGreaterThanOrEqual(15);
     const anchored = found.filter(({ s }) => s!.anchor !== null);
     expect(anchored.length).toBeGreaterThanOrEqual(14);
     const onPhrase = anchored.filter(({ p, s }) => p.phrases.some((ph) => ph.includes(s!.anchor!.toLowerCase()) || s!.anchor!.toLowerCase().includes(ph)));

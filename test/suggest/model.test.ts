@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { createStemCache } from '../../src/text/index.js';
-import { buildMentionIndex } from '../../src/suggest/mentions.js';
+import { buildMentionIndex, stopMask } from '../../src/suggest/mentions.js';
 import { contentOutlinks, F, pairFeatures } from '../../src/suggest/features.js';
 import { contentNeighbours, routeFolders } from '../../src/suggest/proximity.js';
 import { pagerankPercentiles, suggestLinks } from '../../src/suggest/index.js';
@@ -64,6 +64,63 @@ describe('features as if the pair link were absent', () => {
     // Three occurrences of the phrase; the pair's own link counts as prose: 1 of 3 is a link.
     expect(x[F['link-probability']]).toBeCloseTo(1 / 3, 12);
     expect(x[F['target-inlinks']]).toBeCloseTo(Math.log1p(1), 12);
+  });
+});
+
+describe('mention counts', () => {
+  it('counts one mention once, though the phrase names the target three ways (title, route, link text)', () => {
+    const options = testOptions();
+    const input = siteInput(
+      [
+        markdownPage('index.md', '# Home\n\nStart with [the guide](guide.md).\n'),
+        markdownPage('tile-cache.md', '# Tile cache\n\nKeeps tiles.\n'),
+        markdownPage('guide.md', '# Guide\n\nSet up the [tile cache](tile-cache.md) first.\n'),
+        markdownPage('notes.md', '# Notes\n\nThe tile cache fills up.\n'),
+      ],
+      options,
+    );
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const mentions = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const hit = mentions.bySource[id('/notes/')]!.get(id('/tile-cache/'));
+    const phrase = mentions.phrases[hit!.phrases[0]];
+    expect(phrase.names.filter((r) => r.target === id('/tile-cache/')).map((r) => r.kind).sort()).toEqual(['alias', 'anchor-text', 'title']);
+    expect(hit!.count).toBe(1);
+    expect(features(input, '/notes/', '/tile-cache/')[F.mentions]).toBeCloseTo(Math.log1p(1), 12);
+  });
+});
+
+describe('stop words inside a name', () => {
+  it.each([
+    ['tile storage', 0],
+    ['Storage of tiles', 1],
+    ['the storage of the tiles', 1],
+    ['getting started with the API', 0b10],
+    ['npm install', 0],
+    ['', 0],
+  ])('%j has stop words after its kept words %i', (text, mask) => {
+    expect(stopMask(text, createStemCache())).toBe(mask);
+  });
+
+  it('prose matches a name only with stop words where the name has them', () => {
+    const options = testOptions();
+    const input = siteInput(
+      [
+        markdownPage('index.md', '# Home\n\n- [Package install](package-install.md)\n- [Storage of tiles](depot.md)\n'),
+        markdownPage('package-install.md', '# Package install\n\nInstalls a package.\n'),
+        markdownPage('depot.md', '# Storage of tiles\n\nWhere tiles live.\n'),
+        markdownPage('notes.md', '# Notes\n\nA lock keeps the package from installing twice.\nThe storage for tiles is a folder.\n'),
+        markdownPage('more.md', '# More\n\nRun the package install first.\nTile storage is a folder.\n'),
+      ],
+      options,
+    );
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const mentions = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const anchors = (from: string, to: string) => mentions.bySource[id(from)]!.get(id(to))?.anchors.map((a) => a.text);
+    expect(anchors('/notes/', '/package-install/')).toBeUndefined();
+    expect(anchors('/more/', '/package-install/')).toEqual(['package install']);
+    // Any stop words will do where the name has some; none where it has none.
+    expect(anchors('/notes/', '/depot/')).toEqual(['storage for tiles']);
+    expect(anchors('/more/', '/depot/')).toBeUndefined();
   });
 });
 
