@@ -257,6 +257,12 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       }
     }
   }
+  // Per source: the code it links, by written form (case kept; quoted strings aside), with the
+  // pages it links each to. Code a page links to one page (`TypeError` to the exceptions page)
+  // means that page wherever the page writes it, and is no mention of another page named so.
+  // Quoted strings are left out: an API reference links "`'close'`" to a different class's
+  // event in each section.
+  const linkedForms = new Map<number, Map<string, Set<number>>>();
   const contentLinks: { from: number; to: number; text: LinkText; line: number; column: number; code: boolean; quoted: boolean; exact: boolean; form: string }[] = [];
   // Inline code by written form (codeKey, case kept): occurrences, and links per target.
   const forms: CodeForms = { total: new Map(), linkedTo: new Map() };
@@ -280,7 +286,15 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
         allowStops(text.phrase, text.stops);
       }
       const form = link.raw.code === true ? (text.cased ??= codeKey(raw, true)) : '';
-      contentLinks.push({ from: link.from, to: link.to, text, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted: link.raw.code === true && QUOTED.test(raw), exact: link.raw.code === true && cased.get(form)?.has(link.to) === true, form });
+      const quoted = link.raw.code === true && QUOTED.test(raw);
+      contentLinks.push({ from: link.from, to: link.to, text, line: link.raw.line, column: link.raw.column, code: link.raw.code === true, quoted, exact: link.raw.code === true && cased.get(form)?.has(link.to) === true, form });
+      if (form !== '' && !quoted) {
+        let mine = linkedForms.get(link.from);
+        if (mine === undefined) linkedForms.set(link.from, (mine = new Map()));
+        const to = mine.get(form);
+        if (to === undefined) mine.set(form, new Set([link.to]));
+        else to.add(link.to);
+      }
     } else if (text.phrase >= 0) {
       claimPhrase(text.phrase, link.to, 'label', -1, text.key);
       allowStops(text.phrase, text.stops);
@@ -411,7 +425,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       // section it is) is the page speaking of itself, not of another page named so: no mention
       // of a target. It still counts above as an occurrence of the phrase and of its placement
       // (the site wrote the name there and did not link it), as in the measured rule.
-      if ((f.place & CODE) !== 0 && cased.get(codeKey(f.text(), true))?.has(s) === true) continue;
+      const form = (f.place & CODE) !== 0 ? codeKey(f.text(), true) : '';
+      if (form !== '' && cased.get(form)?.has(s) === true) continue;
+      const linkedAs = form === '' ? undefined : linkedForms.get(s)?.get(form);
       let made: AnchorMatch | null = null;
       // A target named by the phrase in several ways (title, route, link text) is still
       // mentioned once here.
@@ -424,6 +440,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       for (const ref of phrase.names) {
         if (ref.target === s || (only !== undefined && !only.has(ref.target))) continue;
         if (ref.kind === 'heading' && headingPages !== undefined && !headingPages.has(ref.target)) continue;
+        if (linkedAs !== undefined && !linkedAs.has(ref.target)) continue;
         let hit = hits.get(ref.target);
         if (hit === undefined) {
           hit = { count: 0, phrases: [], anchors: [], anchorPhrases: [], anchorPlaces: [] };

@@ -293,6 +293,30 @@ describe('section headings name their page', () => {
   });
 });
 
+describe('code a page links to one page', () => {
+  it('means that page wherever the page writes it, and is no mention of another page named so; quoted strings aside', () => {
+    const options = testOptions();
+    const pages = [
+      markdownPage('index.md', '# Home\n\n- [Errors](errors.md)\n- [Expressions](expressions.md)\n- [Objects](objects.md)\n- [Sockets](sockets.md)\n- [Files](files.md)\n- [Types](types.md)\n'),
+      markdownPage('errors.md', '# Errors\n\nEvery error class.\n'),
+      markdownPage('expressions.md', '# Expressions\n\nOperators.\n'),
+      markdownPage('sockets.md', '# Sockets\n\nSockets close.\n'),
+      markdownPage('files.md', '# Files\n\nFiles close.\n'),
+      // The site's index links `TypeError` to the expressions page and `'close'` to the files page.
+      markdownPage('glossary.md', '# Glossary\n\n- [`TypeError`](expressions.md)\n- [`\'close\'`](files.md)\n'),
+      markdownPage('objects.md', "# Objects\n\nRaises [`TypeError`](errors.md) on a bad key.\n\nA wrong type raises `TypeError` too.\n\nListen for [`'close'`](sockets.md), then for `'close'` again.\n"),
+      markdownPage('types.md', '# Types\n\nA wrong type raises `TypeError`.\n'),
+    ];
+    const input = siteInput(pages, options);
+    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
+    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    expect(index.bySource[id('/objects/')]!.get(id('/expressions/'))).toBeUndefined();
+    expect(index.bySource[id('/objects/')]!.get(id('/files/'))?.anchors.map((a) => [a.text, a.line])).toEqual([["`'close'`", 7]]);
+    // A page that links no `TypeError` still mentions the expressions page by it.
+    expect(index.bySource[id('/types/')]!.get(id('/expressions/'))?.anchors.map((a) => [a.text, a.line])).toEqual([['`TypeError`', 3]]);
+  });
+});
+
 describe('command-line option headings name their page', () => {
   it('a code span written as an option of a command-line page is a mention of that page, and it is the option put first', () => {
     const options = testOptions();
