@@ -115,7 +115,7 @@ export interface SuggestConfig {
   perTarget?: number | undefined;
   /** New links proposed per source page; 0 = no cap. Applied after ranking. @default 3 */
   perSource?: number | undefined;
-  /** Least score (0..1, the link model's probability that an author would write the link) a suggestion needs. @default 0.05 */
+  /** Least score (0..1, the link model's probability that an author would write the link) a suggestion needs; a page no entry page reaches keeps its best suggestion under it. @default 0.05 */
   minScore?: number | undefined;
   /** Least cosine similarity (0..1) for a TF-IDF neighbour to be a candidate source. @default 0.1 */
   minSimilarity?: number | undefined;

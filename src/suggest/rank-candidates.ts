@@ -102,7 +102,8 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
     }
   }
   const perSource = settings.perSource === 0 ? Number.POSITIVE_INFINITY : settings.perSource;
-  const chosen = fallbackAnchors(input, pickUnderCaps(scored, perSource, settings.perTarget).filter((c) => c.score >= settings.minScore), cache);
+  const floored = aboveFloor(pickUnderCaps(scored, perSource, settings.perTarget), settings.minScore, graph.entries.length > 0 ? ranking.depth : null);
+  const chosen = bestOfStranded(fallbackAnchors(input, floored, cache), settings.minScore);
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
     const shared = sharedSegments(ctx.folders[s], ctx.folders[t]);
@@ -122,6 +123,39 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
       ? null
       : { features: [...ANCHOR_FEATURES], intercept: choice.model.intercept, weights: [...choice.model.weights], means: [...choice.model.means], scales: [...choice.model.scales], linkedPairs: choice.groups, options: choice.options };
   return { chosen, model, modelReport: { ...fitted.report, anchorChoice }, mentions, evidenceOf, candidatesOf: pool };
+}
+
+/**
+ * Under the least score, the share of it a stranded page's best suggestion still needs. On the
+ * example site the one such suggestion ("predicted tide" in the glossary, for the orphan tide
+ * guide) scores 0.047 against 0.05; on python-doc the stranded pages' best score 0.0003 and less
+ * (generated include pages), links no author would write.
+ */
+export const STRANDED_FLOOR_SHARE = 0.2;
+
+/**
+ * The chosen pairs that reach the least score, and those of stranded targets that reach
+ * {@link STRANDED_FLOOR_SHARE} of it, in their order ({@link bestOfStranded} then keeps one of
+ * the latter per target). A stranded target is one no entry page reaches (an orphan page, or
+ * one only such pages link to) with no suggestion that reaches the least score: a link is the
+ * only fix for its finding, and a weak one a person can judge is more use than none. None on a
+ * site without entry pages (`depth` null), where every page is unreachable.
+ */
+export function aboveFloor(chosen: readonly Chosen[], minScore: number, depth: ArrayLike<number> | null): Chosen[] {
+  const reached = new Set<number>();
+  for (const c of chosen) if (c.score >= minScore) reached.add(c.pair.target);
+  return chosen.filter((c) => c.score >= minScore || (depth !== null && depth[c.pair.target] < 0 && !reached.has(c.pair.target) && c.score >= minScore * STRANDED_FLOOR_SHARE));
+}
+
+/** Of the pairs under the least score (see {@link aboveFloor}), the best with an anchor phrase per target (the first on a tie); the rest as they are. */
+export function bestOfStranded(chosen: readonly Chosen[], minScore: number): Chosen[] {
+  const best = new Map<number, Chosen>();
+  for (const c of chosen) {
+    if (c.score >= minScore || c.anchor === null) continue;
+    const b = best.get(c.pair.target);
+    if (b === undefined || c.score > b.score) best.set(c.pair.target, c);
+  }
+  return chosen.filter((c) => c.score >= minScore || best.get(c.pair.target) === c);
 }
 
 /**

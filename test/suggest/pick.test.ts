@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { pickUnderCaps } from '../../src/suggest/pick.js';
-import type { ScoredPair } from '../../src/suggest/pick.js';
+import type { Chosen, ScoredPair } from '../../src/suggest/pick.js';
+import { aboveFloor, bestOfStranded } from '../../src/suggest/rank-candidates.js';
 import type { AnchorMatch } from '../../src/suggest/anchor.js';
 import { random } from './helpers.js';
 
@@ -125,5 +126,36 @@ describe('pickUnderCaps', () => {
       expect(chosen.length).toBeGreaterThan(10);
       expect(chosen).toEqual(greedy(pairs, perSource, perTarget));
     }
+  });
+});
+
+describe('the least score, and the pages no entry page reaches', () => {
+  const chosen = (source: number, target: number, score: number, anchored = true): Chosen => ({ pair: pair(source, target, score), anchor: anchored ? anchor(source * 100, source * 100 + 5) : null, score });
+  // Pages 0-2 are reached from an entry page; 3, 4 and 5 are not (depth -1).
+  const depth = [0, 1, 2, -1, -1, -1];
+  const at = (list: Chosen[]) => list.map((c) => [c.pair.source, c.pair.target]);
+
+  it('keeps what reaches the floor, and for a stranded target whose suggestions all fall under it those that reach a fifth of it', () => {
+    const list = [chosen(0, 1, 0.5), chosen(2, 1, 0.03), chosen(0, 3, 0.03), chosen(1, 3, 0.04), chosen(2, 3, 0.005), chosen(0, 4, 0.2), chosen(1, 4, 0.02), chosen(0, 5, 0.009)];
+    // Target 1 is reached from an entry page, target 4 has a suggestion over the floor: their
+    // weak ones go. Target 5's best is under a fifth of the floor.
+    expect(at(aboveFloor(list, 0.05, depth))).toEqual([
+      [0, 1],
+      [0, 3],
+      [1, 3],
+      [0, 4],
+    ]);
+    expect(at(aboveFloor(list, 0.05, null))).toEqual([
+      [0, 1],
+      [0, 4],
+    ]);
+  });
+
+  it('then keeps one of a stranded target, the best with an anchor phrase', () => {
+    const list = [chosen(0, 1, 0.5), chosen(0, 3, 0.03), chosen(1, 3, 0.04, false), chosen(2, 3, 0.03), chosen(1, 4, 0.02, false)];
+    expect(at(bestOfStranded(list, 0.05))).toEqual([
+      [0, 1],
+      [0, 3],
+    ]);
   });
 });
