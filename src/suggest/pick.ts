@@ -18,8 +18,6 @@ export interface ScoredPair {
   /** The probability with the name evidence taken away (used when no anchor is left). */
   readonly scoreWithoutAnchor: number;
   readonly anchors: readonly AnchorMatch[];
-  /** The pair's feature vector (`features.ts`), for the reason text. */
-  readonly features: readonly number[];
 }
 
 /** A chosen pair with its anchor (or none) and its final score. */

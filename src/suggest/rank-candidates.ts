@@ -97,7 +97,6 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
         score: predictLogistic(model, features),
         scoreWithoutAnchor: predictLogistic(model, withoutNames(features)),
         anchors: hit === undefined ? [] : hit.anchors,
-        features,
       });
     }
   }
@@ -107,10 +106,13 @@ export function rankCandidates(input: SuggestInput, options: ResolvedOptions, ta
   const evidenceOf = (c: Chosen): Evidence => {
     const { source: s, target: t } = c.pair;
     const shared = sharedSegments(ctx.folders[s], ctx.folders[t]);
+    // Computed again for the few pairs chosen rather than kept for every pair scored: at
+    // 100,000 pages the vectors of every candidate pair were a large share of the stage's heap.
+    const features = pairFeatures(ctx, s, t);
     return {
-      features: c.pair.features,
-      contributions: contributions(model, [...c.pair.features]),
-      above: c.pair.features.map((v, j) => v > model.means[j]),
+      features,
+      contributions: contributions(model, [...features]),
+      above: features.map((v, j) => v > model.means[j]),
       anchor: c.anchor,
       commonNeighbours: adamicAdar(neighbours, s, t).common,
       twoStep: twoStepPaths(graph, s, t),

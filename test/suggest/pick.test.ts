@@ -23,7 +23,6 @@ const pair = (source: number, target: number, base: number, anchors: AnchorMatch
   // As if the source did not mention the target: the model's score without the name evidence.
   scoreWithoutAnchor: base / 4,
   anchors,
-  features: [],
 });
 
 describe('pickUnderCaps', () => {
