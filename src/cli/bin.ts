@@ -1,44 +1,36 @@
 #!/usr/bin/env node
 /**
- * The `linkweave` executable: hands the process to `run` and sets `process.exitCode`.
- * The only file that exits the process, and only on a signal, after removing the temp files of
- * atomic writes still in flight.
+ * The `linkweave` executable. Runs the command (`main.ts`) in this process, or, when Node's
+ * default heap limit is well below what the machine has (`heapLimitToAsk`), in a child process
+ * started with a larger one: the same arguments, working folder, terminal and environment. This
+ * process then only passes on the signals it gets and ends with the child's exit code.
  */
-import { removeTempFilesSync } from '../util/write-file.js';
-import { run } from './run.js';
+import { spawn } from 'node:child_process';
+import { constants, totalmem } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { getHeapStatistics } from 'node:v8';
+import { HEAP_ENV, heapLimitToAsk } from './heap.js';
 
-const tempFiles = new Set<string>();
+const constrained = (process as { constrainedMemory?: () => number | undefined }).constrainedMemory?.();
+const ask = heapLimitToAsk({ limit: getHeapStatistics().heap_size_limit, memory: totalmem(), constrained, execArgv: process.execArgv, env: process.env });
 
-function onSignal(signal: 'SIGINT' | 'SIGTERM', code: number): void {
-  process.once(signal, () => {
-    removeTempFilesSync(tempFiles);
-    process.stderr.write(`\nlinkweave: interrupted (${signal})\n`);
-    process.exit(code);
+if (ask === null) {
+  await import('./main.js');
+} else {
+  const main = fileURLToPath(new URL('./main.js', import.meta.url));
+  const child = spawn(process.execPath, [...process.execArgv, `--max-old-space-size=${ask}`, main, ...process.argv.slice(2)], {
+    stdio: 'inherit',
+    env: { ...process.env, [HEAP_ENV]: String(ask) },
+  });
+  const signals = ['SIGINT', 'SIGTERM', 'SIGHUP'] as const;
+  for (const signal of signals) process.on(signal, () => child.kill(signal));
+  child.on('error', (error) => {
+    process.stderr.write(`linkweave: could not start the command with a ${ask} MiB heap: ${error.message}\n`);
+    process.exitCode = 2;
+  });
+  child.on('exit', (code, signal) => {
+    // Ended by a signal it did not handle (say the system's out-of-memory killer): the code a
+    // shell gives that, 128 + the signal's number.
+    process.exitCode = signal === null ? (code ?? 2) : 128 + (constants.signals[signal] ?? 0);
   });
 }
-onSignal('SIGINT', 130);
-onSignal('SIGTERM', 143);
-
-// A closed pipe (`linkweave check | head`) is not an error of the run.
-process.stdout.on('error', (error: NodeJS.ErrnoException) => {
-  if (error.code !== 'EPIPE') throw error;
-});
-
-run(process.argv.slice(2), {
-  stdout: process.stdout,
-  stderr: process.stderr,
-  cwd: process.cwd(),
-  env: process.env,
-  isTTY: process.stdout.isTTY === true,
-  ...(process.stdout.columns === undefined ? {} : { columns: process.stdout.columns }),
-  stderrIsTTY: process.stderr.isTTY === true,
-  tempFiles,
-}).then(
-  (code) => {
-    process.exitCode = code;
-  },
-  (error: unknown) => {
-    process.stderr.write(`linkweave: internal error: ${error instanceof Error ? error.message : String(error)}\n`);
-    process.exitCode = 2;
-  },
-);
