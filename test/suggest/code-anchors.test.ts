@@ -16,10 +16,8 @@ import { linkTextRange } from '../../src/backtest/unlink.js';
 import { buildLineIndex } from '../../src/util/line-index.js';
 import { tempDir, writeTree } from '../collect/tree.js';
 import { md } from '../parse/helpers.js';
-import { buildMentionIndex, headingNames, placementRate } from '../../src/suggest/mentions.js';
-import { factsByPage } from '../../src/suggest/facts-of.js';
-import { createStemCache } from '../../src/text/index.js';
-import { markdownPage, siteInput, testOptions } from './helpers.js';
+import { headingNames, placementRate } from '../../src/suggest/mentions.js';
+import { markdownPage, mentionsOf, testOptions } from './helpers.js';
 
 const cleanups: (() => void)[] = [];
 afterEach(() => {
@@ -211,9 +209,7 @@ describe("the site's placement habit orders the anchor options", () => {
         ),
       ),
     ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { index, id } = mentionsOf(pages, options);
     return { index, hit: index.bySource[id('/guide/')]!.get(id('/widget/'))! };
   }
 
@@ -268,9 +264,7 @@ describe('section headings name their page', () => {
       markdownPage('errors.md', '# Errors\n\n## `ERR_WIDGET_CLOSED`\n\nThe widget was closed.\n\n## `ERR_WIDGET_FULL`\n\nThe buffer is full.\n'),
       markdownPage('guide.md', '# Guide\n\nWriting to a closed widget throws `ERR_WIDGET_CLOSED`.\n'),
     ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { index, id } = mentionsOf(pages, options);
     const hit = index.bySource[id('/guide/')]!.get(id('/errors/'));
     expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([['`ERR_WIDGET_CLOSED`', 3, 'code']]);
   });
@@ -283,9 +277,7 @@ describe('section headings name their page', () => {
       markdownPage('guide.md', '# Guide\n\nAfter the server is closed, no new connection is accepted.\nOnce the server closes, it is gone.\n'),
       markdownPage('notes.md', '# Notes\n\nAfter the server is closed, it is gone.\nCall `server.close()` to stop it.\n'),
     ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { index, id } = mentionsOf(pages, options);
     expect(index.bySource[id('/guide/')]!.get(id('/net/'))).toBeUndefined();
     const hit = index.bySource[id('/notes/')]!.get(id('/net/'));
     expect(hit?.count).toBe(1);
@@ -307,9 +299,7 @@ describe('code a page links to one page', () => {
       markdownPage('objects.md', "# Objects\n\nRaises [`TypeError`](errors.md) on a bad key.\n\nA wrong type raises `TypeError` too.\n\nListen for [`'close'`](sockets.md), then for `'close'` again.\n"),
       markdownPage('types.md', '# Types\n\nA wrong type raises `TypeError`.\n'),
     ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { index, id } = mentionsOf(pages, options);
     expect(index.bySource[id('/objects/')]!.get(id('/expressions/'))).toBeUndefined();
     expect(index.bySource[id('/objects/')]!.get(id('/files/'))?.anchors.map((a) => [a.text, a.line])).toEqual([["`'close'`", 7]]);
     // A page that links no `TypeError` still mentions the expressions page by it.
@@ -325,9 +315,7 @@ describe('command-line option headings name their page', () => {
       markdownPage('cli.md', '# Command line\n\n## Options\n\n### `--pending-deprecation`\n\nWarn about pending deprecations.\n\n### `-r, --require module`\n\nLoad a module at startup.\n'),
       markdownPage('deprecations.md', '# Deprecations\n\nSome deprecations are pending deprecation notices.\nThey warn when the `--pending-deprecation` flag is set.\n'),
     ];
-    const input = siteInput(pages, options);
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const index = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { index, id } = mentionsOf(pages, options);
     const hit = index.bySource[id('/deprecations/')]!.get(id('/cli/'));
     expect(hit?.anchors.map((a) => [a.text, a.line, a.kind])).toEqual([
       ['`--pending-deprecation`', 4, 'code'],

@@ -18,6 +18,10 @@ import { rankGraph } from '../../src/rank/index.js';
 import { buildTermIndex, contentCentrality, relatedPages } from '../../src/text/index.js';
 import type { PageFacts, PageMeta, PageNode, SiteGraph } from '../../src/types.js';
 import type { SuggestInput } from '../../src/suggest/index.js';
+import { buildMentionIndex } from '../../src/suggest/mentions.js';
+import type { MentionIndex } from '../../src/suggest/mentions.js';
+import { factsByPage } from '../../src/suggest/facts-of.js';
+import { createStemCache } from '../../src/text/index.js';
 
 const processor = unified().use(remarkParse).use(remarkGfm).use(remarkFrontmatter);
 
@@ -116,4 +120,11 @@ export function randomGraph(rnd: () => number, n: number, degree: number): SiteG
     for (let i = 0; i < k; i++) edges.push([u, Math.floor(rnd() * n), rnd() < 0.2 ? 2 : 1]);
   }
   return edgeGraph(n, edges, [0]);
+}
+
+/** The site of `pages` (`siteInput`), its mention index, and the page id of a route. */
+export function mentionsOf(pages: readonly PageFacts[], options: ResolvedOptions = testOptions()): { input: SuggestInput; index: MentionIndex; id: (route: string) => number } {
+  const input = siteInput(pages, options);
+  const id = (route: string): number => input.graph.pages.findIndex((p) => p.route === route);
+  return { input, index: buildMentionIndex(input.graph, factsByPage(input), createStemCache()), id };
 }

@@ -10,7 +10,7 @@ import { contentNeighbours, routeFolders } from '../../src/suggest/proximity.js'
 import { pagerankPercentiles, suggestLinks } from '../../src/suggest/index.js';
 import { factsByPage } from '../../src/suggest/facts-of.js';
 import type { SuggestInput } from '../../src/suggest/index.js';
-import { markdownPage, siteInput, testOptions } from './helpers.js';
+import { markdownPage, mentionsOf, siteInput, testOptions } from './helpers.js';
 
 function features(input: SuggestInput, from: string, to: string): number[] {
   const { graph, ranking, index } = input;
@@ -69,18 +69,12 @@ describe('features as if the pair link were absent', () => {
 
 describe('mention counts', () => {
   it('counts one mention once, though the phrase names the target three ways (title, route, link text)', () => {
-    const options = testOptions();
-    const input = siteInput(
-      [
-        markdownPage('index.md', '# Home\n\nStart with [the guide](guide.md).\n'),
-        markdownPage('tile-cache.md', '# Tile cache\n\nKeeps tiles.\n'),
-        markdownPage('guide.md', '# Guide\n\nSet up the [tile cache](tile-cache.md) first.\n'),
-        markdownPage('notes.md', '# Notes\n\nThe tile cache fills up.\n'),
-      ],
-      options,
-    );
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const mentions = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { input, index: mentions, id } = mentionsOf([
+      markdownPage('index.md', '# Home\n\nStart with [the guide](guide.md).\n'),
+      markdownPage('tile-cache.md', '# Tile cache\n\nKeeps tiles.\n'),
+      markdownPage('guide.md', '# Guide\n\nSet up the [tile cache](tile-cache.md) first.\n'),
+      markdownPage('notes.md', '# Notes\n\nThe tile cache fills up.\n'),
+    ]);
     const hit = mentions.bySource[id('/notes/')]!.get(id('/tile-cache/'));
     const phrase = mentions.phrases[hit!.phrases[0]];
     expect(phrase.names.filter((r) => r.target === id('/tile-cache/')).map((r) => r.kind).sort()).toEqual(['alias', 'anchor-text', 'title']);
@@ -102,19 +96,13 @@ describe('stop words inside a name', () => {
   });
 
   it('prose matches a name only with stop words where the name has them', () => {
-    const options = testOptions();
-    const input = siteInput(
-      [
-        markdownPage('index.md', '# Home\n\n- [Package install](package-install.md)\n- [Storage of tiles](depot.md)\n'),
-        markdownPage('package-install.md', '# Package install\n\nInstalls a package.\n'),
-        markdownPage('depot.md', '# Storage of tiles\n\nWhere tiles live.\n'),
-        markdownPage('notes.md', '# Notes\n\nA lock keeps the package from installing twice.\nThe storage for tiles is a folder.\n'),
-        markdownPage('more.md', '# More\n\nRun the package install first.\nTile storage is a folder.\n'),
-      ],
-      options,
-    );
-    const id = (route: string) => input.graph.pages.findIndex((p) => p.route === route);
-    const mentions = buildMentionIndex(input.graph, factsByPage(input), createStemCache());
+    const { index: mentions, id } = mentionsOf([
+      markdownPage('index.md', '# Home\n\n- [Package install](package-install.md)\n- [Storage of tiles](depot.md)\n'),
+      markdownPage('package-install.md', '# Package install\n\nInstalls a package.\n'),
+      markdownPage('depot.md', '# Storage of tiles\n\nWhere tiles live.\n'),
+      markdownPage('notes.md', '# Notes\n\nA lock keeps the package from installing twice.\nThe storage for tiles is a folder.\n'),
+      markdownPage('more.md', '# More\n\nRun the package install first.\nTile storage is a folder.\n'),
+    ]);
     const anchors = (from: string, to: string) => mentions.bySource[id(from)]!.get(id(to))?.anchors.map((a) => a.text);
     expect(anchors('/notes/', '/package-install/')).toBeUndefined();
     expect(anchors('/more/', '/package-install/')).toEqual(['package install']);
