@@ -83,7 +83,9 @@ export function evidenceWords(e: Evidence): string[] {
             : x[F['alias-mention']] === 1
               ? 'its route name'
               : 'one of its section headings';
-    items.push({ weight: names, words: `mentions "${anchorForReading(e.anchor.text)}"${times === 2 ? ' twice' : times > 2 ? ` ${times} times` : ''} (${which})` });
+    // The count is of every mention of any of the target's names, not of the anchor's phrase.
+    const all = times === 2 ? ', and names it twice in all' : times > 2 ? `, and names it ${times} times in all` : '';
+    items.push({ weight: names, words: `mentions "${anchorForReading(e.anchor.text)}" (${which})${all}` });
   }
   // Only what raised the score because the pair has more of it than the usual pair.
   if (x[F.mentions] === 0 && e.anchor !== null && e.anchor.kind !== 'name' && e.anchor.kind !== 'code') {

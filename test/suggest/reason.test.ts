@@ -16,7 +16,7 @@ describe('reasonText', () => {
       { ...base, reasons: ['orphan', 'unreachable'] },
       { features, contributions, above: FEATURES.map(() => true), anchor: anchorAt, commonNeighbours: 4, twoStep: 0, folder: '/guide/' },
     );
-    expect(text).toBe('orphan page (no inlinks), unreachable from the entry pages; mentions "trait objects" twice (its title); 4 pages are linked with both; similar text (cosine 0.34, where 1 = the same words)');
+    expect(text).toBe('orphan page (no inlinks), unreachable from the entry pages; mentions "trait objects" (its title), and names it twice in all; 4 pages are linked with both; similar text (cosine 0.34, where 1 = the same words)');
     expect(text).not.toMatch(/adamic|title-mention|shared-folders/);
   });
 
