@@ -182,6 +182,18 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
     if (pages === undefined) cased.set(key, new Set([page]));
     else pages.add(page);
   };
+  // The last part of the dotted code names of a page's headings (`AssertionError` of
+  // `assert.AssertionError`), case kept: key -> pages. Code a page writes so is the page
+  // speaking of its own member, as with `cased`; kept apart from `cased`, which also says what
+  // a target is named exactly.
+  const members = new Map<string, Set<number>>();
+  const ownMember = (as: string, page: number): void => {
+    const key = codeKey(as, true);
+    if (key === '') return;
+    const pages = members.get(key);
+    if (pages === undefined) members.set(key, new Set([page]));
+    else pages.add(page);
+  };
   const refOf: (Map<number, NameRef> | undefined)[] = [];
   // Per phrase: where its names written out have stop words between their kept words (each a
   // stopMask). Prose matches a phrase only with stop words where one of its names has them:
@@ -247,6 +259,9 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       for (const name of headingNames(h.text)) {
         const id = claim(tokenize(name, cache), page.id, 'heading', -1, name);
         ownName(name, page.id);
+        // The member's own name (`AssertionError` of `assert.AssertionError`) is the page's too.
+        const member = MEMBER.exec(name);
+        if (member !== null) ownMember(member[1], page.id);
         if (id < 0) continue;
         let forms = headingAs.get(id);
         if (forms === undefined) headingAs.set(id, (forms = new Map()));
@@ -426,7 +441,7 @@ export function buildMentionIndex(graph: SiteGraph, factsOf: (page: number) => P
       // of a target. It still counts above as an occurrence of the phrase and of its placement
       // (the site wrote the name there and did not link it), as in the measured rule.
       const form = (f.place & CODE) !== 0 ? codeKey(f.text(), true) : '';
-      if (form !== '' && cased.get(form)?.has(s) === true) continue;
+      if (form !== '' && (cased.get(form)?.has(s) === true || members.get(form)?.has(s) === true)) continue;
       const linkedAs = form === '' ? undefined : linkedForms.get(s)?.get(form);
       let made: AnchorMatch | null = null;
       // A target named by the phrase in several ways (title, route, link text) is still
@@ -579,6 +594,9 @@ interface LinkedOption {
 const QUOTED = /^[`\s]*['"]/;
 
 const NO_PAGES: ReadonlySet<number> = new Set();
+
+/** The last part of a dotted code name, without a call: `assert.AssertionError`, `fs.promises.readFile`. */
+const MEMBER = /^[\p{L}\p{N}$_.]*\.([\p{L}$_][\p{L}\p{N}$_]*)$/u;
 
 const KIND_ORDER: readonly NameKind[] = ['anchor-text', 'title', 'label', 'alias', 'heading'];
 /** Added to a phrase's link odds, so that names never written as links still rank by placement. */

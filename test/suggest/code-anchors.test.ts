@@ -285,6 +285,19 @@ describe('section headings name their page', () => {
   });
 });
 
+describe("a page's own members", () => {
+  it('code written as the last part of a dotted name of its headings is the page speaking of its own member', () => {
+    const { index, id } = mentionsOf([
+      markdownPage('index.md', '# Home\n\n- [Errors](errors.md)\n- [Assert](assert.md)\n- [Guide](guide.md)\n'),
+      markdownPage('errors.md', '# Errors\n\n## Class: `AssertionError`\n\nA failed check.\n'),
+      markdownPage('assert.md', '# Assert\n\n## Class: `assert.AssertionError`\n\nThrown by `assert`. An `AssertionError` has a `code`.\n'),
+      markdownPage('guide.md', '# Guide\n\nA failed `assert` throws an `AssertionError`.\n'),
+    ]);
+    expect(index.bySource[id('/assert/')]!.get(id('/errors/'))).toBeUndefined();
+    expect(index.bySource[id('/guide/')]!.get(id('/errors/'))?.anchors.map((a) => [a.text, a.line])).toEqual([['`AssertionError`', 3]]);
+  });
+});
+
 describe('code a page links to one page', () => {
   it('means that page wherever the page writes it, and is no mention of another page named so; quoted strings aside', () => {
     const options = testOptions();
